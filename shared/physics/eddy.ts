@@ -1,0 +1,63 @@
+import { erfc, erfcx } from './normal.ts';
+import { requireNonNegative, requirePositive, requireTime } from './validate.ts';
+
+export type ReflectingBoundary = 'free' | 'floor' | 'wall-floor' | 'corner';
+
+export interface ContinuousSource {
+  generation_mgPerS: number;
+  diffusivity_m2PerS: number;
+  lossRate_perS?: number;
+  boundary?: ReflectingBoundary;
+}
+
+export interface Puff {
+  mass_mg: number;
+  diffusivity_m2PerS: number;
+  lossRate_perS?: number;
+  boundary?: ReflectingBoundary;
+}
+
+const IMAGE_COUNT: Record<ReflectingBoundary, number> = { free: 1, floor: 2, 'wall-floor': 4, corner: 8 };
+
+// A source on n reflecting planes through it has 2ⁿ coincident images (method of images).
+function imageCount(boundary: ReflectingBoundary = 'free'): number {
+  if (!Object.hasOwn(IMAGE_COUNT, boundary)) {
+    throw new RangeError(`boundary must be free, floor, wall-floor or corner, got ${String(boundary)}`);
+  }
+  return IMAGE_COUNT[boundary];
+}
+
+// Continuous point source with first-order loss (Carslaw & Jaeger, from memory): k = 0 gives G/(4πDr)·erfc(r/√(4Dt)).
+export function eddyContinuousSource(source: ContinuousSource, distance_m: number, time_s: number): number {
+  const g = requireNonNegative('generation_mgPerS', source.generation_mgPerS);
+  const d = requirePositive('diffusivity_m2PerS', source.diffusivity_m2PerS);
+  const k = requireNonNegative('lossRate_perS', source.lossRate_perS ?? 0);
+  const r = requirePositive('distance_m', distance_m);
+  requireTime('time_s', time_s);
+  const scale = (imageCount(source.boundary) * g) / (4 * Math.PI * d * r);
+  const decayLength = r * Math.sqrt(k / d);
+  if (time_s === Infinity) return scale * Math.exp(-decayLength);
+  if (time_s === 0) return 0;
+  const u = r / Math.sqrt(4 * d * time_s);
+  const v = Math.sqrt(k * time_s);
+  // The growing exponential is folded into erfcx so that neither factor overflows.
+  const rising = Math.exp(decayLength - (u + v) ** 2) * erfcx(u + v);
+  return 0.5 * scale * (Math.exp(-decayLength) * erfc(u - v) + rising);
+}
+
+// Instantaneous point puff C = M/(4πDt)^(3/2)·exp(−r²/(4Dt))·e^(−kt) (Carslaw & Jaeger, from memory).
+export function eddyPuff(puff: Puff, distance_m: number, time_s: number): number {
+  const m = requireNonNegative('mass_mg', puff.mass_mg);
+  const d = requirePositive('diffusivity_m2PerS', puff.diffusivity_m2PerS);
+  const k = requireNonNegative('lossRate_perS', puff.lossRate_perS ?? 0);
+  const r = requireNonNegative('distance_m', distance_m);
+  const t = requirePositive('time_s', time_s);
+  const spread = 4 * d * t;
+  return ((imageCount(puff.boundary) * m) / (Math.PI * spread) ** 1.5) * Math.exp(-(r * r) / spread - k * t);
+}
+
+// Room eddy diffusivity D = (0.52·ACH + 8.61e-5 s⁻¹)·V^(2/3), ACH in s⁻¹ (Cheng et al. 2011 line of work, from memory).
+export function eddyDiffusivityFromVentilation(airChanges_perH: number, volume_m3: number): number {
+  const airChanges_perS = requireNonNegative('airChanges_perH', airChanges_perH) / 3600;
+  return (0.52 * airChanges_perS + 8.61e-5) * requirePositive('volume_m3', volume_m3) ** (2 / 3);
+}

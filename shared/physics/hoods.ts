@@ -1,0 +1,50 @@
+import { requireNonNegative, requirePositive } from './validate.ts';
+
+export type HoodKind = 'plain' | 'flanged' | 'slot' | 'flanged-slot' | 'booth';
+
+export interface HoodGeometry {
+  kind: HoodKind;
+  faceArea_m2: number;
+  slotLength_m?: number;
+}
+
+export interface Hood extends HoodGeometry {
+  airflow_m3PerS: number;
+}
+
+// Airflow per unit centre-line velocity at distance X: Dalla Valle / ACGIH hood-types figure.
+function airflowPerVelocity_m2(hood: HoodGeometry, distance_m: number): number {
+  const area_m2 = requirePositive('faceArea_m2', hood.faceArea_m2);
+  switch (hood.kind) {
+    case 'plain':
+      return 10 * distance_m ** 2 + area_m2;
+    case 'flanged':
+      return 0.75 * (10 * distance_m ** 2 + area_m2);
+    case 'slot':
+      return 3.7 * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;
+    case 'flanged-slot':
+      return 2.6 * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;
+    case 'booth':
+      return area_m2;
+    default:
+      throw new RangeError(`hood.kind must be plain, flanged, slot, flanged-slot or booth, got ${String(hood.kind)}`);
+  }
+}
+
+// The equations are fitted away from the face; no point on the centre line outruns the face velocity Q/A.
+function effectiveArea_m2(hood: HoodGeometry, distance_m: number): number {
+  requireNonNegative('distance_m', distance_m);
+  return Math.max(airflowPerVelocity_m2(hood, distance_m), hood.faceArea_m2);
+}
+
+// Centre-line velocity V(X) = Q/f(X) (ACGIH Industrial Ventilation hood-types figure; Dalla Valle).
+export function hoodCenterlineVelocity(hood: Hood, distance_m: number): number {
+  const airflow_m3PerS = requireNonNegative('airflow_m3PerS', hood.airflow_m3PerS);
+  return airflow_m3PerS / effectiveArea_m2(hood, distance_m);
+}
+
+// Required airflow Q = V·f(X) (ACGIH Industrial Ventilation hood-types figure; Dalla Valle).
+export function hoodRequiredAirflow(hood: HoodGeometry, captureVelocity_mPerS: number, distance_m: number): number {
+  requireNonNegative('captureVelocity_mPerS', captureVelocity_mPerS);
+  return captureVelocity_mPerS * effectiveArea_m2(hood, distance_m);
+}
