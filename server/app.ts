@@ -1,0 +1,68 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { ConnectSessionKnexStore } from 'connect-session-knex';
+import type { Db } from './db/knex';
+import type { Mailer } from './mail/mailer';
+import { configurePassport } from './auth/passport';
+import { authRoutes } from './auth/auth.routes';
+import { peopleRoutes } from './people/people.routes';
+import { outboxRoutes } from './mail/outbox.routes';
+import { auditRoutes } from './audit/audit.routes';
+import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { requestLog } from './middleware/request-log';
+import { sameOriginWrites } from './middleware/same-origin';
+
+export type AppOptions = {
+  db: Db;
+  mailer: Mailer;
+  sessionSecret: string;
+  production?: boolean;
+  publicUrl?: string;
+  clientDir?: string;
+  logRequests?: boolean;
+};
+
+export function createApp(opts: AppOptions): Express {
+  const { db, mailer } = opts;
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'worker-src': ["'self'", 'blob:'] } } }));
+  app.use(express.json({ limit: '1mb' }));
+  app.use(
+    session({
+      name: 'motewalk.sid',
+      secret: opts.sessionSecret,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      store: new ConnectSessionKnexStore({ knex: db, tableName: 'sessions', createTable: false, cleanupInterval: 0 }),
+      cookie: { httpOnly: true, sameSite: 'lax', secure: opts.production === true, maxAge: 8 * 3600 * 1000 },
+    }),
+  );
+  const pp = configurePassport(db);
+  app.use(pp.session());
+  app.use(requestLog(opts.logRequests ?? false));
+
+  const api = express.Router();
+  api.use(sameOriginWrites);
+  api.use('/auth', authRoutes(db, pp));
+  api.use('/people', peopleRoutes(db, mailer, opts.publicUrl));
+  api.use('/outbox', outboxRoutes(db));
+  api.use('/audit', auditRoutes(db));
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use(notFoundHandler);
+  app.use('/api', api);
+
+  if (opts.clientDir && fs.existsSync(path.join(opts.clientDir, 'index.html'))) {
+    const dir = opts.clientDir;
+    app.use(express.static(dir, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dir, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,22 @@
+import { z } from 'zod';
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  DATABASE_FILE: z.string().min(1).default('data/motewalk.sqlite'),
+  SESSION_SECRET: z.string().min(16).optional(),
+  PUBLIC_URL: z.url().optional(),
+  SMTP_URL: z.string().optional(),
+  MAIL_FROM: z.string().default('Motewalk <no-reply@motewalk.local>'),
+  LOG_REQUESTS: z.enum(['0', '1']).default('1'),
+});
+export type Env = z.infer<typeof envSchema>;
+
+export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const result = envSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  return result.data;
+}

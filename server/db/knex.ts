@@ -1,0 +1,36 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import knexFactory, { type Knex } from 'knex';
+import { migrationSource } from './migration-source';
+
+export type Db = Knex;
+
+export function createDb(filename: string): Db {
+  if (filename !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(filename)), { recursive: true });
+  const memory = filename === ':memory:';
+  return knexFactory({
+    client: 'better-sqlite3',
+    connection: { filename },
+    useNullAsDefault: true,
+    // An in-memory database lives in one connection: never reap it.
+    pool: memory
+      ? { min: 1, max: 1, idleTimeoutMillis: 2_147_483_647, reapIntervalMillis: 2_147_483_647, afterCreate: configure }
+      : { min: 1, max: 1, afterCreate: configure },
+  });
+}
+
+function configure(conn: { pragma: (s: string) => unknown }, done: (err: Error | null, conn: unknown) => void) {
+  try {
+    conn.pragma('journal_mode = WAL');
+    conn.pragma('foreign_keys = ON');
+    conn.pragma('busy_timeout = 5000');
+    conn.pragma('synchronous = NORMAL');
+    done(null, conn);
+  } catch (err) {
+    done(err as Error, conn);
+  }
+}
+
+export async function migrateLatest(db: Db): Promise<void> {
+  await db.migrate.latest({ migrationSource });
+}

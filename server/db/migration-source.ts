@@ -1,0 +1,22 @@
+import type { Knex } from 'knex';
+import * as createPeople from '../../migrations/20261202000100_create_people';
+import * as createSessions from '../../migrations/20261202000200_create_sessions';
+import * as createAuditLog from '../../migrations/20261202000300_create_audit_log';
+import * as createOutbox from '../../migrations/20261202000400_create_outbox';
+
+type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
+
+// Static imports: knex's own dynamic import of .ts files fails under vitest. Names keep ".ts" so the
+// CLI (which reads the folder) and the app agree on what has run.
+const MIGRATIONS: Record<string, Migration> = {
+  '20261202000100_create_people.ts': createPeople,
+  '20261202000200_create_sessions.ts': createSessions,
+  '20261202000300_create_audit_log.ts': createAuditLog,
+  '20261202000400_create_outbox.ts': createOutbox,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(MIGRATIONS).sort(),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => MIGRATIONS[name],
+};
