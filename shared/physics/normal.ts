@@ -1,7 +1,7 @@
 const SQRT_PI = Math.sqrt(Math.PI);
 
 // Below this the positive series is accurate; above it the continued fraction converges in few terms.
-const SERIES_LIMIT = 2.5;
+const SERIES_LIMIT = 1.5;
 
 // erf(x) = (2/√π)·e^(−x²)·Σ 2ⁿx^(2n+1)/(2n+1)!! (Abramowitz & Stegun 7.1.6): all terms positive, no cancellation.
 function erfSeries(x: number): number {
