@@ -1,0 +1,39 @@
+import { lazy, Suspense, type ReactNode } from 'react';
+import { createBrowserRouter } from 'react-router-dom';
+import type { Permission } from '../../shared/auth/permissions';
+import { paths } from '../config/paths';
+import { Spinner } from '../components/ui/status';
+import { AppShell } from './routes/app-shell';
+import { HomeRoute } from './routes/home';
+import { NotFoundRoute, RouteError } from './routes/not-found';
+import { RequireUser } from './routes/require-user';
+import { ScenariosRoute } from './routes/scenarios';
+import { SetPasswordRoute } from './routes/set-password';
+import { SignInRoute } from './routes/sign-in';
+import { StationRoute } from './routes/station';
+
+const PeoplePage = lazy(() => import('../features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
+const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
+
+const guarded = (permission: Permission | undefined, node: ReactNode) => (
+  <RequireUser permission={permission}>
+    <Suspense fallback={<Spinner />}>{node}</Suspense>
+  </RequireUser>
+);
+
+export const router = createBrowserRouter([
+  { path: paths.login, element: <SignInRoute />, errorElement: <RouteError /> },
+  { path: paths.setPassword, element: <SetPasswordRoute />, errorElement: <RouteError /> },
+  {
+    element: <AppShell />,
+    errorElement: <RouteError />,
+    children: [
+      { path: paths.home, element: <HomeRoute /> },
+      { path: paths.scenarios, element: guarded('scenarios:read', <ScenariosRoute />) },
+      { path: paths.station, element: guarded('boards:read-own', <StationRoute />) },
+      { path: paths.people, element: guarded('people:manage', <PeoplePage />) },
+      { path: paths.outbox, element: guarded('outbox:read', <OutboxPage />) },
+      { path: '*', element: <NotFoundRoute /> },
+    ],
+  },
+]);

@@ -1,0 +1,42 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+
+export type RunningServer = { url: string; dbFile: string; proc: ChildProcess; output: () => string; stop: () => Promise<void> };
+
+// Starts the built server on a free port with a fresh database file.
+export async function startServer(env: Record<string, string> = {}): Promise<RunningServer> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'motewalk-e2e-'));
+  const dbFile = path.join(dir, 'motewalk.sqlite');
+  const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    env: { ...process.env, PORT: '0', DATABASE_FILE: dbFile, LOG_REQUESTS: '0', NODE_ENV: 'test', ...env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  proc.stdout!.on('data', (d) => (output += d));
+  proc.stderr!.on('data', (d) => (output += d));
+  const url = await new Promise<string>((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
+    proc.stdout!.on('data', () => {
+      const m = /running on (http:\/\/localhost:\d+)/.exec(output);
+      if (m) {
+        clearTimeout(timer);
+        resolve(m[1]);
+      }
+    });
+    proc.on('exit', (code) => reject(new Error(`server exited with ${code}:\n${output}`)));
+  });
+  return {
+    url,
+    dbFile,
+    proc,
+    output: () => output,
+    stop: () =>
+      new Promise((resolve) => {
+        if (proc.exitCode !== null) return resolve();
+        proc.once('exit', () => resolve());
+        proc.kill('SIGTERM');
+      }),
+  };
+}
