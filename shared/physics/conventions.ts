@@ -24,6 +24,7 @@ export function respirableFraction(d_m: number): number {
   return penetrating(d_m, 4.25);
 }
 
+// Φ(−z) rather than 1 − Φ(z) keeps precision in the coarse tail, where the fraction is tiny.
 function penetrating(d_m: number, median_um: number): number {
   const inhalable = inhalableFraction(d_m);
   if (d_m === 0) return inhalable;
