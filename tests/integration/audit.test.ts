@@ -1,0 +1,57 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(() => t.close());
+
+describe('GET /api/audit', () => {
+  it('answers 401 to anonymous callers', async () => {
+    expect((await t.anonymous().get('/api/audit')).status).toBe(401);
+  });
+
+  it('answers 403 to an operator', async () => {
+    const operator = await t.signIn('operator');
+    expect((await operator.get('/api/audit')).status).toBe(403);
+  });
+
+  it('answers 400 for a bad filter', async () => {
+    const viewer = await t.signIn('viewer');
+    const res = await viewer.get('/api/audit?page=0');
+    expect(res.status).toBe(400);
+    expect(res.body.issues[0].path).toBe('query.page');
+  });
+
+  it('lets a viewer read sign-ins, newest first, filtered by action', async () => {
+    await t.anonymous().post('/api/auth/login').send({ email: 'engineer@motewalk.local', password: 'wrong-password-1' });
+    const viewer = await t.signIn('viewer');
+    const res = await viewer.get('/api/audit?action=auth.sign_in_failed');
+    expect(res.status).toBe(200);
+    expect(res.body.items).toHaveLength(1);
+    expect(res.body.items[0]).toMatchObject({ actorEmail: 'engineer@motewalk.local', action: 'auth.sign_in_failed' });
+    const all = await viewer.get('/api/audit');
+    expect(all.body.items[0].action).toBe('auth.signed_in');
+  });
+});
+
+describe('errors keep one shape', () => {
+  it('answers an unknown API route with a JSON 404', async () => {
+    const res = await t.anonymous().get('/api/no-such-thing');
+    expect(res.status).toBe(404);
+    expect(res.body.code).toBe('not_found');
+  });
+
+  it('answers malformed JSON with 400, not a crash', async () => {
+    const res = await t.anonymous().post('/api/auth/login').set('Content-Type', 'application/json').send('{"email": ');
+    expect(res.status).toBe(400);
+    expect(res.body).toEqual({ code: 'bad_request', message: 'The request body is not valid JSON' });
+  });
+
+  it('answers an oversized body with 413', async () => {
+    const res = await t.anonymous().post('/api/auth/login').send({ email: 'a@b.co', password: 'x'.repeat(2_000_000) });
+    expect(res.status).toBe(413);
+    expect(res.body.code).toBe('payload_too_large');
+  });
+});
