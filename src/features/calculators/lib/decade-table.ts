@@ -1,0 +1,52 @@
+import { particleProperties, type ParticleMedium, type ParticleProperties } from './particle-properties.ts';
+
+export const DECADE_DIAMETERS_m = [1e-9, 1e-8, 1e-7, 1e-6, 1e-5, 1e-4] as const;
+
+export interface DecadeColumn {
+  key: string;
+  header: string;
+  value: (p: ParticleProperties) => number;
+}
+
+// Headers carry their units so a pasted or downloaded table still says what each number is.
+export function decadeColumns(window_s: number): DecadeColumn[] {
+  const over = `over ${window_s} s`;
+  return [
+    { key: 'diameter', header: 'Diameter (µm)', value: (p) => p.diameter_m * 1e6 },
+    { key: 'slip', header: 'Slip factor (–)', value: (p) => p.slipFactor },
+    { key: 'settling', header: 'Settling velocity (m/s)', value: (p) => p.settlingVelocity_mPerS },
+    { key: 'reynolds', header: 'Particle Reynolds number (–)', value: (p) => p.reynolds },
+    { key: 'relaxation', header: 'Relaxation time (s)', value: (p) => p.relaxationTime_s },
+    { key: 'diffusivity', header: 'Brownian diffusivity (m²/s)', value: (p) => p.diffusivity_m2PerS },
+    { key: 'settlingDistance', header: `Settling distance ${over} (m)`, value: (p) => p.settlingDistance_m },
+    { key: 'rms', header: `RMS Brownian displacement ${over} (m)`, value: (p) => p.rmsDisplacement_m },
+    { key: 'aerodynamic', header: 'Aerodynamic diameter (µm)', value: (p) => p.aerodynamicDiameter_m * 1e6 },
+    { key: 'inhalable', header: 'Inhalable (%)', value: (p) => p.inhalable * 100 },
+    { key: 'thoracic', header: 'Thoracic (%)', value: (p) => p.thoracic * 100 },
+    { key: 'respirable', header: 'Respirable (%)', value: (p) => p.respirable * 100 },
+  ];
+}
+
+export function decadeRows(medium: ParticleMedium): ParticleProperties[] {
+  return DECADE_DIAMETERS_m.map((d) => particleProperties(d, medium));
+}
+
+// Six significant digits survive a spreadsheet round trip without pretending to more precision than the formulas have.
+const cell = (value: number): string => String(Number(value.toPrecision(6)));
+
+function delimited(medium: ParticleMedium, separator: string, quote: (text: string) => string): string {
+  const columns = decadeColumns(medium.window_s);
+  const lines = [columns.map((c) => quote(c.header)).join(separator)];
+  for (const row of decadeRows(medium)) lines.push(columns.map((c) => cell(c.value(row))).join(separator));
+  return `${lines.join('\r\n')}\r\n`;
+}
+
+// RFC 4180: CRLF line ends, fields quoted when they could hold a comma.
+export function decadeTableCsv(medium: ParticleMedium): string {
+  return delimited(medium, ',', (text) => `"${text.replaceAll('"', '""')}"`);
+}
+
+// Tab-separated text pastes into spreadsheet cells directly.
+export function decadeTableTsv(medium: ParticleMedium): string {
+  return delimited(medium, '\t', (text) => text);
+}
