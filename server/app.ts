@@ -11,9 +11,14 @@ import { authRoutes } from './auth/auth.routes';
 import { peopleRoutes } from './people/people.routes';
 import { outboxRoutes } from './mail/outbox.routes';
 import { auditRoutes } from './audit/audit.routes';
+import { placesRoutes } from './places/places.routes';
+import { agentsRoutes } from './agents/agents.routes';
+import { runsRoutes, scenariosRoutes } from './scenarios/scenarios.routes';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { requestLog } from './middleware/request-log';
 import { sameOriginWrites } from './middleware/same-origin';
+
+const RUN_UPLOAD = /^\/api\/scenarios\/\d+\/runs$/;
 
 export type AppOptions = {
   db: Db;
@@ -30,7 +35,9 @@ export function createApp(opts: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'worker-src': ["'self'", 'blob:'] } } }));
-  app.use(express.json({ limit: '1mb' }));
+  const json = express.json({ limit: '1mb' });
+  // Saved runs carry large result arrays; their route parses its own body with a larger limit.
+  app.use((req, res, next) => (RUN_UPLOAD.test(req.path) ? next() : json(req, res, next)));
   app.use(
     session({
       name: 'motewalk.sid',
@@ -52,6 +59,10 @@ export function createApp(opts: AppOptions): Express {
   api.use('/people', peopleRoutes(db, mailer, opts.publicUrl));
   api.use('/outbox', outboxRoutes(db));
   api.use('/audit', auditRoutes(db));
+  api.use('/', placesRoutes(db));
+  api.use('/agents', agentsRoutes(db));
+  api.use('/scenarios', scenariosRoutes(db));
+  api.use('/runs', runsRoutes(db));
   api.get('/health', (_req, res) => {
     res.json({ ok: true });
   });

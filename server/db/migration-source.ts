@@ -3,6 +3,8 @@ import * as createPeople from '../../migrations/20261202000100_create_people';
 import * as createSessions from '../../migrations/20261202000200_create_sessions';
 import * as createAuditLog from '../../migrations/20261202000300_create_audit_log';
 import * as createOutbox from '../../migrations/20261202000400_create_outbox';
+import * as createWorkspace from '../../migrations/20261202000500_create_workspace';
+import * as createScenarios from '../../migrations/20261202000700_create_scenarios';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -13,6 +15,8 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202000200_create_sessions.ts': createSessions,
   '20261202000300_create_audit_log.ts': createAuditLog,
   '20261202000400_create_outbox.ts': createOutbox,
+  '20261202000500_create_workspace.ts': createWorkspace,
+  '20261202000700_create_scenarios.ts': createScenarios,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -1,0 +1,55 @@
+import type { RoomInput, SiteInput, WorkstationInput } from '../../shared/schemas/workspace';
+import type { Db } from '../db/knex';
+import { AppError, notFound } from '../lib/app-error';
+import { writeAudit } from '../audit/audit.repo';
+import { rooms, sites, workstations } from './places.repo';
+
+type Actor = { id: number; email: string };
+
+async function insideRoom(db: Db, roomId: number, data: WorkstationInput['data']) {
+  const room = await rooms.get(db, roomId);
+  if (!room) throw new AppError(400, 'invalid_input', 'That room does not exist', [{ path: 'body.roomId', message: `No room ${roomId}` }]);
+  const issues = [];
+  for (const [part, point] of [['source', data.source], ['worker', data.worker]] as const) {
+    if (point.x_m > room.data.length_m) issues.push({ path: `body.data.${part}.x_m`, message: `Must be within the room length (${room.data.length_m} m), got ${point.x_m}` });
+    if (point.y_m > room.data.width_m) issues.push({ path: `body.data.${part}.y_m`, message: `Must be within the room width (${room.data.width_m} m), got ${point.y_m}` });
+    if (point.z_m > room.data.height_m) issues.push({ path: `body.data.${part}.z_m`, message: `Must be below the ceiling (${room.data.height_m} m), got ${point.z_m}` });
+  }
+  if (issues.length) throw new AppError(400, 'invalid_input', 'The workstation does not fit in its room', issues);
+}
+
+export const placesService = {
+  async createSite(db: Db, actor: Actor, input: SiteInput) {
+    return db.transaction(async (trx) => {
+      const id = await sites.insert(trx, { ...input, createdBy: actor.id });
+      await writeAudit(trx, { actor, action: 'site.created', targetType: 'site', targetId: id, detail: { name: input.name } });
+      return (await sites.get(trx, id))!;
+    });
+  },
+  async createRoom(db: Db, actor: Actor, input: RoomInput) {
+    if (!(await sites.get(db, input.siteId))) throw new AppError(400, 'invalid_input', 'That site does not exist', [{ path: 'body.siteId', message: `No site ${input.siteId}` }]);
+    return db.transaction(async (trx) => {
+      const id = await rooms.insert(trx, { ...input, createdBy: actor.id });
+      await writeAudit(trx, { actor, action: 'room.created', targetType: 'room', targetId: id, detail: { name: input.name } });
+      return (await rooms.get(trx, id))!;
+    });
+  },
+  async createWorkstation(db: Db, actor: Actor, input: WorkstationInput) {
+    await insideRoom(db, input.roomId, input.data);
+    return db.transaction(async (trx) => {
+      const id = await workstations.insert(trx, { ...input, createdBy: actor.id });
+      await writeAudit(trx, { actor, action: 'workstation.created', targetType: 'workstation', targetId: id, detail: { name: input.name } });
+      return (await workstations.get(trx, id))!;
+    });
+  },
+  async updateWorkstation(db: Db, actor: Actor, id: number, input: Pick<WorkstationInput, 'name' | 'data'>) {
+    const current = await workstations.get(db, id);
+    if (!current) throw notFound('Workstation');
+    await insideRoom(db, current.roomId as number, input.data);
+    return db.transaction(async (trx) => {
+      await workstations.update(trx, id, input);
+      await writeAudit(trx, { actor, action: 'workstation.changed', targetType: 'workstation', targetId: id });
+      return (await workstations.get(trx, id))!;
+    });
+  },
+};

@@ -1,0 +1,36 @@
+import type { Request, Response } from 'express';
+import type { ScenarioListQuery } from '../../shared/schemas/workspace';
+import type { Db } from '../db/knex';
+import { listScenarios } from './scenarios.repo';
+import { getRun, getScenario, scenariosService } from './scenarios.service';
+
+export function scenariosController(db: Db) {
+  const id = (req: Request) => Number(req.params.id);
+  return {
+    async list(req: Request, res: Response) {
+      res.json(await listScenarios(db, req.query as unknown as ScenarioListQuery));
+    },
+    async get(req: Request, res: Response) {
+      res.json(await getScenario(db, id(req)));
+    },
+    async create(req: Request, res: Response) {
+      res.status(201).json(await scenariosService.create(db, req.user!, req.body));
+    },
+    async update(req: Request, res: Response) {
+      res.json(await scenariosService.update(db, req.user!, id(req), req.body));
+    },
+    async remove(req: Request, res: Response) {
+      await scenariosService.remove(db, req.user!, id(req));
+      res.status(204).end();
+    },
+    async duplicate(req: Request, res: Response) {
+      res.status(201).json(await scenariosService.duplicate(db, req.user!, id(req), req.body.name));
+    },
+    async saveRun(req: Request, res: Response) {
+      res.status(201).json(await scenariosService.saveRun(db, req.user!, id(req), req.body));
+    },
+    async getRun(req: Request, res: Response) {
+      res.json(await getRun(db, id(req)));
+    },
+  };
+}

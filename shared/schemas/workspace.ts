@@ -1,0 +1,92 @@
+import { z } from 'zod';
+import { scenarioSchema } from './scenario';
+
+const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
+const positive = (what: string) => z.number({ message: `${what} must be a number` }).gt(0, `${what} must be above zero`).finite();
+const nonNegative = (what: string) => z.number({ message: `${what} must be a number` }).gte(0, `${what} cannot be negative`).finite();
+
+export const siteDataSchema = z.object({ address: z.string().trim().max(300).default(''), notes: z.string().trim().max(1000).default('') }).strict();
+export const siteInputSchema = z.object({ name, data: siteDataSchema.prefault({}) }).strict();
+export type SiteInput = z.infer<typeof siteInputSchema>;
+
+export const roomDataSchema = z
+  .object({
+    length_m: positive('Length').max(500),
+    width_m: positive('Width').max(500),
+    height_m: positive('Height').max(100),
+    airChanges_perH: nonNegative('Air changes per hour').max(200),
+    draftSpeed_mPerS: nonNegative('Draft speed').max(10),
+    draftDirection_deg: z.number().finite().min(-360).max(360),
+    temperature_K: z.number().finite().min(223.15, 'Temperature must be at least −50 °C').max(373.15, 'Temperature must be at most 100 °C'),
+  })
+  .strict();
+export const roomInputSchema = z.object({ siteId: z.number().int().positive(), name, data: roomDataSchema }).strict();
+export type RoomInput = z.infer<typeof roomInputSchema>;
+
+export const workstationDataSchema = z
+  .object({
+    description: z.string().trim().max(500).default(''),
+    source: z.object({ x_m: nonNegative('Source x'), y_m: nonNegative('Source y'), z_m: nonNegative('Source height') }).strict(),
+    worker: z.object({ x_m: nonNegative('Worker x'), y_m: nonNegative('Worker y'), z_m: nonNegative('Breathing-zone height'), posture: z.enum(['standing', 'seated']) }).strict(),
+    releaseType: z.enum(['quiet', 'low', 'active', 'high']),
+  })
+  .strict();
+export const workstationInputSchema = z.object({ roomId: z.number().int().positive(), name, data: workstationDataSchema }).strict();
+export type WorkstationInput = z.infer<typeof workstationInputSchema>;
+
+export const FRACTIONS = ['inhalable', 'thoracic', 'respirable'] as const;
+
+export const agentDataSchema = z
+  .object({
+    density_kgPerM3: positive('Particle density').max(25_000),
+    shapeFactor: z.number().finite().min(1, 'Shape factor is at least 1 (a sphere)').max(5),
+    limitFraction: z.enum(FRACTIONS),
+    limit8h_mgPerM3: positive('8-h limit').max(1000),
+    limit15min_mgPerM3: positive('15-min limit').max(1000).nullable().default(null),
+    jurisdiction: z.string().trim().min(1, 'Say where the limit applies').max(120),
+    limitSource: z.string().trim().min(1, 'Name the source of the limit').max(300),
+    limitDate: z.string().trim().max(40).default(''),
+    override: z
+      .object({ limit8h_mgPerM3: positive('Override limit').max(1000), reason: z.string().trim().min(3, 'Give a reason for the override').max(300) })
+      .strict()
+      .nullable()
+      .default(null),
+    notes: z.string().trim().max(1000).default(''),
+  })
+  .strict();
+export const agentInputSchema = z.object({ name, data: agentDataSchema }).strict();
+export type AgentInput = z.infer<typeof agentInputSchema>;
+export type AgentData = z.infer<typeof agentDataSchema>;
+
+export const CONTROL_TIERS = ['elimination', 'substitution', 'engineering', 'administrative', 'respiratory', 'none'] as const;
+export type ControlTier = (typeof CONTROL_TIERS)[number];
+
+export const scenarioMetaSchema = z
+  .object({
+    workstationId: z.number().int().positive(),
+    agentId: z.number().int().positive().nullable().default(null),
+    sizeProfileId: z.number().int().positive().nullable().default(null),
+    name,
+    controlDescription: z.string().trim().max(500).default(''),
+    controlTier: z.enum(CONTROL_TIERS).default('none'),
+  })
+  .strict();
+
+export const scenarioCreateSchema = scenarioMetaSchema.extend({ input: scenarioSchema }).strict();
+export type ScenarioCreate = z.infer<typeof scenarioCreateSchema>;
+
+export const scenarioUpdateSchema = scenarioMetaSchema.partial().extend({ input: scenarioSchema.optional(), version: z.number().int().positive() }).strict();
+export type ScenarioUpdate = z.infer<typeof scenarioUpdateSchema>;
+
+export const scenarioListQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+  sort: z.enum(['name', 'workstation', 'site', 'agent', 'status', 'updatedAt', 'respirableTwa', 'percentOfLimit', 'banner']).default('updatedAt'),
+  order: z.enum(['asc', 'desc']).default('desc'),
+  siteId: z.coerce.number().int().positive().optional(),
+  workstationId: z.coerce.number().int().positive().optional(),
+  agentId: z.coerce.number().int().positive().optional(),
+  status: z.enum(['draft', 'approved']).optional(),
+  q: z.string().trim().max(120).optional(),
+});
+export type ScenarioListQuery = z.infer<typeof scenarioListQuerySchema>;
