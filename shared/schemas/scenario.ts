@@ -1,0 +1,187 @@
+import { z } from 'zod';
+
+const finite = (min?: { gt?: number; gte?: number }) => {
+  let schema = z.number();
+  if (min?.gt !== undefined) schema = schema.gt(min.gt);
+  if (min?.gte !== undefined) schema = schema.gte(min.gte);
+  return schema;
+};
+const positive = () => finite({ gt: 0 });
+const nonNegative = () => finite({ gte: 0 });
+
+const roomSchema = z.object({
+  length_m: positive(),
+  width_m: positive(),
+  height_m: positive(),
+  airChanges_perH: nonNegative().default(4),
+  draftSpeed_mPerS: nonNegative().default(0),
+  draftDirection_deg: finite().default(0),
+  temperature_K: positive().default(293.15),
+  pressure_Pa: positive().default(101325),
+  eddyDiffusivity_m2PerS: nonNegative().optional(),
+});
+
+const emissionSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('continuous'), rate_mgPerMin: nonNegative(), taskDuration_min: positive() }),
+  z.object({
+    kind: z.literal('bursts'),
+    massPerEvent_mg: nonNegative(),
+    eventsPerHour: positive(),
+    taskDuration_min: positive(),
+  }),
+]);
+
+const sourceSchema = z.object({
+  x_m: finite(),
+  y_m: finite(),
+  z_m: finite(),
+  shape: z.enum(['point', 'disc', 'box']).default('point'),
+  size_m: nonNegative().default(0),
+  emission: emissionSchema,
+  taskMinutesPerShift: finite({ gte: 0 }).max(480).optional(),
+  background_mgPerM3: nonNegative().default(0),
+});
+
+const sizeProfileSchema = z.discriminatedUnion('kind', [
+  z.object({
+    kind: z.literal('lognormal'),
+    basis: z.enum(['mmad', 'cmd']),
+    median_m: positive(),
+    gsd: finite({ gte: 1 }),
+  }),
+  z.object({
+    kind: z.literal('bins'),
+    basis: z.enum(['mass', 'count']),
+    diameter: z.enum(['aerodynamic', 'physical']).default('aerodynamic'),
+    edges_m: z.array(positive()).min(2),
+    amounts: z.array(nonNegative()).min(1),
+  }),
+]);
+
+const dustSchema = z.object({
+  name: z.string().optional(),
+  density_kgPerM3: positive(),
+  shapeFactor: finite({ gte: 1 }).default(1),
+  sizeProfile: sizeProfileSchema,
+});
+
+const directionSchema = z.union([
+  z.object({ x: finite(), y: finite(), z: finite() }),
+  z.object({ azimuth_deg: finite(), elevation_deg: finite().default(0) }),
+]);
+
+const hoodSchema = z.object({
+  name: z.string().optional(),
+  kind: z.enum(['plain', 'flanged', 'slot', 'flanged-slot', 'booth']),
+  x_m: finite(),
+  y_m: finite(),
+  z_m: finite(),
+  direction: directionSchema,
+  faceWidth_m: positive(),
+  faceHeight_m: positive(),
+  airflow_m3PerS: nonNegative(),
+  releaseType: z.enum(['quiet', 'low', 'active', 'high']).optional(),
+});
+
+const workerSchema = z.object({
+  x_m: finite(),
+  y_m: finite(),
+  z_m: finite(),
+  radius_m: positive().default(0.3),
+  posture: z.enum(['standing', 'seated']).optional(),
+});
+
+const limitSchema = z.object({
+  fraction: z.enum(['total', 'inhalable', 'thoracic', 'respirable']),
+  value_mgPerM3: positive(),
+  shortTerm_mgPerM3: positive().optional(),
+  source: z.string().optional(),
+});
+
+const runSchema = z.object({
+  particles: z.number().int().gte(1).default(20000),
+  seed: z.union([z.number().int(), z.string().min(1)]).default(1),
+  batches: z.number().int().gte(2).lte(1000).default(10),
+  duration_s: positive().optional(),
+  maxTimeStep_s: positive().default(2),
+  stepFraction: finite({ gt: 0 }).lte(1).default(0.5),
+});
+
+const baseSchema = z.object({
+  name: z.string().optional(),
+  description: z.string().optional(),
+  room: roomSchema,
+  source: sourceSchema,
+  dust: dustSchema,
+  hoods: z.array(hoodSchema).max(8).default([]),
+  worker: workerSchema,
+  limit: limitSchema.optional(),
+  run: runSchema.prefault({}),
+});
+
+function checkGeometry(s: z.output<typeof baseSchema>, ctx: z.RefinementCtx) {
+  const bounds = { x_m: s.room.length_m, y_m: s.room.width_m, z_m: s.room.height_m } as const;
+  const inside = (point: Record<keyof typeof bounds, number>, path: (string | number)[], what: string) => {
+    for (const axis of Object.keys(bounds) as (keyof typeof bounds)[]) {
+      const v = point[axis];
+      if (v < 0 || v > bounds[axis]) {
+        ctx.addIssue({ code: 'custom', path: [...path, axis], input: v, message: `${what} must lie inside the room (0 to ${bounds[axis]} m), got ${v}` });
+      }
+    }
+  };
+  inside(s.source, ['source'], 'source');
+  inside(s.worker, ['worker'], 'breathing-zone centre');
+  s.hoods.forEach((hood, i) => {
+    inside(hood, ['hoods', i], 'hood face centre');
+    const d = hood.direction;
+    const length = 'x' in d ? Math.hypot(d.x, d.y, d.z) : 1;
+    if (!(length > 1e-9)) {
+      ctx.addIssue({ code: 'custom', path: ['hoods', i, 'direction'], input: d, message: `direction must be a non-zero vector, got ${JSON.stringify(d)}` });
+    }
+  });
+  const profile = s.dust.sizeProfile;
+  if (profile.kind === 'bins') {
+    if (profile.amounts.length !== profile.edges_m.length - 1) {
+      ctx.addIssue({ code: 'custom', path: ['dust', 'sizeProfile', 'amounts'], input: profile.amounts.length, message: `amounts needs one value per bin (${profile.edges_m.length - 1}), got ${profile.amounts.length}` });
+    }
+    profile.edges_m.forEach((edge, i) => {
+      if (i > 0 && !(edge > profile.edges_m[i - 1])) {
+        ctx.addIssue({ code: 'custom', path: ['dust', 'sizeProfile', 'edges_m', i], input: edge, message: `edges_m must increase, got ${edge} after ${profile.edges_m[i - 1]}` });
+      }
+    });
+    if (!profile.amounts.some((a) => a > 0)) {
+      ctx.addIssue({ code: 'custom', path: ['dust', 'sizeProfile', 'amounts'], input: profile.amounts, message: 'amounts must hold at least one positive value' });
+    }
+  }
+}
+
+export const scenarioSchema = baseSchema.superRefine(checkGeometry);
+
+export type Scenario = z.output<typeof scenarioSchema>;
+export type ScenarioInput = z.input<typeof scenarioSchema>;
+export type Hood = Scenario['hoods'][number];
+
+function describe(value: unknown): string {
+  if (typeof value === 'number') return String(value);
+  if (value === undefined) return 'nothing';
+  const text = JSON.stringify(value);
+  return text.length > 60 ? `${text.slice(0, 57)}...` : text;
+}
+
+export class ScenarioError extends Error {
+  constructor(readonly issues: { path: string; message: string }[]) {
+    super(`Invalid scenario:\n${issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+    this.name = 'ScenarioError';
+  }
+}
+
+// zod's default messages omit the offending value; the user needs both the field and the value.
+export function parseScenario(input: unknown): Scenario {
+  const result = scenarioSchema.safeParse(input, { reportInput: true });
+  if (result.success) return result.data;
+  const issues = result.error.issues.map((issue) => {
+    const message = issue.code === 'custom' ? issue.message : `${issue.message}, got ${describe(issue.input)}`;
+    return { path: issue.path.join('.') || '(root)', message };
+  });
+  throw new ScenarioError(issues);
+}

@@ -1,0 +1,77 @@
+import type { Xoshiro128 } from './rng.ts';
+import type { PreparedScenario } from './types.ts';
+
+export interface ParticleArrays {
+  count: number;
+  x: Float64Array;
+  y: Float64Array;
+  z: Float64Array;
+  t: Float64Array;
+  release: Float64Array;
+  exhaustAt: Float64Array;
+  bin: Int32Array;
+  slot: Int32Array;
+}
+
+function clamp(v: number, hi: number): number {
+  return v < 0 ? 0 : v > hi ? hi : v;
+}
+
+// Release times are stratified within each bin so a small batch still covers the whole task.
+// General ventilation removes particles at rate k, so each gets an exponential exhaust time at
+// release: exactly the limit of a per-step removal probability k·dt, and it costs no draw per step.
+export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): ParticleArrays {
+  const n = p.bins.particlesPerBatch.reduce((a, v) => a + v, 0);
+  const a: ParticleArrays = {
+    count: n,
+    x: new Float64Array(n),
+    y: new Float64Array(n),
+    z: new Float64Array(n),
+    t: new Float64Array(n),
+    release: new Float64Array(n),
+    exhaustAt: new Float64Array(n),
+    bin: new Int32Array(n),
+    slot: new Int32Array(n).fill(-1),
+  };
+  const { source: s, room, emission } = p;
+  const events = emission.eventTimes_s;
+  let i = 0;
+  for (let b = 0; b < p.bins.count; b++) {
+    const nb = p.bins.particlesPerBatch[b];
+    const eventOffset = Math.floor(rng.nextUniform() * Math.max(1, events.length));
+    for (let j = 0; j < nb; j++, i++) {
+      const t0 = emission.kind === 'continuous' ? ((j + rng.nextUniform()) / nb) * emission.release_s : events[(j + eventOffset) % events.length];
+      let x = s.x_m;
+      let y = s.y_m;
+      let z = s.z_m;
+      if (s.shape === 'disc') {
+        const r = 0.5 * s.size_m * Math.sqrt(rng.nextUniform());
+        const th = 2 * Math.PI * rng.nextUniform();
+        x += r * Math.cos(th);
+        y += r * Math.sin(th);
+      } else if (s.shape === 'box') {
+        x += s.size_m * (rng.nextUniform() - 0.5);
+        y += s.size_m * (rng.nextUniform() - 0.5);
+        z += s.size_m * (rng.nextUniform() - 0.5);
+      }
+      a.x[i] = clamp(x, room.length_m);
+      a.y[i] = clamp(y, room.width_m);
+      a.z[i] = clamp(z, room.height_m);
+      a.t[i] = t0;
+      a.release[i] = t0;
+      a.exhaustAt[i] = p.exhaustRate_perS > 0 ? t0 - Math.log(rng.nextUniform()) / p.exhaustRate_perS : Infinity;
+      a.bin[i] = b;
+    }
+  }
+  pickTrajectorySample(p, a);
+  return a;
+}
+
+// Spread the animated sample evenly over the particles released early enough to be seen moving.
+function pickTrajectorySample(p: PreparedScenario, a: ParticleArrays): void {
+  const window_s = 0.8 * p.trajectory.frames * p.trajectory.frameInterval_s;
+  const candidates: number[] = [];
+  for (let i = 0; i < a.count; i++) if (a.release[i] <= window_s) candidates.push(i);
+  const k = Math.min(p.trajectory.particles, candidates.length);
+  for (let s = 0; s < k; s++) a.slot[candidates[Math.floor((s * candidates.length) / k)]] = s;
+}

@@ -1,0 +1,114 @@
+import type { Banner, ExposureRating } from '../../shared/physics/index.ts';
+
+export const FRACTIONS = ['total', 'inhalable', 'thoracic', 'respirable'] as const;
+export type Fraction = (typeof FRACTIONS)[number];
+
+export const FATES = ['captured', 'settled', 'exhausted', 'airborne'] as const;
+export type Fate = (typeof FATES)[number];
+
+/** Per-size-bin tables; index b is one bin. Everything the step loop reads is here. */
+export interface SizeBins {
+  count: number;
+  aerodynamic_m: Float64Array;
+  physical_m: Float64Array;
+  massFraction: Float64Array;
+  settling_mPerS: Float64Array;
+  diffusivity_m2PerS: Float64Array;
+  /** Mass carried by one simulated particle of the bin, mg. */
+  particleMass_mg: Float64Array;
+  particlesPerBatch: Int32Array;
+  /** Convention efficiency per fraction, row-major [fraction][bin]. */
+  conventionWeight: Float64Array;
+}
+
+/** Plain data (typed arrays and numbers) so it can be structured-cloned into a worker. */
+export interface PreparedScenario {
+  seed: number | string;
+  batches: number;
+  particlesPerBatch: number;
+  room: { length_m: number; width_m: number; height_m: number; volume_m3: number };
+  exhaustRate_perS: number;
+  draft_mPerS: [number, number];
+  eddyDiffusivity_m2PerS: number;
+  bins: SizeBins;
+  source: { x_m: number; y_m: number; z_m: number; shape: 'point' | 'disc' | 'box'; size_m: number };
+  /** Release schedule: continuous over [0, release_s], or events at eventTimes_s. */
+  emission: { kind: 'continuous' | 'bursts'; emitted_mg: number; release_s: number; eventTimes_s: Float64Array };
+  hoods: { count: number; params: Float64Array };
+  zone: { x_m: number; y_m: number; z_m: number; radius_m: number; volume_m3: number };
+  duration_s: number;
+  timeBin_s: number;
+  timeBins: number;
+  maxTimeStep_s: number;
+  stepFraction: number;
+  task: { minutesPerShift: number; background_mgPerM3: number };
+  deposition: { nx: number; ny: number };
+  trajectory: { particles: number; frames: number; frameInterval_s: number };
+  limit?: { fraction: Fraction; value_mgPerM3: number };
+  /** Inputs of the analytic cross-checks, derived from the scenario in prepareScenario. */
+  crossCheck: { airflow_m3PerS: number; hoodAirflow_m3PerS: number; sourceToZone_m: number; randomAirSpeed_mPerS: number; sourceOnFloor: boolean };
+  /** Tests ask for the final particle states; normal runs leave it off. */
+  keepParticles: boolean;
+}
+
+export interface ParticleStates {
+  x: Float64Array;
+  y: Float64Array;
+  z: Float64Array;
+  t: Float64Array;
+  bin: Int32Array;
+  fate: Int8Array;
+}
+
+export interface BatchResult {
+  batchIndex: number;
+  /** Particle-seconds inside the breathing zone, [timeBin][sizeBin]. */
+  zoneResidence_s: Float64Array;
+  /** Mass per fate (FATES order), mg. */
+  fateMass_mg: Float64Array;
+  /** Deposited mass per floor cell, mg, [ix][iy]. */
+  deposition_mg: Float64Array;
+  /** x, y, z per frame per sampled particle, NaN when not airborne. */
+  trajectories: Float32Array;
+  trajectoryBins: Int32Array;
+  particleSteps: number;
+  wallTime_s: number;
+  particles?: ParticleStates;
+}
+
+export interface FractionSummary {
+  taskMean_mgPerM3: number;
+  taskMeanCi95_mgPerM3: [number, number];
+  twa8h_mgPerM3: number;
+  twa8hCi95_mgPerM3: [number, number];
+  peak15min_mgPerM3: number;
+}
+
+export interface SeriesBand {
+  mean: number[];
+  lo: number[];
+  hi: number[];
+}
+
+export interface Grid {
+  nx: number;
+  ny: number;
+  cell_m: [number, number];
+  origin_m: [number, number];
+  values: Float32Array;
+}
+
+export interface Results {
+  engine: { version: string; seed: number | string; particles: number; batches: number; timeStep_s: number; stepFraction: number; sizeBins: number };
+  breathingZone: {
+    volume_m3: number;
+    fractions: Record<Fraction, FractionSummary>;
+    series: { time_s: number[] } & Record<Fraction, SeriesBand>;
+  };
+  fate: { emitted_mg: number } & Record<Fate, number>;
+  limit?: { fraction: Fraction; value_mgPerM3: number; percentOfLimit: number; percentOfLimitUpper: number; ratingCategory: ExposureRating; banner: Banner };
+  crossChecks: { fraction: Fraction; wellMixed_mgPerM3: number; nearField_mgPerM3: number; farField_mgPerM3: number; eddySteady_mgPerM3: number };
+  maps: { deposition_mgPerM2: Grid; captureVelocity_mPerS: Grid & { height_m: number } };
+  trajectories: { particles: number; frames: number; frameInterval_s: number; positions_m: Float32Array; bins: Int32Array };
+  performance: { particleSteps: number; wallTime_s: number; particleStepsPerS: number };
+}

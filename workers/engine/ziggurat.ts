@@ -1,0 +1,94 @@
+import type { Xoshiro128 } from './rng.ts';
+
+// 128-layer ziggurat for the standard normal (Marsaglia & Tsang 2000), one 32-bit draw per normal.
+const LAYERS = 128;
+const R = 3.442619855899;
+const kn = new Float64Array(LAYERS);
+const wn = new Float64Array(LAYERS);
+const fn = new Float64Array(LAYERS);
+
+(function buildTables() {
+  const m1 = 2147483648;
+  const vn = 9.91256303526217e-3;
+  let dn = R;
+  let tn = dn;
+  const q = vn / Math.exp(-0.5 * dn * dn);
+  kn[0] = (dn / q) * m1;
+  kn[1] = 0;
+  wn[0] = q / m1;
+  wn[LAYERS - 1] = dn / m1;
+  fn[0] = 1;
+  fn[LAYERS - 1] = Math.exp(-0.5 * dn * dn);
+  for (let i = LAYERS - 2; i >= 1; i--) {
+    dn = Math.sqrt(-2 * Math.log(vn / dn + Math.exp(-0.5 * dn * dn)));
+    kn[i + 1] = (dn / tn) * m1;
+    tn = dn;
+    fn[i] = Math.exp(-0.5 * dn * dn);
+    wn[i] = dn / m1;
+  }
+})();
+
+// The rare slow path: wedge rejection or the exponential tail beyond R.
+function normalSlow(rng: Xoshiro128, hz: number, iz: number): number {
+  for (;;) {
+    const x = hz * wn[iz];
+    if (iz === 0) {
+      let tx: number;
+      let ty: number;
+      do {
+        tx = -Math.log(rng.nextUniform()) / R;
+        ty = -Math.log(rng.nextUniform());
+      } while (ty + ty < tx * tx);
+      return hz > 0 ? R + tx : -R - tx;
+    }
+    if (fn[iz] + rng.nextUniform() * (fn[iz - 1] - fn[iz]) < Math.exp(-0.5 * x * x)) return x;
+    hz = rng.nextInt32();
+    iz = hz & (LAYERS - 1);
+    if (Math.abs(hz) < kn[iz]) return hz * wn[iz];
+  }
+}
+
+export function nextNormal(rng: Xoshiro128): number {
+  const hz = rng.nextInt32();
+  const iz = hz & (LAYERS - 1);
+  return Math.abs(hz) < kn[iz] ? hz * wn[iz] : normalSlow(rng, hz, iz);
+}
+
+// Filling a block keeps the generator out of the step loop; its state lives in locals here
+// (xoshiro128** inlined) because property traffic would cost as much as the arithmetic.
+export function fillNormals(rng: Xoshiro128, out: Float64Array): void {
+  let s0 = rng.s0 | 0;
+  let s1 = rng.s1 | 0;
+  let s2 = rng.s2 | 0;
+  let s3 = rng.s3 | 0;
+  const n = out.length;
+  for (let i = 0; i < n; i++) {
+    const m = Math.imul(s1, 5);
+    const hz = Math.imul((m << 7) | (m >>> 25), 9) | 0;
+    const t = s1 << 9;
+    s2 ^= s0;
+    s3 ^= s1;
+    s1 ^= s2;
+    s0 ^= s3;
+    s2 ^= t;
+    s3 = (s3 << 11) | (s3 >>> 21);
+    const iz = hz & (LAYERS - 1);
+    if (Math.abs(hz) < kn[iz]) {
+      out[i] = hz * wn[iz];
+      continue;
+    }
+    rng.s0 = s0;
+    rng.s1 = s1;
+    rng.s2 = s2;
+    rng.s3 = s3;
+    out[i] = normalSlow(rng, hz, iz);
+    s0 = rng.s0 | 0;
+    s1 = rng.s1 | 0;
+    s2 = rng.s2 | 0;
+    s3 = rng.s3 | 0;
+  }
+  rng.s0 = s0;
+  rng.s1 = s1;
+  rng.s2 = s2;
+  rng.s3 = s3;
+}
