@@ -1,0 +1,59 @@
+import { lazy, Suspense, useMemo, useState } from 'react';
+import { airflowToPerSecond, hoodCalculatorSchema } from '../../../../shared/schemas/calculators.ts';
+import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
+import { Cautions } from '../../../components/cautions';
+import { Page } from '../../../components/ui/page';
+import { Spinner } from '../../../components/ui/status';
+import { fieldErrors } from '../../../lib/form-errors';
+import { toNumber } from '../lib/format';
+import { hoodFigures } from '../lib/hood-figures';
+import { HOOD_DEFAULTS, HoodForm, type HoodFormState } from './hood-form';
+import { HoodResultsPanel } from './hood-results-panel';
+import { InvalidInputs } from './result-item';
+
+const HoodChart = lazy(() => import('./hood-chart'));
+
+function toInput(form: HoodFormState) {
+  const common = { kind: form.kind, width_m: toNumber(form.width_m), height_m: toNumber(form.height_m), distance_m: toNumber(form.distance_m), release: form.release };
+  return form.basis === 'airflow'
+    ? { ...common, basis: 'airflow' as const, airflow: toNumber(form.airflow), airflowUnit: form.airflowUnit }
+    : { ...common, basis: 'capture' as const, captureVelocity_mPerS: toNumber(form.captureVelocity_mPerS) };
+}
+
+// Switching the airflow unit keeps the same physical airflow rather than reinterpreting the digits.
+function withUnitChange(form: HoodFormState, patch: Partial<HoodFormState>): HoodFormState {
+  const next = { ...form, ...patch };
+  if (!patch.airflowUnit || patch.airflowUnit === form.airflowUnit) return next;
+  const value = toNumber(form.airflow);
+  if (!Number.isFinite(value)) return next;
+  const perS = airflowToPerSecond(value, form.airflowUnit);
+  const converted = patch.airflowUnit === 'm3PerH' ? cubicMetresPerSecondToPerHour(perS) : perS;
+  return { ...next, airflow: String(Number(converted.toPrecision(4))) };
+}
+
+export function HoodCalculatorPage() {
+  const [form, setForm] = useState<HoodFormState>(HOOD_DEFAULTS);
+  const parsed = useMemo(() => hoodCalculatorSchema.safeParse(toInput(form)), [form]);
+  const figures = useMemo(() => (parsed.success ? hoodFigures(parsed.data) : null), [parsed]);
+
+  return (
+    <Page title="Hood calculator" intro="Centre-line air velocity in front of a capturing hood, the airflow it needs for a capture velocity, and the duct to carry it. Results update as you type.">
+      <div className="grid gap-6 lg:grid-cols-[20rem_minmax(0,1fr)] lg:items-start">
+        <HoodForm form={form} errors={fieldErrors(parsed)} onChange={(patch) => setForm((f) => withUnitChange(f, patch))} />
+        <div className="min-w-0 space-y-6">
+          {figures && parsed.success ? (
+            <>
+              <HoodResultsPanel f={figures} distance_m={parsed.data.distance_m} basis={parsed.data.basis} />
+              <Suspense fallback={<Spinner label="Drawing the chart…" />}>
+                <HoodChart f={figures} distance_m={parsed.data.distance_m} />
+              </Suspense>
+            </>
+          ) : (
+            <InvalidInputs />
+          )}
+        </div>
+      </div>
+      <Cautions />
+    </Page>
+  );
+}
