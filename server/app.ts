@@ -14,6 +14,7 @@ import { auditRoutes } from './audit/audit.routes';
 import { placesRoutes } from './places/places.routes';
 import { agentsRoutes } from './agents/agents.routes';
 import { runsRoutes, scenariosRoutes } from './scenarios/scenarios.routes';
+import { sizeProfileRoutes } from './size-profiles/size-profiles.routes';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { requestLog } from './middleware/request-log';
 import { sameOriginWrites } from './middleware/same-origin';
@@ -63,6 +64,7 @@ export function createApp(opts: AppOptions): Express {
   api.use('/agents', agentsRoutes(db));
   api.use('/scenarios', scenariosRoutes(db));
   api.use('/runs', runsRoutes(db));
+  api.use('/size-profiles', sizeProfileRoutes(db));
   api.get('/health', (_req, res) => {
     res.json({ ok: true });
   });

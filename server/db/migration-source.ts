@@ -4,6 +4,7 @@ import * as createSessions from '../../migrations/20261202000200_create_sessions
 import * as createAuditLog from '../../migrations/20261202000300_create_audit_log';
 import * as createOutbox from '../../migrations/20261202000400_create_outbox';
 import * as createWorkspace from '../../migrations/20261202000500_create_workspace';
+import * as createSizeProfiles from '../../migrations/20261202000600_create_size_profiles';
 import * as createScenarios from '../../migrations/20261202000700_create_scenarios';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
@@ -16,6 +17,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202000300_create_audit_log.ts': createAuditLog,
   '20261202000400_create_outbox.ts': createOutbox,
   '20261202000500_create_workspace.ts': createWorkspace,
+  '20261202000600_create_size_profiles.ts': createSizeProfiles,
   '20261202000700_create_scenarios.ts': createScenarios,
 };
 

@@ -1,0 +1,45 @@
+import type { CreateSizeProfileInput, UploadFields } from '../../shared/schemas/size-profiles';
+import { buildFromForm, buildFromUpload, type FormInput, type ProfileData } from '../../shared/size-profiles/index';
+import { writeAudit } from '../audit/audit.repo';
+import type { Db } from '../db/knex';
+import { AppError, notFound } from '../lib/app-error';
+import { readCsvRecords } from './csv-records';
+import { findSizeProfile, insertSizeProfile, softDeleteSizeProfile } from './size-profiles.repo';
+
+type Actor = { id: number; email: string };
+export type UploadedFile = { originalname: string; buffer: Buffer };
+
+async function store(db: Db, actor: Actor, name: string, data: ProfileData, detail: Record<string, unknown>) {
+  const id = await db.transaction(async (trx) => {
+    const newId = await insertSizeProfile(trx, name, data, actor.id);
+    await writeAudit(trx, { actor, action: 'size_profile.created', targetType: 'size_profile', targetId: newId, detail: { name, kind: data.kind, ...detail } });
+    return newId;
+  });
+  return (await findSizeProfile(db, id))!;
+}
+
+export async function createSizeProfile(db: Db, actor: Actor, input: CreateSizeProfileInput) {
+  const { name, ...form } = input;
+  return store(db, actor, name, buildFromForm(form as FormInput), {});
+}
+
+// Nothing is written unless every row passes; one 422 carries every problem found.
+export async function uploadSizeProfile(db: Db, actor: Actor, fields: UploadFields, file: UploadedFile | undefined) {
+  if (!file) throw new AppError(400, 'invalid_input', 'Choose a CSV file to upload', [{ path: 'file', message: 'No file was sent' }]);
+  const records = readCsvRecords(file);
+  const built = buildFromUpload(fields.format, records, { fileName: file.originalname, density_kgPerM3: fields.density_kgPerM3 });
+  if (!built.ok) {
+    const count = built.issues.length;
+    const issues = built.issues.map((i) => ({ path: 'file', ...i }));
+    throw new AppError(422, 'invalid_file', `The file was not stored: ${count} problem${count === 1 ? '' : 's'} found`, issues);
+  }
+  return store(db, actor, fields.name, built.value, { format: fields.format, fileName: file.originalname });
+}
+
+export async function deleteSizeProfile(db: Db, actor: Actor, id: number) {
+  await db.transaction(async (trx) => {
+    const found = await findSizeProfile(trx, id);
+    if (!found || !(await softDeleteSizeProfile(trx, id))) throw notFound('Size profile');
+    await writeAudit(trx, { actor, action: 'size_profile.deleted', targetType: 'size_profile', targetId: id, detail: { name: found.name } });
+  });
+}
