@@ -39,7 +39,7 @@ describe('the particle calculator', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Particle calculator' }).click();
     await page.getByRole('heading', { level: 1, name: 'Particle calculator' }).waitFor();
     const form = page.getByRole('form', { name: 'Particle and air' });
-    await form.getByLabel('Diameter (physical)').fill('10');
+    await form.getByLabel('Diameter', { exact: true }).fill('10');
     await form.getByLabel('Unit').selectOption('um');
     await form.getByLabel('Particle density').fill('1000');
     await form.getByLabel('Dynamic shape factor').fill('1');

@@ -7,6 +7,9 @@ export const WATCH = 'var(--color-watch)';
 export const ACT = 'var(--color-act)';
 
 export const tickLabel = { fill: MUTED, fontSize: 11, fontFamily: 'inherit' } as const;
+// A paper-coloured halo keeps labels readable where they cross a curve.
+export const halo = { stroke: 'white', strokeWidth: 4, paintOrder: 'stroke' } as const;
+
 export const axisLabel = { fill: INK, fontSize: 12, fontWeight: 600, fontFamily: 'inherit' } as const;
 export const CLEAR_SOFT = 'var(--color-clear-soft)';
 export const PAPER_DEEP = 'var(--color-paper-deep)';

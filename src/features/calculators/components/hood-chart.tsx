@@ -6,7 +6,7 @@ import { LinePath } from '@visx/shape';
 import { decadeTicks, plainTick } from '../lib/chart-ticks';
 import { displayNumber, plainNumber } from '../lib/format';
 import type { HoodFigures } from '../lib/hood-figures';
-import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, tickLabel } from './chart-style';
+import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from './chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 360;
@@ -51,7 +51,7 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
           )}
           <line x1={x(distance_m)} x2={x(distance_m)} y1={y(f.centerline_mPerS)} y2={innerH} stroke={INK} strokeDasharray="2 3" />
           <circle cx={x(distance_m)} cy={y(f.centerline_mPerS)} r={5} fill="white" stroke={INK} strokeWidth={2} />
-          <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600}>
+          <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
             {displayNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
           </text>
           <AxisLeft scale={y} tickValues={yTicks} tickFormat={(v) => plainTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label="Centre-line velocity (m/s, log scale)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={40} />

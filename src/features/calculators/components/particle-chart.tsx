@@ -8,7 +8,7 @@ import { CHART_MAX_DIAMETER_m, CHART_MIN_DIAMETER_m } from '../lib/crossover';
 import { decadeTicks, diameterTick, logSpace, powerTick } from '../lib/chart-ticks';
 import { displayDiameter, plainNumber } from '../lib/format';
 import { particleProperties, type ParticleMedium } from '../lib/particle-properties';
-import { ACCENT, INK, LINE, MUTED, WATCH, axisLabel, tickLabel } from './chart-style';
+import { ACCENT, INK, LINE, MUTED, WATCH, axisLabel, halo, tickLabel } from './chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 380;
@@ -43,7 +43,7 @@ export default function ParticleChart({ medium, crossover_m, diameter_m }: { med
           <LinePath data={points} x={(p) => x(p.diameter_m)} y={(p) => y(p.rmsDisplacement_m)} stroke={WATCH} strokeWidth={2.5} strokeDasharray="7 4" />
           {inRange && <line x1={x(diameter_m)} x2={x(diameter_m)} y1={0} y2={innerH} stroke={MUTED} strokeDasharray="2 3" />}
           {inRange && (
-            <text x={x(diameter_m) + 4} y={12} fill={MUTED} fontSize={11}>
+            <text x={x(diameter_m) + 4} y={12} fill={MUTED} fontSize={11} {...halo}>
               entered {displayDiameter(diameter_m)}
             </text>
           )}
@@ -51,7 +51,7 @@ export default function ParticleChart({ medium, crossover_m, diameter_m }: { med
             <g data-testid="crossover-marker">
               <line x1={x(crossover_m)} x2={x(crossover_m)} y1={y(crossoverY)} y2={innerH} stroke={INK} strokeWidth={1.5} />
               <circle cx={x(crossover_m)} cy={y(crossoverY)} r={5} fill="white" stroke={INK} strokeWidth={2} />
-              <text x={x(crossover_m) + 8} y={y(crossoverY) - 10} fill={INK} fontSize={12} fontWeight={600}>
+              <text x={x(crossover_m) + 8} y={y(crossoverY) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
                 Equal at {displayDiameter(crossover_m)}
               </text>
             </g>

@@ -30,7 +30,7 @@ export function ParticleForm({ form, errors, onChange }: { form: ParticleFormSta
   return (
     <form aria-label="Particle and air" onSubmit={(e) => e.preventDefault()} className="grid gap-4 rounded-lg border border-line bg-white p-4 md:grid-cols-3 lg:grid-cols-1">
       <div className="grid grid-cols-[1fr_6rem] items-start gap-2">
-        <TextField label="Diameter (physical)" {...numeric} value={form.diameter} error={errors.diameter} onChange={(e) => onChange({ diameter: e.target.value })} />
+        <TextField label="Diameter" {...numeric} value={form.diameter} error={errors.diameter} hint="Physical, volume-equivalent." onChange={(e) => onChange({ diameter: e.target.value })} />
         <SelectField label="Unit" value={form.diameterUnit} onChange={(e) => onChange({ diameterUnit: e.target.value as DiameterUnit })}>
           {DIAMETER_UNITS.map((u) => (
             <option key={u} value={u}>
