@@ -13,6 +13,8 @@ import { SignInRoute } from './routes/sign-in';
 import { StationRoute } from './routes/station';
 
 const PeoplePage = lazy(() => import('../features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
+const ParticleCalculatorPage = lazy(() => import('../features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
+const HoodCalculatorPage = lazy(() => import('../features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
 const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (
@@ -33,6 +35,8 @@ export const router = createBrowserRouter([
       { path: paths.station, element: guarded('boards:read-own', <StationRoute />) },
       { path: paths.people, element: guarded('people:manage', <PeoplePage />) },
       { path: paths.outbox, element: guarded('outbox:read', <OutboxPage />) },
+      { path: paths.particleCalculator, element: guarded('calculators:use', <ParticleCalculatorPage />) },
+      { path: paths.hoodCalculator, element: guarded('calculators:use', <HoodCalculatorPage />) },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -9,6 +9,13 @@ export const paths = {
   particleCalculator: '/calculators/particle',
   hoodCalculator: '/calculators/hood',
   engineCheck: '/dev/engine',
+  scenario: (id: number | string) => `/scenarios/${id}`,
+  newScenario: (workstationId: number | string) => `/workstations/${workstationId}/new-scenario`,
+  run: (id: number | string) => `/runs/${id}`,
+  workstation: (id: number | string) => `/workstations/${id}`,
+  places: '/places',
+  agents: '/dust-agents',
+  audit: '/audit',
 } as const;
 
 export const api = {
@@ -20,4 +27,16 @@ export const api = {
   person: (id: number) => `/api/people/${id}`,
   passwordLink: (id: number) => `/api/people/${id}/password-link`,
   outbox: '/api/outbox',
+  audit: '/api/audit',
+  sites: '/api/sites',
+  rooms: '/api/rooms',
+  workstations: '/api/workstations',
+  workstation: (id: number) => `/api/workstations/${id}`,
+  agents: '/api/agents',
+  agent: (id: number) => `/api/agents/${id}`,
+  scenarios: '/api/scenarios',
+  scenario: (id: number) => `/api/scenarios/${id}`,
+  duplicateScenario: (id: number) => `/api/scenarios/${id}/duplicate`,
+  scenarioRuns: (id: number) => `/api/scenarios/${id}/runs`,
+  run: (id: number) => `/api/runs/${id}`,
 } as const;

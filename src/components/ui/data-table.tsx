@@ -10,11 +10,25 @@ export type Column<T> = {
 
 type Sort = { key: string; dir: 'asc' | 'desc' };
 
-export function DataTable<T>({ rows, columns, rowKey, caption, initialSort }: { rows: T[]; columns: Column<T>[]; rowKey: (row: T) => string | number; caption: string; initialSort?: Sort }) {
-  const [sort, setSort] = useState<Sort | undefined>(initialSort);
+type Props<T> = {
+  rows: T[];
+  columns: Column<T>[];
+  rowKey: (row: T) => string | number;
+  caption: string;
+  initialSort?: Sort;
+  // Given, the parent sorts (e.g. on the server) and the table only shows the state.
+  sort?: Sort;
+  onSortChange?: (sort: Sort) => void;
+};
+
+export type { Sort as TableSort };
+
+export function DataTable<T>({ rows, columns, rowKey, caption, initialSort, sort: controlled, onSortChange }: Props<T>) {
+  const [own, setOwn] = useState<Sort | undefined>(initialSort);
+  const sort = onSortChange ? controlled : own;
   const sorted = useMemo(() => {
     const col = columns.find((c) => c.key === sort?.key);
-    if (!col?.sortValue || !sort) return rows;
+    if (onSortChange || !col?.sortValue || !sort) return rows;
     const value = col.sortValue;
     const sign = sort.dir === 'asc' ? 1 : -1;
     return [...rows].sort((a, b) => {
@@ -25,9 +39,13 @@ export function DataTable<T>({ rows, columns, rowKey, caption, initialSort }: { 
       if (vb === null) return -1;
       return va < vb ? -sign : sign;
     });
-  }, [rows, columns, sort]);
+  }, [rows, columns, sort, onSortChange]);
 
-  const toggle = (key: string) => setSort((s) => (s?.key === key ? { key, dir: s.dir === 'asc' ? 'desc' : 'asc' } : { key, dir: 'asc' }));
+  const toggle = (key: string) => {
+    const next: Sort = sort?.key === key ? { key, dir: sort.dir === 'asc' ? 'desc' : 'asc' } : { key, dir: 'asc' };
+    if (onSortChange) onSortChange(next);
+    else setOwn(next);
+  };
 
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-white">

@@ -1,0 +1,79 @@
+import type { AgentData } from './workspace';
+import type { Scenario, ScenarioInput } from './scenario';
+
+// Shapes the API answers with; the server builds them, the client reads them.
+export type Banner = 'clear' | 'watch' | 'act';
+
+export type LastRun = {
+  id: number;
+  createdAt: string;
+  outOfDate: boolean;
+  respirableTwa8h_mgPerM3: number | null;
+  limitFraction: string | null;
+  twa8h_mgPerM3: number | null;
+  twa8hCi95_mgPerM3: [number | null, number | null];
+  percentOfLimit: number | null;
+  ratingCategory: number | null;
+  banner: Banner | null;
+};
+
+export type ScenarioSummary = {
+  id: number;
+  name: string;
+  workstationId: number;
+  workstationName: string;
+  roomName: string;
+  siteId: number;
+  siteName: string;
+  agentId: number | null;
+  agentName: string | null;
+  sizeProfileId: number | null;
+  controlDescription: string;
+  controlTier: string;
+  status: 'draft' | 'approved';
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+  lastRun: LastRun | null;
+};
+
+export type RunListItem = {
+  id: number;
+  seed: string;
+  engine_version: string;
+  particles: number;
+  limit_fraction: string | null;
+  twa8h_mgPerM3: number | null;
+  twa8h_lo_mgPerM3: number | null;
+  twa8h_hi_mgPerM3: number | null;
+  percent_of_limit: number | null;
+  banner: Banner | null;
+  created_at: string;
+  outOfDate: boolean;
+};
+
+export type ScenarioDetail = ScenarioSummary & { input: ScenarioInput; inputHash: string; runs: RunListItem[] };
+
+export type SavedRun = {
+  id: number;
+  scenarioId: number;
+  scenarioName: string;
+  seed: string;
+  engineVersion: string;
+  particles: number;
+  createdAt: string;
+  outOfDate: boolean;
+  input: Scenario;
+  result: unknown;
+};
+
+export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
+
+export type JsonRecord<T> = { id: number; name: string; data: T; createdAt: string; updatedAt: string };
+export type AgentRecord = JsonRecord<AgentData>;
+export type RoomData = { length_m: number; width_m: number; height_m: number; airChanges_perH: number; draftSpeed_mPerS: number; draftDirection_deg: number; temperature_K: number };
+export type WorkstationData = { description: string; source: { x_m: number; y_m: number; z_m: number }; worker: { x_m: number; y_m: number; z_m: number; posture: 'standing' | 'seated' }; releaseType: 'quiet' | 'low' | 'active' | 'high' };
+export type WorkstationRecord = JsonRecord<WorkstationData> & { roomId: number };
+export type RoomRecord = JsonRecord<RoomData> & { siteId: number; workstations: WorkstationRecord[] };
+export type SiteTree = JsonRecord<{ address: string; notes: string }> & { rooms: RoomRecord[] };
+export type WorkstationDetail = WorkstationRecord & { room: JsonRecord<RoomData> & { siteId: number } };
