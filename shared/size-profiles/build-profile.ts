@@ -4,7 +4,7 @@ import { counterToBins, densityIssue, parseCounter } from './counter.ts';
 import { fitLognormal } from './fit-lognormal.ts';
 import type { UploadFormat } from './formats.ts';
 import { impactorToBins, parseImpactor } from './impactor.ts';
-import { type Checked, type CsvRecord, failed, passed } from './issues.ts';
+import { type Checked, type CsvRecord, byRow, failed, passed } from './issues.ts';
 import { type LognormalInput, DEFAULT_RESPIRABLE_GSD, lognormalBins, lognormalMmad, mmadForRespirableFraction } from './lognormal-input.ts';
 import type { MassBins } from './mass-bins.ts';
 import { parsePlainBins, plainBinsToBins } from './plain-bins.ts';
@@ -25,6 +25,11 @@ export type UploadOptions = { fileName: string; density_kgPerM3?: number };
 
 // Never throws on bad content: every problem comes back as a row issue.
 export function buildFromUpload(format: UploadFormat, records: CsvRecord[], options: UploadOptions): Checked<ProfileData> {
+  const result = buildChecked(format, records, options);
+  return result.ok ? result : failed(byRow(result.issues));
+}
+
+function buildChecked(format: UploadFormat, records: CsvRecord[], options: UploadOptions): Checked<ProfileData> {
   const { fileName } = options;
   if (format === 'impactor') {
     const stages = parseImpactor(records);

@@ -11,3 +11,6 @@ export type CsvRecord = { line: number; cells: string[] };
 
 // For callers that hold plain rows without blank lines: row i is on line i + 1.
 export const recordsFromRows = (rows: string[][]): CsvRecord[] => rows.map((cells, i) => ({ line: i + 1, cells }));
+
+// Whole-file problems first, then in file order, so the list reads like the file.
+export const byRow = (issues: RowIssue[]): RowIssue[] => [...issues].sort((a, b) => (a.row ?? 0) - (b.row ?? 0));

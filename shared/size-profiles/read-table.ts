@@ -47,7 +47,8 @@ export function readTable(records: CsvRecord[], columns: readonly string[], allo
   if (data.length > MAX_DATA_ROWS) return failed([{ row: data[MAX_DATA_ROWS].line, column: null, message: `At most ${MAX_DATA_ROWS} data rows are allowed, found ${data.length}` }]);
   const issues: RowIssue[] = [];
   const rows = data.map((record) => {
-    if (record.cells.length !== columns.length) {
+    // Spreadsheets often export trailing empty cells; only real extra values are a problem.
+    if (!isBlank(record.cells.slice(columns.length))) {
       issues.push({ row: record.line, column: null, message: `Has ${record.cells.length} cells; the header has ${columns.length}` });
     }
     const values: Record<string, number | null> = {};
