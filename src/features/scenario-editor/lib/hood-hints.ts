@@ -1,0 +1,67 @@
+import { captureVelocityRange, hoodCenterlineVelocity, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { hoodAxis, type HoodInput } from './hood-axis.ts';
+
+// [M] the centre-line equations hold out to about 1.5 equivalent hood diameters.
+const VALID_DIAMETERS = 1.5;
+// [P] common practice: one slot draws reliably across about 0.5 m (the single-sided tank-width rule).
+export const SLOT_REACH_m = 0.5;
+// Half a percent of slack so a hood sized to exactly 1.00 m/s is not called "above" 1.0 by rounding.
+const VERDICT_SLACK = 0.005;
+
+export type CaptureVerdict = 'below' | 'within' | 'above';
+export type ValidityRule = 'diameters' | 'slot' | 'booth';
+
+export interface HoodHint {
+  axial_m: number;
+  offAxis_m: number;
+  behind: boolean;
+  centerline_mPerS: number | null;
+  range: CaptureVelocityRange;
+  verdict: CaptureVerdict | null;
+  faceVelocity_mPerS: number;
+  rule: ValidityRule;
+  validUpTo_m: number;
+  beyondValidity: boolean;
+  farOffAxis: boolean;
+}
+
+export const isSlot = (kind: HoodInput['kind']) => kind === 'slot' || kind === 'flanged-slot';
+
+export function captureVerdict(velocity_mPerS: number, range: CaptureVelocityRange): CaptureVerdict {
+  if (velocity_mPerS < range.min_mPerS * (1 - VERDICT_SLACK)) return 'below';
+  return velocity_mPerS > range.max_mPerS * (1 + VERDICT_SLACK) ? 'above' : 'within';
+}
+
+export function equivalentDiameter_m(faceArea_m2: number): number {
+  return Math.sqrt((4 * faceArea_m2) / Math.PI);
+}
+
+export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_m: number }, release: ReleaseCondition): HoodHint {
+  const n = hoodAxis(hood.direction);
+  const r = { x: source.x_m - hood.x_m, y: source.y_m - hood.y_m, z: source.z_m - hood.z_m };
+  const axial_m = r.x * n.x + r.y * n.y + r.z * n.z;
+  const offAxis_m = Math.sqrt(Math.max(0, r.x ** 2 + r.y ** 2 + r.z ** 2 - axial_m ** 2));
+  const faceArea_m2 = hood.faceWidth_m * hood.faceHeight_m;
+  const behind = axial_m < 0;
+  const range = captureVelocityRange(release);
+  // The engine treats faceWidth as the slot's length, so the same is used here.
+  const centerline_mPerS = behind
+    ? null
+    : hoodCenterlineVelocity({ kind: hood.kind, faceArea_m2, slotLength_m: hood.faceWidth_m, airflow_m3PerS: hood.airflow_m3PerS }, axial_m);
+  const rule: ValidityRule = hood.kind === 'booth' ? 'booth' : isSlot(hood.kind) ? 'slot' : 'diameters';
+  const validUpTo_m = rule === 'slot' ? SLOT_REACH_m : VALID_DIAMETERS * equivalentDiameter_m(faceArea_m2);
+  return {
+    axial_m,
+    offAxis_m,
+    behind,
+    centerline_mPerS,
+    range,
+    verdict: centerline_mPerS === null ? null : captureVerdict(centerline_mPerS, range),
+    faceVelocity_mPerS: hood.airflow_m3PerS / faceArea_m2,
+    rule,
+    validUpTo_m,
+    beyondValidity: rule !== 'booth' && !behind && axial_m > validUpTo_m,
+    // Off the axis the real field falls faster than the centre-line figure says.
+    farOffAxis: !behind && offAxis_m > Math.max(axial_m, 0.05),
+  };
+}
