@@ -1,0 +1,37 @@
+import type { Results } from '../engine/index.ts';
+import { FRACTIONS } from '../engine/index.ts';
+
+const mg = (v: number) => (v >= 0.1 ? v.toFixed(3) : v.toPrecision(3));
+const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
+
+// Typed arrays would serialise as index-keyed objects; the JSON output wants plain arrays.
+export function resultsToJson(results: Results): string {
+  return JSON.stringify(results, (_key, value: unknown) => (ArrayBuffer.isView(value) ? Array.from(value as Float32Array) : value), 2);
+}
+
+export function summary(name: string, r: Results): string {
+  const lines = [
+    `${name}`,
+    `engine ${r.engine.version}, seed ${r.engine.seed}, ${r.engine.particles} particles in ${r.engine.batches} batches, ${r.engine.sizeBins} size bins`,
+    '',
+    'Breathing zone (mg/m³)     task mean [95 % CI]            8-h TWA [95 % CI]              peak 15 min',
+  ];
+  for (const f of FRACTIONS) {
+    const s = r.breathingZone.fractions[f];
+    const task = `${mg(s.taskMean_mgPerM3)} [${mg(s.taskMeanCi95_mgPerM3[0])}, ${mg(s.taskMeanCi95_mgPerM3[1])}]`;
+    const twa = `${mg(s.twa8h_mgPerM3)} [${mg(s.twa8hCi95_mgPerM3[0])}, ${mg(s.twa8hCi95_mgPerM3[1])}]`;
+    lines.push(`  ${f.padEnd(24)} ${task.padEnd(30)} ${twa.padEnd(30)} ${mg(s.peak15min_mgPerM3)}`);
+  }
+  if (r.limit) {
+    const l = r.limit;
+    lines.push('', `Limit ${l.value_mgPerM3} mg/m³ (${l.fraction}): ${l.percentOfLimit.toFixed(1)} % of limit (upper CI ${l.percentOfLimitUpper.toFixed(1)} %), rating category ${l.ratingCategory}, banner ${l.banner.toUpperCase()}`);
+  }
+  const fate = r.fate;
+  lines.push('', `Fate of ${fate.emitted_mg.toFixed(1)} mg emitted: captured ${pct(fate.captured)}, settled ${pct(fate.settled)}, exhausted ${pct(fate.exhausted)}, airborne at end ${pct(fate.airborne)}`);
+  const c = r.crossChecks;
+  lines.push(`Cross-checks (${c.fraction}, mg/m³): well-mixed ${mg(c.wellMixed_mgPerM3)}, near field ${mg(c.nearField_mgPerM3)}, far field ${mg(c.farField_mgPerM3)}, eddy steady ${mg(c.eddySteady_mgPerM3)}`);
+  const p = r.performance;
+  lines.push(`Performance: ${(p.particleSteps / 1e6).toFixed(1)} M particle-steps in ${p.wallTime_s.toFixed(2)} s (${(p.particleStepsPerS / 1e6).toFixed(1)} M/s)`);
+  lines.push('', 'Model estimates, not measurements: they do not replace personal air sampling.');
+  return lines.join('\n');
+}

@@ -1,0 +1,45 @@
+import { readFile } from 'node:fs/promises';
+import { availableParallelism } from 'node:os';
+import { ScenarioError, parseScenario } from '../../shared/schemas/scenario.ts';
+import { combineBatches, prepareScenario } from '../engine/index.ts';
+import { resultsToJson, summary } from './format-results.ts';
+import { USAGE, parseSimArgs } from './sim-args.ts';
+import { runOnThreads } from './thread-pool.ts';
+
+async function readScenario(file: string): Promise<Record<string, unknown>> {
+  let text: string;
+  try {
+    text = await readFile(file, 'utf8');
+  } catch (error) {
+    throw new Error(`cannot read ${file}: ${(error as NodeJS.ErrnoException).code ?? String(error)}`);
+  }
+  try {
+    const value: unknown = JSON.parse(text);
+    if (typeof value !== 'object' || value === null || Array.isArray(value)) throw new Error('the top level must be an object');
+    return value as Record<string, unknown>;
+  } catch (error) {
+    throw new Error(`${file} is not a valid scenario JSON file: ${(error as Error).message}`);
+  }
+}
+
+async function main(): Promise<void> {
+  const args = parseSimArgs(process.argv.slice(2));
+  const raw = await readScenario(args.file);
+  const run = { ...((raw.run as object | undefined) ?? {}) } as Record<string, unknown>;
+  if (args.particles !== undefined) run.particles = args.particles;
+  if (args.seed !== undefined) run.seed = args.seed;
+  const scenario = parseScenario({ ...raw, run });
+  const prepared = prepareScenario(scenario);
+  const started = Date.now();
+  const progress = args.json ? undefined : (fraction: number) => process.stderr.write(`\r${(100 * fraction).toFixed(0).padStart(3)} %`);
+  const batches = await runOnThreads(prepared, args.workers ?? availableParallelism(), progress);
+  if (progress) process.stderr.write('\r');
+  const results = combineBatches(prepared, batches, (Date.now() - started) / 1000);
+  process.stdout.write(`${args.json ? resultsToJson(results) : summary(scenario.name ?? args.file, results)}\n`);
+}
+
+main().catch((error: unknown) => {
+  const message = error instanceof ScenarioError || error instanceof Error ? error.message : String(error);
+  process.stderr.write(`${message}\n${error instanceof ScenarioError ? '' : `${USAGE}\n`}`);
+  process.exit(1);
+});
