@@ -10,7 +10,7 @@ import { createApp } from './app';
 const env = parseEnv();
 const db = createDb(env.DATABASE_FILE);
 await migrateLatest(db);
-await seedDemo(db);
+await seedDemo(db, { particles: env.DEMO_PARTICLES, log: (line) => console.log(line) });
 
 const mailer = env.SMTP_URL ? createSmtpMailer(env.SMTP_URL, env.MAIL_FROM) : createOutboxMailer(db, env.MAIL_FROM);
 const clientDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist');

@@ -9,6 +9,7 @@ const envSchema = z.object({
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default('Motewalk <no-reply@motewalk.local>'),
   LOG_REQUESTS: z.enum(['0', '1']).default('1'),
+  DEMO_PARTICLES: z.coerce.number().int().min(100).max(1_000_000).optional(),
 });
 export type Env = z.infer<typeof envSchema>;
 

@@ -6,7 +6,7 @@ const env = parseEnv();
 const db = createDb(env.DATABASE_FILE);
 try {
   await migrateLatest(db);
-  const seeded = await seedDemo(db);
+  const seeded = await seedDemo(db, { particles: env.DEMO_PARTICLES, log: (line) => console.log(line) });
   console.log(seeded ? `Loaded demo data into ${env.DATABASE_FILE}` : `Demo data skipped: ${env.DATABASE_FILE} already has people`);
 } finally {
   await db.destroy();

@@ -2,6 +2,7 @@ import type { Role } from '../../shared/auth/permissions';
 import type { Db } from './knex';
 import { hashPassword } from '../auth/password';
 import { countPeople, insertPerson } from '../people/people.repo';
+import { seedDemoWorkspace } from './demo/workspace-seed';
 
 // Demo sign-ins for a local demo only; they are printed at start-up and never used elsewhere.
 export const DEMO_PEOPLE: { email: string; name: string; role: Role; password: string }[] = [
@@ -11,7 +12,7 @@ export const DEMO_PEOPLE: { email: string; name: string; role: Role; password: s
   { email: 'operator@motewalk.local', name: 'Ravi Lindqvist', role: 'operator', password: 'demo-operator-pass' },
 ];
 
-export async function seedDemo(db: Db): Promise<boolean> {
+export async function seedDemo(db: Db, opts: { workspace?: boolean; particles?: number; log?: (s: string) => void } = {}): Promise<boolean> {
   if ((await countPeople(db)) > 0) return false;
   const hashes = await Promise.all(DEMO_PEOPLE.map((p) => hashPassword(p.password)));
   await db.transaction(async (trx) => {
@@ -19,5 +20,10 @@ export async function seedDemo(db: Db): Promise<boolean> {
       await insertPerson(trx, { email: p.email, name: p.name, role: p.role, status: 'active', passwordHash: hashes[i] });
     }
   });
+  if (opts.workspace !== false) {
+    const engineer = await db('people').where({ role: 'engineer' }).first();
+    opts.log?.('Loading the demo workstations and running their scenarios…');
+    await seedDemoWorkspace(db, { id: engineer.id, email: engineer.email }, opts);
+  }
   return true;
 }

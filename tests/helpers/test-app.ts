@@ -8,10 +8,10 @@ import { createOutboxMailer } from '../../server/mail/mailer';
 export const HOST = 'motewalk.test';
 export const ORIGIN = `http://${HOST}`;
 
-export async function createTestApp() {
+export async function createTestApp(opts: { demoWorkspace?: boolean; particles?: number } = {}) {
   const db: Db = createDb(':memory:');
   await migrateLatest(db);
-  await seedDemo(db);
+  await seedDemo(db, { workspace: opts.demoWorkspace ?? false, particles: opts.particles ?? 2000 });
   const app = createApp({ db, mailer: createOutboxMailer(db, 'test@motewalk.local'), sessionSecret: 'test-secret-0123456789' });
 
   // Every request carries our own origin, as a browser on a Motewalk page would.
