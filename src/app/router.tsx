@@ -7,6 +7,7 @@ import { AppShell } from './routes/app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute, RouteError } from './routes/not-found';
 import { RequireUser } from './routes/require-user';
+import { PlacesRoute } from './routes/places';
 import { ScenariosRoute } from './routes/scenarios';
 import { SetPasswordRoute } from './routes/set-password';
 import { SignInRoute } from './routes/sign-in';
@@ -15,6 +16,7 @@ import { StationRoute } from './routes/station';
 const PeoplePage = lazy(() => import('../features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
 const ParticleCalculatorPage = lazy(() => import('../features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
 const HoodCalculatorPage = lazy(() => import('../features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
+const AgentsPage = lazy(() => import('../features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
 const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (
@@ -32,6 +34,8 @@ export const router = createBrowserRouter([
     children: [
       { path: paths.home, element: <HomeRoute /> },
       { path: paths.scenarios, element: guarded('scenarios:read', <ScenariosRoute />) },
+      { path: paths.places, element: guarded('scenarios:read', <PlacesRoute />) },
+      { path: paths.agents, element: guarded('scenarios:read', <AgentsPage />) },
       { path: paths.station, element: guarded('boards:read-own', <StationRoute />) },
       { path: paths.people, element: guarded('people:manage', <PeoplePage />) },
       { path: paths.outbox, element: guarded('outbox:read', <OutboxPage />) },

@@ -1,0 +1,85 @@
+import { useState, type FormEvent } from 'react';
+import { agentInputSchema, FRACTIONS } from '../../../../shared/schemas/workspace';
+import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
+import { Button } from '../../../components/ui/button';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { ErrorMessage, Notice } from '../../../components/ui/status';
+import { fieldErrors } from '../../../lib/form-errors';
+import { useSaveAgent } from '../api/save-agent';
+
+const num = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
+const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
+
+export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () => void }) {
+  const d = agent?.data;
+  const [f, setF] = useState({
+    name: agent?.name ?? '',
+    density: str(d?.density_kgPerM3 ?? 2650),
+    shape: str(d?.shapeFactor ?? 1),
+    fraction: d?.limitFraction ?? 'respirable',
+    limit8h: str(d?.limit8h_mgPerM3),
+    limit15: str(d?.limit15min_mgPerM3),
+    jurisdiction: d?.jurisdiction ?? '',
+    source: d?.limitSource ?? '',
+    date: d?.limitDate ?? '',
+    overrideOn: Boolean(d?.override),
+    override: str(d?.override?.limit8h_mgPerM3),
+    reason: d?.override?.reason ?? '',
+  });
+  const [submitted, setSubmitted] = useState(false);
+  const save = useSaveAgent();
+  const body = {
+    name: f.name,
+    data: {
+      density_kgPerM3: num(f.density),
+      shapeFactor: num(f.shape),
+      limitFraction: f.fraction,
+      limit8h_mgPerM3: num(f.limit8h),
+      limit15min_mgPerM3: f.limit15.trim() ? num(f.limit15) : null,
+      jurisdiction: f.jurisdiction,
+      limitSource: f.source,
+      limitDate: f.date,
+      override: f.overrideOn ? { limit8h_mgPerM3: num(f.override), reason: f.reason } : null,
+      notes: d?.notes ?? '',
+    },
+  };
+  const parsed = agentInputSchema.safeParse(body);
+  const e = submitted ? fieldErrors(parsed, save.error) : {};
+  const set = (k: keyof typeof f) => (ev: { target: { value: string } }) => setF({ ...f, [k]: ev.target.value });
+  const submit = (ev: FormEvent) => {
+    ev.preventDefault();
+    setSubmitted(true);
+    if (parsed.success) save.mutate({ id: agent?.id, body: parsed.data }, { onSuccess: () => onDone?.() });
+  };
+
+  return (
+    <form onSubmit={submit} noValidate aria-label={agent ? `Edit ${agent.name}` : 'New dust agent'} className="grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3">
+      <TextField label="Name" value={f.name} onChange={set('name')} error={e.name} />
+      <TextField label="Particle density" unit="kg/m³" inputMode="decimal" value={f.density} onChange={set('density')} error={e['data.density_kgPerM3']} />
+      <TextField label="Dynamic shape factor" unit="–" inputMode="decimal" value={f.shape} onChange={set('shape')} error={e['data.shapeFactor']} hint="1 for a sphere" />
+      <SelectField label="Limit applies to" value={f.fraction} onChange={set('fraction')}>
+        {FRACTIONS.map((x) => <option key={x} value={x}>{x} fraction</option>)}
+      </SelectField>
+      <TextField label="8-h limit (TWA)" unit="mg/m³" inputMode="decimal" value={f.limit8h} onChange={set('limit8h')} error={e['data.limit8h_mgPerM3']} />
+      <TextField label="15-min limit" unit="mg/m³" inputMode="decimal" value={f.limit15} onChange={set('limit15')} error={e['data.limit15min_mgPerM3']} hint="Leave empty if none" />
+      <TextField label="Jurisdiction" value={f.jurisdiction} onChange={set('jurisdiction')} error={e['data.jurisdiction']} />
+      <TextField label="Source of the limit" value={f.source} onChange={set('source')} error={e['data.limitSource']} />
+      <TextField label="Date of the limit" value={f.date} onChange={set('date')} />
+      <label className="flex items-center gap-2 text-sm font-semibold sm:col-span-3">
+        <input type="checkbox" checked={f.overrideOn} onChange={(ev) => setF({ ...f, overrideOn: ev.target.checked })} /> Use a different limit here (override)
+      </label>
+      {f.overrideOn && (
+        <>
+          <TextField label="Override 8-h limit" unit="mg/m³" inputMode="decimal" value={f.override} onChange={set('override')} error={e['data.override.limit8h_mgPerM3']} />
+          <TextField label="Reason for the override" className="sm:col-span-2" value={f.reason} onChange={set('reason')} error={e['data.override.reason']} />
+        </>
+      )}
+      <div className="flex gap-2 sm:col-span-3">
+        <Button type="submit" disabled={save.isPending}>{agent ? 'Save changes' : 'Add dust agent'}</Button>
+        {onDone && agent && <Button variant="secondary" onClick={onDone}>Cancel</Button>}
+      </div>
+      {save.isSuccess && !agent && <div className="sm:col-span-3"><Notice>Saved “{save.data.name}”.</Notice></div>}
+      {save.error && <div className="sm:col-span-3"><ErrorMessage title="Not saved" error={save.error} /></div>}
+    </form>
+  );
+}

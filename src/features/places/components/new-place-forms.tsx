@@ -1,0 +1,126 @@
+import { useState, type FormEvent } from 'react';
+import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
+import type { SiteTree } from '../../../../shared/schemas/workspace-views';
+import { Button } from '../../../components/ui/button';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { ErrorMessage, Notice } from '../../../components/ui/status';
+import { fieldErrors } from '../../../lib/form-errors';
+import { useCreateRoom, useCreateSite, useCreateWorkstation } from '../api/create-place';
+
+const n = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
+const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
+
+export function NewSiteForm() {
+  const [name, setName] = useState('');
+  const [address, setAddress] = useState('');
+  const [submitted, setSubmitted] = useState(false);
+  const m = useCreateSite();
+  const parsed = siteInputSchema.safeParse({ name, data: { address } });
+  const errors = submitted ? fieldErrors(parsed, m.error) : {};
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    setSubmitted(true);
+    if (parsed.success) m.mutate(parsed.data, { onSuccess: () => { setName(''); setAddress(''); setSubmitted(false); } });
+  };
+  return (
+    <form onSubmit={submit} noValidate aria-label="New site" className={box}>
+      <TextField label="Site name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
+      <TextField label="Address" value={address} onChange={(e) => setAddress(e.target.value)} />
+      <Button type="submit" className="self-end" disabled={m.isPending}>Add site</Button>
+      {m.isSuccess && <div className="sm:col-span-3"><Notice>Site “{m.data.name}” added.</Notice></div>}
+      {m.error && <div className="sm:col-span-3"><ErrorMessage error={m.error} /></div>}
+    </form>
+  );
+}
+
+const ROOM_FIELDS = [
+  ['length_m', 'Length', 'm', '8'],
+  ['width_m', 'Width', 'm', '6'],
+  ['height_m', 'Height', 'm', '3'],
+  ['airChanges_perH', 'Air changes', 'per h', '4'],
+  ['draftSpeed_mPerS', 'Draft speed', 'm/s', '0.1'],
+  ['draftDirection_deg', 'Draft direction', '° from +x', '0'],
+  ['temperature_C', 'Temperature', '°C', '20'],
+] as const;
+
+export function NewRoomForm({ sites }: { sites: SiteTree[] }) {
+  const [siteId, setSiteId] = useState<number | ''>('');
+  const [name, setName] = useState('');
+  const [vals, setVals] = useState<Record<string, string>>(Object.fromEntries(ROOM_FIELDS.map(([k, , , d]) => [k, d])));
+  const [submitted, setSubmitted] = useState(false);
+  const m = useCreateRoom();
+  const { temperature_C, ...rest } = vals;
+  const data = { ...Object.fromEntries(Object.entries(rest).map(([k, v]) => [k, n(v)])), temperature_K: n(temperature_C) + 273.15 };
+  const parsed = roomInputSchema.safeParse({ siteId: siteId || undefined, name, data });
+  const errors = submitted ? fieldErrors(parsed, m.error) : {};
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    setSubmitted(true);
+    if (parsed.success) m.mutate(parsed.data, { onSuccess: () => { setName(''); setSubmitted(false); } });
+  };
+  return (
+    <form onSubmit={submit} noValidate aria-label="New room" className={box}>
+      <SelectField label="Site" value={siteId} onChange={(e) => setSiteId(e.target.value ? Number(e.target.value) : '')} error={errors.siteId ? 'Choose a site' : undefined}>
+        <option value="">Choose…</option>
+        {sites.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
+      </SelectField>
+      <TextField label="Room name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
+      {ROOM_FIELDS.map(([k, label, unit]) => (
+        <TextField key={k} label={label} unit={unit} inputMode="decimal" value={vals[k]} onChange={(e) => setVals({ ...vals, [k]: e.target.value })} error={errors[`data.${k === 'temperature_C' ? 'temperature_K' : k}`]} />
+      ))}
+      <Button type="submit" className="self-end" disabled={m.isPending}>Add room</Button>
+      {m.isSuccess && <div className="sm:col-span-3"><Notice>Room “{m.data.name}” added.</Notice></div>}
+      {m.error && <div className="sm:col-span-3"><ErrorMessage error={m.error} /></div>}
+    </form>
+  );
+}
+
+const WS_FIELDS = [
+  ['source.x_m', 'Source x', '2'],
+  ['source.y_m', 'Source y', '2'],
+  ['source.z_m', 'Release height', '0.9'],
+  ['worker.x_m', 'Nose/mouth x', '2.5'],
+  ['worker.y_m', 'Nose/mouth y', '2'],
+  ['worker.z_m', 'Breathing-zone height', '1.5'],
+] as const;
+
+export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
+  const rooms = sites.flatMap((s) => s.rooms.map((r) => ({ id: r.id, label: `${r.name} (${s.name})` })));
+  const [roomId, setRoomId] = useState<number | ''>('');
+  const [name, setName] = useState('');
+  const [description, setDescription] = useState('');
+  const [releaseType, setReleaseType] = useState('active');
+  const [vals, setVals] = useState<Record<string, string>>(Object.fromEntries(WS_FIELDS.map(([k, , d]) => [k, d])));
+  const [submitted, setSubmitted] = useState(false);
+  const m = useCreateWorkstation();
+  const point = (p: 'source' | 'worker') => ({ x_m: n(vals[`${p}.x_m`]), y_m: n(vals[`${p}.y_m`]), z_m: n(vals[`${p}.z_m`]) });
+  const parsed = workstationInputSchema.safeParse({ roomId: roomId || undefined, name, data: { description, source: point('source'), worker: { ...point('worker'), posture: 'standing' }, releaseType } });
+  const errors = submitted ? fieldErrors(parsed, m.error) : {};
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    setSubmitted(true);
+    if (parsed.success) m.mutate(parsed.data, { onSuccess: () => { setName(''); setSubmitted(false); } });
+  };
+  return (
+    <form onSubmit={submit} noValidate aria-label="New workstation" className={box}>
+      <SelectField label="Room" value={roomId} onChange={(e) => setRoomId(e.target.value ? Number(e.target.value) : '')} error={errors.roomId ? 'Choose a room' : undefined}>
+        <option value="">Choose…</option>
+        {rooms.map((r) => <option key={r.id} value={r.id}>{r.label}</option>)}
+      </SelectField>
+      <TextField label="Workstation name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
+      <TextField label="What happens here" value={description} onChange={(e) => setDescription(e.target.value)} />
+      {WS_FIELDS.map(([k, label]) => (
+        <TextField key={k} label={label} unit="m" inputMode="decimal" value={vals[k]} onChange={(e) => setVals({ ...vals, [k]: e.target.value })} error={errors[`data.${k}`]} />
+      ))}
+      <SelectField label="Release type" value={releaseType} onChange={(e) => setReleaseType(e.target.value)}>
+        <option value="quiet">Practically no velocity, quiet air</option>
+        <option value="low">Low velocity, moderately still air</option>
+        <option value="active">Active generation, rapid air motion</option>
+        <option value="high">High initial velocity (grinding, blasting)</option>
+      </SelectField>
+      <Button type="submit" className="self-end" disabled={m.isPending}>Add workstation</Button>
+      {m.isSuccess && <div className="sm:col-span-3"><Notice>Workstation “{m.data.name}” added.</Notice></div>}
+      {m.error && <div className="sm:col-span-3"><ErrorMessage error={m.error} /></div>}
+    </form>
+  );
+}
