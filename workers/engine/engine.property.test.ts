@@ -1,3 +1,4 @@
+import { deserialize, serialize } from 'node:v8';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseScenario } from '../../shared/schemas/scenario.ts';
@@ -53,10 +54,10 @@ describe('engine invariants over random valid scenarios (fast-check)', () => {
         }
         const fate = combineBatches(p, ordered).fate;
         expect(fate.captured + fate.settled + fate.exhausted + fate.airborne).toBeCloseTo(1, 12);
-        // 1, 2 and 3 workers: each worker takes batches round-robin and finishes in its own order.
+        // A worker receives a structured clone (v8 serialize); 1, 2 and 3 workers: each takes batches round-robin and finishes in its own order.
         const reference = comparable(p, ordered);
         for (const workers of [2, 3]) {
-          const cloned = structuredClone(p);
+          const cloned = deserialize(serialize(p)) as PreparedScenario;
           const byWorker = Array.from({ length: workers }, (_, w) => Array.from({ length: p.batches }, (_, k) => k).filter((k) => k % workers === w).reverse());
           const shuffled = byWorker.flatMap((ks) => ks.map((k) => runBatch(cloned, k)));
           expect(comparable(cloned, shuffled)).toBe(reference);
