@@ -16,6 +16,8 @@ export const paths = {
   places: '/places',
   agents: '/dust-agents',
   audit: '/audit',
+  sizeProfiles: '/size-profiles',
+  sizeProfile: (id: number | string) => `/size-profiles/${id}`,
 } as const;
 
 export const api = {
@@ -39,4 +41,8 @@ export const api = {
   duplicateScenario: (id: number) => `/api/scenarios/${id}/duplicate`,
   scenarioRuns: (id: number) => `/api/scenarios/${id}/runs`,
   run: (id: number) => `/api/runs/${id}`,
+  sizeProfiles: '/api/size-profiles',
+  sizeProfile: (id: number) => `/api/size-profiles/${id}`,
+  sizeProfileUpload: '/api/size-profiles/upload',
+  sizeProfileTemplate: (format: string) => `/api/size-profiles/templates/${format}.csv`,
 } as const;
