@@ -14,6 +14,8 @@ import { auditRoutes } from './audit/audit.routes';
 import { placesRoutes } from './places/places.routes';
 import { agentsRoutes } from './agents/agents.routes';
 import { runsRoutes, scenariosRoutes } from './scenarios/scenarios.routes';
+import { decisionsRoutes } from './approvals/decisions.routes';
+import { boardsRoutes } from './boards/boards.routes';
 import { sizeProfileRoutes } from './size-profiles/size-profiles.routes';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { requestLog } from './middleware/request-log';
@@ -64,6 +66,8 @@ export function createApp(opts: AppOptions): Express {
   api.use('/agents', agentsRoutes(db));
   api.use('/scenarios', scenariosRoutes(db));
   api.use('/runs', runsRoutes(db));
+  api.use('/', decisionsRoutes(db, mailer, opts.publicUrl));
+  api.use('/boards', boardsRoutes(db));
   api.use('/size-profiles', sizeProfileRoutes(db));
   api.get('/health', (_req, res) => {
     res.json({ ok: true });

@@ -6,6 +6,7 @@ import * as createOutbox from '../../migrations/20261202000400_create_outbox';
 import * as createWorkspace from '../../migrations/20261202000500_create_workspace';
 import * as createSizeProfiles from '../../migrations/20261202000600_create_size_profiles';
 import * as createScenarios from '../../migrations/20261202000700_create_scenarios';
+import * as createApprovals from '../../migrations/20261202000800_create_approvals';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -19,6 +20,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202000500_create_workspace.ts': createWorkspace,
   '20261202000600_create_size_profiles.ts': createSizeProfiles,
   '20261202000700_create_scenarios.ts': createScenarios,
+  '20261202000800_create_approvals.ts': createApprovals,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

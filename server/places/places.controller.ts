@@ -1,7 +1,8 @@
 import type { Request, Response } from 'express';
 import type { Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
-import { placesTree, rooms, workstations } from './places.repo';
+import { currentApproval } from '../approvals/approvals.repo';
+import { operatorIds, placesTree, rooms, workstations } from './places.repo';
 import { placesService } from './places.service';
 
 export function placesController(db: Db) {
@@ -19,7 +20,7 @@ export function placesController(db: Db) {
       const ws = await workstations.get(db, Number(req.params.id));
       if (!ws) throw notFound('Workstation');
       const room = await rooms.get(db, ws.roomId as number);
-      res.json({ ...ws, room });
+      res.json({ ...ws, room, approval: await currentApproval(db, ws.id), operatorIds: await operatorIds(db, ws.id) });
     },
     async createWorkstation(req: Request, res: Response) {
       res.status(201).json(await placesService.createWorkstation(db, req.user!, req.body));

@@ -6,6 +6,7 @@ import { inputHash } from '../lib/hash';
 import { writeAudit } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { workstations } from '../places/places.repo';
+import { currentApproval } from '../approvals/approvals.repo';
 import { getScenarioRow, listRuns, toSummary } from './scenarios.repo';
 
 type Actor = { id: number; email: string };
@@ -23,6 +24,7 @@ export async function getScenario(db: Db, id: number) {
     ...toSummary(row),
     input: JSON.parse(row.input),
     inputHash: row.input_hash,
+    approval: await currentApproval(db, row.workstation_id as number),
     runs: runs.map((r) => ({ ...r, outOfDate: r.input_hash !== row.input_hash })),
   };
 }

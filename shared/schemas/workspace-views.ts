@@ -35,6 +35,35 @@ export type ScenarioSummary = {
   createdAt: string;
   updatedAt: string;
   lastRun: LastRun | null;
+  needsReview?: boolean;
+};
+
+export type Approval = {
+  id: number;
+  scenarioId: number;
+  scenarioName: string;
+  runId: number;
+  note: string;
+  reviewDate: string;
+  approvedAt: string;
+  approvedBy: string;
+  banner: Banner | null;
+  percentOfLimit: number | null;
+  expired: boolean;
+  outOfDate: boolean;
+  needsReview: boolean;
+};
+
+export type StationBoard = {
+  workstationId: number;
+  workstationName: string;
+  banner: Banner;
+  needsReview: boolean;
+  reviewDate: string | null;
+  control: string | null;
+  approvedAt: string | null;
+  advice: string[];
+  checkedAt: string;
 };
 
 export type RunListItem = {
@@ -52,7 +81,7 @@ export type RunListItem = {
   outOfDate: boolean;
 };
 
-export type ScenarioDetail = ScenarioSummary & { input: ScenarioInput; inputHash: string; runs: RunListItem[] };
+export type ScenarioDetail = ScenarioSummary & { input: ScenarioInput; inputHash: string; approval: Approval | null; runs: RunListItem[] };
 
 export type SavedRun = {
   id: number;
@@ -76,4 +105,4 @@ export type WorkstationData = { description: string; source: { x_m: number; y_m:
 export type WorkstationRecord = JsonRecord<WorkstationData> & { roomId: number };
 export type RoomRecord = JsonRecord<RoomData> & { siteId: number; workstations: WorkstationRecord[] };
 export type SiteTree = JsonRecord<{ address: string; notes: string }> & { rooms: RoomRecord[] };
-export type WorkstationDetail = WorkstationRecord & { room: JsonRecord<RoomData> & { siteId: number } };
+export type WorkstationDetail = WorkstationRecord & { room: JsonRecord<RoomData> & { siteId: number }; approval: Approval | null; operatorIds: number[] };

@@ -90,3 +90,23 @@ export const scenarioListQuerySchema = z.object({
   q: z.string().trim().max(120).optional(),
 });
 export type ScenarioListQuery = z.infer<typeof scenarioListQuerySchema>;
+
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-06-30');
+
+export const approveSchema = z
+  .object({
+    runId: z.number().int().positive(),
+    note: z.string().trim().max(1000).default(''),
+    reviewDate: isoDate.optional(),
+  })
+  .strict();
+export type ApproveInput = z.infer<typeof approveSchema>;
+
+export const assignOperatorsSchema = z.object({ personIds: z.array(z.number().int().positive()).max(100) }).strict();
+
+export const shareSchema = z
+  .object({
+    email: z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'Enter a valid e-mail address' })),
+    runId: z.number().int().positive().optional(),
+  })
+  .strict();
