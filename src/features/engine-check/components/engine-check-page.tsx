@@ -1,0 +1,87 @@
+import { useEffect, useRef, useState } from 'react';
+import { parseScenario } from '../../../../shared/schemas/scenario.ts';
+import { Cautions } from '../../../components/cautions.tsx';
+import { Button } from '../../../components/ui/button.tsx';
+import { type RunProgress, RunCancelledError, runSimulation } from '../../../lib/simulation-bridge.ts';
+import type { Results } from '../../../../workers/engine/index.ts';
+// Raw text keeps the JSON out of the TypeScript project graph; the schema checks it on load.
+import defaultScenarioText from '../../../../server/demo/scenarios/default.json?raw';
+
+const scenario = parseScenario(JSON.parse(defaultScenarioText));
+
+type State =
+  | { kind: 'idle' }
+  | { kind: 'running'; progress: RunProgress }
+  | { kind: 'done'; results: Results }
+  | { kind: 'cancelled' }
+  | { kind: 'failed'; message: string };
+
+const mg = (v: number) => v.toPrecision(3);
+const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
+
+function ResultSummary({ results }: { results: Results }) {
+  const r = results.breathingZone.fractions.respirable;
+  const { fate } = results;
+  return (
+    <section data-testid="engine-result" className="mt-6 space-y-3 rounded-lg border border-line bg-white p-4">
+      <p>
+        Respirable 8-h TWA: <strong>{mg(r.twa8h_mgPerM3)} mg/m³</strong> (95 % CI {mg(r.twa8hCi95_mgPerM3[0])} to {mg(r.twa8hCi95_mgPerM3[1])} mg/m³)
+      </p>
+      {results.limit && (
+        <p>
+          {results.limit.percentOfLimit.toFixed(1)} % of the {results.limit.value_mgPerM3} mg/m³ limit; banner: <strong>{results.limit.banner}</strong>
+        </p>
+      )}
+      <p className="text-sm text-muted">
+        Fate of {fate.emitted_mg.toFixed(0)} mg emitted: captured {pct(fate.captured)}, settled {pct(fate.settled)}, exhausted {pct(fate.exhausted)}, airborne {pct(fate.airborne)}
+      </p>
+      <p className="text-sm text-muted">
+        {results.engine.particles.toLocaleString()} particles in {results.engine.batches} batches, {(results.performance.particleSteps / 1e6).toFixed(1)} M particle-steps in {results.performance.wallTime_s.toFixed(1)} s
+      </p>
+    </section>
+  );
+}
+
+export function EngineCheckPage() {
+  const [state, setState] = useState<State>({ kind: 'idle' });
+  const abort = useRef<AbortController | null>(null);
+  useEffect(() => () => abort.current?.abort(), []);
+
+  const start = async () => {
+    abort.current = new AbortController();
+    setState({ kind: 'running', progress: { fraction: 0, particlesPerS: 0, secondsLeft: Infinity } });
+    try {
+      const results = await runSimulation(scenario, { signal: abort.current.signal, onProgress: (progress) => setState({ kind: 'running', progress }) });
+      setState({ kind: 'done', results });
+    } catch (error) {
+      setState(error instanceof RunCancelledError ? { kind: 'cancelled' } : { kind: 'failed', message: (error as Error).message });
+    }
+  };
+
+  const percent = state.kind === 'running' ? Math.round(100 * state.progress.fraction) : 0;
+  return (
+    <main className="mx-auto max-w-3xl bg-paper p-8 text-ink">
+      <h1 className="text-2xl font-semibold">Engine check</h1>
+      <p className="mt-1 text-muted">{scenario.name}</p>
+      <div className="mt-4 flex gap-3">
+        <Button onClick={start} disabled={state.kind === 'running'}>Run</Button>
+        <Button variant="secondary" onClick={() => abort.current?.abort()} disabled={state.kind !== 'running'}>Cancel</Button>
+      </div>
+      {state.kind === 'running' && (
+        <div className="mt-4">
+          <div role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} className="h-2 w-full overflow-hidden rounded bg-line">
+            <div className="h-full bg-accent" style={{ width: `${percent}%` }} />
+          </div>
+          <p className="mt-1 text-sm text-muted">
+            {percent} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s
+            {Number.isFinite(state.progress.secondsLeft) && ` · about ${Math.ceil(state.progress.secondsLeft)} s left`}
+          </p>
+        </div>
+      )}
+      {state.kind === 'cancelled' && <p className="mt-4 text-muted">Cancelled.</p>}
+      {state.kind === 'failed' && <p role="alert" className="mt-4 text-act">Run failed: {state.message}</p>}
+      {state.kind === 'done' && <ResultSummary results={state.results} />}
+      <Cautions compact />
+    </main>
+  );
+}
