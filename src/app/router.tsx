@@ -17,6 +17,8 @@ const PeoplePage = lazy(() => import('../features/people/components/people-page'
 const ParticleCalculatorPage = lazy(() => import('../features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
 const HoodCalculatorPage = lazy(() => import('../features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
 const AgentsPage = lazy(() => import('../features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
+const SizeProfilesPage = lazy(() => import('../features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })));
+const SizeProfileDetailPage = lazy(() => import('../features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })));
 const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (
@@ -36,7 +38,10 @@ export const router = createBrowserRouter([
       { path: paths.scenarios, element: guarded('scenarios:read', <ScenariosRoute />) },
       { path: paths.places, element: guarded('scenarios:read', <PlacesRoute />) },
       { path: paths.agents, element: guarded('scenarios:read', <AgentsPage />) },
+      { path: paths.sizeProfiles, element: guarded('scenarios:read', <SizeProfilesPage />) },
+      { path: paths.sizeProfile(':id'), element: guarded('scenarios:read', <SizeProfileDetailPage />) },
       { path: paths.station, element: guarded('boards:read-own', <StationRoute />) },
+      { path: '/station/:workstationId', element: guarded('boards:read-own', <StationRoute />) },
       { path: paths.people, element: guarded('people:manage', <PeoplePage />) },
       { path: paths.outbox, element: guarded('outbox:read', <OutboxPage />) },
       { path: paths.particleCalculator, element: guarded('calculators:use', <ParticleCalculatorPage />) },

@@ -17,10 +17,10 @@ afterAll(async () => {
 });
 
 const EXPECTED_NAV: Record<string, { home: RegExp; heading: string; nav: string[] }> = {
-  admin: { home: /\/people$/, heading: 'People', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Particle calculator', 'Hood calculator', 'Your station', 'People', 'Outbox'] },
-  engineer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Particle calculator', 'Hood calculator'] },
-  viewer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Particle calculator', 'Hood calculator'] },
-  operator: { home: /\/station$/, heading: 'Your station', nav: ['Your station'] },
+  admin: { home: /\/people$/, heading: 'People', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Your station', 'People', 'Outbox'] },
+  engineer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator'] },
+  viewer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator'] },
+  operator: { home: /\/station$/, heading: 'Edge-grinding bench 2', nav: ['Your station'] },
 };
 
 async function navLabels(page: Page) {

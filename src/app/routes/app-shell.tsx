@@ -8,6 +8,7 @@ const NAV: { to: string; label: string; permission: Permission }[] = [
   { to: paths.scenarios, label: 'Scenarios', permission: 'scenarios:read' },
   { to: paths.places, label: 'Workstations', permission: 'scenarios:read' },
   { to: paths.agents, label: 'Dust agents', permission: 'scenarios:read' },
+  { to: paths.sizeProfiles, label: 'Size profiles', permission: 'scenarios:read' },
   { to: paths.particleCalculator, label: 'Particle calculator', permission: 'calculators:use' },
   { to: paths.hoodCalculator, label: 'Hood calculator', permission: 'calculators:use' },
   { to: paths.station, label: 'Your station', permission: 'boards:read-own' },

@@ -1,0 +1,49 @@
+import type { StationBoard as Board } from '../../../../shared/schemas/workspace-views';
+import { Cautions } from '../../../components/cautions';
+
+const LOOK = {
+  clear: { word: 'Clear', icon: '✓', title: 'Controls are working as assessed', cls: 'border-clear bg-clear-soft text-clear' },
+  watch: { word: 'Watch', icon: '!', title: 'Close to the limit: follow the rules exactly', cls: 'border-watch bg-watch-soft text-watch' },
+  act: { word: 'Act', icon: '✕', title: 'Stop: the controls are not confirmed', cls: 'border-act bg-act-soft text-act' },
+} as const;
+
+export function StationBoard({ board }: { board: Board }) {
+  const look = LOOK[board.banner];
+  return (
+    <article aria-labelledby={`board-${board.workstationId}`} className="mx-auto max-w-3xl">
+      <h1 id={`board-${board.workstationId}`} className="text-3xl">{board.workstationName}</h1>
+      <div role="status" data-testid="station-banner" className={`mt-6 flex items-center gap-6 rounded-2xl border-4 p-6 ${look.cls}`}>
+        <span aria-hidden="true" className="flex h-20 w-20 shrink-0 items-center justify-center rounded-full border-4 border-current text-5xl font-bold">
+          {look.icon}
+        </span>
+        <div>
+          <p className="text-5xl font-bold">{look.word}</p>
+          <p className="mt-1 text-xl font-semibold">{look.title}</p>
+        </div>
+      </div>
+      {board.needsReview && (
+        <p className="mt-4 rounded-lg border-2 border-watch bg-watch-soft p-3 text-lg font-semibold text-watch">
+          <span aria-hidden="true">⟳ </span>Needs review: ask your supervisor to have this station re-assessed.
+        </p>
+      )}
+      <h2 className="mt-8 text-2xl">What to do</h2>
+      <ol className="mt-3 list-decimal space-y-3 pl-7 text-xl leading-relaxed">
+        {board.advice.map((a) => (
+          <li key={a}>{a}</li>
+        ))}
+      </ol>
+      <dl className="mt-8 grid gap-2 text-lg sm:grid-cols-2">
+        <div>
+          <dt className="text-muted">Control in use</dt>
+          <dd className="font-semibold">{board.control ?? 'None approved'}</dd>
+        </div>
+        <div>
+          <dt className="text-muted">Next review</dt>
+          <dd className="font-semibold">{board.reviewDate ?? '—'}</dd>
+        </div>
+      </dl>
+      <p className="mt-4 text-sm text-muted">Checked {new Date(board.checkedAt).toLocaleTimeString()}; this page refreshes itself every minute.</p>
+      <Cautions compact />
+    </article>
+  );
+}
