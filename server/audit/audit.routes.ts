@@ -5,7 +5,7 @@ import type { Db } from '../db/knex';
 import { requirePermission } from '../middleware/require-permission';
 import { validate } from '../middleware/validate';
 
-const auditQuery = listQuerySchema.extend({ action: z.string().max(60).optional(), actor: z.string().max(254).optional() });
+const auditQuery = listQuerySchema.extend({ action: z.string().max(60).optional(), actor: z.string().max(254).optional(), workstationId: z.coerce.number().int().positive().optional() });
 
 export function auditRoutes(db: Db): Router {
   const r = Router();
@@ -13,7 +13,16 @@ export function auditRoutes(db: Db): Router {
     const q = req.query as unknown as z.infer<typeof auditQuery>;
     const base = db('audit_log').modify((b) => {
       if (q.action) b.where('action', q.action);
-      if (q.actor) b.where('actor_email', q.actor);
+      if (q.actor) b.where('actor_email', q.actor.toLowerCase());
+      // A workstation's trail includes what happened to its scenarios.
+      if (q.workstationId) {
+        const id = q.workstationId;
+        b.where((w) =>
+          w
+            .where({ target_type: 'workstation', target_id: String(id) })
+            .orWhere((s) => s.where('target_type', 'scenario').whereIn('target_id', db('scenarios').where('workstation_id', id).select(db.raw('cast(id as text)')))),
+        );
+      }
     });
     const [{ count }] = await base.clone().count<{ count: number }[]>({ count: '*' });
     const rows = await base.clone().orderBy('id', 'desc').limit(q.pageSize).offset((q.page - 1) * q.pageSize);

@@ -7,6 +7,7 @@ import { AppShell } from './routes/app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute, RouteError } from './routes/not-found';
 import { RequireUser } from './routes/require-user';
+import { AuditRoute } from './routes/audit';
 import { PlacesRoute } from './routes/places';
 import { ScenariosRoute } from './routes/scenarios';
 import { SetPasswordRoute } from './routes/set-password';
@@ -40,6 +41,7 @@ export const router = createBrowserRouter([
       { path: paths.agents, element: guarded('scenarios:read', <AgentsPage />) },
       { path: paths.sizeProfiles, element: guarded('scenarios:read', <SizeProfilesPage />) },
       { path: paths.sizeProfile(':id'), element: guarded('scenarios:read', <SizeProfileDetailPage />) },
+      { path: paths.audit, element: guarded('audit:read', <AuditRoute />) },
       { path: paths.station, element: guarded('boards:read-own', <StationRoute />) },
       { path: '/station/:workstationId', element: guarded('boards:read-own', <StationRoute />) },
       { path: paths.people, element: guarded('people:manage', <PeoplePage />) },

@@ -55,3 +55,21 @@ describe('errors keep one shape', () => {
     expect(res.body.code).toBe('payload_too_large');
   });
 });
+
+describe('audit trail filtered by workstation', () => {
+  it('lists what happened to a workstation and to its scenarios, and nothing else', async () => {
+    const t2 = await createTestApp({ demoWorkspace: true, particles: 500 });
+    try {
+      const viewer = await t2.signIn('viewer');
+      const ws = await t2.db('workstations').orderBy('id').first();
+      const res = await viewer.get(`/api/audit?workstationId=${ws.id}`);
+      expect(res.status).toBe(200);
+      const actions = new Set(res.body.items.map((i: { action: string }) => i.action));
+      expect(actions).toEqual(new Set(['workstation.created', 'scenario.created', 'run.saved']));
+      const scenarioIds = (await t2.db('scenarios').where({ workstation_id: ws.id })).map((s) => String(s.id));
+      for (const item of res.body.items) if (item.targetType === 'scenario') expect(scenarioIds).toContain(item.targetId);
+    } finally {
+      await t2.close();
+    }
+  });
+});

@@ -12,6 +12,7 @@ const NAV: { to: string; label: string; permission: Permission }[] = [
   { to: paths.particleCalculator, label: 'Particle calculator', permission: 'calculators:use' },
   { to: paths.hoodCalculator, label: 'Hood calculator', permission: 'calculators:use' },
   { to: paths.station, label: 'Your station', permission: 'boards:read-own' },
+  { to: paths.audit, label: 'Audit trail', permission: 'audit:read' },
   { to: paths.people, label: 'People', permission: 'people:manage' },
   { to: paths.outbox, label: 'Outbox', permission: 'outbox:read' },
 ];

@@ -1,0 +1,17 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { Page } from '../../../../shared/schemas/workspace-views';
+import { api } from '../../../config/paths';
+import { apiFetch } from '../../../lib/api-client';
+
+export type AuditEntry = { id: number; actorEmail: string | null; action: string; targetType: string | null; targetId: string | null; detail: Record<string, unknown> | null; createdAt: string };
+export type AuditFilters = { actor?: string; action?: string; workstationId?: number; page?: number };
+
+export function getAudit(f: AuditFilters) {
+  const p = new URLSearchParams({ pageSize: '200' });
+  for (const [k, v] of Object.entries(f)) if (v !== undefined && v !== '') p.set(k, String(v));
+  return apiFetch<Page<AuditEntry>>(`${api.audit}?${p}`);
+}
+
+export const auditQueryOptions = (f: AuditFilters) => queryOptions({ queryKey: ['audit', f], queryFn: () => getAudit(f), placeholderData: keepPreviousData });
+
+export const useAudit = (f: AuditFilters) => useQuery(auditQueryOptions(f));
