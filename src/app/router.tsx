@@ -9,6 +9,9 @@ import { NotFoundRoute, RouteError } from './routes/not-found';
 import { RequireUser } from './routes/require-user';
 import { AuditRoute } from './routes/audit';
 import { PlacesRoute } from './routes/places';
+import { RunRoute } from './routes/run';
+import { ScenarioRoute } from './routes/scenario';
+import { WorkstationRoute } from './routes/workstation';
 import { ScenariosRoute } from './routes/scenarios';
 import { SetPasswordRoute } from './routes/set-password';
 import { SignInRoute } from './routes/sign-in';
@@ -37,6 +40,9 @@ export const router = createBrowserRouter([
     children: [
       { path: paths.home, element: <HomeRoute /> },
       { path: paths.scenarios, element: guarded('scenarios:read', <ScenariosRoute />) },
+      { path: paths.scenario(':id'), element: guarded('scenarios:read', <ScenarioRoute />) },
+      { path: paths.run(':id'), element: guarded('scenarios:read', <RunRoute />) },
+      { path: paths.workstation(':id'), element: guarded('scenarios:read', <WorkstationRoute />) },
       { path: paths.places, element: guarded('scenarios:read', <PlacesRoute />) },
       { path: paths.agents, element: guarded('scenarios:read', <AgentsPage />) },
       { path: paths.sizeProfiles, element: guarded('scenarios:read', <SizeProfilesPage />) },

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { advanceFrames, frameDots, frameTime_s } from './trajectory-frames';
+import { advanceFrames, frameDots, frameTime_s, trail, visibleFrom } from './trajectory-frames';
 import { sizeClasses } from './size-classes';
 
 // Three slots (the last unused), three frames, laid out [particle][frame][xyz] as the engine's kernel writes them.
@@ -7,7 +7,7 @@ const t = {
   particles: 3,
   frames: 3,
   frameInterval_s: 2,
-  positions_m: Float32Array.from([1, 2, 3, 1.5, 2, 3, NaN, NaN, NaN, NaN, NaN, NaN, 4, 5, 0.5, 4.5, 5, 0.4, 9, 9, 9, 9, 9, 9, 9, 9, 9]),
+  positions_m: Float32Array.from([1, 2, 3, 1.5, 2, 3, NaN, NaN, NaN, NaN, NaN, NaN, 4, 5, 0.5, 4.5, 5, 0.375, 9, 9, 9, 9, 9, 9, 9, 9, 9]),
   bins: Int32Array.from([3, 20, -1]),
 };
 
@@ -25,6 +25,28 @@ describe('trajectory frames', () => {
     expect(frameDots(t, 7).map((d) => d.slot)).toEqual([1]);
     expect(frameDots(t, 0.6)).toEqual(frameDots(t, 1));
     expect(frameTime_s(t, 2)).toBe(4);
+  });
+
+  it('give a tail of the airborne positions up to the frame, oldest first', () => {
+    expect(trail(t, 1, 2, 5)).toEqual([
+      [4, 5, 0.5],
+      [4.5, 5, 0.375],
+    ]);
+    expect(trail(t, 0, 2, 2)).toEqual([[1.5, 2, 3]]);
+  });
+
+  it('hide the frames the engine fills with the release point before a particle is released', () => {
+    const waiting = { ...t, particles: 1, positions_m: Float32Array.from([2, 3, 0.875, 2, 3, 0.875, 2.25, 3, 1]), bins: Int32Array.from([5]) };
+    const from = visibleFrom(waiting);
+    expect(Array.from(from)).toEqual([1]);
+    expect(frameDots(waiting, 0, from)).toEqual([]);
+    expect(frameDots(waiting, 1, from)).toHaveLength(1);
+    expect(trail(waiting, 0, 2, 5, from)).toEqual([
+      [2, 3, 0.875],
+      [2.25, 3, 1],
+    ]);
+    // A particle that moves from its first frame is shown from the start.
+    expect(Array.from(visibleFrom(t)).slice(0, 2)).toEqual([0, 0]);
   });
 
   it('advance 20 simulated seconds per wall second at 1×', () => {

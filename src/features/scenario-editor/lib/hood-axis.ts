@@ -1,6 +1,6 @@
 import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
 
-export type HoodInput = ScenarioInput['hoods'][number];
+export type HoodInput = NonNullable<ScenarioInput['hoods']>[number];
 export type Direction = HoodInput['direction'];
 export type Vec3 = { x: number; y: number; z: number };
 

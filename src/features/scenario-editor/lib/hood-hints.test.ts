@@ -25,7 +25,7 @@ describe('hood hints', () => {
       [0.5, 0.1923],
     ];
     for (const [distance_m, v_mPerS] of expected) {
-      const hint = hoodHint(plain, at(1 + distance_m), 'low');
+      const hint = hoodHint(plain, at(1 + distance_m), 'low')!;
       expect(hint.axial_m).toBeCloseTo(distance_m, 9);
       expect(hint.offAxis_m).toBeCloseTo(0, 9);
       expect(Math.abs(hint.centerline_mPerS! / v_mPerS - 1)).toBeLessThan(0.001);
@@ -33,35 +33,35 @@ describe('hood hints', () => {
   });
 
   it('compares the velocity with the capture range for the release type', () => {
-    const hint = hoodHint(plain, at(1.2), 'low');
+    const hint = hoodHint(plain, at(1.2), 'low')!;
     expect(hint.verdict).toBe('within');
-    expect(hoodHint(plain, at(1.2), 'quiet').verdict).toBe('above');
-    expect(hoodHint(plain, at(1.5), 'active').verdict).toBe('below');
+    expect(hoodHint(plain, at(1.2), 'quiet')!.verdict).toBe('above');
+    expect(hoodHint(plain, at(1.5), 'active')!.verdict).toBe('below');
     expect(hint.range).toMatchObject({ min_mPerS: 0.5, max_mPerS: 1.0 });
   });
 
   it('gives the face velocity Q/A', () => {
-    expect(hoodHint(plain, at(1.2), 'low').faceVelocity_mPerS).toBeCloseTo(5, 9);
+    expect(hoodHint(plain, at(1.2), 'low')!.faceVelocity_mPerS).toBeCloseTo(5, 9);
   });
 
   it('warns past 1.5 equivalent diameters, √(4A/π) = 0.357 m, so past 0.535 m [M]', () => {
-    expect(hoodHint(plain, at(1.5), 'low').validUpTo_m).toBeCloseTo(0.5352, 3);
-    expect(hoodHint(plain, at(1.5), 'low').beyondValidity).toBe(false);
-    expect(hoodHint(plain, at(1.6), 'low').beyondValidity).toBe(true);
+    expect(hoodHint(plain, at(1.5), 'low')!.validUpTo_m).toBeCloseTo(0.5352, 3);
+    expect(hoodHint(plain, at(1.5), 'low')!.beyondValidity).toBe(false);
+    expect(hoodHint(plain, at(1.6), 'low')!.beyondValidity).toBe(true);
   });
 
   it('uses the slot reach for slots (common practice) and says nothing about reach for booths', () => {
     const slot: HoodInput = { ...plain, kind: 'slot', faceWidth_m: 1, faceHeight_m: 0.05 };
-    const hint = hoodHint(slot, at(1 + SLOT_REACH_m + 0.1), 'low');
+    const hint = hoodHint(slot, at(1 + SLOT_REACH_m + 0.1), 'low')!;
     expect(hint.rule).toBe('slot');
     expect(hint.beyondValidity).toBe(true);
     // Q / (3.7 L X) with L = 1 m, X = 0.6 m.
     expect(hint.centerline_mPerS).toBeCloseTo(0.5 / (3.7 * 0.6), 9);
-    expect(hoodHint({ ...plain, kind: 'booth' }, at(3), 'low').beyondValidity).toBe(false);
+    expect(hoodHint({ ...plain, kind: 'booth' }, at(3), 'low')!.beyondValidity).toBe(false);
   });
 
   it('flags a source behind the face and gives no velocity there', () => {
-    const hint = hoodHint(plain, at(0.8), 'low');
+    const hint = hoodHint(plain, at(0.8), 'low')!;
     expect(hint.behind).toBe(true);
     expect(hint.centerline_mPerS).toBeNull();
     expect(hint.verdict).toBeNull();
@@ -69,10 +69,15 @@ describe('hood hints', () => {
 
   it('splits the offset into along and off the axis for a tilted hood', () => {
     const down: HoodInput = { ...plain, direction: { azimuth_deg: 0, elevation_deg: -90 } };
-    const hint = hoodHint(down, at(1.3, 1, 0.6), 'low');
+    const hint = hoodHint(down, at(1.3, 1, 0.6), 'low')!;
     expect(hint.axial_m).toBeCloseTo(0.4, 9);
     expect(hint.offAxis_m).toBeCloseTo(0.3, 9);
     expect(hint.farOffAxis).toBe(false);
-    expect(hoodHint(down, at(1.6, 1, 0.8), 'low').farOffAxis).toBe(true);
+    expect(hoodHint(down, at(1.6, 1, 0.8), 'low')!.farOffAxis).toBe(true);
+  });
+
+  it('gives no hint while the face size or airflow is unusable', () => {
+    expect(hoodHint({ ...plain, faceWidth_m: 0 }, at(1.2), 'low')).toBeNull();
+    expect(hoodHint({ ...plain, airflow_m3PerS: -0.1 }, at(1.2), 'low')).toBeNull();
   });
 });

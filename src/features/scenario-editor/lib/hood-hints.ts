@@ -36,7 +36,12 @@ export function equivalentDiameter_m(faceArea_m2: number): number {
   return Math.sqrt((4 * faceArea_m2) / Math.PI);
 }
 
-export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_m: number }, release: ReleaseCondition): HoodHint {
+const usable = (...values: number[]) => values.every(Number.isFinite);
+
+// Null while the hood is half-entered: the physics functions rightly refuse a zero face or negative airflow.
+export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_m: number }, release: ReleaseCondition): HoodHint | null {
+  if (!usable(hood.x_m, hood.y_m, hood.z_m, source.x_m, source.y_m, source.z_m, hood.airflow_m3PerS)) return null;
+  if (!(hood.faceWidth_m > 0 && hood.faceHeight_m > 0 && hood.airflow_m3PerS >= 0)) return null;
   const n = hoodAxis(hood.direction);
   const r = { x: source.x_m - hood.x_m, y: source.y_m - hood.y_m, z: source.z_m - hood.z_m };
   const axial_m = r.x * n.x + r.y * n.y + r.z * n.z;

@@ -1,0 +1,34 @@
+import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
+import { Can } from '../../components/can';
+import { ApproveForm } from '../../features/decisions/components/approve-form';
+import { ShareForm } from '../../features/decisions/components/share-form';
+import { SavedRuns } from '../../features/scenarios/components/saved-runs';
+
+export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
+  const latest = scenario.runs[0];
+  return (
+    <section aria-labelledby="records-heading" className="mt-10 space-y-6">
+      <div>
+        <h2 id="records-heading">Saved runs</h2>
+        <div className="mt-3">
+          <SavedRuns runs={scenario.runs} />
+        </div>
+      </div>
+      <Can permission="scenarios:approve">
+        <div className="rounded-lg border border-line bg-white p-4">
+          <h2>Approve as the station's current control</h2>
+          <p className="mb-3 text-sm text-muted">
+            Uses the latest saved run. {scenario.approval ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${scenario.approval.reviewDate}.` : 'Nothing is approved at this station yet.'}
+          </p>
+          <ApproveForm scenarioId={scenario.id} run={latest ? { id: latest.id, banner: latest.banner, outOfDate: latest.outOfDate } : null} />
+        </div>
+      </Can>
+      <Can permission="reports:share">
+        <div className="rounded-lg border border-line bg-white p-4">
+          <h2>Share</h2>
+          <ShareForm scenarioId={scenario.id} runId={latest?.id} />
+        </div>
+      </Can>
+    </section>
+  );
+}

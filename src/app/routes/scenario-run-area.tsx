@@ -1,0 +1,30 @@
+import type { Scenario } from '../../../shared/schemas/scenario';
+import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
+import { Button } from '../../components/ui/button';
+import { ErrorMessage, Notice } from '../../components/ui/status';
+import type { Results } from '../../../workers/engine/index';
+import { useSaveRun } from '../../features/scenarios/api/save-run';
+import { RunPanel } from '../../features/scenarios/components/run-panel';
+
+type Fresh = { result: Results; input: Scenario } | null;
+
+export function ScenarioRunArea({ scenario, input, dirty, fresh, onFresh }: { scenario: ScenarioDetail; input: Scenario | null; dirty: boolean; fresh: Fresh; onFresh: (f: Fresh) => void }) {
+  const save = useSaveRun();
+  return (
+    <section aria-labelledby="run-heading" className="mt-8 space-y-3">
+      <h2 id="run-heading">Run</h2>
+      <p className="text-sm text-muted">Runs in this browser's background workers; the same scenario and seed always give the same result.</p>
+      <RunPanel scenario={input} onResult={(result, used) => { save.reset(); onFresh({ result, input: used }); }} />
+      {fresh && (
+        <div className="flex flex-wrap items-center gap-3">
+          <Button onClick={() => save.mutate({ scenarioId: scenario.id, scenarioVersion: scenario.version, input: fresh.input, result: fresh.result })} disabled={save.isPending || save.isSuccess || dirty}>
+            {save.isSuccess ? '✓ Run saved' : save.isPending ? 'Saving…' : 'Save this run'}
+          </Button>
+          {dirty && <span className="text-sm text-watch">Save the scenario first, so the run matches what is stored.</span>}
+          {save.isSuccess && <Notice>Saved. Anyone with read access can open it without running it again.</Notice>}
+          {save.error && <ErrorMessage title="Run not saved" error={save.error} />}
+        </div>
+      )}
+    </section>
+  );
+}

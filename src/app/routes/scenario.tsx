@@ -1,0 +1,87 @@
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { can } from '../../../shared/auth/permissions';
+import { scenarioSchema, type Scenario, type ScenarioInput } from '../../../shared/schemas/scenario';
+import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
+import { BannerBadge } from '../../components/banner-badge';
+import { Can } from '../../components/can';
+import { Page } from '../../components/ui/page';
+import { ErrorMessage, Notice, Spinner } from '../../components/ui/status';
+import { paths } from '../../config/paths';
+import { useAgents } from '../../features/agents/api/get-agents';
+import { useWorkstation } from '../../features/places/api/get-sites';
+import { useScenario } from '../../features/scenarios/api/get-scenario';
+import { RunResults } from '../../features/run-results/components/run-results';
+import { ScenarioEditor } from '../../features/scenario-editor/components/scenario-editor';
+import { useSizeProfileOptions } from '../../hooks/use-size-profile-options';
+import { useUser } from '../../lib/auth';
+import type { Results } from '../../../workers/engine/index';
+import { ScenarioActions } from './scenario-actions';
+import { ScenarioRecords } from './scenario-records';
+import { ScenarioRunArea } from './scenario-run-area';
+
+export type Draft = { input: ScenarioInput; name: string; agentId: number | null; sizeProfileId: number | null };
+
+const fromDetail = (s: ScenarioDetail): Draft => ({ input: s.input, name: s.name, agentId: s.agentId, sizeProfileId: s.sizeProfileId });
+
+export function ScenarioRoute() {
+  const id = Number(useParams().id);
+  const query = useScenario(id);
+  if (query.isPending) return <Spinner label="Loading the scenario…" />;
+  if (query.error) return <ErrorMessage error={query.error} />;
+  // Keyed by id: opening another scenario starts a fresh draft instead of carrying edits over.
+  return <ScenarioWorkspace key={id} initial={query.data} />;
+}
+
+function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
+  const user = useUser().data;
+  const agents = useAgents().data?.items ?? [];
+  const profiles = useSizeProfileOptions();
+  const workstation = useWorkstation(initial.workstationId);
+  const [draft, setDraft] = useState<Draft>(() => fromDetail(initial));
+  const [base, setBase] = useState<ScenarioDetail>(initial);
+  const [fresh, setFresh] = useState<{ result: Results; input: Scenario } | null>(null);
+  const parsed = useMemo(() => scenarioSchema.safeParse(draft.input), [draft]);
+  const readOnly = !can(user?.role, 'scenarios:write');
+  const dirty = JSON.stringify(fromDetail(base)) !== JSON.stringify(draft);
+  const releaseType = workstation.data?.data.releaseType ?? 'active';
+
+  return (
+    <Page
+      title={draft.name}
+      intro={
+        <>
+          <Link className="underline" to={paths.workstation(base.workstationId)}>{base.workstationName}</Link> · {base.siteName} · {base.status === 'approved' ? '★ approved as the current control' : 'draft'} · version {base.version}
+          {base.lastRun && <> · last run <BannerBadge banner={base.lastRun.banner} /></>}
+        </>
+      }
+      actions={<ScenarioActions scenario={base} draft={draft} dirty={dirty} valid={parsed.success} onSaved={(s) => { setBase(s); setDraft(fromDetail(s)); }} onReload={(s) => { setBase(s); setDraft(fromDetail(s)); }} />}
+    >
+      {base.approval?.needsReview && <p role="status" className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch">⟳ Needs review: the station's approval {base.approval.expired ? 'has expired' : 'rests on a run that no longer matches its scenario'}.</p>}
+      {!readOnly && (
+        <label className="mb-4 block max-w-md text-sm font-semibold">
+          Scenario name
+          <input className="mt-1 w-full rounded-md border border-line bg-white px-3 py-2" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} />
+        </label>
+      )}
+      {readOnly && <Notice>You can read this scenario and its saved runs; only engineers change or run it.</Notice>}
+      <ScenarioEditor
+        value={draft.input}
+        onChange={(input) => setDraft((d) => ({ ...d, input }))}
+        releaseType={releaseType}
+        agents={agents}
+        agentId={draft.agentId}
+        onAgentChange={(agentId) => setDraft((d) => ({ ...d, agentId }))}
+        sizeProfiles={profiles}
+        sizeProfileId={draft.sizeProfileId}
+        onSizeProfileChange={(sizeProfileId) => setDraft((d) => ({ ...d, sizeProfileId }))}
+        readOnly={readOnly}
+      />
+      <Can permission="runs:write">
+        <ScenarioRunArea scenario={base} input={parsed.success ? parsed.data : null} dirty={dirty} fresh={fresh} onFresh={setFresh} />
+      </Can>
+      {fresh && <RunResults result={fresh.result} scenario={fresh.input} agentName={agents.find((a) => a.id === draft.agentId)?.name} limitSource={fresh.input.limit?.source} />}
+      <ScenarioRecords scenario={base} />
+    </Page>
+  );
+}

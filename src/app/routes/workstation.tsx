@@ -1,0 +1,55 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { scenarioSchema } from '../../../shared/schemas/scenario';
+import { BannerBadge } from '../../components/banner-badge';
+import { Can } from '../../components/can';
+import { Cautions } from '../../components/cautions';
+import { Button } from '../../components/ui/button';
+import { Page } from '../../components/ui/page';
+import { ErrorMessage, Spinner } from '../../components/ui/status';
+import { paths } from '../../config/paths';
+import { useWorkstation } from '../../features/places/api/get-sites';
+import { useCreateScenario } from '../../features/scenarios/api/create-scenario';
+import { workstationGeometry } from '../../features/scenarios/api/new-scenario';
+import { ScenariosTable } from '../../features/scenarios/components/scenarios-table';
+import { defaultScenario } from '../../features/scenario-editor/lib/default-scenario';
+import { useState } from 'react';
+import type { TableSort } from '../../components/ui/data-table';
+
+export function WorkstationRoute() {
+  const id = Number(useParams().id);
+  const ws = useWorkstation(id);
+  const create = useCreateScenario();
+  const navigate = useNavigate();
+  const [sort, setSort] = useState<TableSort>({ key: 'name', dir: 'asc' });
+  if (ws.isPending) return <Spinner />;
+  if (ws.error) return <ErrorMessage error={ws.error} />;
+  const w = ws.data;
+  const addOption = () => {
+    const input = scenarioSchema.parse(defaultScenario(workstationGeometry(w)));
+    create.mutate({ workstationId: w.id, agentId: null, sizeProfileId: null, name: 'New option', controlDescription: '', controlTier: 'none', input }, { onSuccess: (s) => navigate(paths.scenario(s.id)) });
+  };
+  const a = w.approval;
+  return (
+    <Page
+      title={w.name}
+      intro={`${w.data.description || 'No description'} · room ${w.room.name} (${w.room.data.length_m} × ${w.room.data.width_m} × ${w.room.data.height_m} m, ${w.room.data.airChanges_perH} ACH)`}
+      actions={<Can permission="scenarios:write"><Button onClick={addOption} disabled={create.isPending}>Add an option</Button></Can>}
+    >
+      <section className="mb-6 rounded-lg border border-line bg-white p-4" aria-label="Current control">
+        <h2>Current control</h2>
+        {a ? (
+          <p className="mt-1 text-sm">
+            <strong>{a.scenarioName}</strong> approved by {a.approvedBy} on {a.approvedAt.slice(0, 10)}, review by {a.reviewDate} · <BannerBadge banner={a.banner} />
+            {a.needsReview && <span className="ml-2 font-semibold text-watch">⟳ needs review{a.expired ? ' (review date passed)' : ' (scenario changed since its run)'}</span>}
+          </p>
+        ) : (
+          <p className="mt-1 text-sm text-muted">Nothing approved yet: the operators' board shows Act until an option is approved.</p>
+        )}
+      </section>
+      {create.error && <ErrorMessage error={create.error} />}
+      <h2 className="mb-2">Options at this workstation</h2>
+      <ScenariosTable filters={{ workstationId: w.id, sort: sort.key, order: sort.dir }} onSortChange={setSort} />
+      <Cautions />
+    </Page>
+  );
+}

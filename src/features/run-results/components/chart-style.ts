@@ -1,0 +1,11 @@
+// SVG cannot read Tailwind classes for fills, so the theme tokens are passed as CSS variables.
+export const INK = 'var(--color-ink)';
+export const MUTED = 'var(--color-muted)';
+export const LINE = 'var(--color-line)';
+export const PAPER = 'var(--color-paper)';
+export const ACCENT = 'var(--color-accent)';
+export const ACCENT_SOFT = 'var(--color-accent-soft)';
+export const ACT = 'var(--color-act)';
+
+export const tickLabel = { fill: MUTED, fontSize: 11, fontFamily: 'inherit' } as const;
+export const axisLabel = { fill: INK, fontSize: 12, fontWeight: 600, fontFamily: 'inherit' } as const;

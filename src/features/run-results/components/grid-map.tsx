@@ -1,0 +1,23 @@
+import type { Scenario } from '../../../../shared/schemas/scenario.ts';
+import type { SequentialScale } from '../lib/colour-scale.ts';
+import type { GridView } from '../lib/normalise-result.ts';
+import { projection } from '../lib/room-projection.ts';
+import { DRAWING_WIDTH, RoomView } from './room-view.tsx';
+
+/** A floor-plane grid ([ix][iy]) painted under the plan, with the source, hoods and breathing zone on top. */
+export function GridMap({ grid, scale, scenario, label, skipZero = false }: { grid: GridView; scale: SequentialScale; scenario: Scenario; label: string; skipZero?: boolean }) {
+  const p = projection(scenario.room, 'plan', DRAWING_WIDTH);
+  const cells = [];
+  for (let ix = 0; ix < grid.nx; ix++) {
+    for (let iy = 0; iy < grid.ny; iy++) {
+      const v = grid.values[ix * grid.ny + iy];
+      if (!Number.isFinite(v) || (skipZero && v <= 0)) continue;
+      const x0 = grid.origin_m[0] + ix * grid.cell_m[0];
+      const y1 = grid.origin_m[1] + (iy + 1) * grid.cell_m[1];
+      const [sx, sy] = p.toSvg(x0, y1, 0);
+      // Half a pixel of overlap hides the hairline seams anti-aliasing leaves between cells.
+      cells.push(<rect key={`${ix}-${iy}`} x={sx} y={sy} width={grid.cell_m[0] * p.scale + 0.5} height={grid.cell_m[1] * p.scale + 0.5} fill={scale.colour(v)} />);
+    }
+  }
+  return <RoomView scenario={scenario} p={p} label={label} under={<g data-testid="map-cells">{cells}</g>} />;
+}

@@ -1,0 +1,70 @@
+import type { ReactNode } from 'react';
+import type { Scenario } from '../../../../shared/schemas/scenario.ts';
+import { ciText, FRACTION_LABEL, num, percent, relativeError } from '../lib/format.ts';
+import type { RunView } from '../lib/normalise-result.ts';
+import { BANNER, RATING } from '../lib/status.ts';
+import { BannerBadge } from './banner-badge.tsx';
+
+function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
+  return (
+    <div className="rounded-lg border border-line bg-white p-3">
+      <dt className="text-xs font-semibold tracking-wide text-muted uppercase">{label}</dt>
+      <dd className="mt-1 text-lg font-semibold tabular-nums" data-testid={testId}>
+        {children}
+      </dd>
+    </div>
+  );
+}
+
+export function Headline({ view, scenario, agentName, limitSource }: { view: RunView; scenario: Scenario; agentName?: string; limitSource?: string }) {
+  const limit = view.limit;
+  const fraction = limit?.fraction ?? 'respirable';
+  const s = view.fractions[fraction];
+  const agent = agentName ?? scenario.dust.name;
+  const source = limitSource ?? scenario.limit?.source;
+  return (
+    <div>
+      {limit ? (
+        <div className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER[limit.banner].border} ${BANNER[limit.banner].soft}`}>
+          <BannerBadge banner={limit.banner} size="lg" />
+          <p className="max-w-xl text-sm text-ink">
+            {BANNER[limit.banner].meaning} ({num(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
+            {agent ? ` for ${agent}` : ''}
+            {source ? `, ${source}` : ''}).
+          </p>
+        </div>
+      ) : (
+        <p role="note" className="rounded-lg border border-line bg-paper-deep p-4 text-sm">
+          <span aria-hidden="true">○ </span>This scenario has no exposure limit, so there is no Clear / Watch / Act banner and no % of limit; concentrations only.
+        </p>
+      )}
+      <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
+        <Figure label={`8-h TWA, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="twa">
+          {num(s.twa8h_mgPerM3)} mg/m³
+          <span className="block text-xs font-normal text-muted">95 % CI {ciText(s.twa8hCi95_mgPerM3)} mg/m³</span>
+        </Figure>
+        {limit && (
+          <Figure label="Share of the limit" testId="percent-of-limit">
+            {percent(limit.percentOfLimit)}
+            <span className="block text-xs font-normal text-muted">upper 95 % bound {percent(limit.percentOfLimitUpper)}</span>
+          </Figure>
+        )}
+        {limit && (
+          <Figure label="Exposure rating category" testId="rating">
+            {limit.ratingCategory} · {RATING[limit.ratingCategory].name}
+            <span className="block text-xs font-normal text-muted">AIHA band: {RATING[limit.ratingCategory].band}</span>
+          </Figure>
+        )}
+        <Figure label="Statistical error" testId="statistical-error">
+          ± {num(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence
+          <span className="block text-xs font-normal text-muted">
+            {view.engine.particles.toLocaleString('en')} particles in {view.engine.batches} batches
+          </span>
+        </Figure>
+      </dl>
+      <p className="mt-2 text-xs text-muted">
+        Engine {view.engine.version}, seed {String(view.engine.seed)}. The error is the half-width of the 95 % interval across batches, relative to the {FRACTION_LABEL[fraction].toLowerCase()} task mean; more particles narrow it.
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,55 @@
+import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import type { Scenario } from '../../../../shared/schemas/scenario.ts';
+import { sequentialScale } from '../lib/colour-scale.ts';
+import { num } from '../lib/format.ts';
+import type { RunView } from '../lib/normalise-result.ts';
+import { ColourLegend } from './colour-legend.tsx';
+import { GridMap } from './grid-map.tsx';
+import { Section } from './section.tsx';
+
+function releaseType(scenario: Scenario): ReleaseCondition | undefined {
+  return scenario.hoods.find((h) => h.releaseType)?.releaseType;
+}
+
+export function MapsSection({ view, scenario }: { view: RunView; scenario: Scenario }) {
+  const dep = view.maps.deposition_mgPerM2;
+  const cap = view.maps.captureVelocity_mPerS;
+  const release = releaseType(scenario);
+  const range = release ? captureVelocityRange(release) : undefined;
+  const depScale = dep && sequentialScale(dep.values);
+  const capScale = cap && sequentialScale(cap.values);
+  return (
+    <Section title="Floor deposition and capture velocity" intro="Both maps are plans of the room, drawn to the same scale as above, with the source, hood faces and breathing zone on top.">
+      <div className="grid gap-4 lg:grid-cols-2">
+        <figure className="rounded-lg border border-line bg-white p-3">
+          <figcaption className="mb-2 text-sm font-semibold">Dust settled on the floor</figcaption>
+          {dep && depScale ? (
+            <>
+              <GridMap grid={dep} scale={depScale} scenario={scenario} skipZero label={`Floor deposition map, up to ${num(Math.max(...dep.values))} mg/m²`} />
+              <ColourLegend scale={depScale} unit="mg/m²" title="Deposited mass per floor area" />
+              <p className="mt-1 text-xs text-muted">White cells received no simulated particle.</p>
+            </>
+          ) : (
+            <p className="text-sm text-muted">This run holds no deposition map.</p>
+          )}
+        </figure>
+        <figure className="rounded-lg border border-line bg-white p-3">
+          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${num(cap.height_m)} m, the source height` : ''}</figcaption>
+          {cap && capScale ? (
+            <>
+              <GridMap grid={cap} scale={capScale} scenario={scenario} label={`Capture-velocity map, ${num(Math.min(...cap.values))} to ${num(Math.max(...cap.values))} m/s`} />
+              <ColourLegend scale={capScale} unit="m/s" title="Capture velocity (hoods plus cross-draft)" band={range && { from: range.min_mPerS, to: Math.min(range.max_mPerS, capScale.max), label: `${release} release: ${range.min_mPerS}–${range.max_mPerS} m/s` }} />
+              <p className="mt-1 text-xs text-muted">
+                {range
+                  ? `Published capture velocity for ${release} release (${range.description.toLowerCase()}): ${range.min_mPerS}–${range.max_mPerS} m/s (ACGIH Industrial Ventilation). The source should sit where the map reaches this range.`
+                  : 'No release type is given for the hoods, so no published capture-velocity range is shown.'}
+              </p>
+            </>
+          ) : (
+            <p className="text-sm text-muted">This run holds no capture-velocity map.</p>
+          )}
+        </figure>
+      </div>
+    </Section>
+  );
+}

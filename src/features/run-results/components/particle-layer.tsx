@@ -1,0 +1,26 @@
+import type { Projection } from '../lib/room-projection.ts';
+import type { SizeClasses } from '../lib/size-classes.ts';
+import { type Dot, trail } from '../lib/trajectory-frames.ts';
+import type { RunView } from '../lib/normalise-result.ts';
+
+const TAIL_FRAMES = 8;
+
+// A short fading tail turns a cloud of dots into visible paths without drawing 150 frames per particle.
+export function ParticleLayer({ dots, p, t, frame, from, sizes }: { dots: Dot[]; p: Projection; t: RunView['trajectories']; frame: number; from: Int32Array; sizes: SizeClasses }) {
+  return (
+    <g data-testid={`dots-${p.kind}`}>
+      {dots.map((d) => {
+        const c = sizes.classes[sizes.classOfBin(d.bin)];
+        if (!c) return null;
+        const tail = trail(t, d.slot, frame, TAIL_FRAMES, from).map(([x, y, z]) => p.toSvg(x, y, z));
+        const [cx, cy] = p.toSvg(d.x_m, d.y_m, d.z_m);
+        return (
+          <g key={d.slot}>
+            {tail.length > 1 && <polyline points={tail.map((q) => q.join(',')).join(' ')} fill="none" stroke={c.colour} strokeOpacity={0.35} strokeWidth={1} />}
+            <circle cx={cx} cy={cy} r={c.radius} fill={c.colour} stroke="white" strokeWidth={0.6} data-slot={d.slot} />
+          </g>
+        );
+      })}
+    </g>
+  );
+}

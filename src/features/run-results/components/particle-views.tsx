@@ -1,0 +1,60 @@
+import { useMemo } from 'react';
+import type { Scenario } from '../../../../shared/schemas/scenario.ts';
+import { usePlayback } from '../hooks/use-playback.ts';
+import type { RunView } from '../lib/normalise-result.ts';
+import { projection } from '../lib/room-projection.ts';
+import { sizeClasses } from '../lib/size-classes.ts';
+import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '../lib/trajectory-frames.ts';
+import { ParticleLayer } from './particle-layer.tsx';
+import { PlaybackControls } from './playback-controls.tsx';
+import { DRAWING_WIDTH, RoomView } from './room-view.tsx';
+import { Section } from './section.tsx';
+
+export function SizeLegend({ sizes }: { sizes: ReturnType<typeof sizeClasses> }) {
+  return (
+    <ul className="flex flex-wrap gap-x-4 gap-y-1 text-sm" aria-label="Particle size classes">
+      {sizes.classes.map((c) => (
+        <li key={c.label} className="inline-flex items-center gap-1.5">
+          <svg width={12} height={12} aria-hidden="true"><circle cx={6} cy={6} r={c.radius + 1} fill={c.colour} /></svg>
+          {c.label}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+export function ParticleViews({ view, scenario }: { view: RunView; scenario: Scenario }) {
+  const t = view.trajectories;
+  const play = usePlayback(t.frames, t.frameInterval_s);
+  const sizes = useMemo(() => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, t.binDiameters_m), [view.engine.sizeBins, t.bins, t.binDiameters_m]);
+  const from = useMemo(() => visibleFrom(t), [t]);
+  const dots = useMemo(() => frameDots(t, play.frame, from), [t, play.frame, from]);
+  const plan = projection(scenario.room, 'plan', DRAWING_WIDTH);
+  const elevation = projection(scenario.room, 'elevation', DRAWING_WIDTH);
+  const sampled = t.bins.filter((b) => b >= 0).length;
+  if (t.frames === 0 || sampled === 0) {
+    return (
+      <Section title="Particle paths, plan and elevation">
+        <p className="text-sm text-muted">This run holds no sampled particle paths.</p>
+      </Section>
+    );
+  }
+  const intro = `${sampled} sampled particles, ${dots.length} airborne at this frame; dots are sized and coloured by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${BASE_RATE_sPerS} simulated seconds per second.`;
+  return (
+    <Section title="Particle paths, plan and elevation" intro={intro}>
+      <PlaybackControls frame={play.frame} frames={t.frames} time_s={frameTime_s(t, play.frame)} end_s={frameTime_s(t, t.frames - 1)} playing={play.playing} speed={play.speed} onToggle={play.toggle} onSeek={play.seek} onSpeed={play.setSpeed} />
+      <div className="mt-3"><SizeLegend sizes={sizes} /></div>
+      <div className="mt-3 grid max-w-3xl gap-4">
+        <figure className="rounded-lg border border-line bg-white p-3">
+          <figcaption className="mb-1 text-sm font-semibold">Plan (seen from above)</figcaption>
+          <RoomView scenario={scenario} p={plan} label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} />} />
+        </figure>
+        <figure className="rounded-lg border border-line bg-white p-3">
+          <figcaption className="mb-1 text-sm font-semibold">Elevation (side view, looking along y)</figcaption>
+          <RoomView scenario={scenario} p={elevation} label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} />} />
+        </figure>
+      </div>
+      <p className="mt-2 text-xs text-muted">Diamond: dust source. Red outline: hood face, arrow showing the air drawn in. Dashed circle: breathing zone, radius {scenario.worker.radius_m} m.</p>
+    </Section>
+  );
+}

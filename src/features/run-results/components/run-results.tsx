@@ -1,0 +1,60 @@
+import { useMemo } from 'react';
+import { Cautions } from '../../../components/cautions.tsx';
+import { ErrorMessage } from '../../../components/ui/status.tsx';
+import type { Scenario } from '../../../../shared/schemas/scenario.ts';
+import { normaliseResult, type RunView } from '../lib/normalise-result.ts';
+import { ConcentrationSection } from './concentration-section.tsx';
+import { CrossChecks } from './cross-checks.tsx';
+import { FateSection } from './fate-section.tsx';
+import { FractionTable } from './fraction-table.tsx';
+import { Headline } from './headline.tsx';
+import { MapsSection } from './maps-section.tsx';
+import { ParticleViews } from './particle-views.tsx';
+import { Section } from './section.tsx';
+
+export interface RunResultsProps {
+  /** The engine's Results, or its JSON as stored by the server. */
+  result: unknown;
+  scenario: Scenario;
+  agentName?: string;
+  limitSource?: string;
+}
+
+function read(result: unknown): { view: RunView } | { error: unknown } {
+  try {
+    return { view: normaliseResult(result) };
+  } catch (error) {
+    return { error };
+  }
+}
+
+// File names carry the seed so two downloads from different runs never overwrite each other.
+const runLabel = (view: RunView) => `motewalk-run-seed-${String(view.engine.seed).replace(/[^\w-]/g, '_')}`;
+
+/** Everything one run says, from the banner down to the cautions; presentational, nothing fetched. */
+export function RunResults({ result, scenario, agentName, limitSource }: RunResultsProps) {
+  const read_ = useMemo(() => read(result), [result]);
+  if ('error' in read_) {
+    return (
+      <div>
+        <ErrorMessage error={read_.error} title="This run's results cannot be shown" />
+        <Cautions />
+      </div>
+    );
+  }
+  const { view } = read_;
+  return (
+    <div className="text-ink">
+      <Section title="Headline">
+        <Headline view={view} scenario={scenario} agentName={agentName} limitSource={limitSource} />
+      </Section>
+      <ConcentrationSection view={view} />
+      <FractionTable view={view} runLabel={runLabel(view)} />
+      <FateSection view={view} />
+      <ParticleViews view={view} scenario={scenario} />
+      <MapsSection view={view} scenario={scenario} />
+      <CrossChecks view={view} />
+      <Cautions />
+    </div>
+  );
+}

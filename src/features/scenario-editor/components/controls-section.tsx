@@ -1,0 +1,57 @@
+import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { captureVelocityRange } from '../../../../shared/physics/index.ts';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { Button } from '../../../components/ui/button';
+import { SelectField } from '../../../components/ui/field';
+import { newHood } from '../lib/new-hood';
+import { withHood, withoutHood } from '../lib/update';
+import { HoodFields } from './hood-fields';
+import { HoodHints } from './hood-hints';
+import { Section, type SectionProps } from './section';
+
+// The schema caps a scenario at eight hoods; more is a different kind of study.
+const MAX_HOODS = 8;
+const RELEASES: ReleaseCondition[] = ['quiet', 'low', 'active', 'high'];
+
+type Props = SectionProps<ScenarioInput> & {
+  releaseType: ReleaseCondition;
+  onReleaseTypeChange?: (r: ReleaseCondition) => void;
+};
+
+export function ControlsSection({ value, onChange, errors, releaseType, onReleaseTypeChange }: Props) {
+  const hoods = value.hoods ?? [];
+  const range = captureVelocityRange(releaseType);
+
+  return (
+    <Section legend="Controls" intro="Capturing hoods and booths. With none, the run shows the exposure the controls have to fix.">
+      <SelectField
+        label="How the dust is released"
+        value={releaseType}
+        disabled={!onReleaseTypeChange}
+        onChange={(e) => onReleaseTypeChange?.(e.target.value as ReleaseCondition)}
+      >
+        {RELEASES.map((r) => {
+          const c = captureVelocityRange(r);
+          return (
+            <option key={r} value={r}>
+              {c.description} ({c.min_mPerS}–{c.max_mPerS} m/s)
+            </option>
+          );
+        })}
+      </SelectField>
+      <p className="-mt-4 text-xs text-muted">For example {range.examples.join(', ')}.</p>
+      {hoods.length === 0 && <p className="text-sm text-muted">No hoods yet.</p>}
+      {hoods.map((hood, i) => (
+        <div key={i} className="flex flex-col gap-4 border-t border-line pt-5">
+          <HoodFields hood={hood} index={i} errors={errors} onChange={(patch) => onChange(withHood(value, i, patch))} onRemove={() => onChange(withoutHood(value, i))} />
+          <HoodHints hood={hood} index={i} source={value.source} releaseType={releaseType} />
+        </div>
+      ))}
+      <div>
+        <Button variant="secondary" disabled={hoods.length >= MAX_HOODS} onClick={() => onChange({ ...value, hoods: [...hoods, newHood(value)] })}>
+          + Add hood
+        </Button>
+      </div>
+    </Section>
+  );
+}

@@ -1,0 +1,56 @@
+import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { SelectField } from '../../../components/ui/field';
+import { applyAgent, type AgentOption } from '../lib/apply-agent';
+import { DEFAULTS } from '../lib/defaults';
+import { withDust } from '../lib/update';
+import { NumberField } from './number-field';
+import { FieldGrid, Section, Subheading, type SectionProps } from './section';
+import { SizeProfileFields, type SizeProfileOption } from './size-profile-fields';
+
+type Props = SectionProps<ScenarioInput> & {
+  agents: AgentOption[];
+  agentId: number | null;
+  onAgentChange: (id: number | null) => void;
+  sizeProfiles: SizeProfileOption[];
+  sizeProfileId: number | null;
+  onSizeProfileChange: (id: number | null) => void;
+};
+
+const FRACTION: Record<string, string> = { total: 'total', inhalable: 'inhalable', thoracic: 'thoracic', respirable: 'respirable' };
+
+export function DustSection({ value, onChange, errors, agents, agentId, onAgentChange, ...profiles }: Props) {
+  const dust = value.dust;
+  const set = (patch: Partial<ScenarioInput['dust']>) => onChange(withDust(value, patch));
+
+  const chooseAgent = (id: number | null) => {
+    onAgentChange(id);
+    const agent = agents.find((a) => a.id === id);
+    if (agent) onChange(applyAgent(value, agent));
+  };
+
+  return (
+    <Section legend="Dust agent and size profile">
+      <FieldGrid>
+        <SelectField label="Dust agent" value={agentId ?? ''} onChange={(e) => chooseAgent(e.target.value === '' ? null : Number(e.target.value))}>
+          <option value="">None: enter density by hand</option>
+          {agents.map((a) => (
+            <option key={a.id} value={a.id}>
+              {a.name}
+            </option>
+          ))}
+        </SelectField>
+        <NumberField label="Particle density" unit="kg/m³" value={dust.density_kgPerM3} onValue={(v) => set({ density_kgPerM3: v })} error={errors['dust.density_kgPerM3']} />
+        <NumberField label="Shape factor" value={dust.shapeFactor ?? DEFAULTS.shapeFactor} onValue={(v) => set({ shapeFactor: v })} error={errors['dust.shapeFactor']} hint="1 for spheres" />
+      </FieldGrid>
+      {value.limit && (
+        <p className="text-sm text-muted" data-testid="agent-limit">
+          Limit: {value.limit.value_mgPerM3} mg/m³ 8-h, {FRACTION[value.limit.fraction]}
+          {value.limit.shortTerm_mgPerM3 !== undefined && `; ${value.limit.shortTerm_mgPerM3} mg/m³ 15-min`}
+          {value.limit.source && ` (${value.limit.source})`}
+        </p>
+      )}
+      <Subheading>Size profile</Subheading>
+      <SizeProfileFields value={value} onChange={onChange} errors={errors} {...profiles} />
+    </Section>
+  );
+}

@@ -1,0 +1,62 @@
+import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { formatSig } from '../../../../shared/units.ts';
+import type { HoodInput } from '../lib/hood-axis';
+import { hoodHint, type CaptureVerdict, type HoodHint } from '../lib/hood-hints';
+
+type Point = { x_m: number; y_m: number; z_m: number };
+
+const VERDICT: Record<CaptureVerdict, { icon: string; words: string; tone: string }> = {
+  below: { icon: '▼', words: 'Below', tone: 'border-act bg-act-soft text-act' },
+  within: { icon: '✓', words: 'Within', tone: 'border-clear bg-clear-soft text-clear' },
+  above: { icon: '▲', words: 'Above', tone: 'border-watch bg-watch-soft text-watch' },
+};
+
+const m = (v: number) => `${v.toFixed(2)} m`;
+const mps = (v: number) => `${formatSig(v, 2)} m/s`;
+
+function Warning({ children }: { children: string }) {
+  return (
+    <li className="flex gap-2 text-watch">
+      <span aria-hidden="true">⚠</span>
+      <span>{children}</span>
+    </li>
+  );
+}
+
+function warnings(h: HoodHint): string[] {
+  const out: string[] = [];
+  if (h.behind) out.push('The source is behind the face, so the centre-line equation says nothing about it. Turn the hood toward the source.');
+  if (h.beyondValidity && h.rule === 'slot')
+    out.push(`The source is ${m(h.axial_m)} out; one slot is usually counted on to about ${m(h.validUpTo_m)} (common practice). Expect less than this figure.`);
+  if (h.beyondValidity && h.rule === 'diameters')
+    out.push(`The source is ${m(h.axial_m)} out, past 1.5 equivalent diameters (${m(h.validUpTo_m)}), where the equation stops holding. Expect less than this figure.`);
+  if (h.farOffAxis) out.push('The source is well off the hood axis; the air there moves slower than the centre-line figure.');
+  return out;
+}
+
+export function HoodHints({ hood, index, source, releaseType }: { hood: HoodInput; index: number; source: Point; releaseType: ReleaseCondition }) {
+  const h = hoodHint(hood, source, releaseType);
+  if (!h) return <p className="text-sm text-muted">Hints appear once the face size and airflow are valid.</p>;
+  const range = `${formatSig(h.range.min_mPerS, 2)}–${formatSig(h.range.max_mPerS, 2)} m/s`;
+  const verdict = h.verdict && VERDICT[h.verdict];
+  const notes = warnings(h);
+
+  return (
+    <div className="flex flex-col gap-3 rounded-md bg-paper p-4 text-sm" data-testid={`hood-hints-${index}`} aria-live="polite">
+      <p>
+        Source {m(Math.abs(h.axial_m))} {h.behind ? 'behind' : 'in front of'} the face along its axis, {m(h.offAxis_m)} off the axis.
+      </p>
+      {h.centerline_mPerS !== null && verdict && (
+        <p className={`flex items-start gap-2 rounded-md border px-3 py-2 ${verdict.tone}`} data-testid={`hood-verdict-${index}`}>
+          <span aria-hidden="true">{verdict.icon}</span>
+          <span>
+            <strong className="font-semibold">≈ {mps(h.centerline_mPerS)} at the source</strong>
+            {h.rule === 'booth' ? ' (a booth: the face velocity)' : ' on the centre line'}. {verdict.words} the {range} capture range for this release.
+          </span>
+        </p>
+      )}
+      <p className="text-muted">Face velocity {mps(h.faceVelocity_mPerS)} (airflow ÷ face area).</p>
+      {notes.length > 0 && <ul className="flex flex-col gap-1">{notes.map((n) => <Warning key={n}>{n}</Warning>)}</ul>}
+    </div>
+  );
+}

@@ -1,0 +1,41 @@
+import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { formatSig } from '../../../../shared/units.ts';
+import { DEFAULTS } from '../lib/defaults';
+import type { ViewFrame } from '../lib/view-frame';
+import { RoomView } from './room-view';
+import { arrowPath } from './view-parts';
+
+type Props = { value: ScenarioInput; onChange: (next: ScenarioInput) => void; readOnly?: boolean };
+
+// Drawn in the top margin, outside the room, so it never hides a marker.
+function DraftArrow({ frame, speed_mPerS, direction_deg }: { frame: ViewFrame; speed_mPerS: number; direction_deg: number }) {
+  const r = (direction_deg * Math.PI) / 180;
+  const cx = frame.width - 110;
+  const cy = frame.margin / 2;
+  const len = 14;
+  const [dx, dy] = [Math.cos(r) * len, -Math.sin(r) * len];
+  return (
+    <g aria-hidden="true">
+      <path d={arrowPath(cx - dx, cy - dy, cx + dx, cy + dy, 6)} className="fill-none stroke-muted" strokeWidth={2} strokeLinecap="round" />
+      <text x={cx + 22} y={cy + 4} className="fill-muted text-[11px]">
+        draft {formatSig(speed_mPerS, 2)} m/s
+      </text>
+    </g>
+  );
+}
+
+export function PlanView({ value, onChange, readOnly }: Props) {
+  const speed = value.room.draftSpeed_mPerS ?? DEFAULTS.draftSpeed_mPerS;
+  const direction = value.room.draftDirection_deg ?? DEFAULTS.draftDirection_deg;
+  return (
+    <RoomView
+      view="plan"
+      title="Plan (x–y), seen from above"
+      testId="plan-view"
+      value={value}
+      onChange={onChange}
+      readOnly={readOnly}
+      overlay={(frame) => (speed > 0 ? <DraftArrow frame={frame} speed_mPerS={speed} direction_deg={direction} /> : null)}
+    />
+  );
+}

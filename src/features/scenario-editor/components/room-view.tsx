@@ -1,0 +1,61 @@
+import { useRef, type ReactNode } from 'react';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { withHood, withSource, withWorker } from '../lib/update';
+import { viewFrame, type ViewFrame } from '../lib/view-frame';
+import { Draggable } from './draggable';
+import { HoodGlyph, SourceGlyph, WorkerGlyph, type ViewKind } from './glyphs';
+import { RoomGrid, ScaleBar } from './view-parts';
+
+type Props = {
+  view: ViewKind;
+  title: string;
+  value: ScenarioInput;
+  onChange: (next: ScenarioInput) => void;
+  readOnly?: boolean;
+  testId: string;
+  overlay?: (frame: ViewFrame) => ReactNode;
+};
+
+const AXES = { plan: { a: 'x', b: 'y', span: 'width_m' }, elevation: { a: 'x', b: 'z', span: 'height_m' } } as const;
+const m = (v: number) => `${v.toFixed(2)} m`;
+
+export function RoomView({ view, title, value, onChange, readOnly, testId, overlay }: Props) {
+  const svgRef = useRef<SVGSVGElement>(null);
+  const axes = AXES[view];
+  const frame = viewFrame(value.room.length_m, value.room[axes.span]);
+  const bName = view === 'plan' ? 'y' : 'height';
+  // The second coordinate is y in plan and z in elevation; the same drag writes whichever this view shows.
+  const b = (p: { y_m: number; z_m: number }) => (view === 'plan' ? p.y_m : p.z_m);
+  const patch = (a_m: number, b_m: number) => (view === 'plan' ? { x_m: a_m, y_m: b_m } : { x_m: a_m, z_m: b_m });
+  const label = (what: string, p: { x_m: number; y_m: number; z_m: number }) => `${what}, x ${m(p.x_m)}, ${bName} ${m(b(p))}`;
+  const common = { svgRef, frame, readOnly };
+
+  return (
+    <figure className="flex flex-col gap-2">
+      <figcaption className="text-sm font-semibold text-ink">{title}</figcaption>
+      <svg
+        ref={svgRef}
+        viewBox={`0 0 ${frame.width} ${frame.height}`}
+        className="h-auto w-full rounded-lg border border-line bg-white select-none"
+        role="group"
+        aria-label={`${title}, drawn to scale`}
+        data-testid={testId}
+      >
+        <RoomGrid frame={frame} labelA={axes.a} labelB={axes.b} />
+        <ScaleBar frame={frame} />
+        {overlay?.(frame)}
+        <Draggable {...common} testId="drag-worker" label={label("Worker's head", value.worker)} at={{ a_m: value.worker.x_m, b_m: b(value.worker) }} onMove={(a_m, b_m) => onChange(withWorker(value, patch(a_m, b_m)))}>
+          <WorkerGlyph worker={value.worker} frame={frame} view={view} />
+        </Draggable>
+        {(value.hoods ?? []).map((hood, i) => (
+          <Draggable key={i} {...common} testId={`drag-hood-${i}`} label={label(`Hood ${i + 1}`, hood)} at={{ a_m: hood.x_m, b_m: b(hood) }} onMove={(a_m, b_m) => onChange(withHood(value, i, patch(a_m, b_m)))}>
+            <HoodGlyph hood={hood} index={i} frame={frame} view={view} />
+          </Draggable>
+        ))}
+        <Draggable {...common} testId="drag-source" label={label('Source', value.source)} at={{ a_m: value.source.x_m, b_m: b(value.source) }} onMove={(a_m, b_m) => onChange(withSource(value, patch(a_m, b_m)))}>
+          <SourceGlyph source={value.source} frame={frame} view={view} />
+        </Draggable>
+      </svg>
+    </figure>
+  );
+}

@@ -1,0 +1,77 @@
+import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { formatSig, metresToMicrometres, micrometresToMetres } from '../../../../shared/units.ts';
+import { SelectField } from '../../../components/ui/field';
+import { withDust } from '../lib/update';
+import { NumberField } from './number-field';
+import { FieldGrid, type SectionProps } from './section';
+
+type Profile = ScenarioInput['dust']['sizeProfile'];
+export type SizeProfileOption = { id: number; name: string; sizeProfile: Profile };
+type Props = SectionProps<ScenarioInput> & {
+  sizeProfiles: SizeProfileOption[];
+  sizeProfileId: number | null;
+  onSizeProfileChange: (id: number | null) => void;
+};
+
+const INLINE: Profile = { kind: 'lognormal', basis: 'mmad', median_m: micrometresToMetres(5), gsd: 2 };
+
+function describeProfile(p: Profile): string {
+  if (p.kind === 'lognormal') return `Lognormal, ${p.basis.toUpperCase()} ${formatSig(metresToMicrometres(p.median_m), 3)} µm, GSD ${formatSig(p.gsd, 3)}`;
+  const edges = p.edges_m.map(metresToMicrometres);
+  return `${p.amounts.length} ${p.basis} bins from ${formatSig(edges[0], 2)} to ${formatSig(edges[edges.length - 1], 3)} µm`;
+}
+
+export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeProfileId, onSizeProfileChange }: Props) {
+  const profile = value.dust.sizeProfile;
+  const setProfile = (next: Profile) => onChange(withDust(value, { sizeProfile: next }));
+  const at = (field: string) => errors[`dust.sizeProfile.${field}`];
+
+  const choose = (id: number | null) => {
+    onSizeProfileChange(id);
+    const stored = sizeProfiles.find((p) => p.id === id);
+    // Going back to the inline form keeps a lognormal already there; a stored bin profile cannot be edited inline.
+    if (stored) setProfile(stored.sizeProfile);
+    else if (profile.kind !== 'lognormal') setProfile(INLINE);
+  };
+
+  return (
+    <div className="flex flex-col gap-4">
+      <FieldGrid>
+        <SelectField label="Size profile" value={sizeProfileId ?? ''} onChange={(e) => choose(e.target.value === '' ? null : Number(e.target.value))}>
+          <option value="">Enter lognormal here</option>
+          {sizeProfiles.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name}
+            </option>
+          ))}
+        </SelectField>
+        {sizeProfileId === null && profile.kind === 'lognormal' && (
+          <>
+            <SelectField label="Median of" value={profile.basis} onChange={(e) => setProfile({ ...profile, basis: e.target.value as 'mmad' | 'cmd' })}>
+              <option value="mmad">Mass (MMAD)</option>
+              <option value="cmd">Count (CMD)</option>
+            </SelectField>
+            <NumberField
+              label={profile.basis === 'mmad' ? 'MMAD' : 'CMD'}
+              unit="µm"
+              value={profile.median_m}
+              toDisplay={metresToMicrometres}
+              fromDisplay={micrometresToMetres}
+              onValue={(v) => setProfile({ ...profile, median_m: v })}
+              error={at('median_m')}
+            />
+            <NumberField label="GSD" value={profile.gsd} onValue={(v) => setProfile({ ...profile, gsd: v })} error={at('gsd')} hint="1 is a single size" />
+          </>
+        )}
+      </FieldGrid>
+      {sizeProfileId !== null && <p className="text-sm text-muted">{describeProfile(profile)}</p>}
+      {Object.entries(errors)
+        .filter(([path]) => path.startsWith('dust.sizeProfile.') && !/median_m|gsd/.test(path))
+        .map(([path, message]) => (
+          <p key={path} role="alert" className="text-xs font-semibold text-act">
+            Size profile: {message}
+          </p>
+        ))}
+    </div>
+  );
+}

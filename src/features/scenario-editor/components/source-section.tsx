@@ -1,0 +1,45 @@
+import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units.ts';
+import { SelectField } from '../../../components/ui/field';
+import { DEFAULTS } from '../lib/defaults';
+import { withSource } from '../lib/update';
+import { EmissionFields } from './emission-fields';
+import { NumberField } from './number-field';
+import { FieldGrid, Section, Subheading, type SectionProps } from './section';
+
+type Shape = NonNullable<ScenarioInput['source']['shape']>;
+const SIZE_LABEL: Record<Shape, string> = { point: 'Size', disc: 'Disc diameter', box: 'Box edge' };
+
+export function SourceSection({ value, onChange, errors }: SectionProps<ScenarioInput>) {
+  const source = value.source;
+  const set = (patch: Partial<ScenarioInput['source']>) => onChange(withSource(value, patch));
+  const shape = source.shape ?? DEFAULTS.shape;
+
+  return (
+    <Section legend="Source and emission">
+      <FieldGrid>
+        <NumberField label="Source x" unit="m" value={source.x_m} onValue={(v) => set({ x_m: v })} error={errors['source.x_m']} />
+        <NumberField label="Source y" unit="m" value={source.y_m} onValue={(v) => set({ y_m: v })} error={errors['source.y_m']} />
+        <NumberField label="Release height" unit="m" value={source.z_m} onValue={(v) => set({ z_m: v })} error={errors['source.z_m']} hint="Above the floor" />
+        <SelectField label="Shape" value={shape} onChange={(e) => set({ shape: e.target.value as Shape })} error={errors['source.shape']}>
+          <option value="point">Point</option>
+          <option value="disc">Disc (flat, horizontal)</option>
+          <option value="box">Box</option>
+        </SelectField>
+        {shape !== 'point' && (
+          <NumberField
+            label={SIZE_LABEL[shape]}
+            unit="mm"
+            value={source.size_m ?? DEFAULTS.size_m}
+            toDisplay={metresToMillimetres}
+            fromDisplay={millimetresToMetres}
+            onValue={(v) => set({ size_m: v })}
+            error={errors['source.size_m']}
+          />
+        )}
+      </FieldGrid>
+      <Subheading>Emission</Subheading>
+      <EmissionFields value={value} onChange={onChange} errors={errors} />
+    </Section>
+  );
+}

@@ -1,0 +1,59 @@
+import { useEffect, useRef, useState } from 'react';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import type { Results } from '../../../../workers/engine/index';
+import { Button } from '../../../components/ui/button';
+import { ErrorMessage } from '../../../components/ui/status';
+import { RunCancelledError, runSimulation, type RunProgress } from '../../../lib/simulation-bridge';
+
+type State = { phase: 'idle' } | { phase: 'running'; progress: RunProgress } | { phase: 'cancelled' } | { phase: 'failed'; error: unknown };
+
+const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` : `${Math.ceil(s / 60)} min`) : '…');
+
+export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: Results, input: Scenario) => void }) {
+  const [state, setState] = useState<State>({ phase: 'idle' });
+  const abort = useRef<AbortController | null>(null);
+  useEffect(() => () => abort.current?.abort(), []);
+
+  async function start() {
+    if (!scenario) return;
+    abort.current = new AbortController();
+    setState({ phase: 'running', progress: { fraction: 0, particlesPerS: 0, secondsLeft: Infinity } });
+    try {
+      const result = await runSimulation(scenario, { signal: abort.current.signal, onProgress: (progress) => setState({ phase: 'running', progress }) });
+      setState({ phase: 'idle' });
+      onResult(result, scenario);
+    } catch (error) {
+      setState(error instanceof RunCancelledError ? { phase: 'cancelled' } : { phase: 'failed', error });
+    }
+  }
+
+  const running = state.phase === 'running';
+  const pct = running ? Math.round(state.progress.fraction * 100) : 0;
+  return (
+    <section aria-label="Run the simulation" className="rounded-lg border border-line bg-white p-4">
+      <div className="flex flex-wrap items-center gap-3">
+        <Button onClick={start} disabled={running || !scenario}>
+          ▶ Run {scenario ? `${scenario.run.particles.toLocaleString()} particles` : ''}
+        </Button>
+        {running && (
+          <Button variant="secondary" onClick={() => abort.current?.abort()}>
+            Cancel
+          </Button>
+        )}
+        {!scenario && <span className="text-sm text-act">Fix the fields marked above before running.</span>}
+        {state.phase === 'cancelled' && <span role="status" className="text-sm text-muted">Run cancelled; nothing was kept.</span>}
+      </div>
+      {running && (
+        <div className="mt-3">
+          <div role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct} className="h-3 w-full overflow-hidden rounded-full bg-paper-deep">
+            <div className="h-full bg-accent transition-[width]" style={{ width: `${pct}%` }} />
+          </div>
+          <p className="mt-1 text-sm text-muted" aria-live="polite">
+            {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {secs(state.progress.secondsLeft)} left
+          </p>
+        </div>
+      )}
+      {state.phase === 'failed' && <div className="mt-3"><ErrorMessage title="The run failed" error={state.error} /></div>}
+    </section>
+  );
+}
