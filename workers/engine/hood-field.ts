@@ -48,7 +48,9 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
  * openings and slots are scaled by (1 + cos θ)/2, which is 1 on the axis. A booth draws straight in
  * at face velocity within its outline up to half its smaller face dimension in front, and acts as a
  * flanged opening beyond. Adds the velocity into out[0..2], writes the distance to the nearest face
- * outline into out[3], and returns the index of a hood whose face the particle has reached, or −1.
+ * outline into out[3], that hood's index into out[4] and the particle's height above its face plane
+ * into out[5] (negative when outside the face outline), and returns the index of a hood whose face
+ * the particle has reached, or −1.
  */
 export function evaluateHoods(p: Float64Array, count: number, x: number, y: number, z: number, out: Float64Array): number {
   let nearest = Infinity;
@@ -69,7 +71,11 @@ export function evaluateHoods(p: Float64Array, count: number, x: number, y: numb
     const du = au > hw ? au - hw : 0;
     const dv = av > hh ? av - hh : 0;
     const face = Math.sqrt(a * a + du * du + dv * dv);
-    if (face < nearest) nearest = face;
+    if (face < nearest) {
+      nearest = face;
+      out[4] = h;
+      out[5] = du === 0 && dv === 0 ? a : -1;
+    }
     const q = p[o + 15];
     const area = p[o + 16];
     if (q === 0) continue;

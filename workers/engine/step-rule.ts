@@ -3,11 +3,13 @@ import type { PreparedScenario } from './types.ts';
 
 /**
  * Adaptive step rule. With f the run's stepFraction and d the distance to the nearest feature
- * (breathing-zone sphere surface, floored at R/2; hood face outline, floored at half the capture
- * depth), a step obeys 3·√(2·D·dt) ≤ f·d and |u|₁·dt ≤ f·d_zone, |u|₁·dt ≤ (f/5)·d_hood (the hood
+ * (breathing-zone sphere surface, floored at its radius R; hood face outline, floored at half the capture
+ * depth), a step obeys 3·√(2·D·dt) ≤ f·d and |u|₁·dt ≤ f·d_zone, |u|₁·dt ≤ (f/10)·d_hood (the hood
  * field changes over its own distance, so drift there needs finer steps), and dt ≤ maxTimeStep_s. Far from
  * features the step is large, which is exact for the uniform draft, settling and diffusion there;
  * the floor and walls need no limit because reflection and settling outflow are exact for any dt.
+ * Near hoods the drift uses the midpoint velocity and face contact between steps is sampled with
+ * the Brownian-bridge crossing probability.
  */
 export interface StepRule {
   diffusionFactor: Float64Array;
@@ -18,7 +20,7 @@ export interface StepRule {
   minStep_s: number;
 }
 
-export const DRIFT_SHARE = 0.2;
+export const DRIFT_SHARE = 0.1;
 export const MIN_STEP_s = 1e-4;
 
 export function stepRule(p: PreparedScenario): StepRule {
@@ -27,7 +29,7 @@ export function stepRule(p: PreparedScenario): StepRule {
   return {
     diffusionFactor,
     driftFraction: DRIFT_SHARE * f,
-    zoneFloor_m: 0.5 * p.zone.radius_m,
+    zoneFloor_m: p.zone.radius_m,
     hoodFloor_m: 0.5 * CAPTURE_DEPTH_m,
     maxStep_s: p.maxTimeStep_s,
     minStep_s: Math.min(MIN_STEP_s, p.maxTimeStep_s),
