@@ -19,5 +19,5 @@ export function GridMap({ grid, scale, scenario, label, skipZero = false }: { gr
       cells.push(<rect key={`${ix}-${iy}`} x={sx} y={sy} width={grid.cell_m[0] * p.scale + 0.5} height={grid.cell_m[1] * p.scale + 0.5} fill={scale.colour(v)} />);
     }
   }
-  return <RoomView scenario={scenario} p={p} label={label} under={<g data-testid="map-cells">{cells}</g>} />;
+  return <RoomView scenario={scenario} p={p} label={label} textScale={1.4} under={<g data-testid="map-cells">{cells}</g>} />;
 }

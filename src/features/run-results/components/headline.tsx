@@ -8,7 +8,7 @@ import { BannerBadge } from './banner-badge.tsx';
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (
     <div className="rounded-lg border border-line bg-white p-3">
-      <dt className="text-xs font-semibold tracking-wide text-muted uppercase">{label}</dt>
+      <dt className="text-xs font-semibold text-muted">{label}</dt>
       <dd className="mt-1 text-lg font-semibold tabular-nums" data-testid={testId}>
         {children}
       </dd>

@@ -5,23 +5,25 @@ import type { RunView } from '../lib/normalise-result.ts';
 import { projection } from '../lib/room-projection.ts';
 import { sizeClasses } from '../lib/size-classes.ts';
 import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '../lib/trajectory-frames.ts';
-import { ParticleLayer } from './particle-layer.tsx';
+import { ParticleLayer, TAIL_FRAMES } from './particle-layer.tsx';
 import { PlaybackControls } from './playback-controls.tsx';
 import { DRAWING_WIDTH, RoomView } from './room-view.tsx';
 import { Section } from './section.tsx';
 
 export function SizeLegend({ sizes }: { sizes: ReturnType<typeof sizeClasses> }) {
   return (
-    <ul className="flex flex-wrap gap-x-4 gap-y-1 text-sm" aria-label="Particle size classes">
+    <ul className="space-y-1" aria-label="Particle size classes">
       {sizes.classes.map((c) => (
-        <li key={c.label} className="inline-flex items-center gap-1.5">
-          <svg width={12} height={12} aria-hidden="true"><circle cx={6} cy={6} r={c.radius + 1} fill={c.colour} /></svg>
+        <li key={c.label} className="flex items-center gap-2">
+          <svg width={14} height={14} aria-hidden="true"><circle cx={7} cy={7} r={c.radius + 1} fill={c.colour} /></svg>
           {c.label}
         </li>
       ))}
     </ul>
   );
 }
+
+const TAIL_SECONDS = (t: RunView['trajectories']) => Math.round(TAIL_FRAMES * t.frameInterval_s);
 
 export function ParticleViews({ view, scenario }: { view: RunView; scenario: Scenario }) {
   const t = view.trajectories;
@@ -39,22 +41,41 @@ export function ParticleViews({ view, scenario }: { view: RunView; scenario: Sce
       </Section>
     );
   }
-  const intro = `${sampled} sampled particles, ${dots.length} airborne at this frame; dots are sized and coloured by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${BASE_RATE_sPerS} simulated seconds per second.`;
+  const intro = `A sample of the simulated particles, drawn to scale; dots are sized and coloured by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${BASE_RATE_sPerS} simulated seconds per second.`;
   return (
     <Section title="Particle paths, plan and elevation" intro={intro}>
       <PlaybackControls frame={play.frame} frames={t.frames} time_s={frameTime_s(t, play.frame)} end_s={frameTime_s(t, t.frames - 1)} playing={play.playing} speed={play.speed} onToggle={play.toggle} onSeek={play.seek} onSpeed={play.setSpeed} />
-      <div className="mt-3"><SizeLegend sizes={sizes} /></div>
-      <div className="mt-3 grid max-w-3xl gap-4">
-        <figure className="rounded-lg border border-line bg-white p-3">
-          <figcaption className="mb-1 text-sm font-semibold">Plan (seen from above)</figcaption>
-          <RoomView scenario={scenario} p={plan} label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} />} />
-        </figure>
-        <figure className="rounded-lg border border-line bg-white p-3">
-          <figcaption className="mb-1 text-sm font-semibold">Elevation (side view, looking along y)</figcaption>
-          <RoomView scenario={scenario} p={elevation} label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} />} />
-        </figure>
+      <div className="mt-3 grid gap-4 lg:grid-cols-[minmax(0,48rem)_minmax(0,1fr)]">
+        <div className="grid gap-4">
+          <figure className="rounded-lg border border-line bg-white p-3">
+            <figcaption className="mb-1 text-sm font-semibold">Plan (seen from above)</figcaption>
+            <RoomView scenario={scenario} p={plan} label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />} />
+          </figure>
+          <figure className="rounded-lg border border-line bg-white p-3">
+            <figcaption className="mb-1 text-sm font-semibold">Elevation (side view, looking along y)</figcaption>
+            <RoomView scenario={scenario} p={elevation} label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />} />
+          </figure>
+        </div>
+        <aside aria-label="Key to the particle views" className="space-y-4 text-sm lg:sticky lg:top-4 lg:self-start">
+          <p className="rounded-lg border border-line bg-white p-3">
+            <span className="block text-2xl font-semibold tabular-nums" data-testid="airborne-count">{dots.length}</span>
+            of {sampled} sampled particles airborne at t = {frameTime_s(t, play.frame).toFixed(0)} s
+          </p>
+          <div>
+            <h3 className="mb-1 font-semibold">Particle size</h3>
+            <SizeLegend sizes={sizes} />
+          </div>
+          <div>
+            <h3 className="mb-1 font-semibold">Markers</h3>
+            <ul className="space-y-1 text-muted">
+              <li><span aria-hidden="true" className="text-ink">◇</span> dust source</li>
+              <li><span aria-hidden="true" className="font-bold text-act">▕</span> hood face, arrow: air drawn in</li>
+              <li><span aria-hidden="true" className="text-ink">◌</span> breathing zone, radius {scenario.worker.radius_m} m</li>
+              <li>Faint lines: each particle&apos;s last {TAIL_SECONDS(t)} s</li>
+            </ul>
+          </div>
+        </aside>
       </div>
-      <p className="mt-2 text-xs text-muted">Diamond: dust source. Red outline: hood face, arrow showing the air drawn in. Dashed circle: breathing zone, radius {scenario.worker.radius_m} m.</p>
     </Section>
   );
 }

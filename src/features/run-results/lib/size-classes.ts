@@ -2,7 +2,7 @@
 // dot's colour tells which fraction the particle counts towards.
 const EDGES_um = [1, 4, 10, 25];
 const COLOURS = ['#6a4fb3', '#2b7bba', '#2f8f5b', '#c7831c', '#b03a2e'];
-const RADII = [1.8, 2.2, 2.7, 3.2, 3.8];
+const RADII = [2.6, 3.1, 3.6, 4.2, 4.8];
 
 export interface SizeClass {
   label: string;

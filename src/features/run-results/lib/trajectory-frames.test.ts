@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { advanceFrames, frameDots, frameTime_s, trail, visibleFrom } from './trajectory-frames';
+import { advanceFrames, frameDots, frameTime_s, splitAtWrap, trail, visibleFrom } from './trajectory-frames';
 import { sizeClasses } from './size-classes';
 
 // Three slots (the last unused), three frames, laid out [particle][frame][xyz] as the engine's kernel writes them.
@@ -47,6 +47,15 @@ describe('trajectory frames', () => {
     ]);
     // A particle that moves from its first frame is shown from the start.
     expect(Array.from(visibleFrom(t)).slice(0, 2)).toEqual([0, 0]);
+  });
+
+  it('break a tail where the particle wrapped from one end of the room to the other', () => {
+    const parts = splitAtWrap([[7.5, 3, 1], [7.9, 3, 1], [0.2, 3, 1], [0.6, 3.1, 1], [0.9, 3.2, 1]], 8, 6);
+    expect(parts).toEqual([
+      [[7.5, 3, 1], [7.9, 3, 1]],
+      [[0.2, 3, 1], [0.6, 3.1, 1], [0.9, 3.2, 1]],
+    ]);
+    expect(splitAtWrap([[1, 1, 1], [1.2, 1, 1]], 8, 6)).toHaveLength(1);
   });
 
   it('advance 20 simulated seconds per wall second at 1×', () => {

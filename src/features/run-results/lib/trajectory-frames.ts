@@ -64,3 +64,22 @@ export function trail(t: Trajectories, slot: number, frame: number, length: numb
   }
   return points;
 }
+
+/**
+ * Splits a tail where it jumps more than half the room along x or y: the engine wraps particles
+ * that leave downstream back in upstream, and a line across the whole room would be a false path.
+ */
+export function splitAtWrap(points: [number, number, number][], length_m: number, width_m: number): [number, number, number][][] {
+  const parts: [number, number, number][][] = [];
+  let current: [number, number, number][] = [];
+  points.forEach((q, i) => {
+    const prev = points[i - 1];
+    if (prev && (Math.abs(q[0] - prev[0]) > length_m / 2 || Math.abs(q[1] - prev[1]) > width_m / 2)) {
+      parts.push(current);
+      current = [];
+    }
+    current.push(q);
+  });
+  parts.push(current);
+  return parts.filter((part) => part.length > 1);
+}

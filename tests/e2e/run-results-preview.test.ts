@@ -1,0 +1,87 @@
+import type { AddressInfo } from 'node:net';
+import path from 'node:path';
+import type { BrowserContext, Page } from 'playwright-core';
+import { createServer, type ViteDevServer } from 'vite';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { PREVIEW_SCENARIO } from '../../src/features/run-results/dev/preview-scenario';
+import { num } from '../../src/features/run-results/lib/format';
+import { runEngine } from '../helpers/run-engine';
+import { launchBrowser, shot } from '../helpers/browser';
+
+let vite: ViteDevServer;
+let browser: BrowserContext;
+let page: Page;
+let url: string;
+
+beforeAll(async () => {
+  // The project's own Vite config (root src/, React, Tailwind) on a free port; no build, no API server.
+  vite = await createServer({ configFile: path.resolve('vite.config.ts'), server: { port: 0, strictPort: false, hmr: false }, logLevel: 'warn' });
+  await vite.listen();
+  url = `http://localhost:${(vite.httpServer!.address() as AddressInfo).port}/features/run-results/dev/preview.html`;
+  browser = await launchBrowser();
+  page = await browser.newPage();
+});
+afterAll(async () => {
+  await browser?.close();
+  await vite?.close();
+});
+
+const dotPositions = (view: 'plan' | 'elevation') =>
+  page.getByTestId(`dots-${view}`).locator('circle').evaluateAll((cs) => cs.map((c) => `${c.getAttribute('data-slot')}:${c.getAttribute('cx')},${c.getAttribute('cy')}`));
+
+describe('the run results preview', () => {
+  it('runs the engine in the page and shows the banner and the 8-h TWA the engine computes', async () => {
+    await page.goto(url);
+    await page.getByRole('button', { name: 'Compute' }).click();
+    await page.getByTestId('banner').first().waitFor();
+    const { result } = runEngine(PREVIEW_SCENARIO);
+    const expected = (result as { breathingZone: { fractions: { respirable: { twa8h_mgPerM3: number } } }; limit: { banner: string } });
+    expect(await page.getByTestId('banner').first().getAttribute('data-banner')).toBe(expected.limit.banner);
+    expect(await page.getByTestId('twa').textContent()).toContain(`${num(expected.breathingZone.fractions.respirable.twa8h_mgPerM3)} mg/m³`);
+    for (const heading of ['Headline', 'Breathing-zone concentration over time', 'Concentrations by size fraction', 'Where the dust went', 'Particle paths, plan and elevation', 'Floor deposition and capture velocity', 'Analytic cross-checks', 'Cautions']) {
+      await expect.poll(() => page.getByRole('heading', { name: heading }).count()).toBe(1);
+    }
+    expect(await page.getByTestId('hood-face').count()).toBeGreaterThan(0);
+    await shot(page, 'run-results-default');
+  });
+
+  it('moves the particles when the scrubber is moved from the keyboard', async () => {
+    const scrubber = page.getByTestId('scrubber');
+    await scrubber.focus();
+    await page.keyboard.press('Home');
+    const before = await dotPositions('plan');
+    for (let i = 0; i < 40; i++) await page.keyboard.press('ArrowRight');
+    await expect.poll(() => scrubber.inputValue()).toBe('40');
+    expect(await page.getByTestId('frame-time').textContent()).toMatch(/t = 80 s/);
+    const after = await dotPositions('plan');
+    expect(after.length).toBeGreaterThan(0);
+    expect(after).not.toEqual(before);
+    await page.getByRole('heading', { name: 'Particle paths, plan and elevation' }).scrollIntoViewIfNeeded();
+    await shot(page, 'run-results-scrubbed');
+  });
+
+  it('plays and pauses the animation', async () => {
+    const time = () => page.getByTestId('frame-time').textContent();
+    const start = await time();
+    // The radios are visually hidden inside their labels, so click what a user sees.
+    await page.locator('label', { hasText: '4×' }).click();
+    expect(await page.getByRole('radio', { name: '4×' }).isChecked()).toBe(true);
+    await page.getByRole('button', { name: 'Play' }).click();
+    await expect.poll(time).not.toBe(start);
+    await page.getByRole('button', { name: 'Pause' }).click();
+    const paused = await time();
+    await page.waitForTimeout(300);
+    expect(await time()).toBe(paused);
+  });
+
+  it('reads the same run as server JSON, and says so when the scenario has no limit', async () => {
+    await page.getByLabel('As JSON from the server').check();
+    await page.getByLabel('With a limit').uncheck();
+    await page.getByLabel('With the hood').uncheck();
+    await page.getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.getByRole('note').textContent()).toMatch(/no exposure limit/);
+    expect(await page.getByTestId('banner').count()).toBe(0);
+    expect(await page.getByTestId('hood-face').count()).toBe(0);
+    await shot(page, 'run-results-no-limit-no-hood');
+  });
+});
