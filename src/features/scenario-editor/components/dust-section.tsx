@@ -31,7 +31,7 @@ export function DustSection({ value, onChange, errors, agents, agentId, onAgentC
   return (
     <Section legend="Dust agent and size profile">
       <FieldGrid>
-        <SelectField label="Dust agent" className="col-span-2" value={agentId ?? ''} onChange={(e) => chooseAgent(e.target.value === '' ? null : Number(e.target.value))}>
+        <SelectField label="Dust agent" className="sm:col-span-2" value={agentId ?? ''} onChange={(e) => chooseAgent(e.target.value === '' ? null : Number(e.target.value))}>
           <option value="">None: enter the density by hand</option>
           {agents.map((a) => (
             <option key={a.id} value={a.id}>

@@ -1,5 +1,5 @@
 import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { formatSig } from '../../../../shared/units.ts';
+import { cubicMetresPerSecondToPerHour, formatSig } from '../../../../shared/units.ts';
 import type { HoodInput } from '../lib/hood-axis';
 import { hoodHint, type CaptureVerdict, type HoodHint } from '../lib/hood-hints';
 
@@ -54,6 +54,9 @@ export function HoodHints({ hood, index, source, releaseType }: { hood: HoodInpu
             {h.rule === 'booth' ? ' (a booth: the face velocity)' : ' on the centre line'}. {verdict.words} the {range} capture range for this release.
           </span>
         </p>
+      )}
+      {h.verdict === 'below' && h.airflowForRange_m3PerS !== null && (
+        <p>About {formatSig(cubicMetresPerSecondToPerHour(h.airflowForRange_m3PerS), 2)} m³/h would reach {formatSig(h.range.min_mPerS, 2)} m/s at the source, or move the hood closer.</p>
       )}
       <p className="text-muted">Face velocity {mps(h.faceVelocity_mPerS)} (airflow ÷ face area).</p>
       {notes.length > 0 && <ul className="flex flex-col gap-1">{notes.map((n) => <Warning key={n}>{n}</Warning>)}</ul>}

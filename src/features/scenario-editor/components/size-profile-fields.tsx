@@ -37,7 +37,7 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
   return (
     <div className="flex flex-col gap-4">
       <FieldGrid>
-        <SelectField label="Size profile" className="col-span-2" value={sizeProfileId ?? ''} onChange={(e) => choose(e.target.value === '' ? null : Number(e.target.value))}>
+        <SelectField label="Size profile" className="sm:col-span-2" value={sizeProfileId ?? ''} onChange={(e) => choose(e.target.value === '' ? null : Number(e.target.value))}>
           <option value="">Enter lognormal here</option>
           {sizeProfiles.map((p) => (
             <option key={p.id} value={p.id}>

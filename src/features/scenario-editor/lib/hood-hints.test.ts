@@ -38,6 +38,8 @@ describe('hood hints', () => {
     expect(hoodHint(plain, at(1.2), 'quiet')!.verdict).toBe('above');
     expect(hoodHint(plain, at(1.5), 'active')!.verdict).toBe('below');
     expect(hint.range).toMatchObject({ min_mPerS: 0.5, max_mPerS: 1.0 });
+    // 0.5 m/s × (10 × 0.2² + 0.1) m² = 0.25 m³/s reaches the low end at 0.2 m.
+    expect(hint.airflowForRange_m3PerS).toBeCloseTo(0.25, 9);
   });
 
   it('gives the face velocity Q/A', () => {

@@ -1,4 +1,4 @@
-import { captureVelocityRange, hoodCenterlineVelocity, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
 import { hoodAxis, type HoodInput } from './hood-axis.ts';
 
 // [M] the centre-line equations hold out to about 1.5 equivalent hood diameters.
@@ -16,6 +16,8 @@ export interface HoodHint {
   offAxis_m: number;
   behind: boolean;
   centerline_mPerS: number | null;
+  // Airflow that would bring the centre-line velocity at the source to the low end of the range.
+  airflowForRange_m3PerS: number | null;
   range: CaptureVelocityRange;
   verdict: CaptureVerdict | null;
   faceVelocity_mPerS: number;
@@ -50,9 +52,8 @@ export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_
   const behind = axial_m < 0;
   const range = captureVelocityRange(release);
   // The engine treats faceWidth as the slot's length, so the same is used here.
-  const centerline_mPerS = behind
-    ? null
-    : hoodCenterlineVelocity({ kind: hood.kind, faceArea_m2, slotLength_m: hood.faceWidth_m, airflow_m3PerS: hood.airflow_m3PerS }, axial_m);
+  const geometry = { kind: hood.kind, faceArea_m2, slotLength_m: hood.faceWidth_m };
+  const centerline_mPerS = behind ? null : hoodCenterlineVelocity({ ...geometry, airflow_m3PerS: hood.airflow_m3PerS }, axial_m);
   const rule: ValidityRule = hood.kind === 'booth' ? 'booth' : isSlot(hood.kind) ? 'slot' : 'diameters';
   const validUpTo_m = rule === 'slot' ? SLOT_REACH_m : VALID_DIAMETERS * equivalentDiameter_m(faceArea_m2);
   return {
@@ -60,6 +61,7 @@ export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_
     offAxis_m,
     behind,
     centerline_mPerS,
+    airflowForRange_m3PerS: behind ? null : hoodRequiredAirflow(geometry, range.min_mPerS, axial_m),
     range,
     verdict: centerline_mPerS === null ? null : captureVerdict(centerline_mPerS, range),
     faceVelocity_mPerS: hood.airflow_m3PerS / faceArea_m2,
