@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
@@ -43,6 +44,26 @@ describe('the run results preview', () => {
     }
     expect(await page.getByTestId('hood-face').count()).toBeGreaterThan(0);
     await shot(page, 'run-results-default');
+  });
+
+  it('switches the chart to another fraction from the keyboard, dropping the limit line', async () => {
+    expect(await page.getByTestId('limit-line').count()).toBe(1);
+    await page.getByRole('radio', { name: /Respirable/ }).focus();
+    await page.keyboard.press('ArrowLeft');
+    expect(await page.getByRole('radio', { name: 'Thoracic' }).isChecked()).toBe(true);
+    await expect.poll(() => page.getByTestId('limit-line').count()).toBe(0);
+    await page.keyboard.press('ArrowRight');
+    await expect.poll(() => page.getByTestId('limit-line').count()).toBe(1);
+  });
+
+  it('downloads the fraction table as CSV with units in the headers', async () => {
+    const download = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Download CSV', exact: true }).click();
+    const file = await download;
+    expect(file.suggestedFilename()).toBe('motewalk-run-seed-7-fractions.csv');
+    const text = fs.readFileSync((await file.path())!, 'utf8');
+    expect(text).toMatch(/^\uFEFFFraction,Task mean \(mg\/m³\),/);
+    expect(text.trim().split('\r\n')).toHaveLength(5);
   });
 
   it('moves the particles when the scrubber is moved from the keyboard', async () => {

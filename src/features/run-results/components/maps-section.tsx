@@ -34,7 +34,7 @@ export function MapsSection({ view, scenario }: { view: RunView; scenario: Scena
           )}
         </figure>
         <figure className="rounded-lg border border-line bg-white p-3">
-          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${num(cap.height_m)} m, the source height` : ''}</figcaption>
+          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${Number(cap.height_m.toPrecision(3))} m, the source height` : ''}</figcaption>
           {cap && capScale ? (
             <>
               <GridMap grid={cap} scale={capScale} scenario={scenario} label={`Capture-velocity map, ${num(Math.min(...cap.values))} to ${num(Math.max(...cap.values))} m/s`} />
