@@ -7,16 +7,17 @@ import { AppShell } from './routes/app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute, RouteError } from './routes/not-found';
 import { RequireUser } from './routes/require-user';
-import { AuditRoute } from './routes/audit';
-import { PlacesRoute } from './routes/places';
-import { RunRoute } from './routes/run';
-import { ScenarioRoute } from './routes/scenario';
-import { WorkstationRoute } from './routes/workstation';
-import { ScenariosRoute } from './routes/scenarios';
 import { SetPasswordRoute } from './routes/set-password';
 import { SignInRoute } from './routes/sign-in';
-import { StationRoute } from './routes/station';
 
+// Every page but sign-in loads on demand, so the first paint stays small.
+const AuditRoute = lazy(() => import('./routes/audit').then((m) => ({ default: m.AuditRoute })));
+const PlacesRoute = lazy(() => import('./routes/places').then((m) => ({ default: m.PlacesRoute })));
+const RunRoute = lazy(() => import('./routes/run').then((m) => ({ default: m.RunRoute })));
+const ScenarioRoute = lazy(() => import('./routes/scenario').then((m) => ({ default: m.ScenarioRoute })));
+const WorkstationRoute = lazy(() => import('./routes/workstation').then((m) => ({ default: m.WorkstationRoute })));
+const ScenariosRoute = lazy(() => import('./routes/scenarios').then((m) => ({ default: m.ScenariosRoute })));
+const StationRoute = lazy(() => import('./routes/station').then((m) => ({ default: m.StationRoute })));
 const PeoplePage = lazy(() => import('../features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
 const ParticleCalculatorPage = lazy(() => import('../features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
 const HoodCalculatorPage = lazy(() => import('../features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
