@@ -180,7 +180,8 @@ export function parseScenario(input: unknown): Scenario {
   const result = scenarioSchema.safeParse(input, { reportInput: true });
   if (result.success) return result.data;
   const issues = result.error.issues.map((issue) => {
-    const message = issue.code === 'custom' ? issue.message : `${issue.message}, got ${describe(issue.input)}`;
+    const missing = issue.code === 'invalid_type' && issue.input === undefined;
+    const message = issue.code === 'custom' ? issue.message : missing ? 'is required' : `${issue.message}, got ${describe(issue.input)}`;
     return { path: issue.path.join('.') || '(root)', message };
   });
   throw new ScenarioError(issues);

@@ -14,7 +14,7 @@ export interface Tallies {
 
 export type StepProgress = (fraction: number, particleSteps: number) => void;
 
-const PROGRESS_EVERY = 4_000_000;
+const PROGRESS_EVERY = 1_000_000;
 
 function swap(arr: Float64Array | Int32Array, i: number, j: number): void {
   const v = arr[i];
