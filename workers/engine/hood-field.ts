@@ -1,6 +1,6 @@
 import type { Hood } from '../../shared/schemas/scenario.ts';
 
-export const HOOD_STRIDE = 20;
+export const HOOD_STRIDE = 22;
 export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
 /** A particle that crosses the face plane within the face outline and less than this behind it is captured. */
 export const CAPTURE_DEPTH_m = 0.1;
@@ -34,7 +34,9 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
       [kind, hood.x_m, hood.y_m, hood.z_m, nx, ny, nz, e1x, e1y, e1z,
         ny * e1z - nz * e1y, nz * e1x - nx * e1z, nx * e1y - ny * e1x,
         hood.faceWidth_m / 2, hood.faceHeight_m / 2, hood.airflow_m3PerS, area, COEFFICIENT[kind],
-        hood.airflow_m3PerS / area, hood.faceWidth_m],
+        hood.airflow_m3PerS / area, hood.faceWidth_m,
+        kind === 2 || kind === 3 ? hood.faceHeight_m / 2 : Math.hypot(hood.faceWidth_m, hood.faceHeight_m) / 2,
+        Math.min(hood.faceWidth_m, hood.faceHeight_m) / 2],
       o,
     );
   });
@@ -48,7 +50,7 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
  * openings and slots are scaled by (1 + cos θ)/2, which is 1 on the axis. A booth draws straight in
  * at face velocity within its outline up to half its smaller face dimension in front, and acts as a
  * flanged opening beyond. Adds the velocity into out[0..2], writes the distance to the nearest face
- * outline into out[3], that hood's index into out[4] and the particle's height above its face plane
+ * outline (a lower bound) into out[3], that hood's index into out[4] and the particle's height above its face plane
  * into out[5] (negative when outside the face outline), and returns the index of a hood whose face
  * the particle has reached, or −1.
  */
@@ -67,40 +69,41 @@ export function evaluateHoods(p: Float64Array, count: number, x: number, y: numb
     const hh = p[o + 14];
     const au = Math.abs(u);
     const av = Math.abs(v);
-    if (a <= 0 && a > -CAPTURE_DEPTH_m && au <= hw && av <= hh) return h;
-    const du = au > hw ? au - hw : 0;
-    const dv = av > hh ? av - hh : 0;
-    const face = Math.sqrt(a * a + du * du + dv * dv);
+    const onFace = au <= hw && av <= hh;
+    if (onFace && a <= 0 && a > -CAPTURE_DEPTH_m) return h;
+    const slot = kind === 2 || kind === 3;
+    let sx = rx;
+    let sy = ry;
+    let sz = rz;
+    if (slot) {
+      const along = u > hw ? hw : u < -hw ? -hw : u;
+      sx -= along * p[o + 7];
+      sy -= along * p[o + 8];
+      sz -= along * p[o + 9];
+    }
+    const r = Math.sqrt(sx * sx + sy * sy + sz * sz);
+    // A lower bound on the distance to the face outline is all the step rule needs, and it
+    // reuses r: the outline lies within its half-diagonal (slot: half-width) of the centre (line).
+    const aa = a < 0 ? -a : a;
+    const bound = r - p[o + 20];
+    const face = bound > aa ? bound : aa;
     if (face < nearest) {
       nearest = face;
       out[4] = h;
-      out[5] = du === 0 && dv === 0 ? a : -1;
+      out[5] = onFace ? a : -1;
     }
     const q = p[o + 15];
-    const area = p[o + 16];
-    if (q === 0) continue;
-    if (kind === 4 && a >= 0 && au <= hw && av <= hh && a <= Math.min(hw, hh)) {
+    if (q === 0 || r === 0) continue;
+    if (kind === 4 && a >= 0 && onFace && a <= p[o + 21]) {
       const vf = p[o + 18];
       out[0] -= vf * p[o + 4];
       out[1] -= vf * p[o + 5];
       out[2] -= vf * p[o + 6];
       continue;
     }
-    let sx = rx;
-    let sy = ry;
-    let sz = rz;
-    let along = 0;
-    const slot = kind === 2 || kind === 3;
-    if (slot) {
-      along = u > hw ? hw : u < -hw ? -hw : u;
-      sx -= along * p[o + 7];
-      sy -= along * p[o + 8];
-      sz -= along * p[o + 9];
-    }
-    const r = Math.sqrt(sx * sx + sy * sy + sz * sz);
-    if (r === 0) continue;
     const flanged = kind === 1 || kind === 3 || kind === 4;
     if (flanged && a <= 0) continue;
+    const area = p[o + 16];
     let resistance = slot ? p[o + 17] * p[o + 19] * r : p[o + 17] * (10 * r * r + area);
     if (resistance < area) resistance = area;
     let speed = q / resistance;

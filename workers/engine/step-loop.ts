@@ -50,7 +50,15 @@ export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshi
       }
       fate[ids[i]] = f;
       live--;
-      for (const arr of [a.x, a.y, a.z, a.t, a.release, a.exhaustAt, a.bin, a.slot, ids]) swap(arr, i, live);
+      swap(a.x, i, live);
+      swap(a.y, i, live);
+      swap(a.z, i, live);
+      swap(a.t, i, live);
+      swap(a.release, i, live);
+      swap(a.exhaustAt, i, live);
+      swap(a.bin, i, live);
+      swap(a.slot, i, live);
+      swap(ids, i, live);
     }
     if (onProgress && k.steps >= nextReport) {
       nextReport = k.steps + PROGRESS_EVERY;
