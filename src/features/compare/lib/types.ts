@@ -1,0 +1,40 @@
+import type { Banner, ExposureRating } from '../../../../shared/physics/index.ts';
+import type { ControlTier } from '../../../../shared/schemas/workspace.ts';
+import type { Fate, Fraction } from '../../../../workers/engine/types.ts';
+
+export type Ci = [number, number];
+
+/** The parts of a stored run that side by side reads; a normalised run view satisfies it as it is. */
+export interface RunFigures {
+  fractions: Record<Fraction, { twa8h_mgPerM3: number; twa8hCi95_mgPerM3: Ci; peak15min_mgPerM3: number }>;
+  series: { time_s: number[]; bands: Record<Fraction, { mean: number[]; lo: number[]; hi: number[] }> };
+  fate: { emitted_mg: number; shares: Record<Fate, number> };
+  limit?: { fraction: Fraction; value_mgPerM3: number; percentOfLimit: number; percentOfLimitUpper: number; ratingCategory: ExposureRating; banner: Banner };
+  /** Words for the rating category, supplied by whoever computed the figures. */
+  ratingName?: string;
+}
+
+export interface HoodFigures {
+  name?: string;
+  kind: string;
+  airflow_m3PerS: number;
+  faceWidth_m: number;
+  faceHeight_m: number;
+}
+
+export interface CompareColumn {
+  id: number;
+  name: string;
+  workstationName: string;
+  siteName: string;
+  controlTier: ControlTier;
+  controlDescription: string;
+  hoods: HoodFigures[];
+  totalAirflow_m3PerS: number;
+  run: (RunFigures & { id: number; createdAt: string; outOfDate: boolean }) | null;
+}
+
+/** The three health-related fractions the table reports, finest first. */
+export const TABLE_FRACTIONS = ['respirable', 'thoracic', 'inhalable'] as const satisfies readonly Fraction[];
+
+export const FRACTION_WORD: Record<Fraction, string> = { total: 'Total', inhalable: 'Inhalable', thoracic: 'Thoracic', respirable: 'Respirable' };
