@@ -3,10 +3,10 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
-import { ConnectSessionKnexStore } from 'connect-session-knex';
 import type { Db } from './db/knex';
 import type { Mailer } from './mail/mailer';
 import { configurePassport } from './auth/passport';
+import { SessionStore } from './auth/session-store';
 import { authRoutes } from './auth/auth.routes';
 import { peopleRoutes } from './people/people.routes';
 import { outboxRoutes } from './mail/outbox.routes';
@@ -48,7 +48,7 @@ export function createApp(opts: AppOptions): Express {
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      store: new ConnectSessionKnexStore({ knex: db, tableName: 'sessions', createTable: false, cleanupInterval: 0 }),
+      store: new SessionStore({ knex: db, tableName: 'sessions', createTable: false, cleanupInterval: 0 }),
       cookie: { httpOnly: true, sameSite: 'lax', secure: opts.production === true, maxAge: 8 * 3600 * 1000 },
     }),
   );

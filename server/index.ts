@@ -33,6 +33,9 @@ const server = app.listen(env.PORT, () => {
   if (!env.SMTP_URL) console.log('E-mail goes to the local outbox (admin → Outbox).');
 });
 
+// One failed request must never take the server down with it.
+process.on('unhandledRejection', (reason) => console.error('[unhandled rejection]', reason));
+
 let closing = false;
 function shutdown(signal: string) {
   if (closing) return;

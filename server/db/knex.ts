@@ -5,12 +5,12 @@ import { migrationSource } from './migration-source';
 
 export type Db = Knex;
 
-export function createDb(filename: string): Db {
+export function createDb(filename: string, opts: { readonly?: boolean } = {}): Db {
   if (filename !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(filename)), { recursive: true });
   const memory = filename === ':memory:';
   return knexFactory({
     client: 'better-sqlite3',
-    connection: { filename },
+    connection: { filename, options: { readonly: opts.readonly === true } },
     useNullAsDefault: true,
     // An in-memory database lives in one connection: never reap it.
     pool: memory
@@ -19,9 +19,9 @@ export function createDb(filename: string): Db {
   });
 }
 
-function configure(conn: { pragma: (s: string) => unknown }, done: (err: Error | null, conn: unknown) => void) {
+function configure(conn: { pragma: (s: string) => unknown; readonly: boolean }, done: (err: Error | null, conn: unknown) => void) {
   try {
-    conn.pragma('journal_mode = WAL');
+    if (!conn.readonly) conn.pragma('journal_mode = WAL');
     conn.pragma('foreign_keys = ON');
     conn.pragma('busy_timeout = 5000');
     conn.pragma('synchronous = NORMAL');

@@ -19,7 +19,7 @@ export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: 
     await writeAudit(trx, { actor, action: 'person.invited', targetType: 'person', targetId: newId, detail: { email: input.email, role: input.role } });
     return { id: newId, token: t };
   });
-  await mailer.send(passwordLinkMail('invite', input.email, input.name, `${baseUrl}/set-password?token=${token}`));
+  await sendOrExplain(mailer, passwordLinkMail('invite', input.email, input.name, `${baseUrl}/set-password?token=${token}`), 'The account was created but the invitation e-mail could not be sent. Use "Resend invitation" once mail works.');
   return (await findPerson(db, id))!;
 }
 
@@ -50,7 +50,17 @@ export async function sendResetLink(db: Db, mailer: Mailer, actor: Actor, id: nu
     await writeAudit(trx, { actor, action: 'person.password_link_sent', targetType: 'person', targetId: id });
     return t;
   });
-  await mailer.send(passwordLinkMail(purpose, person.email, person.name, `${baseUrl}/set-password?token=${token}`));
+  await sendOrExplain(mailer, passwordLinkMail(purpose, person.email, person.name, `${baseUrl}/set-password?token=${token}`), 'The link could not be e-mailed. Try again once mail works.');
+}
+
+// Mail goes out after the database commit, so a mail failure must say what did and did not happen.
+async function sendOrExplain(mailer: Mailer, mail: Parameters<Mailer['send']>[0], message: string) {
+  try {
+    await mailer.send(mail);
+  } catch (err) {
+    console.error('[mail] sending failed', err);
+    throw new AppError(502, 'mail_failed', message);
+  }
 }
 
 export async function setPasswordWithToken(db: Db, token: string, password: string) {

@@ -6,9 +6,8 @@ import path from 'node:path';
 export type RunningServer = { url: string; dbFile: string; proc: ChildProcess; output: () => string; stop: () => Promise<void> };
 
 // Starts the built server on a free port with a fresh database file.
-export async function startServer(env: Record<string, string> = {}): Promise<RunningServer> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'motewalk-e2e-'));
-  const dbFile = path.join(dir, 'motewalk.sqlite');
+export async function startServer(env: Record<string, string> = {}, reuseDbFile?: string): Promise<RunningServer> {
+  const dbFile = reuseDbFile ?? path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'motewalk-e2e-')), 'motewalk.sqlite');
   const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     env: { ...process.env, PORT: '0', DATABASE_FILE: dbFile, LOG_REQUESTS: '0', NODE_ENV: 'test', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
