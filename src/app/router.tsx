@@ -24,6 +24,7 @@ const HoodCalculatorPage = lazy(() => import('../features/calculators/components
 const AgentsPage = lazy(() => import('../features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
 const SizeProfilesPage = lazy(() => import('../features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })));
 const SizeProfileDetailPage = lazy(() => import('../features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })));
+const CompareRoute = lazy(() => import('./routes/compare').then((m) => ({ default: m.CompareRoute })));
 const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (
@@ -55,6 +56,7 @@ export const router = createBrowserRouter([
       { path: paths.outbox, element: guarded('outbox:read', <OutboxPage />) },
       { path: paths.particleCalculator, element: guarded('calculators:use', <ParticleCalculatorPage />) },
       { path: paths.hoodCalculator, element: guarded('calculators:use', <HoodCalculatorPage />) },
+      { path: paths.compare, element: guarded('scenarios:read', <CompareRoute />) },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

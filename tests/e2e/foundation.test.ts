@@ -17,9 +17,9 @@ afterAll(async () => {
 });
 
 const EXPECTED_NAV: Record<string, { home: RegExp; heading: string; nav: string[] }> = {
-  admin: { home: /\/people$/, heading: 'People', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Your station', 'Audit trail', 'People', 'Outbox'] },
-  engineer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Audit trail'] },
-  viewer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Audit trail'] },
+  admin: { home: /\/people$/, heading: 'People', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Your station', 'Audit trail', 'People', 'Outbox'] },
+  engineer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Audit trail'] },
+  viewer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Audit trail'] },
   operator: { home: /\/station$/, heading: 'Edge-grinding bench 2', nav: ['Your station'] },
 };
 

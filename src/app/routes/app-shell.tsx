@@ -6,6 +6,7 @@ import { useLogout } from '../../features/auth/api/logout';
 
 const NAV: { to: string; label: string; permission: Permission }[] = [
   { to: paths.scenarios, label: 'Scenarios', permission: 'scenarios:read' },
+  { to: paths.compare, label: 'Side by side', permission: 'scenarios:read' },
   { to: paths.places, label: 'Workstations', permission: 'scenarios:read' },
   { to: paths.agents, label: 'Dust agents', permission: 'scenarios:read' },
   { to: paths.sizeProfiles, label: 'Size profiles', permission: 'scenarios:read' },

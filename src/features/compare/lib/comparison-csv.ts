@@ -29,7 +29,7 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
     return [
       c.name, c.workstationName, c.siteName, TIER_WORDS[c.controlTier] ?? c.controlTier, c.controlDescription, c.hoods.map(hoodText).join('; '),
       airflow_m3PerH(c.totalAirflow_m3PerS), roughFanPower_W(c.totalAirflow_m3PerS),
-      ...TABLE_FRACTIONS.flatMap((f) => (r ? [r.fractions[f].twa8h_mgPerM3, r.fractions[f].twa8hCi95_mgPerM3[0], r.fractions[f].twa8hCi95_mgPerM3[1], r.fractions[f].peak15min_mgPerM3] : ['', '', '', ''])),
+      ...TABLE_FRACTIONS.flatMap((f) => (r ? [r.fractions[f].twa8h_mgPerM3, r.fractions[f].twa8hCi95_mgPerM3[0], r.fractions[f].twa8hCi95_mgPerM3[1], r.fractions[f].peak15min_mgPerM3] : [null, null, null, null])),
       r?.limit?.fraction, r?.limit?.value_mgPerM3, r?.limit?.percentOfLimit, r?.limit?.percentOfLimitUpper, r?.limit?.ratingCategory, r?.ratingName, r?.limit ? r.limit.banner : r ? 'No limit' : 'Not run',
       ...FATE_KEYS.map((k) => (r ? 100 * r.fate.shares[k] : '')),
       diff?.difference, diff?.differencePercent, diff?.z, diff ? (diff.differs ? 'yes' : 'no') : '',

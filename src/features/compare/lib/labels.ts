@@ -12,3 +12,6 @@ export const hoodText = (h: HoodFigures) => `${hoodKindWords(h.kind)}, ${Math.ro
 export const fanPowerText = (power_W: number) => (power_W >= 1000 ? `${sig(power_W / 1000, 2)} kW` : `${Math.round(power_W)} W`);
 
 export const share = (fraction: number) => (Number.isFinite(fraction) ? `${sig(100 * fraction, 3)} %` : '—');
+
+// Plain decimals down to a micro-unit read faster in a table than 5.67e-4.
+export const plain = (value: number, digits = 3) => (Number.isFinite(value) ? String(Number(value.toPrecision(digits))) : '—');
