@@ -37,6 +37,8 @@ export function createApp(opts: AppOptions): Express {
   const { db, mailer } = opts;
   const app = express();
   app.disable('x-powered-by');
+  // In production TLS ends at a proxy; trusting its X-Forwarded-Proto lets Secure cookies be set.
+  if (opts.production) app.set('trust proxy', 1);
   app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'worker-src': ["'self'", 'blob:'] } } }));
   const json = express.json({ limit: '1mb' });
   // Saved runs carry large result arrays; their route parses its own body with a larger limit.

@@ -87,3 +87,17 @@ describe('GET /api/auth/me and POST /api/auth/logout', () => {
     expect(accepted.status).toBe(204);
   });
 });
+
+describe('session cookie in production', () => {
+  it('marks the cookie Secure, HttpOnly and SameSite=Lax behind a TLS proxy', async () => {
+    const { createApp } = await import('../../server/app');
+    const { createOutboxMailer } = await import('../../server/mail/mailer');
+    const app = createApp({ db: t.db, mailer: createOutboxMailer(t.db, 'x@y.z'), sessionSecret: 'production-secret-123', production: true });
+    const res = await request(app).post('/api/auth/login').set('Host', HOST).set('Origin', `https://${HOST}`).set('X-Forwarded-Proto', 'https').send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });
+    expect(res.status).toBe(200);
+    const cookie = String(res.headers['set-cookie']);
+    expect(cookie).toMatch(/; Secure/i);
+    expect(cookie).toMatch(/HttpOnly/i);
+    expect(cookie).toMatch(/SameSite=Lax/i);
+  });
+});
