@@ -28,29 +28,31 @@ export function AppShell() {
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:p-2">
         Skip to content
       </a>
-      <header className="border-b border-line bg-white">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
-          <NavLink to={paths.home} className="flex items-center gap-2 text-lg font-bold text-ink">
-            <span aria-hidden="true" className="inline-block h-3 w-3 rounded-full bg-accent" />
-            Motewalk
-          </NavLink>
-          <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
+      <header className="border-b border-line bg-white print:hidden">
+        <div className="mx-auto max-w-6xl px-4 sm:px-6">
+          <div className="flex items-center justify-between gap-4 pt-3">
+            <NavLink to={paths.home} className="flex items-center gap-2 text-lg font-bold text-ink">
+              <span aria-hidden="true" className="inline-block h-3 w-3 rounded-full bg-accent" />
+              Motewalk
+            </NavLink>
+            {user && (
+              <div className="flex items-center gap-3 text-sm">
+                <span>
+                  {user.name} <span className="text-muted">· {ROLE_LABELS[user.role]}</span>
+                </span>
+                <button type="button" className="rounded-md px-2 py-1 font-semibold text-accent hover:bg-accent-soft" onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}>
+                  Sign out
+                </button>
+              </div>
+            )}
+          </div>
+          <nav aria-label="Main" className="-mx-3 flex flex-wrap gap-x-1 py-2">
             {items.map((n) => (
               <NavLink key={n.to} to={n.to} className={({ isActive }) => `rounded-md px-3 py-1.5 text-sm font-semibold ${isActive ? 'bg-accent-soft text-accent-strong' : 'text-muted hover:text-ink'}`}>
                 {n.label}
               </NavLink>
             ))}
           </nav>
-          {user && (
-            <div className="flex items-center gap-3 text-sm">
-              <span>
-                {user.name} <span className="text-muted">· {ROLE_LABELS[user.role]}</span>
-              </span>
-              <button type="button" className="rounded-md px-2 py-1 font-semibold text-accent hover:bg-accent-soft" onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}>
-                Sign out
-              </button>
-            </div>
-          )}
         </div>
       </header>
       <Outlet />
