@@ -1,0 +1,67 @@
+import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type HoodGeometry, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import type { Hood } from '../../../../shared/schemas/scenario.ts';
+import type { SweepParameter } from './sweep-points.ts';
+
+export type HandCalc =
+  | { kind: 'airflow'; captureVelocity_mPerS: number; airflow_m3PerS: number; distance_m: number }
+  | { kind: 'distance'; captureVelocity_mPerS: number; distance_m: number | null; airflow_m3PerS: number }
+  | { kind: 'faceScale'; captureVelocity_mPerS: number; faceScale: number | null; airflow_m3PerS: number; distance_m: number };
+
+/** The published equation behind each answer, quoted in the sentence so the engineer can redo it by hand. */
+export const HOOD_EQUATION: Record<Hood['kind'], string> = {
+  plain: 'Q = V (10 X² + A)',
+  flanged: 'Q = 0.75 V (10 X² + A)',
+  slot: 'Q = 3.7 L V X',
+  'flanged-slot': 'Q = 2.6 L V X',
+  booth: 'Q = V W H',
+};
+
+// The engine reads faceWidth as a slot's length, so the hand calculation does the same.
+export function hoodGeometry(hood: Pick<Hood, 'kind' | 'faceWidth_m' | 'faceHeight_m'>): HoodGeometry {
+  return { kind: hood.kind, faceArea_m2: hood.faceWidth_m * hood.faceHeight_m, slotLength_m: hood.faceWidth_m };
+}
+
+/**
+ * The design capture velocity is the low end of the published range for the release type: the
+ * least a designer may choose, so the comparison with the simulation is not padded by a margin.
+ */
+export const designCaptureVelocity_mPerS = (release: ReleaseCondition) => captureVelocityRange(release).min_mPerS;
+
+// Centre-line velocity falls monotonically with distance, so bisection finds where it meets V.
+function reachAt(hood: Hood, velocity_mPerS: number): number | null {
+  const geometry = hoodGeometry(hood);
+  const speed = (x: number) => hoodCenterlineVelocity({ ...geometry, airflow_m3PerS: hood.airflow_m3PerS }, x);
+  if (hood.kind === 'booth' || speed(0) < velocity_mPerS) return null;
+  let lo = 0;
+  let hi = 1;
+  while (speed(hi) >= velocity_mPerS && hi < 1e3) hi *= 2;
+  for (let i = 0; i < 80; i++) {
+    const mid = (lo + hi) / 2;
+    if (speed(mid) >= velocity_mPerS) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+// Q = V·f(X) grows with face area for openings and with slot length for slots, so the largest face that still reaches V at X is the answer.
+function largestFaceScale(hood: Hood, velocity_mPerS: number, distance_m: number): number | null {
+  const reaches = (s: number) => hoodRequiredAirflow(hoodGeometry({ ...hood, faceWidth_m: hood.faceWidth_m * s, faceHeight_m: hood.faceHeight_m * s }), velocity_mPerS, distance_m) <= hood.airflow_m3PerS;
+  if (hood.kind === 'booth' || !reaches(1e-6)) return null;
+  let lo = 1e-6;
+  let hi = 1;
+  while (reaches(hi) && hi < 1e3) hi *= 2;
+  for (let i = 0; i < 80; i++) {
+    const mid = (lo + hi) / 2;
+    if (reaches(mid)) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** The Dalla Valle / ACGIH answer to the same question the sweep asks, at the scenario's own hood and source distance. */
+export function handCalcAnswer(hood: Hood, distance_m: number, release: ReleaseCondition, parameter: SweepParameter): HandCalc {
+  const v = designCaptureVelocity_mPerS(release);
+  if (parameter === 'airflow') return { kind: 'airflow', captureVelocity_mPerS: v, airflow_m3PerS: hoodRequiredAirflow(hoodGeometry(hood), v, Math.max(0, distance_m)), distance_m };
+  if (parameter === 'distance') return { kind: 'distance', captureVelocity_mPerS: v, distance_m: reachAt(hood, v), airflow_m3PerS: hood.airflow_m3PerS };
+  return { kind: 'faceScale', captureVelocity_mPerS: v, faceScale: largestFaceScale(hood, v, Math.max(0, distance_m)), airflow_m3PerS: hood.airflow_m3PerS, distance_m };
+}
