@@ -8,7 +8,7 @@ const hood = stoneBench().hoods[0];
 describe('sweep sentences', () => {
   it('says the crossing is interpolated linearly and between which points', () => {
     const text = crossingSentence({ kind: 'interpolated', value: 0.5, meets: 0.6, fails: 0.4 }, 'airflow', 50);
-    expect(text).toBe('The least airflow that meets the target (the upper 95 % bound at or below 50 % of the limit) is about 1,800 m³/h, interpolated linearly between the swept points at 2,160 m³/h (meets) and 1,440 m³/h (does not).');
+    expect(text).toBe('The least airflow that meets the target (the upper 95 % bound at or below 50 % of the limit) is about 1,800 m³/h, interpolated linearly between the swept points at 2,160 m³/h (meets) and 1,440 m³/h (does not); more points between them would pin it down.');
     expect(crossingSentence({ kind: 'beyond-range', value: 0.6 }, 'distance', 50)).toMatch(/^Even the largest distance swept, 0.6 m, meets the target/);
     expect(crossingSentence({ kind: 'none' }, 'faceScale', 50)).toMatch(/^No swept point meets the target/);
   });

@@ -18,7 +18,7 @@ export function crossingSentence(crossing: Crossing, parameter: SweepParameter, 
   if (crossing.kind === 'beyond-range') {
     return `Even the ${parameter === 'distance' ? 'largest' : 'smallest'} ${QUANTITY[parameter]} swept, ${f(crossing.value)}, meets the target (${target}), so the ${best} that does lies beyond the range swept.`;
   }
-  return `The ${best} that meets the target (${target}) is about ${f(crossing.value)}, interpolated linearly between the swept points at ${f(crossing.meets)} (meets) and ${f(crossing.fails)} (does not).`;
+  return `The ${best} that meets the target (${target}) is about ${f(crossing.value)}, interpolated linearly between the swept points at ${f(crossing.meets)} (meets) and ${f(crossing.fails)} (does not); more points between them would pin it down.`;
 }
 
 export function handCalcSentence(calc: HandCalc, release: ReleaseCondition, equation: string): string {

@@ -1,0 +1,32 @@
+import type { ReleaseCondition } from '../../../../shared/physics/index';
+import type { Hood } from '../../../../shared/schemas/scenario';
+import { handCalcAnswer, HOOD_EQUATION } from '../lib/hand-calc';
+import { PARAMETER } from '../lib/parameter-format';
+import { crossingSentence, disagreementSentence, handCalcSentence } from '../lib/sweep-summary';
+import type { SweepParameter } from '../lib/sweep-points';
+import { targetCrossing, type CrossingPoint } from '../lib/target-crossing';
+
+type Props = { points: CrossingPoint[]; parameter: SweepParameter; targetPercent: number; hood: Hood; distance_m: number; release: ReleaseCondition };
+
+// Both answers side by side: the simulated dose and the capture-velocity rule disagree often enough that the engineer must see both.
+export function SweepAnswer({ points, parameter, targetPercent, hood, distance_m, release }: Props) {
+  const crossing = targetCrossing(points, targetPercent, PARAMETER[parameter].preferred);
+  const calc = handCalcAnswer(hood, distance_m, release, parameter);
+  return (
+    <section aria-labelledby="sweep-answer-heading" className="grid gap-3 md:grid-cols-2">
+      <h2 id="sweep-answer-heading" className="md:col-span-2">What the sweep says</h2>
+      <div className="rounded-lg border border-accent bg-accent-soft p-4 text-sm">
+        <h3 className="mb-1 font-semibold">Simulation</h3>
+        <p data-testid="sweep-meets">{crossingSentence(crossing, parameter, targetPercent)}</p>
+      </div>
+      <div className="rounded-lg border border-line bg-white p-4 text-sm">
+        <h3 className="mb-1 font-semibold">Capture-velocity rule</h3>
+        <p data-testid="sweep-hand-calc">{handCalcSentence(calc, release, `Dalla Valle / ACGIH, ${HOOD_EQUATION[hood.kind]}`)}</p>
+      </div>
+      <p data-testid="sweep-disagreement" className="rounded-lg border border-line bg-paper-deep p-4 text-sm md:col-span-2">
+        <strong>Where they differ: </strong>
+        {disagreementSentence(crossing, calc, parameter)}
+      </p>
+    </section>
+  );
+}

@@ -1,0 +1,51 @@
+import { Link } from 'react-router-dom';
+import { BannerBadge } from '../../../components/banner-badge';
+import { Button } from '../../../components/ui/button';
+import { type Column, DataTable } from '../../../components/ui/data-table';
+import { paths } from '../../../config/paths';
+import { downloadCsv, toCsv } from '../../../lib/csv';
+import { sig } from '../../../lib/format';
+import type { PointResult } from '../lib/point-result';
+import { formatValue, PARAMETER } from '../lib/parameter-format';
+import type { SweepParameter } from '../lib/sweep-points';
+
+export type TableRow = { index: number; value: number; result: PointResult; saved?: { id: number; name: string }; saving?: boolean };
+
+export function sweepCsv(rows: TableRow[], parameter: SweepParameter): string {
+  const p = PARAMETER[parameter];
+  const header = ['point', `${parameter}_${p.unit.replace(/\W+/g, '')}`, 'fraction', 'twa8h_mgPerM3', 'twa8h_ci95_lo_mgPerM3', 'twa8h_ci95_hi_mgPerM3', 'percent_of_limit', 'percent_of_limit_upper', 'banner', 'particles'];
+  return toCsv(header, rows.map((r) => [r.index + 1, p.fromSi(r.value), r.result.fraction, r.result.twa8h_mgPerM3, ...r.result.twa8hCi95_mgPerM3, r.result.percentOfLimit, r.result.percentOfLimitUpper, r.result.banner, r.result.particles]));
+}
+
+export function SweepTable({ rows, parameter, onSave, canSave }: { rows: TableRow[]; parameter: SweepParameter; onSave: (row: TableRow) => void; canSave: boolean }) {
+  const columns: Column<TableRow>[] = [
+    { key: 'index', header: 'Point', render: (r) => r.index + 1, sortValue: (r) => r.index, align: 'right' },
+    { key: 'value', header: PARAMETER[parameter].label, render: (r) => formatValue(parameter, r.value), sortValue: (r) => r.value, align: 'right' },
+    { key: 'twa', header: '8-h TWA (mg/m³)', render: (r) => sig(r.result.twa8h_mgPerM3), sortValue: (r) => r.result.twa8h_mgPerM3, align: 'right' },
+    { key: 'ci', header: '95 % CI (mg/m³)', render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`, align: 'right' },
+    { key: 'pct', header: '% of limit', render: (r) => `${sig(r.result.percentOfLimit)} %`, sortValue: (r) => r.result.percentOfLimit, align: 'right' },
+    { key: 'upper', header: 'Upper 95 % (% of limit)', render: (r) => `${sig(r.result.percentOfLimitUpper)} %`, sortValue: (r) => r.result.percentOfLimitUpper, align: 'right' },
+    { key: 'banner', header: 'Banner', render: (r) => <BannerBadge banner={r.result.banner} />, sortValue: (r) => ['clear', 'watch', 'act'].indexOf(r.result.banner) },
+    {
+      key: 'save',
+      header: 'Keep',
+      render: (r) =>
+        r.saved ? (
+          <Link className="font-semibold text-accent underline" to={paths.scenario(r.saved.id)}>Open “{r.saved.name}”</Link>
+        ) : canSave ? (
+          <Button variant="secondary" className="no-print px-2 py-1" disabled={r.saving} onClick={() => onSave(r)}>
+            {r.saving ? 'Saving…' : 'Save as new scenario'}
+          </Button>
+        ) : null,
+    },
+  ];
+  return (
+    <section aria-labelledby="sweep-points-heading" className="space-y-2">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 id="sweep-points-heading">Points</h2>
+        <Button variant="secondary" onClick={() => downloadCsv(`motewalk-sweep-${parameter}.csv`, sweepCsv(rows, parameter))}>Download CSV</Button>
+      </div>
+      <DataTable rows={rows} columns={columns} rowKey={(r) => r.index} caption="Sweep points" initialSort={{ key: 'value', dir: 'asc' }} />
+    </section>
+  );
+}
