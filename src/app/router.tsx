@@ -24,6 +24,8 @@ const HoodCalculatorPage = lazy(() => import('../features/calculators/components
 const AgentsPage = lazy(() => import('../features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
 const SizeProfilesPage = lazy(() => import('../features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })));
 const SizeProfileDetailPage = lazy(() => import('../features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })));
+const SweepRoute = lazy(() => import('./routes/sweep').then((m) => ({ default: m.SweepRoute })));
+const ReportRoute = lazy(() => import('./routes/report').then((m) => ({ default: m.ReportRoute })));
 const CompareRoute = lazy(() => import('./routes/compare').then((m) => ({ default: m.CompareRoute })));
 const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
@@ -56,6 +58,8 @@ export const router = createBrowserRouter([
       { path: paths.outbox, element: guarded('outbox:read', <OutboxPage />) },
       { path: paths.particleCalculator, element: guarded('calculators:use', <ParticleCalculatorPage />) },
       { path: paths.hoodCalculator, element: guarded('calculators:use', <HoodCalculatorPage />) },
+      { path: paths.sweep(':id'), element: guarded('scenarios:write', <SweepRoute />) },
+      { path: paths.report(':id'), element: guarded('scenarios:read', <ReportRoute />) },
       { path: paths.compare, element: guarded('scenarios:read', <CompareRoute />) },
       { path: '*', element: <NotFoundRoute /> },
     ],
