@@ -18,6 +18,8 @@ try {
   let n = 0;
   console.log(`Load: ${RATE} requests/s offered over ${CONNECTIONS} connections for ${DURATION_S} s against ${server.url} (reads 80 %, writes 20 %)`);
   const latencies: number[] = [];
+  let finish: (r: autocannon.Result) => void = () => {};
+  const done = new Promise<autocannon.Result>((resolve) => (finish = resolve));
   const instance = autocannon({
     url: server.url,
     connections: CONNECTIONS,
@@ -35,9 +37,12 @@ try {
         setupRequest: (req) => ({ ...req, body: JSON.stringify({ name: `Load site ${(n += 1)}`, data: { address: 'loopback' } }) }),
       },
     ],
+  }, (err, r) => {
+    if (err) throw err;
+    finish(r);
   });
-  instance.on('response', (_client, _status, _bytes, ms) => latencies.push(ms));
-  const result = await instance;
+  instance.on('response', (_client: unknown, _status: number, _bytes: number, ms: number) => latencies.push(ms));
+  const result = await done;
   latencies.sort((a, b) => a - b);
   const [p50, p95, p99] = [50, 95, 99].map((p) => percentile(latencies, p));
   const errors = result.errors + result.timeouts + result.non2xx;
