@@ -106,9 +106,8 @@ export function evaluateHoods(p: Float64Array, count: number, x: number, y: numb
     const area = p[o + 16];
     let resistance = slot ? p[o + 17] * p[o + 19] * r : p[o + 17] * (10 * r * r + area);
     if (resistance < area) resistance = area;
-    let speed = q / resistance;
-    if (!flanged) speed *= 0.5 * (1 + a / r);
-    const scale = speed / r;
+    // One division: q/(R·r), times (1 + cos θ)/2 = (r + a)/(2r) off a plain face.
+    const scale = flanged ? q / (resistance * r) : (0.5 * q * (r + a)) / (resistance * r * r);
     out[0] -= scale * sx;
     out[1] -= scale * sy;
     out[2] -= scale * sz;

@@ -1,12 +1,10 @@
-import { evaluateHoods } from './hood-field.ts';
+import { HOOD_STRIDE } from './hood-field.ts';
 import type { ParticleArrays } from './release.ts';
 import type { Xoshiro128 } from './rng.ts';
 import { stepRule } from './step-rule.ts';
 import type { PreparedScenario } from './types.ts';
-import { fillNormals } from './ziggurat.ts';
 
 export const NORMAL_BLOCK = 3 * 2048;
-const STEPS_PER_VISIT = 64;
 // Steps whose hood drift uses under a fifth of the drift limit keep Euler: their lag is negligible.
 const MIDPOINT_SHARE = 0.2;
 
@@ -23,6 +21,9 @@ export class Kernel {
   readonly hoods: Float64Array;
   readonly hoodCount: number;
   readonly driftFraction: number;
+  readonly midpointLimit: number;
+  /** Hood 0 unpacked (see packHoods), so the common single-hood case runs on locals. */
+  readonly h0: Hood0;
   readonly stepFraction: number;
   readonly zoneFloor_m: number;
   readonly hoodFloor_m: number;
@@ -45,8 +46,16 @@ export class Kernel {
   readonly nBins: number;
   readonly frames: number;
   readonly frameInterval_s: number;
+  readonly ids: Int32Array;
+  readonly fate: Int8Array;
+  readonly fateMass_mg = new Float64Array(4);
+  readonly deposition_mg: Float64Array;
+  readonly particleMass_mg: Float64Array;
+  readonly depositionNx: number;
+  readonly depositionNy: number;
   normalIndex = NORMAL_BLOCK;
   steps = 0;
+  live: number;
 
   constructor(p: PreparedScenario, readonly a: ParticleArrays, readonly rng: Xoshiro128) {
     const rule = stepRule(p);
@@ -62,6 +71,8 @@ export class Kernel {
     this.hoods = p.hoods.params;
     this.hoodCount = p.hoods.count;
     this.driftFraction = rule.driftFraction;
+    this.midpointLimit = MIDPOINT_SHARE * rule.driftFraction;
+    this.h0 = unpackHood(p.hoods.params, p.hoods.count);
     this.stepFraction = p.stepFraction;
     this.zoneFloor_m = rule.zoneFloor_m;
     this.hoodFloor_m = rule.hoodFloor_m;
@@ -84,160 +95,75 @@ export class Kernel {
     this.duration = p.duration_s;
     this.invBin = 1 / p.timeBin_s;
     this.lastBin = p.timeBins - 1;
+    this.ids = Int32Array.from({ length: a.count }, (_, i) => i);
+    this.fate = new Int8Array(a.count).fill(-1);
+    this.depositionNx = p.deposition.nx;
+    this.depositionNy = p.deposition.ny;
+    this.deposition_mg = new Float64Array(p.deposition.nx * p.deposition.ny);
+    this.particleMass_mg = p.bins.particleMass_mg;
+    this.live = a.count;
+    // Frames before a particle exists stay NaN: its first frame is the first one at or after release.
+    for (let i = 0; i < a.count; i++) {
+      const sl = a.slot[i];
+      if (sl < 0) continue;
+      let f = Math.ceil(a.release[i] / this.frameInterval_s);
+      if (f > 0 && (f - 1) * this.frameInterval_s >= a.release[i]) f--;
+      this.nextFrame[sl] = f;
+    }
   }
 }
 
-function reflect(v: number, hi: number): number {
-  while (v < 0 || v > hi) v = v < 0 ? -v : 2 * hi - v;
-  return v;
-}
-
-function wrap(v: number, hi: number): number {
-  v %= hi;
-  return v < 0 ? v + hi : v;
-}
-
-function recordFrames(k: Kernel, sl: number, t: number, x: number, y: number, z: number): void {
-  while (k.nextFrame[sl] < k.frames && k.nextFrame[sl] * k.frameInterval_s <= t) {
-    const o = (sl * k.frames + k.nextFrame[sl]) * 3;
-    k.trajectories[o] = x;
-    k.trajectories[o + 1] = y;
-    k.trajectories[o + 2] = z;
-    k.nextFrame[sl]++;
-  }
+function swap(arr: Float64Array | Int32Array, i: number, j: number): void {
+  const v = arr[i];
+  arr[i] = arr[j];
+  arr[j] = v;
 }
 
 /**
- * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (0 captured, 1 settled,
- * 2 exhausted, 3 airborne at the end) or −1 while it lives. Allocation-free arithmetic only.
+ * Tallies particle i's fate and keeps live particles packed at the front: it swaps with the last
+ * live one, so its final state ends up behind the live block and no pass visits it again.
  */
-export function walk(k: Kernel, i: number): number {
+export function retire(k: Kernel, i: number, f: number): void {
   const a = k.a;
-  let x = a.x[i];
-  let y = a.y[i];
-  let z = a.z[i];
-  let t = a.t[i];
-  const b = a.bin[i];
-  const duration = k.duration;
-  const end = a.exhaustAt[i] < duration ? a.exhaustAt[i] : duration;
-  const vs = k.settling[b];
-  const s2D = k.sqrt2D[b];
-  const dFactor = k.diffusionFactor[b];
-  const sl = a.slot[i];
-  const field = k.field;
-  const normals = k.normals;
-  const R = k.R;
-  const R2 = R * R;
-  const nh = k.hoodCount;
-  const hoods = k.hoods;
-  const rng = k.rng;
-  const residence = k.zoneResidence_s;
-  const { cx, cy, cz, zoneFloor_m, hoodFloor_m, draftX, draftY, maxStep_s, minStep_s, stepFraction, driftFraction, invBin, lastBin, nBins, L, W, H, wrapX, wrapY } = k;
-  let n = k.normalIndex;
-  const diffusivity = 0.5 * s2D * s2D;
-  let fate = -1;
-  let steps = 0;
-  let lastHood = -1;
-  let lastHeight = 0;
-  let lastDt = 0;
-  while (steps < STEPS_PER_VISIT) {
-    const ex = x - cx;
-    const ey = y - cy;
-    const ez = z - cz;
-    const r2 = ex * ex + ey * ey + ez * ez;
-    let d = Math.sqrt(r2) - R;
-    if (d < 0) d = -d;
-    if (d < zoneFloor_m) d = zoneFloor_m;
-    let dh = Infinity;
-    let vx = draftX;
-    let vy = draftY;
-    let vz = 0;
-    if (nh > 0) {
-      field[0] = vx;
-      field[1] = vy;
-      field[2] = 0;
-      if (evaluateHoods(hoods, nh, x, y, z, field) >= 0) {
-        fate = 0;
-        break;
-      }
-      // Brownian bridge: a walk that starts and ends in front of a face may have touched it in
-      // between, with probability exp(−a₀a₁/(D·dt)); sampling it removes the O(√dt) capture deficit.
-      const hood = field[4];
-      const height = field[5];
-      if (hood === lastHood && height > 0 && lastHeight > 0) {
-        const q = (height * lastHeight) / (diffusivity * lastDt);
-        if (q < 20 && rng.nextUniform() < Math.exp(-q)) {
-          fate = 0;
-          break;
-        }
-      }
-      lastHood = hood;
-      lastHeight = height;
-      dh = field[3] < hoodFloor_m ? hoodFloor_m : field[3];
-      vx = field[0];
-      vy = field[1];
-      vz = field[2];
-    }
-    const vzs = vz - vs;
-    const speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vzs);
-    const near = Math.min(dh, d);
-    const drift = Math.min(stepFraction * d, driftFraction * dh) / speed;
-    const dt0 = Math.min(dFactor * near * near, maxStep_s, drift);
-    let dt = Math.max(dt0, minStep_s);
-    if (t + dt > end) dt = end - t;
-    const hoodShift = (Math.abs(vx - draftX) + Math.abs(vy - draftY) + Math.abs(vz)) * dt;
-    if (hoodShift > MIDPOINT_SHARE * driftFraction * dh) {
-      // Midpoint drift: the hood field grows toward the face, and a start-of-step velocity would
-      // lag behind it (Euler), biasing capture low by a few per cent at the default step.
-      field[0] = draftX;
-      field[1] = draftY;
-      field[2] = 0;
-      if (evaluateHoods(hoods, nh, x + 0.5 * dt * vx, y + 0.5 * dt * vy, z + 0.5 * dt * vz, field) < 0) {
-        vx = field[0];
-        vy = field[1];
-        vz = field[2];
-      }
-    }
-    if (r2 < R2) {
-      let tb = (t * invBin) | 0;
-      if (tb > lastBin) tb = lastBin;
-      residence[tb * nBins + b] += dt;
-    }
-    if (sl >= 0) recordFrames(k, sl, t, x, y, z);
-    if (n === NORMAL_BLOCK) {
-      fillNormals(rng, normals);
-      n = 0;
-    }
-    lastDt = dt;
-    const sigma = s2D * Math.sqrt(dt);
-    x += vx * dt + sigma * normals[n];
-    y += vy * dt + sigma * normals[n + 1];
-    let zz = z + vz * dt + sigma * normals[n + 2];
-    n += 3;
-    if (x < 0 || x > L) x = wrapX ? wrap(x, L) : reflect(x, L);
-    if (y < 0 || y > W) y = wrapY ? wrap(y, W) : reflect(y, W);
-    if (zz < 0 || zz > H) zz = reflect(zz, H);
-    // Diffusion reflects at the floor; only settling carries a particle onto it, so the
-    // deposition flux is V_TS·C at the floor, as in the well-mixed settling loss V_TS/H.
-    z = zz - vs * dt;
-    t += dt;
-    steps++;
-    if (z < 0) {
-      t += z / vs;
-      z = 0;
-      fate = 1;
-      break;
-    }
-    if (t >= end) {
-      fate = end < duration ? 2 : 3;
-      break;
-    }
+  const mass = k.particleMass_mg[a.bin[i]];
+  k.fateMass_mg[f] += mass;
+  if (f === 1) {
+    const ix = Math.min(k.depositionNx - 1, Math.floor((a.x[i] / k.L) * k.depositionNx));
+    const iy = Math.min(k.depositionNy - 1, Math.floor((a.y[i] / k.W) * k.depositionNy));
+    k.deposition_mg[ix * k.depositionNy + iy] += mass;
   }
-  k.normalIndex = n;
-  k.steps += steps;
-  a.x[i] = x;
-  a.y[i] = y;
-  a.z[i] = z;
-  a.t[i] = t;
-  return fate;
+  k.fate[k.ids[i]] = f;
+  const last = --k.live;
+  swap(a.x, i, last);
+  swap(a.y, i, last);
+  swap(a.z, i, last);
+  swap(a.t, i, last);
+  swap(a.release, i, last);
+  swap(a.exhaustAt, i, last);
+  swap(a.bin, i, last);
+  swap(a.slot, i, last);
+  swap(k.ids, i, last);
 }
+
+export interface Hood0 {
+  x: number; y: number; z: number;
+  nx: number; ny: number; nz: number;
+  e1x: number; e1y: number; e1z: number;
+  e2x: number; e2y: number; e2z: number;
+  halfWidth: number; halfHeight: number;
+  airflow: number; area: number; coefficient: number; slotCoefficient: number; faceVelocity: number;
+  reach: number; boothDepth: number;
+  slot: boolean; flanged: boolean; booth: boolean;
+}
+
+function unpackHood(p: Float64Array, count: number): Hood0 {
+  const v = count > 0 ? p.subarray(0, HOOD_STRIDE) : new Float64Array(HOOD_STRIDE);
+  const kind = v[0];
+  return {
+    x: v[1], y: v[2], z: v[3], nx: v[4], ny: v[5], nz: v[6], e1x: v[7], e1y: v[8], e1z: v[9], e2x: v[10], e2y: v[11], e2z: v[12],
+    halfWidth: v[13], halfHeight: v[14], airflow: v[15], area: v[16], coefficient: v[17], slotCoefficient: v[17] * v[19], faceVelocity: v[18],
+    reach: v[20], boothDepth: v[21],
+    slot: kind === 2 || kind === 3, flanged: kind === 1 || kind === 3 || kind === 4, booth: kind === 4,
+  };
+}
+
