@@ -1,20 +1,7 @@
+import type { Approval } from '../../shared/schemas/workspace-views';
 import type { Db } from '../db/knex';
 
-export type CurrentApproval = {
-  id: number;
-  scenarioId: number;
-  scenarioName: string;
-  runId: number;
-  note: string;
-  reviewDate: string;
-  approvedAt: string;
-  approvedBy: string;
-  banner: 'clear' | 'watch' | 'act' | null;
-  percentOfLimit: number | null;
-  expired: boolean;
-  outOfDate: boolean;
-  needsReview: boolean;
-};
+export type CurrentApproval = Approval;
 
 const today = () => new Date().toISOString().slice(0, 10);
 

@@ -1,3 +1,5 @@
+import { downloadText } from './download';
+
 type Cell = string | number | null | undefined;
 
 // RFC 4180 quoting; a leading =, +, - or @ is prefixed so spreadsheets do not run it as a formula.
@@ -13,12 +15,5 @@ export function toCsv(header: string[], rows: Cell[][]): string {
 }
 
 export function downloadCsv(filename: string, text: string) {
-  const url = URL.createObjectURL(new Blob([text], { type: 'text/csv;charset=utf-8' }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = filename;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  downloadText(filename, text);
 }

@@ -1,20 +1,10 @@
-import type { BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_PEOPLE } from '../../server/db/seed';
-import { launchBrowser, shot, signIn } from '../helpers/browser';
-import { startServer, type RunningServer } from '../helpers/server';
+import { shot, signIn } from '../helpers/browser';
+import { useServerAndBrowser } from '../helpers/e2e-setup';
 
-let server: RunningServer;
-let browser: BrowserContext;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const env = useServerAndBrowser();
 
 const EXPECTED_NAV: Record<string, { home: RegExp; heading: string; nav: string[] }> = {
   admin: { home: /\/people$/, heading: 'People', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Your station', 'Audit trail', 'People', 'Outbox'] },
@@ -29,13 +19,13 @@ async function navLabels(page: Page) {
 
 describe('signing in as each demo role', () => {
   it('prints the URL and every demo sign-in at start-up', () => {
-    for (const p of DEMO_PEOPLE) expect(server.output()).toContain(p.email);
+    for (const p of DEMO_PEOPLE) expect(env.server.output()).toContain(p.email);
   });
 
   for (const person of DEMO_PEOPLE) {
     it(`lands the ${person.role} on their own home with their own navigation`, async () => {
-      const page = await browser.newPage();
-      await signIn(page, server.url, person.email, person.password);
+      const page = await env.browser.newPage();
+      await signIn(page, env.server.url, person.email, person.password);
       const expected = EXPECTED_NAV[person.role];
       await page.waitForURL(expected.home);
       await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(expected.heading);
@@ -48,8 +38,8 @@ describe('signing in as each demo role', () => {
   }
 
   it('shows one message for a wrong password and stays on the sign-in page', async () => {
-    const page = await browser.newPage();
-    await signIn(page, server.url, 'viewer@motewalk.local', 'wrong-password-here');
+    const page = await env.browser.newPage();
+    await signIn(page, env.server.url, 'viewer@motewalk.local', 'wrong-password-here');
     await expect.poll(() => page.getByRole('alert').textContent()).toMatch(/e-mail or password is not right/);
     await shot(page, 'foundation-sign-in-refused');
     await page.close();
@@ -59,8 +49,8 @@ describe('signing in as each demo role', () => {
 describe('inviting a colleague', () => {
   it('invites a person, opens the link from the outbox, sets a password and signs in as them', async () => {
     const admin = DEMO_PEOPLE.find((p) => p.role === 'admin')!;
-    const page = await browser.newPage();
-    await signIn(page, server.url, admin.email, admin.password);
+    const page = await env.browser.newPage();
+    await signIn(page, env.server.url, admin.email, admin.password);
     await page.waitForURL(/\/people$/);
     const form = page.getByRole('form', { name: 'Invite a person' });
     await form.getByLabel('Name').fill('Noor Castellan');
@@ -86,7 +76,7 @@ describe('inviting a colleague', () => {
     await page.getByText('Password set for noor.castellan@motewalk.local').waitFor();
     await shot(page, 'foundation-password-set');
     await page.getByRole('link', { name: 'Sign in now' }).click();
-    await signIn(page, server.url, 'noor.castellan@motewalk.local', 'noor-long-password');
+    await signIn(page, env.server.url, 'noor.castellan@motewalk.local', 'noor-long-password');
     await page.waitForURL(/\/scenarios$/);
     expect(await navLabels(page)).toEqual(EXPECTED_NAV.viewer.nav);
     await page.close();

@@ -1,29 +1,19 @@
-import type { BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_PEOPLE } from '../../server/db/seed';
-import { launchBrowser, shot, signIn } from '../helpers/browser';
-import { startServer, type RunningServer } from '../helpers/server';
+import { shot, signIn } from '../helpers/browser';
+import { useServerAndBrowser } from '../helpers/e2e-setup';
 
-let server: RunningServer;
-let browser: BrowserContext;
+const env = useServerAndBrowser();
 const engineer = DEMO_PEOPLE.find((p) => p.role === 'engineer')!;
 
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
 async function open(): Promise<Page> {
-  const page = await browser.newPage();
+  const page = await env.browser.newPage();
   if (!(await page.context().cookies()).some((c) => c.name === 'motewalk.sid')) {
-    await signIn(page, server.url, engineer.email, engineer.password);
+    await signIn(page, env.server.url, engineer.email, engineer.password);
     await page.waitForURL(/\/scenarios$/);
   } else {
-    await page.goto(`${server.url}/scenarios`);
+    await page.goto(`${env.server.url}/scenarios`);
   }
   return page;
 }
@@ -43,11 +33,11 @@ describe('stored markup is shown as text, never run', () => {
     const detail = await page.evaluate(async (id) => (await (await fetch(`/api/scenarios/${id}`)).json()) as { version: number }, list);
     const renamed = await post(page, `/api/scenarios/${list}`, { version: detail.version, name: '<script>window.__pwned=3</script>' }, 'PATCH');
     expect(renamed.status).toBe(200);
-    await page.goto(`${server.url}/places`);
+    await page.goto(`${env.server.url}/places`);
     await page.getByText('<img src=x onerror="window.__pwned=1">').first().waitFor();
-    await page.goto(`${server.url}/scenarios`);
+    await page.goto(`${env.server.url}/scenarios`);
     await page.getByRole('link', { name: '<script>window.__pwned=3</script>' }).waitFor();
-    await page.goto(`${server.url}/scenarios/${list}`);
+    await page.goto(`${env.server.url}/scenarios/${list}`);
     await page.getByRole('heading', { level: 1, name: '<script>window.__pwned=3</script>' }).waitFor();
     expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
     expect(await page.locator('img[src="x"]').count()).toBe(0);
@@ -61,8 +51,8 @@ describe('two people editing one scenario', () => {
     const a = await open();
     const b = await open();
     const id = await a.evaluate(async () => (await (await fetch('/api/scenarios?sort=name&order=asc&pageSize=1')).json()).items[0].id as number);
-    await a.goto(`${server.url}/scenarios/${id}`);
-    await b.goto(`${server.url}/scenarios/${id}`);
+    await a.goto(`${env.server.url}/scenarios/${id}`);
+    await b.goto(`${env.server.url}/scenarios/${id}`);
     await a.getByLabel('Scenario name').fill('Renamed in tab A');
     await b.getByLabel('Scenario name').fill('Renamed in tab B');
     await a.getByRole('button', { name: 'Save changes' }).click();

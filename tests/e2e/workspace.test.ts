@@ -1,28 +1,18 @@
 import path from 'node:path';
-import type { BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_PEOPLE } from '../../server/db/seed';
-import { launchBrowser, shot, signIn } from '../helpers/browser';
-import { startServer, type RunningServer } from '../helpers/server';
+import { shot, signIn } from '../helpers/browser';
+import { useServerAndBrowser } from '../helpers/e2e-setup';
 
-let server: RunningServer;
-let browser: BrowserContext;
+const env = useServerAndBrowser();
 let runUrl = '';
 let scenarioUrl = '';
 const person = (role: string) => DEMO_PEOPLE.find((p) => p.role === role)!;
 
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
 async function asEngineer(): Promise<Page> {
-  const page = await browser.newPage();
-  await signIn(page, server.url, person('engineer').email, person('engineer').password);
+  const page = await env.browser.newPage();
+  await signIn(page, env.server.url, person('engineer').email, person('engineer').password);
   await page.waitForURL(/\/scenarios$/);
   return page;
 }
@@ -82,14 +72,14 @@ describe('an engineer builds, runs and saves a scenario; a viewer reads it', () 
     await page.reload();
     const link = page.getByRole('table', { name: 'Saved runs' }).getByRole('link').first();
     await link.waitFor();
-    runUrl = new URL((await link.getAttribute('href'))!, server.url).toString();
+    runUrl = new URL((await link.getAttribute('href'))!, env.server.url).toString();
     await shot(page, 'workspace-scenario-saved');
     await page.close();
   });
 
   it('lets a viewer open the saved run without re-running and refuses edits', async () => {
-    const page = await browser.newPage();
-    await signIn(page, server.url, person('viewer').email, person('viewer').password);
+    const page = await env.browser.newPage();
+    await signIn(page, env.server.url, person('viewer').email, person('viewer').password);
     await page.waitForURL(/\/scenarios$/);
     await page.goto(runUrl);
     await page.getByRole('heading', { name: /Run of “Slot hood, dragged closer”/ }).waitFor();

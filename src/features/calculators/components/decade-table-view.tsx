@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { decadeColumns, decadeRows, decadeTableCsv, decadeTableTsv } from '../lib/decade-table';
-import { copyText, downloadText } from '../lib/download';
+import { copyText, downloadText } from '../../../lib/download';
 import { diameterTick } from '../lib/chart-ticks';
 import { displayNumber } from '../lib/format';
 import type { ParticleMedium } from '../lib/particle-properties';

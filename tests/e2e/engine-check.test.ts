@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { DEMO_PEOPLE } from '../../server/db/seed';
+import { shot, signIn } from '../helpers/browser';
+import { useServerAndBrowser } from '../helpers/e2e-setup';
+
+const env = useServerAndBrowser();
+
+describe('the engine in the browser worker pool', () => {
+  it('cancels a run mid-way, then runs the default demo to a result with progress', async () => {
+    const eng = DEMO_PEOPLE.find((p) => p.role === 'engineer')!;
+    const page = await env.browser.newPage();
+    await signIn(page, env.server.url, eng.email, eng.password);
+    await page.waitForURL(/\/scenarios$/);
+    await page.goto(`${env.server.url}/dev/engine`);
+    await page.getByRole('button', { name: 'Run' }).click();
+    await page.getByRole('progressbar', { name: 'Simulation progress' }).waitFor();
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    await page.getByText('Cancelled.').waitFor();
+    expect(await page.getByTestId('engine-result').count()).toBe(0);
+
+    await page.getByRole('button', { name: 'Run' }).click();
+    const progress = page.getByRole('progressbar', { name: 'Simulation progress' });
+    await progress.waitFor();
+    await page.getByTestId('engine-result').waitFor({ timeout: 90_000 });
+    expect(await page.getByTestId('engine-result').textContent()).toMatch(/mg\/m³/);
+    await shot(page, 'engine-check');
+    await page.close();
+  });
+});
