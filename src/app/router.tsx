@@ -27,6 +27,7 @@ const SizeProfileDetailPage = lazy(() => import('../features/size-profiles/compo
 const SweepRoute = lazy(() => import('./routes/sweep').then((m) => ({ default: m.SweepRoute })));
 const ReportRoute = lazy(() => import('./routes/report').then((m) => ({ default: m.ReportRoute })));
 const CompareRoute = lazy(() => import('./routes/compare').then((m) => ({ default: m.CompareRoute })));
+const EngineCheckPage = lazy(() => import('../features/engine-check/components/engine-check-page').then((m) => ({ default: m.EngineCheckPage })));
 const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (
@@ -61,6 +62,7 @@ export const router = createBrowserRouter([
       { path: paths.sweep(':id'), element: guarded('scenarios:write', <SweepRoute />) },
       { path: paths.report(':id'), element: guarded('scenarios:read', <ReportRoute />) },
       { path: paths.compare, element: guarded('scenarios:read', <CompareRoute />) },
+      { path: paths.engineCheck, element: guarded('runs:write', <EngineCheckPage />) },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },
