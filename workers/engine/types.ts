@@ -110,5 +110,7 @@ export interface Results {
   crossChecks: { fraction: Fraction; wellMixed_mgPerM3: number; nearField_mgPerM3: number; farField_mgPerM3: number; eddySteady_mgPerM3: number };
   maps: { deposition_mgPerM2: Grid; captureVelocity_mPerS: Grid & { height_m: number } };
   trajectories: { particles: number; frames: number; frameInterval_s: number; positions_m: Float32Array; bins: Int32Array };
+  /** Diameter per size bin (index = trajectories.bins value), so views can label particles in µm. */
+  sizeBins: { aerodynamic_m: number[]; physical_m: number[] };
   performance: { particleSteps: number; wallTime_s: number; particleStepsPerS: number };
 }

@@ -1,0 +1,40 @@
+import { describe, expect, it } from 'vitest';
+import { combineBatches } from './combine.ts';
+import { prepareTest, runAll } from './engine.test-helper.ts';
+import { releaseParticles } from './release.ts';
+import { batchStream } from './rng.ts';
+import { workstation } from './workstation.test-helper.ts';
+
+const small = { ...workstation, run: { particles: 800, batches: 2, seed: 5 } };
+
+describe('results for views', () => {
+  it('carries each size bin’s aerodynamic and physical diameter as plain arrays', () => {
+    const p = prepareTest(small);
+    const r = combineBatches(p, runAll(p));
+    expect(Array.isArray(r.sizeBins.aerodynamic_m)).toBe(true);
+    expect(r.sizeBins.aerodynamic_m).toEqual(Array.from(p.bins.aerodynamic_m));
+    expect(r.sizeBins.physical_m).toEqual(Array.from(p.bins.physical_m));
+    for (const b of r.trajectories.bins) if (b >= 0) expect(r.sizeBins.aerodynamic_m[b]).toBeGreaterThan(0);
+  });
+
+  it('leaves trajectory frames before release NaN, and a particle’s path is one unbroken stretch', () => {
+    const p = prepareTest(small);
+    const released = releaseParticles(p, batchStream(p.seed, 0));
+    const releaseBySlot = new Float64Array(p.trajectory.particles).fill(NaN);
+    for (let i = 0; i < released.count; i++) if (released.slot[i] >= 0) releaseBySlot[released.slot[i]] = released.release[i];
+    const positions = runAll(p)[0].trajectories;
+    const { frames, frameInterval_s } = p.trajectory;
+    let lateStarts = 0;
+    releaseBySlot.forEach((release, slot) => {
+      if (Number.isNaN(release)) return;
+      const shown = Array.from({ length: frames }, (_, f) => !Number.isNaN(positions[(slot * frames + f) * 3]));
+      const first = shown.indexOf(true);
+      expect(first * frameInterval_s).toBeGreaterThanOrEqual(release);
+      expect((first - 1) * frameInterval_s).toBeLessThan(release);
+      if (first > 0) lateStarts++;
+      const last = shown.lastIndexOf(true);
+      expect(shown.slice(first, last + 1).every(Boolean)).toBe(true);
+    });
+    expect(lateStarts).toBeGreaterThan(0);
+  });
+});
