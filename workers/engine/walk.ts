@@ -4,16 +4,6 @@ import { fillNormals } from './ziggurat.ts';
 
 const STEPS_PER_VISIT = 64;
 
-function reflect(v: number, hi: number): number {
-  while (v < 0 || v > hi) v = v < 0 ? -v : 2 * hi - v;
-  return v;
-}
-
-function wrap(v: number, hi: number): number {
-  v %= hi;
-  return v < 0 ? v + hi : v;
-}
-
 /**
  * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (0 captured, 1 settled,
  * 2 exhausted, 3 airborne at the end) or −1 while it lives. Allocation-free arithmetic only.
@@ -220,9 +210,24 @@ export function walk(k: Kernel, i: number): number {
     y += vy * dt + sigma * normals[n + 1];
     let zz = z + vz * dt + sigma * normals[n + 2];
     n += 3;
-    if (x < 0 || x > L) x = wrapX ? wrap(x, L) : reflect(x, L);
-    if (y < 0 || y > W) y = wrapY ? wrap(y, W) : reflect(y, W);
-    if (zz < 0 || zz > H) zz = reflect(zz, H);
+    // Walls inline: a call here would box x, y and z on every step, not just at the wall.
+    if (x < 0 || x > L) {
+      if (wrapX) {
+        while (x < 0) x += L;
+        while (x > L) x -= L;
+      } else {
+        while (x < 0 || x > L) x = x < 0 ? -x : 2 * L - x;
+      }
+    }
+    if (y < 0 || y > W) {
+      if (wrapY) {
+        while (y < 0) y += W;
+        while (y > W) y -= W;
+      } else {
+        while (y < 0 || y > W) y = y < 0 ? -y : 2 * W - y;
+      }
+    }
+    while (zz < 0 || zz > H) zz = zz < 0 ? -zz : 2 * H - zz;
     // Diffusion reflects at the floor; only settling carries a particle onto it, so the
     // deposition flux is V_TS·C at the floor, as in the well-mixed settling loss V_TS/H.
     z = zz - vs * dt;
