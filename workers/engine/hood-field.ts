@@ -81,7 +81,8 @@ export function evaluateHoods(p: Float64Array, count: number, x: number, y: numb
       sy -= along * p[o + 8];
       sz -= along * p[o + 9];
     }
-    const r = Math.sqrt(sx * sx + sy * sy + sz * sz);
+    const s2 = sx * sx + sy * sy + sz * sz;
+    const r = Math.sqrt(s2);
     // A lower bound on the distance to the face outline is all the step rule needs, and it
     // reuses r: the outline lies within its half-diagonal (slot: half-width) of the centre (line).
     const aa = a < 0 ? -a : a;
@@ -104,10 +105,12 @@ export function evaluateHoods(p: Float64Array, count: number, x: number, y: numb
     const flanged = kind === 1 || kind === 3 || kind === 4;
     if (flanged && a <= 0) continue;
     const area = p[o + 16];
-    let resistance = slot ? p[o + 17] * p[o + 19] * r : p[o + 17] * (10 * r * r + area);
+    let resistance = slot ? p[o + 17] * p[o + 19] * r : p[o + 17] * (10 * s2 + area);
     if (resistance < area) resistance = area;
-    // One division: q/(R·r), times (1 + cos θ)/2 = (r + a)/(2r) off a plain face.
-    const scale = flanged ? q / (resistance * r) : (0.5 * q * (r + a)) / (resistance * r * r);
+    // q/(R·r), times (1 + cos θ)/2 = (r + a)/(2r) off a plain face, written as q·r/(R·r²) so the
+    // division does not wait for the square root.
+    const k2 = q / (resistance * s2);
+    const scale = flanged ? k2 * r : 0.5 * k2 * (r + a);
     out[0] -= scale * sx;
     out[1] -= scale * sy;
     out[2] -= scale * sz;

@@ -78,7 +78,8 @@ export function walk(k: Kernel, i: number): number {
         sy -= along * e1y;
         sz -= along * e1z;
       }
-      const r = Math.sqrt(sx * sx + sy * sy + sz * sz);
+      const s2 = sx * sx + sy * sy + sz * sz;
+      const r = Math.sqrt(s2);
       const aa = ah < 0 ? -ah : ah;
       const bound = r - reach;
       const face = bound > aa ? bound : aa;
@@ -100,9 +101,10 @@ export function walk(k: Kernel, i: number): number {
           vy -= faceVelocity * ny;
           vz -= faceVelocity * nz;
         } else if (!flanged || ah > 0) {
-          let resistance = slot ? slotCoefficient * r : coefficient * (10 * r * r + area);
+          let resistance = slot ? slotCoefficient * r : coefficient * (10 * s2 + area);
           if (resistance < area) resistance = area;
-          const scale = flanged ? airflow / (resistance * r) : (0.5 * airflow * (r + ah)) / (resistance * r * r);
+          const k2 = airflow / (resistance * s2);
+          const scale = flanged ? k2 * r : 0.5 * k2 * (r + ah);
           vx -= scale * sx;
           vy -= scale * sy;
           vz -= scale * sz;
@@ -164,7 +166,8 @@ export function walk(k: Kernel, i: number): number {
             sy -= along * e1y;
             sz -= along * e1z;
           }
-          const r = Math.sqrt(sx * sx + sy * sy + sz * sz);
+          const s2 = sx * sx + sy * sy + sz * sz;
+          const r = Math.sqrt(s2);
           vx = draftX;
           vy = draftY;
           vz = 0;
@@ -174,9 +177,10 @@ export function walk(k: Kernel, i: number): number {
               vy -= faceVelocity * ny;
               vz -= faceVelocity * nz;
             } else if (!flanged || ah > 0) {
-              let resistance = slot ? slotCoefficient * r : coefficient * (10 * r * r + area);
+              let resistance = slot ? slotCoefficient * r : coefficient * (10 * s2 + area);
               if (resistance < area) resistance = area;
-              const scale = flanged ? airflow / (resistance * r) : (0.5 * airflow * (r + ah)) / (resistance * r * r);
+              const k2 = airflow / (resistance * s2);
+              const scale = flanged ? k2 * r : 0.5 * k2 * (r + ah);
               vx -= scale * sx;
               vy -= scale * sy;
               vz -= scale * sz;
