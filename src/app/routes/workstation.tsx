@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import { scenarioSchema } from '../../../shared/schemas/scenario';
 import { BannerBadge } from '../../components/banner-badge';
@@ -11,8 +12,11 @@ import { useWorkstation } from '../../features/places/api/get-sites';
 import { useCreateScenario } from '../../features/scenarios/api/create-scenario';
 import { workstationGeometry } from '../../features/scenarios/api/new-scenario';
 import { ScenariosTable } from '../../features/scenarios/components/scenarios-table';
+import { OperatorAssignment } from '../../features/places/components/operator-assignment';
+import { usePeople } from '../../features/people/api/get-people';
+import { can } from '../../../shared/auth/permissions';
+import { useUser } from '../../lib/auth';
 import { defaultScenario } from '../../features/scenario-editor/lib/default-scenario';
-import { useState } from 'react';
 import type { TableSort } from '../../components/ui/data-table';
 
 export function WorkstationRoute() {
@@ -21,6 +25,8 @@ export function WorkstationRoute() {
   const create = useCreateScenario();
   const navigate = useNavigate();
   const [sort, setSort] = useState<TableSort>({ key: 'name', dir: 'asc' });
+  const admin = can(useUser().data?.role, 'boards:assign');
+  const people = usePeople({ enabled: admin });
   if (ws.isPending) return <Spinner />;
   if (ws.error) return <ErrorMessage error={ws.error} />;
   const w = ws.data;
@@ -46,6 +52,7 @@ export function WorkstationRoute() {
           <p className="mt-1 text-sm text-muted">Nothing approved yet: the operators' board shows Act until an option is approved.</p>
         )}
       </section>
+      {admin && people.data && <OperatorAssignment workstationId={w.id} operators={people.data.items.filter((p) => p.role === 'operator')} assigned={w.operatorIds} />}
       {create.error && <ErrorMessage error={create.error} />}
       <h2 className="mb-2">Options at this workstation</h2>
       <ScenariosTable filters={{ workstationId: w.id, sort: sort.key, order: sort.dir }} onSortChange={setSort} />

@@ -9,4 +9,4 @@ export const getPeople = () => apiFetch<PeoplePage>(`${api.people}?pageSize=200&
 
 export const peopleQueryOptions = () => queryOptions({ queryKey: ['people'], queryFn: getPeople });
 
-export const usePeople = () => useQuery(peopleQueryOptions());
+export const usePeople = ({ enabled = true }: { enabled?: boolean } = {}) => useQuery({ ...peopleQueryOptions(), enabled });
