@@ -14,7 +14,7 @@ const COLUMNS: Column<ScenarioSummary>[] = [
   { key: 'workstation', header: 'Workstation', sortValue: () => 0, render: (s) => <Link className="hover:underline" to={paths.workstation(s.workstationId)}>{s.workstationName}</Link> },
   { key: 'site', header: 'Site', sortValue: () => 0, render: (s) => s.siteName },
   { key: 'agent', header: 'Dust agent', sortValue: () => 0, render: (s) => s.agentName ?? '—' },
-  { key: 'status', header: 'Status', sortValue: () => 0, render: (s) => (s.status === 'approved' ? '★ Approved' : 'Draft') },
+  { key: 'status', header: 'Status', sortValue: () => 0, render: (s) => (s.status === 'approved' ? <span>★ Approved{s.needsReview && <span className="block text-xs font-semibold text-watch">⟳ needs review</span>}</span> : 'Draft') },
   { key: 'respirableTwa', header: 'Respirable 8-h TWA (mg/m³)', align: 'right', sortValue: () => 0, render: (s) => sig(s.lastRun?.respirableTwa8h_mgPerM3) },
   { key: 'percentOfLimit', header: '% of limit', align: 'right', sortValue: () => 0, render: (s) => percent(s.lastRun?.percentOfLimit) },
   { key: 'banner', header: 'Banner', sortValue: () => 0, render: (s) => <span className="inline-flex items-center gap-2"><BannerBadge banner={s.lastRun?.banner} />{s.lastRun?.outOfDate && <span className="text-xs font-semibold text-watch">⟳ out of date</span>}</span> },
