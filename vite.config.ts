@@ -20,7 +20,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
-          include: ['shared/**/*.test.ts', 'workers/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}'],
+          include: ['shared/**/*.test.ts', 'workers/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/helpers/**/*.test.ts'],
           exclude: ['**/*.property.test.ts', '**/node_modules/**'],
           environment: 'node',
         },

@@ -1,4 +1,5 @@
 import autocannon from 'autocannon';
+import { writeReadmeSection } from '../helpers/readme-section';
 import { startServer } from '../helpers/server';
 
 // A mix of signed-in reads and writes against the real server on loopback, for DURATION_S seconds.
@@ -50,6 +51,13 @@ try {
   console.log(`latency ms: p50 ${p50.toFixed(1)}, p95 ${p95.toFixed(1)}, p99 ${p99.toFixed(1)} (${latencies.length} responses)`);
   console.log(`errors: ${errors} (socket ${result.errors}, timeouts ${result.timeouts}, non-2xx ${result.non2xx})`);
   const ok = result.requests.average >= 200 && p95 < 50 && errors === 0;
+  if (process.argv.includes('--readme')) {
+    writeReadmeSection('load', [
+      `- ${RATE} requests/s offered over ${CONNECTIONS} connections for ${DURATION_S} s: **${result.requests.average.toFixed(0)} requests/s** sustained`,
+      `- latency p50 ${p50.toFixed(1)} ms, **p95 ${p95.toFixed(1)} ms**, p99 ${p99.toFixed(1)} ms; errors ${errors}`,
+      `- ${ok ? 'target met' : 'target NOT met'}`,
+    ]);
+  }
   console.log(ok ? 'Target met: >= 200 requests/s sustained, p95 < 50 ms, no errors' : 'Target NOT met: >= 200 requests/s with p95 < 50 ms and no errors');
   process.exitCode = ok ? 0 : 1;
 } finally {
