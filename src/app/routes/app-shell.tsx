@@ -46,9 +46,9 @@ export function AppShell() {
               </div>
             )}
           </div>
-          <nav aria-label="Main" className="-mx-3 flex flex-wrap gap-x-1 py-2">
+          <nav aria-label="Main" className="-mx-2 flex flex-wrap gap-x-0.5 py-2">
             {items.map((n) => (
-              <NavLink key={n.to} to={n.to} className={({ isActive }) => `rounded-md px-3 py-1.5 text-sm font-semibold ${isActive ? 'bg-accent-soft text-accent-strong' : 'text-muted hover:text-ink'}`}>
+              <NavLink key={n.to} to={n.to} className={({ isActive }) => `rounded-md px-2 py-1.5 text-sm font-semibold ${isActive ? 'bg-accent-soft text-accent-strong' : 'text-muted hover:text-ink'}`}>
                 {n.label}
               </NavLink>
             ))}
