@@ -35,7 +35,13 @@ export function walk(k: Kernel, i: number): number {
   const hoods = k.hoods;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
-  const { cx, cy, cz, zoneFloor_m, hoodFloor_m, draftX, draftY, maxStep_s, minStep_s, stepFraction, driftFraction, midpointLimit, invBin, lastBin, nBins, L, W, H, wrapX, wrapY } = k;
+  // Unary plus marks these as plain doubles: loop variables they are assigned to (vx, vy, d, dh)
+  // would otherwise stay tagged, boxing a heap number on every step (about 70 B/step of garbage).
+  const draftX = +k.draftX;
+  const draftY = +k.draftY;
+  const zoneFloor_m = +k.zoneFloor_m;
+  const hoodFloor_m = +k.hoodFloor_m;
+  const { cx, cy, cz, maxStep_s, minStep_s, stepFraction, driftFraction, midpointLimit, invBin, lastBin, nBins, L, W, H, wrapX, wrapY } = k;
   const { x: hx, y: hy, z: hz, nx, ny, nz, e1x, e1y, e1z, e2x, e2y, e2z, halfWidth, halfHeight, airflow, area, coefficient, slotCoefficient, faceVelocity, reach, boothDepth, slot, flanged, booth } = k.h0;
   const still = airflow === 0;
   let n = k.normalIndex;
