@@ -35,14 +35,22 @@ export function walk(k: Kernel, i: number): number {
   const hoods = k.hoods;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
-  // Unary plus marks these as plain doubles: loop variables they are assigned to (vx, vy, d, dh)
-  // would otherwise stay tagged, boxing a heap number on every step (about 70 B/step of garbage).
-  const draftX = +k.draftX;
-  const draftY = +k.draftY;
-  const zoneFloor_m = +k.zoneFloor_m;
-  const hoodFloor_m = +k.hoodFloor_m;
-  const { cx, cy, cz, maxStep_s, minStep_s, stepFraction, driftFraction, midpointLimit, invBin, lastBin, nBins, L, W, H, wrapX, wrapY } = k;
-  const { x: hx, y: hy, z: hz, nx, ny, nz, e1x, e1y, e1z, e2x, e2y, e2z, halfWidth, halfHeight, airflow, area, coefficient, slotCoefficient, faceVelocity, reach, boothDepth, slot, flanged, booth } = k.h0;
+  // Unary plus marks every scalar as a plain double: a loop variable assigned from a field (vx, vy,
+  // d, dh) would otherwise stay tagged and box a heap number on every step (about 70 B/step), and
+  // each use of a tagged constant re-checks its map.
+  const draftX = +k.draftX, draftY = +k.draftY, zoneFloor_m = +k.zoneFloor_m, hoodFloor_m = +k.hoodFloor_m;
+  const cx = +k.cx, cy = +k.cy, cz = +k.cz, maxStep_s = +k.maxStep_s, minStep_s = +k.minStep_s;
+  const stepFraction = +k.stepFraction, driftFraction = +k.driftFraction, midpointLimit = +k.midpointLimit;
+  const invBin = +k.invBin, lastBin = k.lastBin | 0, nBins = k.nBins | 0;
+  const L = +k.L, W = +k.W, H = +k.H, wrapX = k.wrapX, wrapY = k.wrapY;
+  const h0 = k.h0;
+  const hx = +h0.x, hy = +h0.y, hz = +h0.z, nx = +h0.nx, ny = +h0.ny, nz = +h0.nz;
+  const e1x = +h0.e1x, e1y = +h0.e1y, e1z = +h0.e1z, e2x = +h0.e2x, e2y = +h0.e2y, e2z = +h0.e2z;
+  const halfWidth = +h0.halfWidth, halfHeight = +h0.halfHeight, reach = +h0.reach, boothDepth = +h0.boothDepth;
+  const airflow = +h0.airflow, area = +h0.area, coefficient = +h0.coefficient, slotCoefficient = +h0.slotCoefficient;
+  const faceVelocity = +h0.faceVelocity, slot = h0.slot, flanged = h0.flanged, booth = h0.booth;
+  const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
+  const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
   const still = airflow === 0;
   let n = k.normalIndex;
   const diffusivity = 0.5 * s2D * s2D;
@@ -56,9 +64,13 @@ export function walk(k: Kernel, i: number): number {
     const ey = y - cy;
     const ez = z - cz;
     const r2 = ex * ex + ey * ey + ez * ez;
-    let d = Math.sqrt(r2) - R;
-    if (d < 0) d = -d;
-    if (d < zoneFloor_m) d = zoneFloor_m;
+    // |r − R| is under its floor F for (R − F)² ≤ r² ≤ (R + F)², where d is F without a root.
+    let d = zoneFloor_m;
+    if (r2 > outerR2 || r2 < innerR2) {
+      d = Math.sqrt(r2) - R;
+      if (d < 0) d = -d;
+      if (d < zoneFloor_m) d = zoneFloor_m;
+    }
     let dh = Infinity;
     let vx = draftX;
     let vy = draftY;
@@ -93,8 +105,9 @@ export function walk(k: Kernel, i: number): number {
       // between, with probability exp(−a₀a₁/(D·dt)); sampling it removes the O(√dt) capture deficit.
       const height = onFace ? ah : -1;
       if (height > 0 && lastHeight > 0) {
-        const q = (height * lastHeight) / (diffusivity * lastDt);
-        if (q < 20 && rng.nextUniform() < Math.exp(-q)) {
+        const scale_m2 = diffusivity * lastDt;
+        const product_m2 = height * lastHeight;
+        if (product_m2 < 20 * scale_m2 && rng.nextUniform() < Math.exp(-product_m2 / scale_m2)) {
           fate = 0;
           break;
         }
@@ -127,8 +140,9 @@ export function walk(k: Kernel, i: number): number {
       const hood = field[4];
       const height = field[5];
       if (hood === lastHood && height > 0 && lastHeight > 0) {
-        const q = (height * lastHeight) / (diffusivity * lastDt);
-        if (q < 20 && rng.nextUniform() < Math.exp(-q)) {
+        const scale_m2 = diffusivity * lastDt;
+        const product_m2 = height * lastHeight;
+        if (product_m2 < 20 * scale_m2 && rng.nextUniform() < Math.exp(-product_m2 / scale_m2)) {
           fate = 0;
           break;
         }
