@@ -3,6 +3,8 @@ import { availableParallelism, loadavg } from 'node:os';
 import { parseScenario } from '../../shared/schemas/scenario.ts';
 import { combineBatches, prepareScenario } from '../engine/index.ts';
 import type { PreparedScenario } from '../engine/index.ts';
+import { writeReadmeSection } from '../../tests/helpers/readme-section.ts';
+import { describeMemory, measureBatchMemory } from './memory-figure.ts';
 import { referenceScenario } from './reference-scenario.ts';
 import { ThreadPool } from './thread-pool.ts';
 
@@ -30,7 +32,11 @@ const list = (values: number[]) => values.map((v) => v.toFixed(1)).join(', ');
 async function main(): Promise<void> {
   const cores = availableParallelism();
   const reference = prepareScenario(parseScenario(referenceScenario));
-  console.log(`Load average ${loadavg().map((v) => v.toFixed(2)).join(' ')} on ${cores} cores (figures are only comparable at similar load)`);
+  const load = loadavg().map((v) => v.toFixed(2)).join(' ');
+  console.log(`Load average ${load} on ${cores} cores (figures are only comparable at similar load)`);
+  // First, while no worker thread exists, so resident memory is the batch's alone.
+  const memory = describeMemory(measureBatchMemory());
+  console.log(`Memory: ${memory}`);
   console.log(`Reference scenario, seed ${reference.seed}: ${reference.particlesPerBatch * reference.batches} particles, ${reference.batches} batches (one pass warms the JIT, best of ${TIMED_PASSES} timed)`);
   const one = new ThreadPool(1);
   const single = await throughput(one, reference);
@@ -48,7 +54,18 @@ async function main(): Promise<void> {
   await all.close();
   const r = results.breathingZone.fractions.respirable;
   const half = (r.twa8hCi95_mgPerM3[1] - r.twa8hCi95_mgPerM3[0]) / 2;
-  console.log(`Default demo on ${cores} warm workers: ${seconds.toFixed(2)} s to result; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³ ± ${((100 * half) / r.twa8h_mgPerM3).toFixed(1)} % (95 % CI half-width)`);
+  const halfWidth_pct = ((100 * half) / r.twa8h_mgPerM3).toFixed(1);
+  console.log(`Default demo on ${cores} warm workers: ${seconds.toFixed(2)} s to result; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³ ± ${halfWidth_pct} % (95 % CI half-width)`);
+  if (process.argv.includes('--readme')) {
+    writeReadmeSection('bench', [
+      `- One worker: ${single.mps.toFixed(1)} M particle-steps/s (reference scenario, best of ${TIMED_PASSES} passes after a warm-up pass)`,
+      `- All ${cores} cores: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker`,
+      `- Default demo: ${seconds.toFixed(2)} s to result on ${cores} warm workers; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³, 95 % CI half-width ${halfWidth_pct} % of the mean`,
+      `- Memory: ${memory}`,
+      `- Load average at the start: ${load} (1, 5, 15 min) on ${cores} cores`,
+    ]);
+    console.log('README.md bench section rewritten');
+  }
 }
 
 main().catch((error: unknown) => {
