@@ -99,4 +99,30 @@ describe('an engineer builds, runs and saves a scenario; a viewer reads it', () 
     expect(status).toBe(403);
     await page.close();
   });
+
+  it('adds a site, a room and a workstation through the forms, refusing a workstation outside its room', async () => {
+    const page = await asEngineer();
+    await page.getByRole('link', { name: 'Workstations' }).click();
+    const site = page.getByRole('form', { name: 'New site' });
+    await site.getByLabel('Site name').fill('Fenwick Tile Works');
+    await site.getByRole('button', { name: 'Add site' }).click();
+    await page.getByText('Site “Fenwick Tile Works” added.').waitFor();
+    const room = page.getByRole('form', { name: 'New room' });
+    await room.getByLabel('Site').selectOption({ label: 'Fenwick Tile Works' });
+    await room.getByLabel('Room name').fill('Cutting shed');
+    await room.getByRole('button', { name: 'Add room' }).click();
+    await page.getByText('Room “Cutting shed” added.').waitFor();
+    const ws = page.getByRole('form', { name: 'New workstation' });
+    await ws.getByLabel('Room').selectOption({ label: 'Cutting shed (Fenwick Tile Works)' });
+    await ws.getByLabel('Workstation name').fill('Wet saw');
+    await ws.getByLabel('Nose/mouth x').fill('30');
+    await ws.getByRole('button', { name: 'Add workstation' }).click();
+    await ws.getByText('Must be within the room length (8 m), got 30').waitFor();
+    await ws.getByLabel('Nose/mouth x').fill('2.5');
+    await ws.getByRole('button', { name: 'Add workstation' }).click();
+    await page.getByText('Workstation “Wet saw” added.').waitFor();
+    await page.getByRole('link', { name: 'Wet saw' }).waitFor();
+    await shot(page, 'workspace-places');
+    await page.close();
+  });
 });

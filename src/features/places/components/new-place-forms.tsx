@@ -1,10 +1,10 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
 import type { SiteTree } from '../../../../shared/schemas/workspace-views';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { fieldErrors } from '../../../lib/form-errors';
+import { useSchemaSubmit } from '../../../hooks/use-schema-submit';
 import { useCreateRoom, useCreateSite, useCreateWorkstation } from '../api/create-place';
 
 const n = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
@@ -13,15 +13,11 @@ const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-
 export function NewSiteForm() {
   const [name, setName] = useState('');
   const [address, setAddress] = useState('');
-  const [submitted, setSubmitted] = useState(false);
   const m = useCreateSite();
-  const parsed = siteInputSchema.safeParse({ name, data: { address } });
-  const errors = submitted ? fieldErrors(parsed, m.error) : {};
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    setSubmitted(true);
-    if (parsed.success) m.mutate(parsed.data, { onSuccess: () => { setName(''); setAddress(''); setSubmitted(false); } });
-  };
+  const { errors, submit } = useSchemaSubmit(siteInputSchema, { name, data: { address } }, m, () => {
+    setName('');
+    setAddress('');
+  });
   return (
     <form onSubmit={submit} noValidate aria-label="New site" className={box}>
       <TextField label="Site name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
@@ -47,17 +43,10 @@ export function NewRoomForm({ sites }: { sites: SiteTree[] }) {
   const [siteId, setSiteId] = useState<number | ''>('');
   const [name, setName] = useState('');
   const [vals, setVals] = useState<Record<string, string>>(Object.fromEntries(ROOM_FIELDS.map(([k, , , d]) => [k, d])));
-  const [submitted, setSubmitted] = useState(false);
   const m = useCreateRoom();
   const { temperature_C, ...rest } = vals;
   const data = { ...Object.fromEntries(Object.entries(rest).map(([k, v]) => [k, n(v)])), temperature_K: n(temperature_C) + 273.15 };
-  const parsed = roomInputSchema.safeParse({ siteId: siteId || undefined, name, data });
-  const errors = submitted ? fieldErrors(parsed, m.error) : {};
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    setSubmitted(true);
-    if (parsed.success) m.mutate(parsed.data, { onSuccess: () => { setName(''); setSubmitted(false); } });
-  };
+  const { errors, submit } = useSchemaSubmit(roomInputSchema, { siteId: siteId || undefined, name, data }, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New room" className={box}>
       <SelectField label="Site" value={siteId} onChange={(e) => setSiteId(e.target.value ? Number(e.target.value) : '')} error={errors.siteId ? 'Choose a site' : undefined}>
@@ -91,16 +80,10 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
   const [description, setDescription] = useState('');
   const [releaseType, setReleaseType] = useState('active');
   const [vals, setVals] = useState<Record<string, string>>(Object.fromEntries(WS_FIELDS.map(([k, , d]) => [k, d])));
-  const [submitted, setSubmitted] = useState(false);
   const m = useCreateWorkstation();
   const point = (p: 'source' | 'worker') => ({ x_m: n(vals[`${p}.x_m`]), y_m: n(vals[`${p}.y_m`]), z_m: n(vals[`${p}.z_m`]) });
-  const parsed = workstationInputSchema.safeParse({ roomId: roomId || undefined, name, data: { description, source: point('source'), worker: { ...point('worker'), posture: 'standing' }, releaseType } });
-  const errors = submitted ? fieldErrors(parsed, m.error) : {};
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    setSubmitted(true);
-    if (parsed.success) m.mutate(parsed.data, { onSuccess: () => { setName(''); setSubmitted(false); } });
-  };
+  const value = { roomId: roomId || undefined, name, data: { description, source: point('source'), worker: { ...point('worker'), posture: 'standing' }, releaseType } };
+  const { errors, submit } = useSchemaSubmit(workstationInputSchema, value, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New workstation" className={box}>
       <SelectField label="Room" value={roomId} onChange={(e) => setRoomId(e.target.value ? Number(e.target.value) : '')} error={errors.roomId ? 'Choose a room' : undefined}>
