@@ -1,4 +1,5 @@
 import type { Hood } from '../../shared/schemas/scenario.ts';
+import { hoodAxis } from '../../shared/schemas/hood-axis.ts';
 
 export const HOOD_STRIDE = 22;
 export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
@@ -6,22 +7,12 @@ export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] 
 export const CAPTURE_DEPTH_m = 0.1;
 const COEFFICIENT = [1, 0.75, 3.7, 2.6, 0.75];
 
-function faceAxis(direction: Hood['direction']): [number, number, number] {
-  if ('x' in direction) {
-    const l = Math.hypot(direction.x, direction.y, direction.z);
-    return [direction.x / l, direction.y / l, direction.z / l];
-  }
-  const az = (direction.azimuth_deg * Math.PI) / 180;
-  const el = (direction.elevation_deg * Math.PI) / 180;
-  return [Math.cos(el) * Math.cos(az), Math.cos(el) * Math.sin(az), Math.sin(el)];
-}
-
 // Width runs horizontally across the face (along the slot for slots); height completes the frame.
 export function packHoods(hoods: readonly Hood[]): Float64Array {
   const p = new Float64Array(hoods.length * HOOD_STRIDE);
   hoods.forEach((hood, h) => {
     const o = h * HOOD_STRIDE;
-    const [nx, ny, nz] = faceAxis(hood.direction);
+    const [nx, ny, nz] = hoodAxis(hood.direction);
     let e1x = -ny;
     let e1y = nx;
     let e1z = 0;

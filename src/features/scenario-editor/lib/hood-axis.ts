@@ -1,3 +1,4 @@
+import { hoodAxis as axis } from '../../../../shared/schemas/hood-axis.ts';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
 
 export type HoodInput = NonNullable<ScenarioInput['hoods']>[number];
@@ -6,15 +7,10 @@ export type Vec3 = { x: number; y: number; z: number };
 
 const RAD = Math.PI / 180;
 
-// Same convention as the engine: azimuth from +x toward +y in plan, tilt (elevation) up from horizontal.
+// The shared convention, as an object for the drawing code.
 export function hoodAxis(direction: Direction): Vec3 {
-  if ('x' in direction) {
-    const length = Math.hypot(direction.x, direction.y, direction.z) || 1;
-    return { x: direction.x / length, y: direction.y / length, z: direction.z / length };
-  }
-  const az = direction.azimuth_deg * RAD;
-  const el = (direction.elevation_deg ?? 0) * RAD;
-  return { x: Math.cos(el) * Math.cos(az), y: Math.cos(el) * Math.sin(az), z: Math.sin(el) };
+  const [x, y, z] = axis(direction);
+  return { x, y, z };
 }
 
 // The form edits azimuth and tilt only, so a stored vector is shown (and rewritten) in that form.

@@ -1,4 +1,5 @@
 import type { Hood, Scenario } from '../../../../shared/schemas/scenario.ts';
+import { hoodAxis } from '../../../../shared/schemas/hood-axis';
 
 export type SweepParameter = 'distance' | 'airflow' | 'faceScale';
 
@@ -22,18 +23,7 @@ export const MAX_POINTS = 12;
 // A face closer than this to the source sits inside the release box of most demo sources.
 export const MIN_DISTANCE_m = 0.02;
 
-type Vec3 = [number, number, number];
 
-// Same convention as the engine: azimuth from +x toward +y in plan, elevation up from horizontal.
-export function hoodAxis(direction: Hood['direction']): Vec3 {
-  if ('x' in direction) {
-    const l = Math.hypot(direction.x, direction.y, direction.z);
-    return [direction.x / l, direction.y / l, direction.z / l];
-  }
-  const az = (direction.azimuth_deg * Math.PI) / 180;
-  const el = (direction.elevation_deg * Math.PI) / 180;
-  return [Math.cos(el) * Math.cos(az), Math.cos(el) * Math.sin(az), Math.sin(el)];
-}
 
 /** Distance from the face centre to the source measured along the hood axis (positive in front). */
 export function sourceDistance_m(scenario: Scenario, hoodIndex: number): number {
