@@ -6,7 +6,7 @@ import { LinePath } from '@visx/shape';
 import { decadeTicks, plainTick } from '../lib/chart-ticks';
 import { displayNumber, plainNumber } from '../lib/format';
 import type { HoodFigures } from '../lib/hood-figures';
-import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from './chart-style';
+import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from '../../../components/chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 360;

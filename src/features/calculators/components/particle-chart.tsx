@@ -8,7 +8,7 @@ import { CHART_MAX_DIAMETER_m, CHART_MIN_DIAMETER_m } from '../lib/crossover';
 import { decadeTicks, diameterTick, logSpace, powerTick } from '../lib/chart-ticks';
 import { displayDiameter, plainNumber } from '../lib/format';
 import { particleProperties, type ParticleMedium } from '../lib/particle-properties';
-import { ACCENT, INK, LINE, MUTED, WATCH, axisLabel, halo, tickLabel } from './chart-style';
+import { ACCENT, INK, LINE, MUTED, WATCH, axisLabel, halo, tickLabel } from '../../../components/chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 380;

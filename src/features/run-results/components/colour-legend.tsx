@@ -1,6 +1,6 @@
 import { num } from '../lib/format.ts';
 import { rampColour, type SequentialScale } from '../lib/colour-scale.ts';
-import { ACCENT, INK, MUTED } from './chart-style.ts';
+import { ACCENT, INK, MUTED } from '../../../components/chart-style.ts';
 
 const W = 320;
 const BAR = 14;

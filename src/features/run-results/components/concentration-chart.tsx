@@ -6,7 +6,7 @@ import { Area, LinePath } from '@visx/shape';
 import type { Fraction } from '../../../../workers/engine/types.ts';
 import { FRACTION_LABEL, num } from '../lib/format.ts';
 import type { RunView } from '../lib/normalise-result.ts';
-import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from './chart-style.ts';
+import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from '../../../components/chart-style.ts';
 
 const WIDTH = 760;
 const HEIGHT = 340;

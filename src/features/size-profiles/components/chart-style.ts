@@ -1,11 +1,3 @@
-// SVG cannot read Tailwind classes for fills, so the theme tokens are passed as CSS variables.
-export const INK = 'var(--color-ink)';
-export const MUTED = 'var(--color-muted)';
-export const LINE = 'var(--color-line)';
-export const ACCENT = 'var(--color-accent)';
-export const ACCENT_SOFT = 'var(--color-accent-soft)';
-
-export const tickLabel = { fill: MUTED, fontSize: 11, fontFamily: 'inherit' } as const;
-export const axisLabel = { fill: INK, fontSize: 12, fontWeight: 600, fontFamily: 'inherit' } as const;
+export * from '../../../components/chart-style';
 
 export const CHART = { width: 640, height: 300, margin: { top: 16, right: 20, bottom: 52, left: 64 } } as const;
