@@ -1,17 +1,13 @@
 import type { Request, Response } from 'express';
 import type { ScenarioListQuery } from '../../shared/schemas/workspace';
 import type { Db } from '../db/knex';
-import { currentApproval } from '../approvals/approvals.repo';
-import { listScenarios } from './scenarios.repo';
-import { getRun, getScenario, scenariosService } from './scenarios.service';
+import { getRun, getScenario, listScenariosForReview, scenariosService } from './scenarios.service';
 
 export function scenariosController(db: Db) {
   const id = (req: Request) => Number(req.params.id);
   return {
     async list(req: Request, res: Response) {
-      const page = await listScenarios(db, req.query as unknown as ScenarioListQuery);
-      const items = await Promise.all(page.items.map(async (s) => ({ ...s, needsReview: s.status === 'approved' ? ((await currentApproval(db, s.workstationId))?.needsReview ?? true) : false })));
-      res.json({ ...page, items });
+      res.json(await listScenariosForReview(db, req.query as unknown as ScenarioListQuery));
     },
     async get(req: Request, res: Response) {
       res.json(await getScenario(db, id(req)));

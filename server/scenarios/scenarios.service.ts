@@ -1,5 +1,5 @@
 import type { RunCreate } from '../../shared/schemas/runs';
-import type { ScenarioCreate, ScenarioUpdate } from '../../shared/schemas/workspace';
+import type { ScenarioCreate, ScenarioListQuery, ScenarioUpdate } from '../../shared/schemas/workspace';
 import type { Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { inputHash } from '../lib/hash';
@@ -7,13 +7,20 @@ import { writeAudit } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { workstations } from '../places/places.repo';
 import { currentApproval } from '../approvals/approvals.repo';
-import { getScenarioRow, listRuns, toSummary } from './scenarios.repo';
+import { getScenarioRow, listRuns, listScenarios, toSummary } from './scenarios.repo';
 
 type Actor = { id: number; email: string };
 
 async function checkRefs(db: Db, v: { workstationId?: number; agentId?: number | null }) {
   if (v.workstationId && !(await workstations.get(db, v.workstationId))) throw new AppError(400, 'invalid_input', 'That workstation does not exist', [{ path: 'body.workstationId', message: `No workstation ${v.workstationId}` }]);
   if (v.agentId && !(await agents.get(db, v.agentId))) throw new AppError(400, 'invalid_input', 'That dust agent does not exist', [{ path: 'body.agentId', message: `No dust agent ${v.agentId}` }]);
+}
+
+// An approved option needs review once its approval expired or its scenario changed after the approved run.
+export async function listScenariosForReview(db: Db, q: ScenarioListQuery) {
+  const page = await listScenarios(db, q);
+  const items = await Promise.all(page.items.map(async (s) => ({ ...s, needsReview: s.status === 'approved' ? ((await currentApproval(db, s.workstationId))?.needsReview ?? true) : false })));
+  return { ...page, items };
 }
 
 export async function getScenario(db: Db, id: number) {
