@@ -50,7 +50,7 @@ export const DEMO_AGENTS = {
       limitFraction: 'inhalable' as const,
       limit8h_mgPerM3: 1,
       limit15min_mgPerM3: null,
-      jurisdiction: 'EU scientific recommendation (from memory)',
+      jurisdiction: 'EU scientific recommendation',
       limitSource: '1 mg/m³ inhalable, from memory; limits differ widely (e.g. ACGIH 0.5 mg/m³ inhalable, UK WEL 10 mg/m³): check before use',
       limitDate: '',
       override: null,
