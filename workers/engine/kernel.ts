@@ -15,6 +15,11 @@ export class Kernel {
   readonly settling: Float64Array;
   readonly sqrt2D: Float64Array;
   readonly diffusionFactor: Float64Array;
+  /** √(2D·diffusionFactor): the random step's spread per metre of feature distance on a diffusion-bound step (f/3; 0 without diffusion). */
+  readonly sigmaPerNear: Float64Array;
+  /** √(2D·dt) at the longest and the shortest step. */
+  readonly sigmaMax: Float64Array;
+  readonly sigmaMin: Float64Array;
   readonly zoneResidence_s: Float64Array;
   readonly trajectories: Float32Array;
   readonly nextFrame: Int32Array;
@@ -62,6 +67,9 @@ export class Kernel {
     this.settling = p.bins.settling_mPerS;
     this.sqrt2D = p.bins.diffusivity_m2PerS.map((d) => Math.sqrt(2 * d));
     this.diffusionFactor = rule.diffusionFactor;
+    this.sigmaPerNear = this.sqrt2D.map((s, b) => (s > 0 ? s * Math.sqrt(rule.diffusionFactor[b]) : 0));
+    this.sigmaMax = this.sqrt2D.map((s) => s * Math.sqrt(rule.maxStep_s));
+    this.sigmaMin = this.sqrt2D.map((s) => s * Math.sqrt(rule.minStep_s));
     this.nBins = p.bins.count;
     this.zoneResidence_s = new Float64Array(p.timeBins * p.bins.count);
     this.frames = p.trajectory.frames;

@@ -8,7 +8,9 @@ import type { PreparedScenario } from './types.ts';
  * field changes over its own distance, so drift there needs finer steps), and dt ≤ maxTimeStep_s. Far from
  * features the step is large, which is exact for the uniform draft, settling and diffusion there;
  * the floor and walls need no limit because reflection and settling outflow are exact for any dt.
- * Near hoods the drift uses the midpoint velocity and face contact between steps is sampled with
+ * Near hoods the drift uses the midpoint velocity (for a single plain or flanged opening its
+ * first-order Taylor expansion v + (dt/2)·J·u from the field's analytic derivative, which is second
+ * order in dt like the full re-evaluation that slots and several hoods take) and face contact between steps is sampled with
  * the Brownian-bridge crossing probability.
  */
 export interface StepRule {

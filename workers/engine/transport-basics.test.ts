@@ -30,6 +30,48 @@ describe('pure diffusion', () => {
   });
 });
 
+describe('diffusion carried by a draft', () => {
+  // Steps here are bound by the drift rule (f·d/|u| with the zone 2–5 m away), not by diffusion,
+  // so this checks the random step's spread on drift-bound steps: the mean moves u·t and each
+  // axis still spreads 2·D·t about it (Hinds Eq. 7.18; a uniform draft only translates the puff).
+  it('moves the mean u·t and keeps per-axis variance 2·D·t', () => {
+    const p = prepareTest(
+      {
+        room: { eddyDiffusivity_m2PerS: 1e-4, draftSpeed_mPerS: 0.05 },
+        worker: { x_m: 55, y_m: 52, z_m: 50 },
+        run: { particles: 16000, batches: 2, duration_s: 200, seed: 5 },
+      },
+      (q) => {
+        q.bins.settling_mPerS.fill(0);
+        q.bins.diffusivity_m2PerS.fill(1e-4);
+        q.maxTimeStep_s = 1000;
+        q.keepParticles = true;
+      },
+    );
+    const variance = 2 * 1e-4 * 200;
+    const xs: number[][] = [[], [], []];
+    let steps = 0;
+    for (const batch of runAll(p)) {
+      const s = batch.particles!;
+      steps += batch.particleSteps;
+      for (let i = 0; i < s.x.length; i++) {
+        xs[0].push(s.x[i] - 50 - 0.05 * 200);
+        xs[1].push(s.y[i] - 50);
+        xs[2].push(s.z[i] - 50);
+      }
+    }
+    // Drift-bound: about ten steps of 10·d seconds each, far fewer than diffusion would allow.
+    expect(steps / xs[0].length).toBeLessThan(30);
+    for (const axis of xs) {
+      const n = axis.length;
+      const mean = axis.reduce((a, v) => a + v, 0) / n;
+      expect(Math.abs(mean)).toBeLessThan(4 * Math.sqrt(variance / n));
+      const v = axis.reduce((a, x) => a + x * x, 0) / n;
+      expect(Math.abs(v - variance)).toBeLessThan(4 * variance * Math.sqrt(2 / n));
+    }
+  });
+});
+
 describe('pure settling', () => {
   const settle = { room: { eddyDiffusivity_m2PerS: 0, length_m: 10, width_m: 10, height_m: 3 }, source: { x_m: 5, y_m: 5, z_m: 2 }, worker: { x_m: 1, y_m: 1, z_m: 1 }, dust: { density_kgPerM3: 1000, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 20e-6, gsd: 1 } } };
 

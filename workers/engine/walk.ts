@@ -12,6 +12,11 @@ const STEPS_PER_VISIT = 64;
  * per hood evaluation cost a third of the time. A single hood, the common case, is evaluated
  * inline on locals with the operations of evaluateHoods, so both give bit-identical fields;
  * several hoods take the general function.
+ *
+ * The step waits on a chain of roots and divisions, so the loop keeps them off that chain where
+ * the arithmetic allows: the random step's spread comes with the bound that set dt (no root of dt),
+ * and a single plain or flanged hood's midpoint field is its first-order expansion (no second root
+ * and division after dt). Flags are 0/1 integers and minima are ternaries (see below).
  */
 export function walk(k: Kernel, i: number): number {
   const a = k.a;
@@ -20,7 +25,7 @@ export function walk(k: Kernel, i: number): number {
   let z = a.z[i];
   let t = a.t[i];
   const b = a.bin[i];
-  const duration = k.duration;
+  const duration = +k.duration;
   const end = a.exhaustAt[i] < duration ? a.exhaustAt[i] : duration;
   const vs = k.settling[b];
   const s2D = k.sqrt2D[b];
@@ -31,7 +36,7 @@ export function walk(k: Kernel, i: number): number {
   const R = k.R;
   const R2 = R * R;
   const nh = k.hoodCount;
-  const single = nh === 1;
+  const single = nh === 1 ? 1 : 0;
   const hoods = k.hoods;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
@@ -42,18 +47,24 @@ export function walk(k: Kernel, i: number): number {
   const cx = +k.cx, cy = +k.cy, cz = +k.cz, maxStep_s = +k.maxStep_s, minStep_s = +k.minStep_s;
   const stepFraction = +k.stepFraction, driftFraction = +k.driftFraction, midpointLimit = +k.midpointLimit;
   const invBin = +k.invBin, lastBin = k.lastBin | 0, nBins = k.nBins | 0;
-  const L = +k.L, W = +k.W, H = +k.H, wrapX = k.wrapX, wrapY = k.wrapY;
+  // Flags as 0/1 integers: a boolean read from an object is tested as an unknown value (several
+  // compares per use); an integer is one test.
+  const L = +k.L, W = +k.W, H = +k.H, wrapX = k.wrapX ? 1 : 0, wrapY = k.wrapY ? 1 : 0;
   const h0 = k.h0;
   const hx = +h0.x, hy = +h0.y, hz = +h0.z, nx = +h0.nx, ny = +h0.ny, nz = +h0.nz;
   const e1x = +h0.e1x, e1y = +h0.e1y, e1z = +h0.e1z, e2x = +h0.e2x, e2y = +h0.e2y, e2z = +h0.e2z;
   const halfWidth = +h0.halfWidth, halfHeight = +h0.halfHeight, reach = +h0.reach, boothDepth = +h0.boothDepth;
   const airflow = +h0.airflow, area = +h0.area, coefficient = +h0.coefficient, slotCoefficient = +h0.slotCoefficient;
-  const faceVelocity = +h0.faceVelocity, slot = h0.slot, flanged = h0.flanged, booth = h0.booth;
+  const faceVelocity = +h0.faceVelocity, slot = h0.slot ? 1 : 0, flanged = h0.flanged ? 1 : 0, booth = h0.booth ? 1 : 0;
+  const captureDepth_m = +CAPTURE_DEPTH_m, normalBlock = NORMAL_BLOCK | 0;
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
-  const still = airflow === 0;
+  const still = airflow === 0 ? 1 : 0;
+  const perAirflow = airflow > 0 ? 1 / airflow : 0;
   let n = k.normalIndex;
   const diffusivity = 0.5 * s2D * s2D;
+  // Loaded, not computed here: TurboFan would move a pure s2D·√maxStep into the loop.
+  const sigmaPerNear = k.sigmaPerNear[b], sigmaMax = k.sigmaMax[b], sigmaMin = k.sigmaMin[b];
   let fate = -1;
   let steps = 0;
   let lastHood = -1;
@@ -72,6 +83,7 @@ export function walk(k: Kernel, i: number): number {
       if (d < zoneFloor_m) d = zoneFloor_m;
     }
     let dh = Infinity;
+    let jPhi = 0, jB = 0, jC = 0, jSx = 0, jSy = 0, jSz = 0;
     let vx = draftX;
     let vy = draftY;
     let vz = 0;
@@ -83,7 +95,7 @@ export function walk(k: Kernel, i: number): number {
       const u = rx * e1x + ry * e1y + rz * e1z;
       const v = rx * e2x + ry * e2y + rz * e2z;
       const onFace = Math.abs(u) <= halfWidth && Math.abs(v) <= halfHeight;
-      if (onFace && ah <= 0 && ah > -CAPTURE_DEPTH_m) {
+      if (onFace && ah <= 0 && ah > -captureDepth_m) {
         fate = 0;
         break;
       }
@@ -121,12 +133,33 @@ export function walk(k: Kernel, i: number): number {
           vz -= faceVelocity * nz;
         } else if (!flanged || ah > 0) {
           let resistance = slot ? slotCoefficient * r : coefficient * (10 * s2 + area);
-          if (resistance < area) resistance = area;
+          let growth = 20 * coefficient;
+          if (resistance < area) {
+            resistance = area;
+            growth = 0;
+          }
           const k2 = airflow / (resistance * s2);
           const scale = flanged ? k2 * r : 0.5 * k2 * (r + ah);
           vx -= scale * sx;
           vy -= scale * sy;
           vz -= scale * sz;
+          // The field's derivative along a displacement u for the midpoint below, without a
+          // division: 1/s² and 1/R come from k2 = Q/(R·s²). With res' = dR/dr / r = 20·C (0 where R is
+          // held at A): flanged, J·u = −φ·u + φ·(s·u)·(res'/R + 1/s²)·s with φ = k2·r; plain, φ = k2·(r + a)/2
+          // and J·u = −φ·u − [k2/2·((s·u)·(1/r − (r + a)·(res'/R + 2/s²)) + n·u)]·s.
+          const perS2 = resistance * k2 * perAirflow;
+          const perResistance = s2 * k2 * perAirflow;
+          jPhi = scale;
+          jSx = sx;
+          jSy = sy;
+          jSz = sz;
+          if (flanged) {
+            jB = scale * (growth * perResistance + perS2);
+            jC = 0;
+          } else {
+            jB = -0.5 * k2 * (r * perS2 - (r + ah) * (growth * perResistance + 2 * perS2));
+            jC = -0.5 * k2;
+          }
         }
       }
     } else if (nh > 1) {
@@ -156,19 +189,55 @@ export function walk(k: Kernel, i: number): number {
     }
     const vzs = vz - vs;
     const speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vzs);
-    const near = Math.min(dh, d);
-    const drift = Math.min(stepFraction * d, driftFraction * dh) / speed;
-    const dt0 = Math.min(dFactor * near * near, maxStep_s, drift);
-    let dt = Math.max(dt0, minStep_s);
-    if (t + dt > end) dt = end - t;
+    // Ternaries, not Math.min/max: those also order −0 and NaN (several branches each), which
+    // cannot occur here.
+    const near = dh < d ? dh : d;
+    const zoneLimit_m = stepFraction * d;
+    const hoodLimit_m = driftFraction * dh;
+    const driftLimit_m = zoneLimit_m < hoodLimit_m ? zoneLimit_m : hoodLimit_m;
+    // The random step's spread s2D·√dt comes with its bound, so no root waits for dt: the diffusive
+    // bound's root is known (sigmaPerNear·near) and the drift bound's runs beside its division.
+    const perSpeed = 1 / speed;
+    const drift = driftLimit_m * perSpeed;
+    const diffusive = dFactor * near * near;
+    let dt = maxStep_s;
+    let sigma = sigmaMax;
+    if (diffusive < maxStep_s) {
+      dt = diffusive;
+      sigma = sigmaPerNear * near;
+    }
+    if (drift < dt) {
+      dt = drift;
+      sigma = s2D * Math.sqrt(driftLimit_m * speed) * perSpeed;
+    }
+    if (dt < minStep_s) {
+      dt = minStep_s;
+      sigma = sigmaMin;
+    }
+    if (t + dt > end) {
+      dt = end - t;
+      sigma = s2D * Math.sqrt(dt);
+    }
     const hoodShift = (Math.abs(vx - draftX) + Math.abs(vy - draftY) + Math.abs(vz)) * dt;
     if (hoodShift > midpointLimit * dh) {
       // Midpoint drift: the hood field grows toward the face, and a start-of-step velocity would
       // lag behind it (Euler), biasing capture low by a few per cent at the default step.
-      const mx = x + 0.5 * dt * vx;
-      const my = y + 0.5 * dt * vy;
-      const mz = z + 0.5 * dt * vz;
-      if (single) {
+      const half = 0.5 * dt;
+      if (single && !slot) {
+        // The field at the midpoint to first order, v + (dt/2)·J·u: second order like the full
+        // evaluation, without its root and division after dt (slots take the full evaluation).
+        const su = jSx * vx + jSy * vy + jSz * vz;
+        const g = jB * su + jC * (nx * vx + ny * vy + nz * vz);
+        const dvx = half * (g * jSx - jPhi * vx);
+        const dvy = half * (g * jSy - jPhi * vy);
+        const dvz = half * (g * jSz - jPhi * vz);
+        vx += dvx;
+        vy += dvy;
+        vz += dvz;
+      } else if (single) {
+        const mx = x + half * vx;
+        const my = y + half * vy;
+        const mz = z + half * vz;
         const rx = mx - hx;
         const ry = my - hy;
         const rz = mz - hz;
@@ -176,7 +245,7 @@ export function walk(k: Kernel, i: number): number {
         const u = rx * e1x + ry * e1y + rz * e1z;
         const v = rx * e2x + ry * e2y + rz * e2z;
         const onFace = Math.abs(u) <= halfWidth && Math.abs(v) <= halfHeight;
-        if (!(onFace && ah <= 0 && ah > -CAPTURE_DEPTH_m)) {
+        if (!(onFace && ah <= 0 && ah > -captureDepth_m)) {
           let sx = rx;
           let sy = ry;
           let sz = rz;
@@ -208,6 +277,9 @@ export function walk(k: Kernel, i: number): number {
           }
         }
       } else {
+        const mx = x + half * vx;
+        const my = y + half * vy;
+        const mz = z + half * vz;
         field[0] = draftX;
         field[1] = draftY;
         field[2] = 0;
@@ -224,12 +296,11 @@ export function walk(k: Kernel, i: number): number {
       residence[tb * nBins + b] += dt;
     }
     if (sl >= 0) recordFrames(k, sl, t, x, y, z);
-    if (n === NORMAL_BLOCK) {
+    if (n === normalBlock) {
       fillNormals(rng, normals);
       n = 0;
     }
     lastDt = dt;
-    const sigma = s2D * Math.sqrt(dt);
     x += vx * dt + sigma * normals[n];
     y += vy * dt + sigma * normals[n + 1];
     let zz = z + vz * dt + sigma * normals[n + 2];
