@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Xoshiro128, batchStream } from './rng.ts';
-import { fillNormals, nextNormal } from './ziggurat.ts';
+import stdlibNormalCdf from '@stdlib/stats-base-dists-normal-cdf';
+import { fillNormals } from './ziggurat.ts';
 
 describe('xoshiro128**', () => {
   it('reproduces the reference outputs for state (1, 2, 3, 4)', () => {
@@ -37,10 +38,35 @@ describe('ziggurat normals', () => {
     expect(Math.abs(tail - p)).toBeLessThan(4 * Math.sqrt((p * (1 - p)) / n));
   });
 
-  it('block filling and single draws give the same sequence', () => {
-    const block = new Float64Array(1000);
-    fillNormals(batchStream(3, 1), block);
-    const single = batchStream(3, 1);
-    expect(Array.from(block)).toEqual(Array.from({ length: 1000 }, () => nextNormal(single)));
+  it('beyond the ziggurat base (±3.44σ) come only from its tail path, as often as the normal tail', () => {
+    // 2·(1 − Φ(3.5)) from @stdlib's normal CDF.
+    const p = 2 * (1 - stdlibNormalCdf(3.5, 0, 1));
+    const tail = values.reduce((a, v) => a + (Math.abs(v) > 3.5 ? 1 : 0), 0) / n;
+    expect(Math.abs(tail - p)).toBeLessThan(4 * Math.sqrt((p * (1 - p)) / n));
+  });
+
+  it('follow the normal CDF (Kolmogorov–Smirnov against @stdlib, 1 % level)', () => {
+    const sorted = Float64Array.from(values).sort();
+    let d = 0;
+    for (let i = 0; i < n; i++) {
+      const f = stdlibNormalCdf(sorted[i], 0, 1);
+      d = Math.max(d, Math.abs(f - i / n), Math.abs((i + 1) / n - f));
+    }
+    // Asymptotic critical value 1.628/√n at α = 0.01 (Kolmogorov distribution, common practice).
+    expect(d).toBeLessThan(1.628 / Math.sqrt(n));
+  });
+
+  it('give the same block for the same stream, block after block', () => {
+    const fill = () => {
+      const rng = batchStream(3, 1);
+      const a = new Float64Array(6144);
+      const b = new Float64Array(6144);
+      fillNormals(rng, a);
+      fillNormals(rng, b);
+      return [...a, ...b];
+    };
+    const first = fill();
+    expect(fill()).toEqual(first);
+    expect(new Set(first).size).toBe(first.length);
   });
 });

@@ -48,20 +48,32 @@ function normalSlow(rng: Xoshiro128, hz: number, iz: number): number {
   }
 }
 
-export function nextNormal(rng: Xoshiro128): number {
-  const hz = rng.nextInt32();
-  const iz = hz & (LAYERS - 1);
-  return Math.abs(hz) < kn[iz] ? hz * wn[iz] : normalSlow(rng, hz, iz);
-}
+// Draws the fast path rejected in the current block: their indices and first 32-bit draws.
+let pendingIndex = new Int32Array(0);
+let pendingDraw = new Int32Array(0);
 
-// Filling a block keeps the generator out of the step loop; its state lives in locals here
-// (xoshiro128** inlined) because property traffic would cost as much as the arithmetic.
+/**
+ * Fills a block of standard normals. The generator's state lives in locals (xoshiro128** inlined),
+ * and the hot loop holds only the ziggurat's rectangle test (about 99 % of draws): the few draws it
+ * rejects are noted and finished after the loop by the wedge/tail path, which takes its further
+ * draws from the stream after the block. A call inside the loop would force the state back into
+ * the object, and tagged, on every draw.
+ */
 export function fillNormals(rng: Xoshiro128, out: Float64Array): void {
+  const n = out.length;
+  if (pendingIndex.length < n) {
+    pendingIndex = new Int32Array(n);
+    pendingDraw = new Int32Array(n);
+  }
+  const index = pendingIndex;
+  const draws = pendingDraw;
+  const k = kn;
+  const w = wn;
   let s0 = rng.s0 | 0;
   let s1 = rng.s1 | 0;
   let s2 = rng.s2 | 0;
   let s3 = rng.s3 | 0;
-  const n = out.length;
+  let pending = 0;
   for (let i = 0; i < n; i++) {
     const m = Math.imul(s1, 5);
     const hz = Math.imul((m << 7) | (m >>> 25), 9) | 0;
@@ -72,23 +84,17 @@ export function fillNormals(rng: Xoshiro128, out: Float64Array): void {
     s0 ^= s3;
     s2 ^= t;
     s3 = (s3 << 11) | (s3 >>> 21);
-    const iz = hz & (LAYERS - 1);
-    if (Math.abs(hz) < kn[iz]) {
-      out[i] = hz * wn[iz];
-      continue;
+    const iz = hz & 127;
+    out[i] = hz * w[iz];
+    if (Math.abs(hz) >= k[iz]) {
+      index[pending] = i;
+      draws[pending] = hz;
+      pending++;
     }
-    rng.s0 = s0;
-    rng.s1 = s1;
-    rng.s2 = s2;
-    rng.s3 = s3;
-    out[i] = normalSlow(rng, hz, iz);
-    s0 = rng.s0 | 0;
-    s1 = rng.s1 | 0;
-    s2 = rng.s2 | 0;
-    s3 = rng.s3 | 0;
   }
   rng.s0 = s0;
   rng.s1 = s1;
   rng.s2 = s2;
   rng.s3 = s3;
+  for (let j = 0; j < pending; j++) out[index[j]] = normalSlow(rng, draws[j], draws[j] & (LAYERS - 1));
 }
