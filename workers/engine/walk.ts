@@ -119,7 +119,7 @@ export function walk(k: Kernel, i: number): number {
       if (height > 0 && lastHeight > 0) {
         const scale_m2 = diffusivity * lastDt;
         const product_m2 = height * lastHeight;
-        if (product_m2 < 20 * scale_m2 && rng.nextUniform() < Math.exp(-product_m2 / scale_m2)) {
+        if (product_m2 < 20 * scale_m2 && bridgeCrossed(rng.nextUniform(), product_m2 / scale_m2)) {
           fate = 0;
           break;
         }
@@ -175,7 +175,7 @@ export function walk(k: Kernel, i: number): number {
       if (hood === lastHood && height > 0 && lastHeight > 0) {
         const scale_m2 = diffusivity * lastDt;
         const product_m2 = height * lastHeight;
-        if (product_m2 < 20 * scale_m2 && rng.nextUniform() < Math.exp(-product_m2 / scale_m2)) {
+        if (product_m2 < 20 * scale_m2 && bridgeCrossed(rng.nextUniform(), product_m2 / scale_m2)) {
           fate = 0;
           break;
         }
@@ -346,6 +346,16 @@ export function walk(k: Kernel, i: number): number {
   a.z[i] = z;
   a.t[i] = t;
   return fate;
+}
+
+/**
+ * u < exp(−q) decided mostly without exp: 1 − q ≤ exp(−q) ≤ 1/(1 + q), so u below the first is a
+ * crossing and u at or above the second is not; only draws in between need the exponential.
+ */
+function bridgeCrossed(u: number, q: number): boolean {
+  if (u < 1 - q) return true;
+  if (u * (1 + q) >= 1) return false;
+  return u < Math.exp(-q);
 }
 
 function recordFrames(k: Kernel, sl: number, t: number, x: number, y: number, z: number): void {
