@@ -2,7 +2,10 @@ import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field.ts';
 import { type Kernel, NORMAL_BLOCK } from './kernel.ts';
 import { fillNormals } from './ziggurat.ts';
 
-const STEPS_PER_VISIT = 64;
+// Long enough that a visit's set-up (some fifty loads) is small beside its steps, short enough
+// that a pass over the live particles still reports progress within a batch. The bridge test
+// below starts afresh with each visit (its first step has no previous height).
+const STEPS_PER_VISIT = 256;
 
 /**
  * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (0 captured, 1 settled,
