@@ -41,10 +41,11 @@ describe('side by side', () => {
     const headers = page.getByTestId('compare-column');
     await expect.poll(() => headers.count(), { timeout: 30_000 }).toBe(3);
     // Engineering controls come before no control; the two hoods tie on tier and go by name.
-    expect((await headers.allTextContents()).map((t) => t.replace(/^✓ Meets the target with the least airflow/, '').replace(/run of.*$/, ''))).toEqual(['Flanged hood', 'Slot hood', 'No control']);
+    // Polled: a column's header text settles once its run has loaded.
+    await expect.poll(async () => (await headers.allTextContents()).map((t) => t.replace(/^✓ Meets the target with the least airflow/, '').replace(/run of.*$/, ''))).toEqual(['Flanged hood', 'Slot hood', 'No control']);
 
     const banners = page.getByRole('row', { name: /^Banner/ }).getByRole('cell');
-    expect(await banners.count()).toBe(3);
+    await expect.poll(() => banners.count()).toBe(3);
     for (const text of await banners.allTextContents()) expect(text).toMatch(/Clear|Watch|Act/);
     expect(await banners.nth(2).textContent()).toMatch(/Act/);
 
