@@ -7,6 +7,10 @@ const api = {
   prepare(scenario: PreparedScenario): void {
     prepared = scenario;
   },
+  /** Runs one small batch and discards it, so the step loop is compiled before the first real run. */
+  warmUp(scenario: PreparedScenario): number {
+    return runBatch(scenario, 0).particleSteps;
+  },
   // Progress arrives as a Comlink proxy; its calls post messages and never block the loop.
   run(batchIndex: number, onProgress?: (fraction: number, particleSteps: number) => void): BatchResult {
     if (!prepared) throw new Error('simulation worker: run called before prepare');

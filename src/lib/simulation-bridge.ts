@@ -1,6 +1,7 @@
 import * as Comlink from 'comlink';
-import type { Scenario } from '../../shared/schemas/scenario.ts';
+import { type Scenario, parseScenario } from '../../shared/schemas/scenario.ts';
 import { type BatchResult, type Results, combineBatches, prepareScenario } from '../../workers/engine/index.ts';
+import { referenceScenario } from '../../workers/engine/reference-scenario.ts';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker.ts';
 
 export interface RunProgress {
@@ -28,9 +29,34 @@ function poolSize(): number {
   return Math.max(1, (navigator.hardwareConcurrency || 2) - 1);
 }
 
-function startWorker(): PooledWorker {
+function startWorker(warm: boolean): PooledWorker {
   const worker = new Worker(new URL('../../workers/simulation.worker.ts', import.meta.url), { type: 'module' });
-  return { worker, api: Comlink.wrap<SimulationWorkerApi>(worker) };
+  const pooled = { worker, api: Comlink.wrap<SimulationWorkerApi>(worker) };
+  // A fresh worker runs its first steps in the interpreter; started ahead of a run, it takes a small
+  // throwaway batch (a flanged hood in a cross-draft, about half a million steps) so the step loop
+  // is compiled before real work, which queues behind it.
+  if (warm) {
+    // Optional: a warm-up that fails for any reason must never stand in the way of a page or a run.
+    try {
+      pooled.api.warmUp(warmUpScenario()).catch(() => {});
+    } catch {
+      /* the run will compile the loop itself */
+    }
+  }
+  return pooled;
+}
+
+let warmUpPrepared: ReturnType<typeof prepareScenario> | undefined;
+function warmUpScenario() {
+  warmUpPrepared ??= prepareScenario(
+    parseScenario({ ...referenceScenario, run: { particles: 3000, batches: 2, seed: 1 } }),
+  );
+  return warmUpPrepared;
+}
+
+/** Starts the pool's workers ahead of the first run (pages that run the engine call it on mount). */
+export function warmUpWorkers(): void {
+  while (idle.length < poolSize()) idle.push(startWorker(true));
 }
 
 export interface RunOptions {
@@ -43,7 +69,8 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
   const prepared = prepareScenario(scenario);
   const started = performance.now();
   const size = Math.min(poolSize(), prepared.batches);
-  while (idle.length < size) idle.push(startWorker());
+  // Workers started here go straight to the run: a warm-up would only come before it.
+  while (idle.length < size) idle.push(startWorker(false));
   const busy = idle.splice(0, size);
   const done: BatchResult[] = [];
   const partial = new Map<number, number>();
@@ -88,6 +115,8 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
     await Promise.race([Promise.all(busy.map(drain)), cancelled]);
   } catch (error) {
     stopAll();
+    // The terminated workers are gone; start their replacements now rather than at the next run.
+    warmUpWorkers();
     throw error;
   } finally {
     signal?.removeEventListener('abort', cancel);

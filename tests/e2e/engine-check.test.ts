@@ -29,7 +29,7 @@ describe('the engine in the browser worker pool', () => {
     await page.getByRole('progressbar', { name: 'Simulation progress' }).waitFor();
     await page.getByTestId('engine-result').waitFor({ timeout: 90_000 });
     // A figure for the README, not a timed assertion: speed targets live in the benchmark.
-    console.log(`default demo in Chromium: ${((Date.now() - started) / 1000).toFixed(1)} s to result on fresh workers`);
+    console.log(`default demo in Chromium: ${((Date.now() - started) / 1000).toFixed(1)} s to result on workers started with the page`);
     expect(await page.getByTestId('engine-result').textContent()).toMatch(/mg\/m³/);
     await shot(page, 'engine-check');
     await page.close();

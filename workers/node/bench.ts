@@ -5,7 +5,7 @@ import { combineBatches, prepareScenario } from '../engine/index.ts';
 import type { PreparedScenario } from '../engine/index.ts';
 import { writeReadmeSection } from '../../tests/helpers/readme-section.ts';
 import { describeMemory, measureBatchMemory } from './memory-figure.ts';
-import { referenceScenario } from './reference-scenario.ts';
+import { referenceScenario } from '../engine/reference-scenario.ts';
 import { ThreadPool } from './thread-pool.ts';
 
 const TIMED_PASSES = 3;

@@ -2,7 +2,7 @@ import { useEffect, useRef, useState } from 'react';
 import { parseScenario } from '../../../../shared/schemas/scenario.ts';
 import { Cautions } from '../../../components/cautions.tsx';
 import { Button } from '../../../components/ui/button.tsx';
-import { type RunProgress, RunCancelledError, runSimulation } from '../../../lib/simulation-bridge.ts';
+import { type RunProgress, RunCancelledError, runSimulation, warmUpWorkers } from '../../../lib/simulation-bridge.ts';
 import type { Results } from '../../../../workers/engine/index.ts';
 // Raw text keeps the JSON out of the TypeScript project graph; the schema checks it on load.
 import defaultScenarioText from '../../../../server/demo/scenarios/default.json?raw';
@@ -45,7 +45,10 @@ function ResultSummary({ results }: { results: Results }) {
 export function EngineCheckPage() {
   const [state, setState] = useState<State>({ kind: 'idle' });
   const abort = useRef<AbortController | null>(null);
-  useEffect(() => () => abort.current?.abort(), []);
+  useEffect(() => {
+    warmUpWorkers();
+    return () => abort.current?.abort();
+  }, []);
 
   const start = async () => {
     abort.current = new AbortController();

@@ -3,7 +3,7 @@ import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { Results } from '../../../../workers/engine/index';
 import { Button } from '../../../components/ui/button';
 import { ErrorMessage } from '../../../components/ui/status';
-import { RunCancelledError, runSimulation, type RunProgress } from '../../../lib/simulation-bridge';
+import { RunCancelledError, runSimulation, warmUpWorkers, type RunProgress } from '../../../lib/simulation-bridge';
 
 type State = { phase: 'idle' } | { phase: 'running'; progress: RunProgress } | { phase: 'cancelled' } | { phase: 'failed'; error: unknown };
 
@@ -12,7 +12,10 @@ const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` 
 export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: Results, input: Scenario) => void }) {
   const [state, setState] = useState<State>({ phase: 'idle' });
   const abort = useRef<AbortController | null>(null);
-  useEffect(() => () => abort.current?.abort(), []);
+  useEffect(() => {
+    warmUpWorkers();
+    return () => abort.current?.abort();
+  }, []);
 
   async function start() {
     if (!scenario) return;

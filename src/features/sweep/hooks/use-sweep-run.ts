@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { RunCancelledError, runSimulation } from '../../../lib/simulation-bridge';
+import { RunCancelledError, runSimulation, warmUpWorkers } from '../../../lib/simulation-bridge';
 import { pointResult, type PointResult } from '../lib/point-result';
 import type { SweepPoint } from '../lib/sweep-points';
 
@@ -21,7 +21,10 @@ export type SweepState =
 export function useSweepRun() {
   const [state, setState] = useState<SweepState>({ phase: 'idle' });
   const abort = useRef<AbortController | null>(null);
-  useEffect(() => () => abort.current?.abort(), []);
+  useEffect(() => {
+    warmUpWorkers();
+    return () => abort.current?.abort();
+  }, []);
 
   const start = useCallback(async (points: SweepPoint[]) => {
     abort.current?.abort();
