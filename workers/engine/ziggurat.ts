@@ -84,7 +84,7 @@ export function fillNormals(rng: Xoshiro128, out: Float64Array): void {
     s0 ^= s3;
     s2 ^= t;
     s3 = (s3 << 11) | (s3 >>> 21);
-    const iz = hz & 127;
+    const iz = hz & 127; // LAYERS − 1, as a literal so the loop reads no module binding
     out[i] = hz * w[iz];
     if (Math.abs(hz) >= k[iz]) {
       index[pending] = i;
