@@ -1,3 +1,4 @@
+import { useEffect, useRef, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { FRACTIONS, type Fraction } from '../../../workers/engine/types.ts';
 import { Cautions } from '../../components/cautions';
@@ -38,11 +39,8 @@ export function CompareRoute() {
   const enough = selection.ids.length >= MIN_SELECTED && !selection.tooMany;
   const state = useCompareColumns(enough ? selection.ids : [], SOURCES);
 
-  // From the address bar at the moment of the change, not from this render's params: two ticks in
-  // quick succession would otherwise both start from the same selection and the first be lost.
-  const current = () => new URLSearchParams(window.location.search);
   const update = (next: Record<string, string | undefined>) => {
-    const p = current();
+    const p = new URLSearchParams(params);
     for (const [k, v] of Object.entries(next)) {
       if (!v) p.delete(k);
       else p.set(k, v);
@@ -50,11 +48,30 @@ export function CompareRoute() {
     setParams(p, { replace: true });
   };
   const setIds = (ids: number[]) => update({ ids: formatSelection(ids) });
-  const toggle = (id: number) => setIds(toggleId(parseSelection(current().get('ids')).ids, id));
+  // The address changes in a transition, after the click: the picker shows the ticks at once from
+  // its own copy, and each tick builds on the latest one (a ref), so quick ticks are neither lost
+  // nor shown unticked in between. The copy gives way once the address has caught up.
+  const idsParam = params.get('ids') ?? '';
+  const latest = useRef<number[]>(selection.ids);
+  const [ticked, setTicked] = useState<number[] | null>(null);
+  useEffect(() => {
+    const fromAddress = parseSelection(idsParam).ids;
+    setTicked((pending) => {
+      if (pending && formatSelection(pending) !== formatSelection(fromAddress)) return pending;
+      latest.current = fromAddress;
+      return null;
+    });
+  }, [idsParam]);
+  const toggle = (id: number) => {
+    const next = toggleId(latest.current, id);
+    latest.current = next;
+    setTicked(next);
+    setIds(next);
+  };
 
   return (
     <Page title="Side by side" intro="Compare 2 to 4 scenarios from their latest saved runs, ordered by the hierarchy of controls. The link holds the selection, so it can be shared.">
-      <ScenarioPicker scenarios={list.data?.items} pending={list.isPending} error={list.error} selected={selection.ids} onToggle={toggle} />
+      <ScenarioPicker scenarios={list.data?.items} pending={list.isPending} error={list.error} selected={ticked ?? selection.ids} onToggle={toggle} />
       {selection.ignored.length > 0 && <p role="status" className="mb-4 text-sm text-watch">The link held parts that are not scenario ids and were left out: {selection.ignored.map((s) => `“${s}”`).join(', ')}.</p>}
       {selection.tooMany ? (
         <div role="alert" className="mb-4 rounded-md border-2 border-act bg-act-soft p-3 text-sm text-act">
