@@ -14,7 +14,8 @@ const STEPS_PER_VISIT = 256;
  * One function on purpose (over 150 lines): V8 does not inline a call this size, and a call
  * per hood evaluation cost a third of the time. A single hood, the common case, is evaluated
  * inline on locals with the operations of evaluateHoods, so both give bit-identical fields;
- * several hoods take the general function.
+ * several hoods take the general function, as does a slot's midpoint field (a call on the
+ * fewer steps that need it, rather than a second inline copy).
  *
  * The step waits on a chain of roots and divisions, so the loop keeps them off that chain where
  * the arithmetic allows: the random step's spread comes with the bound that set dt (no root of dt),
@@ -237,56 +238,13 @@ export function walk(k: Kernel, i: number): number {
         vx += dvx;
         vy += dvy;
         vz += dvz;
-      } else if (single) {
-        const mx = x + half * vx;
-        const my = y + half * vy;
-        const mz = z + half * vz;
-        const rx = mx - hx;
-        const ry = my - hy;
-        const rz = mz - hz;
-        const ah = rx * nx + ry * ny + rz * nz;
-        const u = rx * e1x + ry * e1y + rz * e1z;
-        const v = rx * e2x + ry * e2y + rz * e2z;
-        const onFace = Math.abs(u) <= halfWidth && Math.abs(v) <= halfHeight;
-        if (!(onFace && ah <= 0 && ah > -captureDepth_m)) {
-          let sx = rx;
-          let sy = ry;
-          let sz = rz;
-          if (slot) {
-            const along = u > halfWidth ? halfWidth : u < -halfWidth ? -halfWidth : u;
-            sx -= along * e1x;
-            sy -= along * e1y;
-            sz -= along * e1z;
-          }
-          const s2 = sx * sx + sy * sy + sz * sz;
-          const r = Math.sqrt(s2);
-          vx = draftX;
-          vy = draftY;
-          vz = 0;
-          if (r !== 0) {
-            if (booth && ah >= 0 && onFace && ah <= boothDepth) {
-              vx -= faceVelocity * nx;
-              vy -= faceVelocity * ny;
-              vz -= faceVelocity * nz;
-            } else if (!flanged || ah > 0) {
-              let resistance = slot ? slotCoefficient * r : coefficient * (10 * s2 + area);
-              if (resistance < area) resistance = area;
-              const k2 = airflow / (resistance * s2);
-              const scale = flanged ? k2 * r : 0.5 * k2 * (r + ah);
-              vx -= scale * sx;
-              vy -= scale * sy;
-              vz -= scale * sz;
-            }
-          }
-        }
       } else {
-        const mx = x + half * vx;
-        const my = y + half * vy;
-        const mz = z + half * vz;
+        // Slots and several hoods: the field again at the midpoint (for one hood evaluateHoods
+        // gives the inline field above bit for bit); reaching a face there keeps the step's drift.
         field[0] = draftX;
         field[1] = draftY;
         field[2] = 0;
-        if (evaluateHoods(hoods, nh, mx, my, mz, field) < 0) {
+        if (evaluateHoods(hoods, nh, x + half * vx, y + half * vy, z + half * vz, field) < 0) {
           vx = field[0];
           vy = field[1];
           vz = field[2];
