@@ -5,6 +5,19 @@ import { stepRule } from './step-rule.ts';
 import type { PreparedScenario } from './types.ts';
 
 export const NORMAL_BLOCK = 3 * 2048;
+
+/**
+ * Where each of the walk's numeric settings sits in Kernel.scalars. They live in a Float64Array,
+ * not in fields, so every load is a double whatever the scenario: a whole-number setting (a 3 m
+ * room, a worker at y = 2) read from a field is a small integer, and code the JIT compiled on one
+ * scenario's integers stops and recompiles when the next scenario brings fractions.
+ */
+export const SCALAR = {
+  draftX: 0, draftY: 1, zoneFloor: 2, hoodFloor: 3, cx: 4, cy: 5, cz: 6, maxStep: 7, minStep: 8,
+  stepFraction: 9, driftFraction: 10, midpointLimit: 11, invBin: 12, L: 13, W: 14, H: 15,
+  wrapX: 16, wrapY: 17, R: 18, duration: 19,
+} as const;
+const SCALAR_COUNT = 20;
 // Steps whose hood drift uses under a fifth of the drift limit keep Euler: their lag is negligible.
 const MIDPOINT_SHARE = 0.2;
 
@@ -25,28 +38,12 @@ export class Kernel {
   readonly nextFrame: Int32Array;
   readonly hoods: Float64Array;
   readonly hoodCount: number;
-  readonly driftFraction: number;
-  readonly midpointLimit: number;
-  /** Hood 0 unpacked (see packHoods), so the common single-hood case runs on locals. */
-  readonly h0: Hood0;
-  readonly stepFraction: number;
-  readonly zoneFloor_m: number;
-  readonly hoodFloor_m: number;
-  readonly maxStep_s: number;
-  readonly minStep_s: number;
+  /** Hood 0's parameters in packHoods' layout (zeros without hoods), so the common single-hood case runs on locals. */
+  readonly hood0: Float64Array;
+  /** The walk's numeric settings, at the indices of SCALAR. */
+  readonly scalars = new Float64Array(SCALAR_COUNT);
   readonly L: number;
   readonly W: number;
-  readonly H: number;
-  readonly draftX: number;
-  readonly draftY: number;
-  readonly wrapX: boolean;
-  readonly wrapY: boolean;
-  readonly cx: number;
-  readonly cy: number;
-  readonly cz: number;
-  readonly R: number;
-  readonly duration: number;
-  readonly invBin: number;
   readonly lastBin: number;
   readonly nBins: number;
   readonly frames: number;
@@ -78,30 +75,34 @@ export class Kernel {
     this.nextFrame = new Int32Array(p.trajectory.particles);
     this.hoods = p.hoods.params;
     this.hoodCount = p.hoods.count;
-    this.driftFraction = rule.driftFraction;
-    this.midpointLimit = MIDPOINT_SHARE * rule.driftFraction;
-    this.h0 = unpackHood(p.hoods.params, p.hoods.count);
-    this.stepFraction = p.stepFraction;
-    this.zoneFloor_m = rule.zoneFloor_m;
-    this.hoodFloor_m = rule.hoodFloor_m;
-    this.maxStep_s = rule.maxStep_s;
-    this.minStep_s = rule.minStep_s;
+    this.hood0 = p.hoods.count > 0 ? p.hoods.params.slice(0, HOOD_STRIDE) : new Float64Array(HOOD_STRIDE);
     this.L = p.room.length_m;
     this.W = p.room.width_m;
-    this.H = p.room.height_m;
-    this.draftX = p.draft_mPerS[0];
-    this.draftY = p.draft_mPerS[1];
+    const [draftX, draftY] = p.draft_mPerS;
+    const s = this.scalars;
+    s[SCALAR.draftX] = draftX;
+    s[SCALAR.draftY] = draftY;
+    s[SCALAR.zoneFloor] = rule.zoneFloor_m;
+    s[SCALAR.hoodFloor] = rule.hoodFloor_m;
+    s[SCALAR.cx] = p.zone.x_m;
+    s[SCALAR.cy] = p.zone.y_m;
+    s[SCALAR.cz] = p.zone.z_m;
+    s[SCALAR.maxStep] = rule.maxStep_s;
+    s[SCALAR.minStep] = rule.minStep_s;
+    s[SCALAR.stepFraction] = p.stepFraction;
+    s[SCALAR.driftFraction] = rule.driftFraction;
+    s[SCALAR.midpointLimit] = MIDPOINT_SHARE * rule.driftFraction;
+    s[SCALAR.invBin] = 1 / p.timeBin_s;
+    s[SCALAR.L] = p.room.length_m;
+    s[SCALAR.W] = p.room.width_m;
+    s[SCALAR.H] = p.room.height_m;
     // A uniform draft in a closed box must return somewhere; letting it recirculate (periodic
     // side walls along its components) keeps the field divergence-free instead of piling dust
     // against the downwind wall.
-    this.wrapX = Math.abs(this.draftX) > 1e-9;
-    this.wrapY = Math.abs(this.draftY) > 1e-9;
-    this.cx = p.zone.x_m;
-    this.cy = p.zone.y_m;
-    this.cz = p.zone.z_m;
-    this.R = p.zone.radius_m;
-    this.duration = p.duration_s;
-    this.invBin = 1 / p.timeBin_s;
+    s[SCALAR.wrapX] = Math.abs(draftX) > 1e-9 ? 1 : 0;
+    s[SCALAR.wrapY] = Math.abs(draftY) > 1e-9 ? 1 : 0;
+    s[SCALAR.R] = p.zone.radius_m;
+    s[SCALAR.duration] = p.duration_s;
     this.lastBin = p.timeBins - 1;
     this.ids = Int32Array.from({ length: a.count }, (_, i) => i);
     this.fate = new Int8Array(a.count).fill(-1);
@@ -152,26 +153,3 @@ export function retire(k: Kernel, i: number, f: number): void {
   swap(a.slot, i, last);
   swap(k.ids, i, last);
 }
-
-export interface Hood0 {
-  x: number; y: number; z: number;
-  nx: number; ny: number; nz: number;
-  e1x: number; e1y: number; e1z: number;
-  e2x: number; e2y: number; e2z: number;
-  halfWidth: number; halfHeight: number;
-  airflow: number; area: number; coefficient: number; slotCoefficient: number; faceVelocity: number;
-  reach: number; boothDepth: number;
-  slot: boolean; flanged: boolean; booth: boolean;
-}
-
-function unpackHood(p: Float64Array, count: number): Hood0 {
-  const v = count > 0 ? p.subarray(0, HOOD_STRIDE) : new Float64Array(HOOD_STRIDE);
-  const kind = v[0];
-  return {
-    x: v[1], y: v[2], z: v[3], nx: v[4], ny: v[5], nz: v[6], e1x: v[7], e1y: v[8], e1z: v[9], e2x: v[10], e2y: v[11], e2z: v[12],
-    halfWidth: v[13], halfHeight: v[14], airflow: v[15], area: v[16], coefficient: v[17], slotCoefficient: v[17] * v[19], faceVelocity: v[18],
-    reach: v[20], boothDepth: v[21],
-    slot: kind === 2 || kind === 3, flanged: kind === 1 || kind === 3 || kind === 4, booth: kind === 4,
-  };
-}
-

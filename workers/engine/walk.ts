@@ -1,5 +1,5 @@
 import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field.ts';
-import { type Kernel, NORMAL_BLOCK } from './kernel.ts';
+import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel.ts';
 import { fillNormals } from './ziggurat.ts';
 
 // Long enough that a visit's set-up (some fifty loads) is small beside its steps, short enough
@@ -29,7 +29,11 @@ export function walk(k: Kernel, i: number): number {
   let z = a.z[i];
   let t = a.t[i];
   const b = a.bin[i];
-  const duration = +k.duration;
+  // Settings come from Float64Arrays (see SCALAR): always doubles, so the compiled loop suits every
+  // scenario. A loop variable started from an object field (vx, vy, d, dh) would also stay tagged
+  // and box a heap number on every step.
+  const sc = k.scalars;
+  const duration = sc[SCALAR.duration];
   const end = a.exhaustAt[i] < duration ? a.exhaustAt[i] : duration;
   const vs = k.settling[b];
   const s2D = k.sqrt2D[b];
@@ -37,29 +41,28 @@ export function walk(k: Kernel, i: number): number {
   const sl = a.slot[i];
   const field = k.field;
   const normals = k.normals;
-  const R = k.R;
+  const R = sc[SCALAR.R];
   const R2 = R * R;
   const nh = k.hoodCount;
   const single = nh === 1 ? 1 : 0;
   const hoods = k.hoods;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
-  // Unary plus marks every scalar as a plain double: a loop variable assigned from a field (vx, vy,
-  // d, dh) would otherwise stay tagged and box a heap number on every step (about 70 B/step), and
-  // each use of a tagged constant re-checks its map.
-  const draftX = +k.draftX, draftY = +k.draftY, zoneFloor_m = +k.zoneFloor_m, hoodFloor_m = +k.hoodFloor_m;
-  const cx = +k.cx, cy = +k.cy, cz = +k.cz, maxStep_s = +k.maxStep_s, minStep_s = +k.minStep_s;
-  const stepFraction = +k.stepFraction, driftFraction = +k.driftFraction, midpointLimit = +k.midpointLimit;
-  const invBin = +k.invBin, lastBin = k.lastBin | 0, nBins = k.nBins | 0;
+  const draftX = sc[SCALAR.draftX], draftY = sc[SCALAR.draftY], zoneFloor_m = sc[SCALAR.zoneFloor], hoodFloor_m = sc[SCALAR.hoodFloor];
+  const cx = sc[SCALAR.cx], cy = sc[SCALAR.cy], cz = sc[SCALAR.cz], maxStep_s = sc[SCALAR.maxStep], minStep_s = sc[SCALAR.minStep];
+  const stepFraction = sc[SCALAR.stepFraction], driftFraction = sc[SCALAR.driftFraction], midpointLimit = sc[SCALAR.midpointLimit];
+  const invBin = sc[SCALAR.invBin], lastBin = k.lastBin | 0, nBins = k.nBins | 0;
   // Flags as 0/1 integers: a boolean read from an object is tested as an unknown value (several
   // compares per use); an integer is one test.
-  const L = +k.L, W = +k.W, H = +k.H, wrapX = k.wrapX ? 1 : 0, wrapY = k.wrapY ? 1 : 0;
-  const h0 = k.h0;
-  const hx = +h0.x, hy = +h0.y, hz = +h0.z, nx = +h0.nx, ny = +h0.ny, nz = +h0.nz;
-  const e1x = +h0.e1x, e1y = +h0.e1y, e1z = +h0.e1z, e2x = +h0.e2x, e2y = +h0.e2y, e2z = +h0.e2z;
-  const halfWidth = +h0.halfWidth, halfHeight = +h0.halfHeight, reach = +h0.reach, boothDepth = +h0.boothDepth;
-  const airflow = +h0.airflow, area = +h0.area, coefficient = +h0.coefficient, slotCoefficient = +h0.slotCoefficient;
-  const faceVelocity = +h0.faceVelocity, slot = h0.slot ? 1 : 0, flanged = h0.flanged ? 1 : 0, booth = h0.booth ? 1 : 0;
+  const L = sc[SCALAR.L], W = sc[SCALAR.W], H = sc[SCALAR.H], wrapX = sc[SCALAR.wrapX] > 0 ? 1 : 0, wrapY = sc[SCALAR.wrapY] > 0 ? 1 : 0;
+  // Hood 0 in packHoods' layout.
+  const h0 = k.hood0;
+  const kind = h0[0];
+  const hx = h0[1], hy = h0[2], hz = h0[3], nx = h0[4], ny = h0[5], nz = h0[6];
+  const e1x = h0[7], e1y = h0[8], e1z = h0[9], e2x = h0[10], e2y = h0[11], e2z = h0[12];
+  const halfWidth = h0[13], halfHeight = h0[14], airflow = h0[15], area = h0[16], coefficient = h0[17];
+  const faceVelocity = h0[18], slotCoefficient = h0[17] * h0[19], reach = h0[20], boothDepth = h0[21];
+  const slot = kind === 2 || kind === 3 ? 1 : 0, flanged = kind === 1 || kind === 3 || kind === 4 ? 1 : 0, booth = kind === 4 ? 1 : 0;
   const captureDepth_m = +CAPTURE_DEPTH_m, normalBlock = NORMAL_BLOCK | 0;
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
