@@ -42,8 +42,6 @@ export class Kernel {
   readonly hood0: Float64Array;
   /** The walk's numeric settings, at the indices of SCALAR. */
   readonly scalars = new Float64Array(SCALAR_COUNT);
-  readonly L: number;
-  readonly W: number;
   readonly lastBin: number;
   readonly nBins: number;
   readonly frames: number;
@@ -76,8 +74,6 @@ export class Kernel {
     this.hoods = p.hoods.params;
     this.hoodCount = p.hoods.count;
     this.hood0 = p.hoods.count > 0 ? p.hoods.params.slice(0, HOOD_STRIDE) : new Float64Array(HOOD_STRIDE);
-    this.L = p.room.length_m;
-    this.W = p.room.width_m;
     const [draftX, draftY] = p.draft_mPerS;
     const s = this.scalars;
     s[SCALAR.draftX] = draftX;
@@ -137,8 +133,8 @@ export function retire(k: Kernel, i: number, f: number): void {
   const mass = k.particleMass_mg[a.bin[i]];
   k.fateMass_mg[f] += mass;
   if (f === 1) {
-    const ix = Math.min(k.depositionNx - 1, Math.floor((a.x[i] / k.L) * k.depositionNx));
-    const iy = Math.min(k.depositionNy - 1, Math.floor((a.y[i] / k.W) * k.depositionNy));
+    const ix = Math.min(k.depositionNx - 1, Math.floor((a.x[i] / k.scalars[SCALAR.L]) * k.depositionNx));
+    const iy = Math.min(k.depositionNy - 1, Math.floor((a.y[i] / k.scalars[SCALAR.W]) * k.depositionNy));
     k.deposition_mg[ix * k.depositionNy + iy] += mass;
   }
   k.fate[k.ids[i]] = f;
