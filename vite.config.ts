@@ -2,6 +2,7 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { fileURLToPath } from 'node:url';
 
 const apiTarget = `http://localhost:${process.env.PORT ?? '3000'}`;
 
@@ -9,6 +10,7 @@ export default defineConfig({
   root: 'src',
   publicDir: false,
   plugins: [react(), tailwindcss()],
+  resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
   build: { outDir: '../dist', emptyOutDir: true, sourcemap: true },
   worker: { format: 'es' },
   optimizeDeps: { include: ['seedrandom', 'comlink'] },

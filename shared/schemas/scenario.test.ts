@@ -60,7 +60,7 @@ describe('scenario schema', () => {
   });
 
   it('accepts every demo scenario file', () => {
-    const dir = new URL('../../server/demo/scenarios/', import.meta.url);
+    const dir = new URL('../demo-scenarios/', import.meta.url);
     const files = readdirSync(dir).filter((f) => f.endsWith('.json'));
     expect(files.length).toBeGreaterThanOrEqual(10);
     for (const f of files) expect(() => parseScenario(JSON.parse(readFileSync(new URL(f, dir), 'utf8')))).not.toThrow();

@@ -46,7 +46,7 @@ async function main(): Promise<void> {
   const many = await throughput(all, reference);
   console.log(`  ${cores} workers: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker (passes ${list(many.passes)})`);
 
-  const demoText = await readFile(new URL('../../server/demo/scenarios/default.json', import.meta.url), 'utf8');
+  const demoText = await readFile(new URL('../../shared/demo-scenarios/default.json', import.meta.url), 'utf8');
   const demo = prepareScenario(parseScenario(JSON.parse(demoText)));
   const started = performance.now();
   const results = combineBatches(demo, await all.run(demo));

@@ -10,7 +10,7 @@ import { agentsService } from '../../agents/agents.service';
 import { scenariosService } from '../../scenarios/scenarios.service';
 import { DEMO_AGENTS, DEMO_SITES } from './places';
 
-const SCENARIO_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../demo/scenarios');
+const SCENARIO_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../shared/demo-scenarios');
 
 export const loadDemoScenario = (file: string): Scenario => parseScenario(JSON.parse(fs.readFileSync(path.join(SCENARIO_DIR, `${file}.json`), 'utf8')));
 

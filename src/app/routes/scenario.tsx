@@ -13,7 +13,7 @@ import { useWorkstation } from '../../features/places/api/get-sites';
 import { useScenario } from '../../features/scenarios/api/get-scenario';
 import { RunResults } from '../../features/run-results/components/run-results';
 import { ScenarioEditor } from '../../features/scenario-editor/components/scenario-editor';
-import { useSizeProfileOptions } from '../../hooks/use-size-profile-options';
+import { useSizeProfileOptions } from '../../features/size-profiles/api/use-size-profile-options';
 import { useUser } from '../../lib/auth';
 import type { Results } from '../../../workers/engine/index';
 import { ScenarioActions } from './scenario-actions';

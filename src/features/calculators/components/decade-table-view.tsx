@@ -30,7 +30,7 @@ export function DecadeTableView({ medium }: { medium: ParticleMedium }) {
         {copy === 'copied' && <span className="text-clear"><span aria-hidden="true">✓ </span>Copied as tab-separated text; paste it into a spreadsheet.</span>}
         {copy === 'blocked' && <span className="text-watch"><span aria-hidden="true">! </span>This browser did not allow copying. Select the table with the mouse and copy it, or download the CSV.</span>}
       </p>
-      <div className="overflow-x-auto rounded-lg border border-line bg-white" tabIndex={0} aria-label="Decade table, scrolls sideways">
+      <div className="overflow-x-auto rounded-lg border border-line bg-white" role="region" tabIndex={0} aria-label="Decade table, scrolls sideways">
         <table className="w-full border-collapse text-sm" data-testid="decade-table">
           <caption className="sr-only">Particle properties at each decade of diameter, same air and density as above</caption>
           <thead className="bg-paper-deep text-left">

@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button.tsx';
 import { type RunProgress, RunCancelledError, runSimulation, warmUpWorkers } from '../../../lib/simulation-bridge.ts';
 import type { Results } from '../../../../workers/engine/index.ts';
 // Raw text keeps the JSON out of the TypeScript project graph; the schema checks it on load.
-import defaultScenarioText from '../../../../server/demo/scenarios/default.json?raw';
+import defaultScenarioText from '../../../../shared/demo-scenarios/default.json?raw';
 
 const scenario = parseScenario(JSON.parse(defaultScenarioText));
 

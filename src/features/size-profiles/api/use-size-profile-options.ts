@@ -1,6 +1,6 @@
 import { useQueries } from '@tanstack/react-query';
-import { sizeProfileQueryOptions } from '../features/size-profiles/api/get-size-profile';
-import { useSizeProfiles } from '../features/size-profiles/api/get-size-profiles';
+import { sizeProfileQueryOptions } from './get-size-profile';
+import { useSizeProfiles } from './get-size-profiles';
 
 // The editor needs each stored profile in the scenario's own form, which only the detail carries.
 export function useSizeProfileOptions() {
