@@ -23,9 +23,13 @@ export default defineConfig({
         test: {
           name: 'unit',
           include: ['shared/**/*.test.ts', 'workers/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/helpers/**/*.test.ts'],
-          exclude: ['**/*.property.test.ts', '**/node_modules/**'],
+          exclude: ['**/*.property.test.ts', '**/*.component.test.tsx', '**/node_modules/**'],
           environment: 'node',
         },
+      },
+      {
+        extends: true,
+        test: { name: 'component', include: ['src/**/*.component.test.tsx'], environment: 'jsdom', setupFiles: ['tests/helpers/component-setup.ts'] },
       },
       {
         extends: true,

@@ -1,0 +1,5 @@
+import { cleanup } from '@testing-library/react';
+import { afterEach } from 'vitest';
+
+// Vitest runs without globals, so Testing Library cannot register its own unmount between tests.
+afterEach(cleanup);
