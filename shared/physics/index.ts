@@ -24,3 +24,6 @@ export { eddyContinuousSource, eddyPuff, eddyDiffusivityFromVentilation } from '
 export type { ContinuousSource, Puff, ReflectingBoundary } from './eddy.ts';
 export { timeWeightedAverage, exposureRatingCategory, bannerFor } from './exposure.ts';
 export type { Banner, ExposureRating, ExposureSegment } from './exposure.ts';
+export { sinkPanelVelocity } from './sink-panel.ts';
+export { hoodFace } from './hood-face.ts';
+export type { HoodFace } from './hood-face.ts';
