@@ -29,3 +29,7 @@ export { hoodFace } from './hood-face.ts';
 export type { HoodFace } from './hood-face.ts';
 export { jetCentrelineSpeed, jetEddyDiffusivity, jetHalfWidth, jetVelocity, jetVolumeFlux } from './round-jet.ts';
 export { JET_DECAY_CONSTANT, JET_EDDY_VISCOSITY_RATIO, JET_SPREADING_RATE } from './round-jet.ts';
+export { depositionIntegral, depositionVelocities } from './surface-deposition.ts';
+export type { DepositionVelocities } from './surface-deposition.ts';
+export { absorptionProbability, roomDepositionRate } from './room-deposition.ts';
+export type { RoomSurfaces } from './room-deposition.ts';
