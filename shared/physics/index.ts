@@ -20,8 +20,8 @@ export { wellMixedConcentration, settlingLossRate, airChangesPerHour } from './w
 export type { WellMixedRoom } from './well-mixed.ts';
 export { nearFieldFarField } from './near-far-field.ts';
 export type { NearFarFieldModel, NearFarFieldConcentration } from './near-far-field.ts';
-export { eddyContinuousSource, eddyPuff, eddyDiffusivityFromVentilation } from './eddy.ts';
-export type { ContinuousSource, Puff, ReflectingBoundary } from './eddy.ts';
+export { eddyContinuousSource, eddyPuff, eddyDiffusivityFromVentilation, roomEddyDiffusivity, MEASURED_ROOM_DIFFUSIVITY_m2PerS } from './eddy.ts';
+export type { ContinuousSource, Puff, ReflectingBoundary, RoomDiffusivity } from './eddy.ts';
 export { timeWeightedAverage, exposureRatingCategory, bannerFor } from './exposure.ts';
 export type { Banner, ExposureRating, ExposureSegment } from './exposure.ts';
 export { sinkPanelVelocity } from './sink-panel.ts';
