@@ -33,3 +33,5 @@ export { depositionIntegral, depositionVelocities } from './surface-deposition.t
 export type { DepositionVelocities } from './surface-deposition.ts';
 export { absorptionProbability, roomDepositionRate } from './room-deposition.ts';
 export type { RoomSurfaces } from './room-deposition.ts';
+export { massOutsideRange } from './size-range.ts';
+export type { MassLeftOut } from './size-range.ts';
