@@ -35,11 +35,19 @@ export function sinkPanelVelocity(
   const c = (-2 * side * airflow_m3PerS) / (16 * Math.PI * halfWidth_m * halfHeight_m);
   const ux = Math.log(edgeLogRatio(t2, r22, t1, r21) / edgeLogRatio(t2, r12, t1, r11));
   const uy = Math.log(edgeLogRatio(s2, r22, s1, r12) / edgeLogRatio(s2, r21, s1, r11));
-  const uz =
-    Math.atan((s2 * t2) / (z_m * r22)) -
-    Math.atan((s1 * t2) / (z_m * r12)) -
-    Math.atan((s2 * t1) / (z_m * r21)) +
-    Math.atan((s1 * t1) / (z_m * r11));
+  // atan(p₁/q₁) + atan(p₂/q₂) = atan2(p₁q₂ + p₂q₁, q₁q₂ − p₁p₂) for q > 0: two atan2 for four atan.
+  const za = z_m >= 0 ? z_m : -z_m;
+  const q22 = za * r22;
+  const q11 = za * r11;
+  const q12 = za * r12;
+  const q21 = za * r21;
+  const p22 = s2 * t2;
+  const p11 = s1 * t1;
+  const p12 = s1 * t2;
+  const p21 = s2 * t1;
+  const solid =
+    Math.atan2(p22 * q11 + p11 * q22, q22 * q11 - p22 * p11) - Math.atan2(p12 * q21 + p21 * q12, q12 * q21 - p12 * p21);
+  const uz = z_m >= 0 ? solid : -solid;
   out[0] = c * ux;
   out[1] = c * uy;
   out[2] = c * uz;
