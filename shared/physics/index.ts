@@ -27,7 +27,7 @@ export type { Banner, ExposureRating, ExposureSegment } from './exposure.ts';
 export { sinkPanelVelocity } from './sink-panel.ts';
 export { hoodFace } from './hood-face.ts';
 export type { HoodFace } from './hood-face.ts';
-export { jetCentrelineSpeed, jetEddyDiffusivity, jetHalfWidth, jetVelocity, jetVolumeFlux } from './round-jet.ts';
+export { jetCentrelineSpeed, jetDiffusivityAndGradient, jetEddyDiffusivity, jetHalfWidth, jetVelocity, jetVolumeFlux } from './round-jet.ts';
 export { JET_DECAY_CONSTANT, JET_EDDY_VISCOSITY_RATIO, JET_SPREADING_RATE } from './round-jet.ts';
 export { depositionIntegral, depositionVelocities } from './surface-deposition.ts';
 export type { DepositionVelocities } from './surface-deposition.ts';

@@ -1,6 +1,13 @@
 import { describe, it, expect } from 'vitest';
 import { bisect } from './root.ts';
-import { jetCentrelineSpeed, jetEddyDiffusivity, jetHalfWidth, jetVelocity, jetVolumeFlux } from './index.ts';
+import {
+  jetCentrelineSpeed,
+  jetDiffusivityAndGradient,
+  jetEddyDiffusivity,
+  jetHalfWidth,
+  jetVelocity,
+  jetVolumeFlux,
+} from './index.ts';
 
 const out = new Float64Array(3);
 const U0 = 50;
@@ -105,5 +112,29 @@ describe('round free jet', () => {
     const x_m = 40 * D0;
     expect(jetEddyDiffusivity(x_m, 0, U0, D0)).toBeCloseTo(0.028 * jetCentrelineSpeed(x_m, U0, D0) * jetHalfWidth(x_m, D0), 12);
     expect(jetEddyDiffusivity(x_m, jetHalfWidth(x_m, D0), U0, D0) / jetEddyDiffusivity(x_m, 0, U0, D0)).toBeCloseTo(0.5, 12);
+  });
+
+  it('gives the walk ∇D that matches central differences of D, in the core and far downstream ([C])', () => {
+    const e = [0.6, 0, 0.8];
+    const field = new Float64Array(4);
+    const d = (x: number, y: number, z: number) => {
+      jetDiffusivityAndGradient(x, y, z, 0.1, 0.2, 0.3, e[0], e[1], e[2], U0, D0, field);
+      return field[0];
+    };
+    const h = 1e-6;
+    for (const [x, y, z] of [[0.13, 0.21, 0.34], [0.5, 0.25, 0.85], [1.3, 0.1, 1.9]]) {
+      const numeric = [
+        (d(x + h, y, z) - d(x - h, y, z)) / (2 * h),
+        (d(x, y + h, z) - d(x, y - h, z)) / (2 * h),
+        (d(x, y, z + h) - d(x, y, z - h)) / (2 * h),
+      ];
+      const value = d(x, y, z);
+      const scale = Math.max(...numeric.map(Math.abs));
+      expect(scale).toBeGreaterThan(0);
+      for (let axis = 0; axis < 3; axis++) expect(Math.abs(field[axis + 1] - numeric[axis])).toBeLessThan(1e-5 * scale);
+      const axial = (x - 0.1) * e[0] + (y - 0.2) * e[1] + (z - 0.3) * e[2];
+      const radial = Math.hypot(x - 0.1 - axial * e[0], y - 0.2, z - 0.3 - axial * e[2]);
+      expect(value).toBeCloseTo(jetEddyDiffusivity(axial, radial, U0, D0), 12);
+    }
   });
 });
