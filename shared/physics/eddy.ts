@@ -61,3 +61,34 @@ export function eddyDiffusivityFromVentilation(airChanges_perH: number, volume_m
   const airChanges_perS = requireNonNegative('airChanges_perH', airChanges_perH) / 3600;
   return (0.52 * airChanges_perS + 8.61e-5) * requirePositive('volume_m3', volume_m3) ** (2 / 3);
 }
+
+export interface RoomDiffusivity {
+  value_m2PerS: number;
+  range: readonly [number, number];
+  clamped: boolean;
+  basis: string;
+}
+
+// Measured in real rooms, < 0.2 to > 5 ACH (Cheng et al., Environ. Sci. Technol. 45:4016, 2011).
+// The floor holds at ACH 0: an occupied workplace mixes at least as much as the stillest house measured.
+export const MEASURED_ROOM_DIFFUSIVITY_m2PerS: readonly [number, number] = [0.001, 0.013];
+
+// The ACH·V^(2/3) estimate, clamped to a measured range: outside it the correlation is an extrapolation.
+export function roomEddyDiffusivity(
+  airChanges_perH: number,
+  volume_m3: number,
+  range: readonly [number, number] = MEASURED_ROOM_DIFFUSIVITY_m2PerS,
+): RoomDiffusivity {
+  const lo = requirePositive('range[0]', range[0]);
+  const hi = requirePositive('range[1]', range[1]);
+  if (hi < lo) throw new RangeError(`range must run from low to high, got [${lo}, ${hi}]`);
+  const estimate_m2PerS = eddyDiffusivityFromVentilation(airChanges_perH, volume_m3);
+  const value_m2PerS = Math.min(hi, Math.max(lo, estimate_m2PerS));
+  const clamped = value_m2PerS !== estimate_m2PerS;
+  const formula = `(0.52·ACH + 8.61e-5 s⁻¹)·V^(2/3) gives ${estimate_m2PerS.toPrecision(3)} m²/s`;
+  const bound = estimate_m2PerS < lo ? 'raised to the floor' : 'lowered to the ceiling';
+  const basis = clamped
+    ? `${formula}, ${bound} of the ${lo}–${hi} m²/s measured in rooms`
+    : `${formula}, inside the ${lo}–${hi} m²/s measured in rooms`;
+  return { value_m2PerS, range: [lo, hi], clamped, basis };
+}

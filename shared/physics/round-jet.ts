@@ -1,0 +1,82 @@
+// Turbulent round free jet (Pope, Turbulent Flows, ch. 5, from memory): far field
+// u_c = B·u₀·d₀/x, u/u_c = exp(−ln2·(r/r½)²), r½ = S·x, with Panchapakesan & Lumley's (1993)
+// B = 6.06 and S = 0.096, whose volume flux 4·B·S²/ln2·x/d₀ = 0.32·x/d₀ matches Ricou & Spalding.
+// Virtual origin at the nozzle. The potential core (x < B·d₀) keeps u_c = u₀ while r½ widens
+// linearly from the nozzle's flux-matched (d₀/2)·√ln2 to S·B·d₀, so u_c and r½ are continuous.
+// The radial velocity follows from continuity, ∂u/∂x + (1/r)·∂(r·v)/∂r = 0, for that profile:
+// v = −(u_c·r½²)'·(1 − g)/(2·ln2·r) + u_c·g·r·r½'/r½ with g = exp(−ln2·(r/r½)²).
+export const JET_DECAY_CONSTANT = 6.06;
+export const JET_SPREADING_RATE = 0.096;
+
+export const LN2 = Math.LN2;
+export const NOZZLE_HALF_WIDTH_PER_DIAMETER = 0.5 * Math.sqrt(LN2);
+
+export function jetCentrelineSpeed(axial_m: number, speed_mPerS: number, diameter_m: number): number {
+  if (axial_m <= 0) return 0;
+  return speed_mPerS * Math.min(1, (JET_DECAY_CONSTANT * diameter_m) / axial_m);
+}
+
+export function jetHalfWidth(axial_m: number, diameter_m: number): number {
+  const core_m = JET_DECAY_CONSTANT * diameter_m;
+  if (axial_m >= core_m) return JET_SPREADING_RATE * axial_m;
+  const nozzle_m = NOZZLE_HALF_WIDTH_PER_DIAMETER * diameter_m;
+  return nozzle_m + ((JET_SPREADING_RATE * core_m - nozzle_m) * Math.max(0, axial_m)) / core_m;
+}
+
+// Q(x) = ∫u·2πr dr = π·u_c·r½²/ln2 for the Gaussian profile.
+export function jetVolumeFlux(axial_m: number, speed_mPerS: number, diameter_m: number): number {
+  const halfWidth_m = jetHalfWidth(axial_m, diameter_m);
+  return (Math.PI * jetCentrelineSpeed(axial_m, speed_mPerS, diameter_m) * halfWidth_m * halfWidth_m) / LN2;
+}
+
+// Writes the jet's air velocity (m/s) at point p into out[0..2] for a jet from origin o along the
+// unit vector e; zero behind the nozzle plane. Allocation-free, for the step loop.
+export function jetVelocity(
+  px_m: number, py_m: number, pz_m: number,
+  ox_m: number, oy_m: number, oz_m: number,
+  ex: number, ey: number, ez: number,
+  speed_mPerS: number,
+  diameter_m: number,
+  out: Float64Array,
+): void {
+  const dx = px_m - ox_m;
+  const dy = py_m - oy_m;
+  const dz = pz_m - oz_m;
+  const x = dx * ex + dy * ey + dz * ez;
+  if (x <= 0) {
+    out[0] = 0;
+    out[1] = 0;
+    out[2] = 0;
+    return;
+  }
+  const rx = dx - x * ex;
+  const ry = dy - x * ey;
+  const rz = dz - x * ez;
+  const r = Math.sqrt(rx * rx + ry * ry + rz * rz);
+  const core_m = JET_DECAY_CONSTANT * diameter_m;
+  let uc: number;
+  let halfWidth: number;
+  let halfWidthSlope: number;
+  let fluxSlope: number;
+  if (x >= core_m) {
+    uc = (speed_mPerS * core_m) / x;
+    halfWidth = JET_SPREADING_RATE * x;
+    halfWidthSlope = JET_SPREADING_RATE;
+    fluxSlope = uc * halfWidth * halfWidth / x;
+  } else {
+    const nozzle_m = NOZZLE_HALF_WIDTH_PER_DIAMETER * diameter_m;
+    uc = speed_mPerS;
+    halfWidthSlope = (JET_SPREADING_RATE * core_m - nozzle_m) / core_m;
+    halfWidth = nozzle_m + halfWidthSlope * x;
+    fluxSlope = 2 * uc * halfWidth * halfWidthSlope;
+  }
+  const eta = r / halfWidth;
+  const g = Math.exp(-LN2 * eta * eta);
+  const u = uc * g;
+  // (1 − g)/r → 0 on the axis, where the radial direction is undefined anyway.
+  const v = r > 1e-12 * halfWidth ? (-fluxSlope * (1 - g)) / (2 * LN2 * r) + (uc * g * r * halfWidthSlope) / halfWidth : 0;
+  const radial = r > 1e-12 * halfWidth ? v / r : 0;
+  out[0] = u * ex + radial * rx;
+  out[1] = u * ey + radial * ry;
+  out[2] = u * ez + radial * rz;
+}
