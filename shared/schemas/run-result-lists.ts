@@ -35,7 +35,7 @@ function readList(value: unknown, ctx: z.RefinementCtx): number[] | undefined {
     if (v === null) out[i] = NaN;
     else if (typeof v === 'number') out[i] = v;
     else {
-      ctx.addIssue({ code: 'custom', message: `must hold numbers, got ${describe(v)} at index ${i}`, input: value, path: [i] });
+      ctx.addIssue({ code: 'custom', message: `must hold numbers, got ${describe(v)}`, input: value, path: [i] });
       return undefined;
     }
   }
@@ -60,7 +60,7 @@ export const int32List = z.unknown().transform((value, ctx) => {
   if (!list) return z.NEVER;
   const bad = list.findIndex((v) => !Number.isNaN(v) && !Number.isInteger(v));
   if (bad >= 0) {
-    ctx.addIssue({ code: 'custom', message: `must hold integers, got ${describe(list[bad])} at index ${bad}`, input: value, path: [bad] });
+    ctx.addIssue({ code: 'custom', message: `must hold integers, got ${describe(list[bad])}`, input: value, path: [bad] });
     return z.NEVER;
   }
   return Int32Array.from(list, (v) => (Number.isNaN(v) ? -1 : v));
