@@ -6,6 +6,7 @@ import { combineBatches } from '../../workers/engine/combine.ts';
 import { prepareTest, runAll } from '../../workers/engine/engine.test-helper.ts';
 import { workstation } from '../../workers/engine/workstation.test-helper.ts';
 import { ENGINE_VERSION } from '../../workers/engine/version.ts';
+import { resultsToJson } from '../../workers/node/format-results.ts';
 import { runResultSchema } from './run-result.ts';
 import { parseRunResult } from './run-result-stored.ts';
 import { toJsonFriendly } from './runs.ts';
@@ -35,6 +36,10 @@ describe('runResultSchema', () => {
     expect(back.trajectories.positions_m.filter(Number.isNaN).length).toBe(nan);
     expect(back).toEqual(fresh);
     expect(viaJson(back)).toEqual(viaJson(fresh));
+  });
+
+  it('reads the CLI\'s --json output back to the same result', () => {
+    expect(parseRunResult(JSON.parse(resultsToJson(fresh)))).toEqual(fresh);
   });
 
   it('reads a typed array that went through JSON.stringify untouched ({"0":…,"1":…})', () => {

@@ -84,3 +84,4 @@ export type SeriesBand = RunResult['breathingZone']['series'][Fraction];
 export type Grid = z.output<typeof gridSchema>;
 export type ResultLimit = z.output<typeof resultLimitSchema>;
 export type Trajectories = RunResult['trajectories'];
+export type Ci = FractionSummary['twa8hCi95_mgPerM3'];
