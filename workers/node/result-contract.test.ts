@@ -49,6 +49,8 @@ describe('runResultSchema', () => {
   });
 });
 
+// Fixtures written by hand in the Results shapes of git history: f68997c (1.0.0, no sizeBins) and
+// 479f57e onwards (sizeBins added, unchanged through 1.2.0), stored the way toJsonFriendly spells them.
 describe('parseRunResult on stored results of older engines', () => {
   it('upgrades a 1.0.0 result written before sizeBins existed, keeping its version', () => {
     const r = parseRunResult(before);
