@@ -1,4 +1,4 @@
-import type { RunCreate } from '../../shared/schemas/runs';
+import { type RunCreate, toJsonFriendly } from '../../shared/schemas/runs';
 import type { ScenarioCreate, ScenarioListQuery, ScenarioUpdate } from '../../shared/schemas/workspace';
 import type { Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
@@ -137,7 +137,7 @@ export const scenariosService = {
           rating_category: run.result.limit?.ratingCategory ?? null,
           banner: run.result.limit?.banner ?? null,
           input: JSON.stringify(run.input),
-          result: JSON.stringify(run.result),
+          result: JSON.stringify(toJsonFriendly(run.result)),
           created_by: actor.id,
           created_at: new Date().toISOString(),
         })

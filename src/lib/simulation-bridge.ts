@@ -1,6 +1,7 @@
 import * as Comlink from 'comlink';
 import { type Scenario, parseScenario } from '../../shared/schemas/scenario.ts';
-import { type BatchResult, type Results, combineBatches, prepareScenario } from '../../workers/engine/index.ts';
+import type { RunResult } from '../../shared/schemas/run-result.ts';
+import { type BatchResult, combineBatches, prepareScenario } from '../../workers/engine/index.ts';
 import { referenceScenario } from '../../workers/engine/reference-scenario.ts';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker.ts';
 
@@ -65,7 +66,7 @@ export interface RunOptions {
 }
 
 /** Runs every batch of the scenario in the worker pool; cancelling terminates the busy workers. */
-export async function runSimulation(scenario: Scenario, { onProgress, signal }: RunOptions = {}): Promise<Results> {
+export async function runSimulation(scenario: Scenario, { onProgress, signal }: RunOptions = {}): Promise<RunResult> {
   const prepared = prepareScenario(scenario);
   const started = performance.now();
   const size = Math.min(poolSize(), prepared.batches);

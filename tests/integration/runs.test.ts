@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../helpers/test-app';
 import { runEngine } from '../helpers/run-engine';
+import { parseRunResult } from '../../shared/schemas/run-result-stored';
 import { AGENT, ROOM_DATA, SITE, WORKSTATION_DATA, scenarioInput } from '../fixtures/workspace';
 
 let t: TestApp;
@@ -35,6 +36,15 @@ describe('POST /api/scenarios/:id/runs', () => {
     expect(await t.db('runs').count({ n: '*' })).toEqual([{ n: 0 }]);
   });
 
+  it('answers 400 naming the field when a list in the result is malformed', async () => {
+    const eng = await t.signIn('engineer');
+    const trajectories = { ...(run.result.trajectories as object), positions_m: [0, 'north', 1] };
+    const res = await eng.post(`/api/scenarios/${scenarioId}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: { ...run.result, trajectories } });
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toContainEqual({ path: 'body.result.trajectories.positions_m.1', message: 'must hold numbers, got "north"' });
+    expect(await t.db('runs').count({ n: '*' })).toEqual([{ n: 0 }]);
+  });
+
   it('saves an engine result with its summary columns, which the list then shows', async () => {
     const eng = await t.signIn('engineer');
     const res = await eng.post(`/api/scenarios/${scenarioId}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: run.result });
@@ -48,6 +58,10 @@ describe('POST /api/scenarios/:id/runs', () => {
     const list = await (await t.signIn('viewer')).get('/api/scenarios');
     expect(list.body.items[0].lastRun).toMatchObject({ id: res.body.id, outOfDate: false, banner: row.banner });
     expect(await t.db('audit_log').where({ action: 'run.saved' }).first()).toBeTruthy();
+    // Stored as plain lists (null for NaN), so the stored text reads back to the posted result.
+    const stored = JSON.parse(row.result);
+    expect(Array.isArray(stored.trajectories.positions_m)).toBe(true);
+    expect(parseRunResult(stored)).toEqual(parseRunResult(run.result));
   });
 
   it('lets a viewer open a saved run without re-running, and marks it out of date after an edit', async () => {

@@ -1,10 +1,7 @@
-import type { Banner, ExposureRating } from '../../shared/physics/index.ts';
+import type { Fraction } from '../../shared/vocabulary/fractions.ts';
+import type { RunResult } from '../../shared/schemas/run-result.ts';
 
-export const FRACTIONS = ['total', 'inhalable', 'thoracic', 'respirable'] as const;
-export type Fraction = (typeof FRACTIONS)[number];
-
-export const FATES = ['captured', 'settled', 'exhausted', 'airborne'] as const;
-export type Fate = (typeof FATES)[number];
+export { FATES, type Fate, FRACTIONS, type Fraction } from '../../shared/vocabulary/fractions.ts';
 
 /** Per-size-bin tables; index b is one bin. Everything the step loop reads is here. */
 export interface SizeBins {
@@ -76,41 +73,5 @@ export interface BatchResult {
   particles?: ParticleStates;
 }
 
-export interface FractionSummary {
-  taskMean_mgPerM3: number;
-  taskMeanCi95_mgPerM3: [number, number];
-  twa8h_mgPerM3: number;
-  twa8hCi95_mgPerM3: [number, number];
-  peak15min_mgPerM3: number;
-}
-
-export interface SeriesBand {
-  mean: number[];
-  lo: number[];
-  hi: number[];
-}
-
-export interface Grid {
-  nx: number;
-  ny: number;
-  cell_m: [number, number];
-  origin_m: [number, number];
-  values: Float32Array;
-}
-
-export interface Results {
-  engine: { version: string; seed: number | string; particles: number; batches: number; timeStep_s: number; stepFraction: number; sizeBins: number };
-  breathingZone: {
-    volume_m3: number;
-    fractions: Record<Fraction, FractionSummary>;
-    series: { time_s: number[] } & Record<Fraction, SeriesBand>;
-  };
-  fate: { emitted_mg: number } & Record<Fate, number>;
-  limit?: { fraction: Fraction; value_mgPerM3: number; percentOfLimit: number; percentOfLimitUpper: number; ratingCategory: ExposureRating; banner: Banner };
-  crossChecks: { fraction: Fraction; wellMixed_mgPerM3: number; nearField_mgPerM3: number; farField_mgPerM3: number; eddySteady_mgPerM3: number };
-  maps: { deposition_mgPerM2: Grid; captureVelocity_mPerS: Grid & { height_m: number } };
-  trajectories: { particles: number; frames: number; frameInterval_s: number; positions_m: Float32Array; bins: Int32Array };
-  /** Diameter per size bin (index = trajectories.bins value), so views can label particles in µm. */
-  sizeBins: { aerodynamic_m: number[]; physical_m: number[] };
-  performance: { particleSteps: number; wallTime_s: number; particleStepsPerS: number };
-}
+export type { FractionSummary, Grid, SeriesBand } from '../../shared/schemas/run-result.ts';
+export type Results = RunResult;

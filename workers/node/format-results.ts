@@ -1,15 +1,15 @@
-import type { Results } from '../engine/index.ts';
-import { FRACTIONS } from '../engine/index.ts';
+import type { RunResult } from '../../shared/schemas/run-result.ts';
+import { FRACTIONS } from '../../shared/vocabulary/fractions.ts';
 
 const mg = (v: number) => (v >= 0.1 ? v.toFixed(3) : v.toPrecision(3));
 const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
 
 // Typed arrays would serialise as index-keyed objects; the JSON output wants plain arrays.
-export function resultsToJson(results: Results): string {
+export function resultsToJson(results: RunResult): string {
   return JSON.stringify(results, (_key, value: unknown) => (ArrayBuffer.isView(value) ? Array.from(value as Float32Array) : value), 2);
 }
 
-export function summary(name: string, r: Results): string {
+export function summary(name: string, r: RunResult): string {
   const lines = [
     `${name}`,
     `engine ${r.engine.version}, seed ${r.engine.seed}, ${r.engine.particles} particles in ${r.engine.batches} batches, ${r.engine.sizeBins} size bins`,

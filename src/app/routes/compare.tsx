@@ -1,6 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { FRACTIONS, type Fraction } from '../../../workers/engine/types.ts';
+import { parseRunResult } from '../../../shared/schemas/run-result-stored.ts';
+import { FRACTIONS, type Fraction } from '../../../shared/vocabulary/fractions.ts';
 import { Cautions } from '../../components/cautions';
 import { Page } from '../../components/ui/page';
 import { Button } from '../../components/ui/button';
@@ -10,19 +11,25 @@ import { ScenarioPicker } from '../../features/compare/components/scenario-picke
 import { useCompareColumns, type CompareSources } from '../../features/compare/hooks/use-compare-columns';
 import { formatSelection, MAX_SELECTED, MIN_SELECTED, parseSelection, toggleId } from '../../features/compare/lib/selection';
 import { targetFor } from '../../features/compare/lib/target';
-import { normaliseResult } from '../../features/run-results/lib/normalise-result';
 import { RATING } from '../../features/run-results/lib/status';
 import { runQueryOptions } from '../../features/scenarios/api/get-run';
 import { scenarioQueryOptions } from '../../features/scenarios/api/get-scenario';
 import { scenarioKeys, useScenarios } from '../../features/scenarios/api/get-scenarios';
 
-// Scenarios and runs come from the scenarios feature; the run-results reader turns a stored result into figures.
+// Scenarios and runs come from the scenarios feature; the shared result schema reads a stored result of any engine version.
 const SOURCES: CompareSources<ReturnType<typeof scenarioKeys.detail>, (string | number)[]> = {
   scenario: scenarioQueryOptions,
   run: runQueryOptions,
-  figures: (result) => {
-    const view = normaliseResult(result);
-    return { ...view, ratingName: view.limit ? RATING[view.limit.ratingCategory].name : undefined };
+  figures: (stored) => {
+    const { breathingZone, fate, limit } = parseRunResult(stored);
+    const { emitted_mg, ...shares } = fate;
+    return {
+      fractions: breathingZone.fractions,
+      series: { time_s: breathingZone.series.time_s, bands: breathingZone.series },
+      fate: { emitted_mg, shares },
+      limit,
+      ratingName: limit ? RATING[limit.ratingCategory].name : undefined,
+    };
   },
 };
 

@@ -2,11 +2,11 @@ import type { Scenario } from '../../../shared/schemas/scenario';
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
 import { Button } from '../../components/ui/button';
 import { ErrorMessage, Notice } from '../../components/ui/status';
-import type { Results } from '../../../workers/engine/index';
+import type { RunResult } from '../../../shared/schemas/run-result.ts';
 import { useSaveRun } from '../../features/scenarios/api/save-run';
 import { RunPanel } from '../../features/scenarios/components/run-panel';
 
-type Fresh = { result: Results; input: Scenario } | null;
+type Fresh = { result: RunResult; input: Scenario } | null;
 
 export function ScenarioRunArea({ scenario, input, dirty, fresh, onFresh }: { scenario: ScenarioDetail; input: Scenario | null; dirty: boolean; fresh: Fresh; onFresh: (f: Fresh) => void }) {
   const save = useSaveRun();

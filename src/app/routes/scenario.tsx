@@ -15,7 +15,7 @@ import { RunResults } from '../../features/run-results/components/run-results';
 import { ScenarioEditor } from '../../features/scenario-editor/components/scenario-editor';
 import { useSizeProfileOptions } from '../../features/size-profiles/api/use-size-profile-options';
 import { useUser } from '../../lib/auth';
-import type { Results } from '../../../workers/engine/index';
+import type { RunResult } from '../../../shared/schemas/run-result.ts';
 import { ScenarioActions } from './scenario-actions';
 import { ScenarioRecords } from './scenario-records';
 import { ScenarioRunArea } from './scenario-run-area';
@@ -40,7 +40,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const workstation = useWorkstation(initial.workstationId);
   const [draft, setDraft] = useState<Draft>(() => fromDetail(initial));
   const [base, setBase] = useState<ScenarioDetail>(initial);
-  const [fresh, setFresh] = useState<{ result: Results; input: Scenario } | null>(null);
+  const [fresh, setFresh] = useState<{ result: RunResult; input: Scenario } | null>(null);
   const parsed = useMemo(() => scenarioSchema.safeParse(draft.input), [draft]);
   const readOnly = !can(user?.role, 'scenarios:write');
   const dirty = JSON.stringify(fromDetail(base)) !== JSON.stringify(draft);

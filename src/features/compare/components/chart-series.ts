@@ -1,4 +1,4 @@
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import type { CompareColumn } from '../lib/types.ts';
 
 // Colour and dash pattern together, so four lines stay apart in grey print and for colour-blind readers.

@@ -1,4 +1,4 @@
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { downloadCsv } from '../../../lib/csv.ts';
 import { comparisonCsv } from '../lib/comparison-csv.ts';

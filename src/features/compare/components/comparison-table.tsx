@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { paths } from '../../../config/paths.ts';
 import { dateTime } from '../../../lib/format.ts';
 import type { Target } from '../lib/target.ts';

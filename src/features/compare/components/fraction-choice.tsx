@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { FRACTION_WORD, TABLE_FRACTIONS } from '../lib/types.ts';
 
 export function FractionChoice({ value, onChange, limitFraction }: { value: Fraction; onChange: (f: Fraction) => void; limitFraction: Fraction }) {

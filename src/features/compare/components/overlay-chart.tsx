@@ -4,7 +4,7 @@ import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
 import { useState } from 'react';
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { plain } from '../lib/labels.ts';
 import { FRACTION_WORD, type CompareColumn } from '../lib/types.ts';
 import { chartSeries, limitsFor, SERIES_LOOK } from './chart-series.ts';

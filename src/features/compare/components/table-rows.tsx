@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { BannerBadge } from '../../../components/banner-badge.tsx';
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { TIER_WORDS } from '../lib/control-order.ts';
 import { compareMeans } from '../lib/differ.ts';
 import { roughFanPower_W } from '../lib/fan-power.ts';

@@ -1,4 +1,4 @@
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import type { Estimate } from './differ.ts';
 import type { CompareColumn } from './types.ts';
 

@@ -1,10 +1,10 @@
 import type { Banner, ExposureRating } from '../../../../shared/physics/index.ts';
 import type { ControlTier } from '../../../../shared/schemas/workspace.ts';
-import type { Fate, Fraction } from '../../../../workers/engine/types.ts';
+import type { Fate, Fraction } from '../../../../shared/vocabulary/fractions.ts';
 
 export type Ci = [number, number];
 
-/** The parts of a stored run that side by side reads; a normalised run view satisfies it as it is. */
+/** The parts of a stored run that side by side reads, regrouped from the run's result by the compare route. */
 export interface RunFigures {
   fractions: Record<Fraction, { twa8h_mgPerM3: number; twa8hCi95_mgPerM3: Ci; peak15min_mgPerM3: number }>;
   series: { time_s: number[]; bands: Record<Fraction, { mean: number[]; lo: number[]; hi: number[] }> };

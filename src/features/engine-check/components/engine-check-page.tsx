@@ -3,7 +3,7 @@ import { parseScenario } from '../../../../shared/schemas/scenario.ts';
 import { Cautions } from '../../../components/cautions.tsx';
 import { Button } from '../../../components/ui/button.tsx';
 import { type RunProgress, RunCancelledError, runSimulation, warmUpWorkers } from '../../../lib/simulation-bridge.ts';
-import type { Results } from '../../../../workers/engine/index.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 // Raw text keeps the JSON out of the TypeScript project graph; the schema checks it on load.
 import defaultScenarioText from '../../../../shared/demo-scenarios/default.json?raw';
 
@@ -12,14 +12,14 @@ const scenario = parseScenario(JSON.parse(defaultScenarioText));
 type State =
   | { kind: 'idle' }
   | { kind: 'running'; progress: RunProgress }
-  | { kind: 'done'; results: Results }
+  | { kind: 'done'; results: RunResult }
   | { kind: 'cancelled' }
   | { kind: 'failed'; message: string };
 
 const mg = (v: number) => v.toPrecision(3);
 const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
 
-function ResultSummary({ results }: { results: Results }) {
+function ResultSummary({ results }: { results: RunResult }) {
   const r = results.breathingZone.fractions.respirable;
   const { fate } = results;
   return (

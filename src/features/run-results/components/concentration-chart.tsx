@@ -3,9 +3,9 @@ import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
-import type { Fraction } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { FRACTION_LABEL, num } from '../lib/format.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from '../../../components/chart-style.ts';
 
 const WIDTH = 760;
@@ -16,14 +16,14 @@ const LIMIT_IN_VIEW = 5;
 
 const tick = (v: unknown) => String(Number(Number(v).toPrecision(3)));
 
-export function ConcentrationChart({ view, fraction }: { view: RunView; fraction: Fraction }) {
-  const band = view.series.bands[fraction];
-  const points = view.series.time_s.map((t, i) => ({ t: t / 60, mean: band.mean[i], lo: band.lo[i], hi: band.hi[i] })).filter((p) => Number.isFinite(p.mean));
+export function ConcentrationChart({ view, fraction }: { view: RunResult; fraction: Fraction }) {
+  const band = view.breathingZone.series[fraction];
+  const points = view.breathingZone.series.time_s.map((t, i) => ({ t: t / 60, mean: band.mean[i], lo: band.lo[i], hi: band.hi[i] })).filter((p) => Number.isFinite(p.mean));
   const dataMax = Math.max(1e-12, ...points.map((p) => (Number.isFinite(p.hi) ? p.hi : p.mean)));
   const limit = view.limit?.fraction === fraction ? view.limit.value_mgPerM3 : undefined;
   const showLimit = limit !== undefined && limit <= LIMIT_IN_VIEW * dataMax;
   const yMax = (showLimit ? Math.max(dataMax, limit) : dataMax) * 1.08;
-  const tMax = Math.max(...view.series.time_s, 1) / 60;
+  const tMax = Math.max(...view.breathingZone.series.time_s, 1) / 60;
   const innerW = WIDTH - MARGIN.left - MARGIN.right;
   const innerH = HEIGHT - MARGIN.top - MARGIN.bottom;
   const x = scaleLinear({ domain: [0, tMax], range: [0, innerW] });

@@ -1,11 +1,11 @@
 import { useState } from 'react';
-import type { Fraction } from '../../../../workers/engine/types.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { ConcentrationChart } from './concentration-chart.tsx';
 import { FractionPicker } from './fraction-picker.tsx';
 import { Section } from './section.tsx';
 
-export function ConcentrationSection({ view }: { view: RunView }) {
+export function ConcentrationSection({ view }: { view: RunResult }) {
   const [fraction, setFraction] = useState<Fraction>('respirable');
   return (
     <Section title="Breathing-zone concentration over time" intro="Mean over the batches with its 95 % confidence band, in the breathing zone around the worker's head, during the simulated task.">

@@ -1,10 +1,10 @@
 import { FRACTION_LABEL, num } from '../lib/format.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Section } from './section.tsx';
 
 type Row = { key: string; model: string; value: number; assumes: string };
 
-function rows(view: RunView): Row[] {
+function rows(view: RunResult): Row[] {
   const c = view.crossChecks;
   return [
     { key: 'well-mixed', model: 'Well-mixed room', value: c.wellMixed_mgPerM3, assumes: 'Dust spreads instantly and evenly through the whole room; general ventilation, hood airflow and settling remove it.' },
@@ -16,10 +16,10 @@ function rows(view: RunView): Row[] {
 
 const ratio = (mc: number, model: number) => (model > 0 && Number.isFinite(mc) ? `${num(mc / model, 2)}×` : '—');
 
-export function CrossChecks({ view }: { view: RunView }) {
+export function CrossChecks({ view }: { view: RunResult }) {
   const fraction = view.crossChecks.fraction;
-  const mc = view.fractions[fraction].taskMean_mgPerM3;
-  const hoods = view.fate.shares.captured > 0;
+  const mc = view.breathingZone.fractions[fraction].taskMean_mgPerM3;
+  const hoods = view.fate.captured > 0;
   return (
     <Section title="Analytic cross-checks" intro={`Box and diffusion models for the same source, room and airflow, ${FRACTION_LABEL[fraction].toLowerCase()} fraction, averaged over the simulated window; compared with the Monte-Carlo task mean in the breathing zone.`}>
       <div className="overflow-x-auto rounded-lg border border-line bg-white">

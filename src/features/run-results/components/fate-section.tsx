@@ -1,6 +1,6 @@
-import { FATES, type Fate } from '../../../../workers/engine/types.ts';
+import { FATES, type Fate } from '../../../../shared/vocabulary/fractions.ts';
 import { num } from '../lib/format.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Section } from './section.tsx';
 
 // Fate colours are our own; each segment also carries its word in the list, never colour alone.
@@ -11,8 +11,8 @@ const FATE: Record<Fate, { label: string; colour: string }> = {
   airborne: { label: 'Still airborne at the end', colour: '#c9b98f' },
 };
 
-export function FateSection({ view }: { view: RunView }) {
-  const { emitted_mg, shares } = view.fate;
+export function FateSection({ view }: { view: RunResult }) {
+  const { emitted_mg, ...shares } = view.fate;
   const total = FATES.reduce((a, f) => a + (Number.isFinite(shares[f]) ? shares[f] : 0), 0);
   const widths = FATES.map((f) => 1000 * Math.max(0, shares[f] || 0));
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { FRACTIONS, type Fraction } from '../../../../workers/engine/types.ts';
+import { FRACTIONS, type Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { FRACTION_LABEL } from '../lib/format.ts';
 
 // Native radios: arrow keys move between fractions without any extra key handling.

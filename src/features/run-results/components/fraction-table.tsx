@@ -1,13 +1,13 @@
 import { Button } from '../../../components/ui/button.tsx';
 import { type Column, DataTable } from '../../../components/ui/data-table.tsx';
-import { FRACTIONS, type Fraction } from '../../../../workers/engine/types.ts';
+import { FRACTIONS, type Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { fractionTableCsv, seriesCsv } from '../lib/csv.ts';
 import { downloadText } from '../../../lib/download.ts';
 import { ciText, FRACTION_LABEL, num, percent } from '../lib/format.ts';
-import type { FractionView, RunView } from '../lib/normalise-result.ts';
+import type { FractionSummary, RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Section } from './section.tsx';
 
-type Row = FractionView & { fraction: Fraction; percent?: number; percentUpper?: number };
+type Row = FractionSummary & { fraction: Fraction; percent?: number; percentUpper?: number };
 
 const withCi = (value: number, ci: [number, number]) => (
   <>
@@ -30,8 +30,8 @@ const COLUMNS: Column<Row>[] = [
   },
 ];
 
-export function FractionTable({ view, runLabel }: { view: RunView; runLabel: string }) {
-  const rows: Row[] = FRACTIONS.map((f) => ({ fraction: f, ...view.fractions[f], ...(view.limit?.fraction === f ? { percent: view.limit.percentOfLimit, percentUpper: view.limit.percentOfLimitUpper } : {}) }));
+export function FractionTable({ view, runLabel }: { view: RunResult; runLabel: string }) {
+  const rows: Row[] = FRACTIONS.map((f) => ({ fraction: f, ...view.breathingZone.fractions[f], ...(view.limit?.fraction === f ? { percent: view.limit.percentOfLimit, percentUpper: view.limit.percentOfLimitUpper } : {}) }));
   const actions = (
     <>
       <Button variant="secondary" onClick={() => downloadText(`${runLabel}-fractions.csv`, fractionTableCsv(view))}>

@@ -1,11 +1,11 @@
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import type { SequentialScale } from '../lib/colour-scale.ts';
-import type { GridView } from '../lib/normalise-result.ts';
+import type { Grid } from '../../../../shared/schemas/run-result.ts';
 import { projection } from '../lib/room-projection.ts';
 import { DRAWING_WIDTH, RoomView } from './room-view.tsx';
 
 /** A floor-plane grid ([ix][iy]) painted under the plan, with the source, hoods and breathing zone on top. */
-export function GridMap({ grid, scale, scenario, label, skipZero = false }: { grid: GridView; scale: SequentialScale; scenario: Scenario; label: string; skipZero?: boolean }) {
+export function GridMap({ grid, scale, scenario, label, skipZero = false }: { grid: Grid; scale: SequentialScale; scenario: Scenario; label: string; skipZero?: boolean }) {
   const p = projection(scenario.room, 'plan', DRAWING_WIDTH);
   const cells = [];
   for (let ix = 0; ix < grid.nx; ix++) {

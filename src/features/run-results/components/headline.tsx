@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import { ciText, FRACTION_LABEL, num, percent, relativeError } from '../lib/format.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { BANNER, RATING } from '../lib/status.ts';
 import { BannerBadge } from './banner-badge.tsx';
 
@@ -16,10 +16,10 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
   );
 }
 
-export function Headline({ view, scenario, agentName, limitSource }: { view: RunView; scenario: Scenario; agentName?: string; limitSource?: string }) {
+export function Headline({ view, scenario, agentName, limitSource }: { view: RunResult; scenario: Scenario; agentName?: string; limitSource?: string }) {
   const limit = view.limit;
   const fraction = limit?.fraction ?? 'respirable';
-  const s = view.fractions[fraction];
+  const s = view.breathingZone.fractions[fraction];
   const agent = agentName ?? scenario.dust.name;
   const source = limitSource ?? scenario.limit?.source;
   return (

@@ -2,7 +2,7 @@ import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import { sequentialScale } from '../lib/colour-scale.ts';
 import { num } from '../lib/format.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { ColourLegend } from './colour-legend.tsx';
 import { GridMap } from './grid-map.tsx';
 import { Section } from './section.tsx';
@@ -11,7 +11,7 @@ function releaseType(scenario: Scenario): ReleaseCondition | undefined {
   return scenario.hoods.find((h) => h.releaseType)?.releaseType;
 }
 
-export function MapsSection({ view, scenario }: { view: RunView; scenario: Scenario }) {
+export function MapsSection({ view, scenario }: { view: RunResult; scenario: Scenario }) {
   const dep = view.maps.deposition_mgPerM2;
   const cap = view.maps.captureVelocity_mPerS;
   const release = releaseType(scenario);

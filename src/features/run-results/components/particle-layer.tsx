@@ -2,12 +2,12 @@ import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import type { Projection } from '../lib/room-projection.ts';
 import type { SizeClasses } from '../lib/size-classes.ts';
 import { type Dot, splitAtWrap, trail } from '../lib/trajectory-frames.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { Trajectories } from '../../../../shared/schemas/run-result.ts';
 
 export const TAIL_FRAMES = 8;
 
 // A short fading tail turns a cloud of dots into visible paths without drawing 150 frames per particle.
-export function ParticleLayer({ dots, p, t, frame, from, sizes, room }: { dots: Dot[]; p: Projection; t: RunView['trajectories']; frame: number; from: Int32Array; sizes: SizeClasses; room: Scenario['room'] }) {
+export function ParticleLayer({ dots, p, t, frame, from, sizes, room }: { dots: Dot[]; p: Projection; t: Trajectories; frame: number; from: Int32Array; sizes: SizeClasses; room: Scenario['room'] }) {
   return (
     <g data-testid={`dots-${p.kind}`}>
       {dots.map((d) => {

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import { usePlayback } from '../hooks/use-playback.ts';
-import type { RunView } from '../lib/normalise-result.ts';
+import type { RunResult, Trajectories } from '../../../../shared/schemas/run-result.ts';
 import { projection } from '../lib/room-projection.ts';
 import { sizeClasses } from '../lib/size-classes.ts';
 import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '../lib/trajectory-frames.ts';
@@ -23,12 +23,12 @@ export function SizeLegend({ sizes }: { sizes: ReturnType<typeof sizeClasses> })
   );
 }
 
-const TAIL_SECONDS = (t: RunView['trajectories']) => Math.round(TAIL_FRAMES * t.frameInterval_s);
+const TAIL_SECONDS = (t: Trajectories) => Math.round(TAIL_FRAMES * t.frameInterval_s);
 
-export function ParticleViews({ view, scenario }: { view: RunView; scenario: Scenario }) {
+export function ParticleViews({ view, scenario }: { view: RunResult; scenario: Scenario }) {
   const t = view.trajectories;
   const play = usePlayback(t.frames, t.frameInterval_s);
-  const sizes = useMemo(() => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, t.binDiameters_m), [view.engine.sizeBins, t.bins, t.binDiameters_m]);
+  const sizes = useMemo(() => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, view.sizeBins.aerodynamic_m), [view.engine.sizeBins, t.bins, view.sizeBins.aerodynamic_m]);
   const from = useMemo(() => visibleFrom(t), [t]);
   const dots = useMemo(() => frameDots(t, play.frame, from), [t, play.frame, from]);
   const plan = projection(scenario.room, 'plan', DRAWING_WIDTH);

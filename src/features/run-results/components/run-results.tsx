@@ -2,7 +2,8 @@ import { useMemo } from 'react';
 import { Cautions } from '../../../components/cautions.tsx';
 import { ErrorMessage } from '../../../components/ui/status.tsx';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { normaliseResult, type RunView } from '../lib/normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
+import { parseRunResult } from '../../../../shared/schemas/run-result-stored.ts';
 import { ConcentrationSection } from './concentration-section.tsx';
 import { CrossChecks } from './cross-checks.tsx';
 import { FateSection } from './fate-section.tsx';
@@ -20,16 +21,16 @@ export interface RunResultsProps {
   limitSource?: string;
 }
 
-function read(result: unknown): { view: RunView } | { error: unknown } {
+function read(result: unknown): { view: RunResult } | { error: unknown } {
   try {
-    return { view: normaliseResult(result) };
+    return { view: parseRunResult(result) };
   } catch (error) {
     return { error };
   }
 }
 
 // File names carry the seed so two downloads from different runs never overwrite each other.
-const runLabel = (view: RunView) => `motewalk-run-seed-${String(view.engine.seed).replace(/[^\w-]/g, '_')}`;
+const runLabel = (view: RunResult) => `motewalk-run-seed-${String(view.engine.seed).replace(/[^\w-]/g, '_')}`;
 
 /** Everything one run says, from the banner down to the cautions; presentational, nothing fetched. */
 export function RunResults({ result, scenario, agentName, limitSource }: RunResultsProps) {

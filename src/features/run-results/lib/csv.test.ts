@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { scenarioInput } from '../../../../tests/fixtures/workspace';
 import { runEngine } from '../../../../tests/helpers/run-engine';
 import { fractionTableCsv, seriesCsv, toCsv } from './csv';
-import { normaliseResult } from './normalise-result';
+import { parseRunResult } from '../../../../shared/schemas/run-result-stored';
 
-const view = normaliseResult(runEngine(scenarioInput()).result);
+const view = parseRunResult(runEngine(scenarioInput()).result);
 const parse = (csv: string) => csv.trimEnd().split('\r\n').map((line) => line.split(','));
 
 describe('CSV builders', () => {
@@ -18,7 +18,7 @@ describe('CSV builders', () => {
     expect(rows.map((r) => r[0])).toEqual(['Fraction', 'Total', 'Inhalable', 'Thoracic', 'Respirable']);
     for (const h of rows[0].slice(1)) expect(h).toMatch(/\((mg\/m³|% of limit)\)$/);
     const respirable = rows[4];
-    expect(Number(respirable[4])).toBe(view.fractions.respirable.twa8h_mgPerM3);
+    expect(Number(respirable[4])).toBe(view.breathingZone.fractions.respirable.twa8h_mgPerM3);
     expect(Number(respirable[9])).toBe(view.limit!.percentOfLimit);
     // The limit applies to one fraction; the others get no % of limit.
     expect(rows[1][9]).toBe('');
@@ -28,8 +28,8 @@ describe('CSV builders', () => {
     const rows = parse(seriesCsv(view));
     expect(rows[0][0]).toBe('Time (s)');
     expect(rows[0]).toHaveLength(1 + 4 * 3);
-    expect(rows).toHaveLength(view.series.time_s.length + 1);
-    expect(Number(rows[1][0])).toBe(view.series.time_s[0]);
-    expect(Number(rows[10][10])).toBe(view.series.bands.respirable.mean[9]);
+    expect(rows).toHaveLength(view.breathingZone.series.time_s.length + 1);
+    expect(Number(rows[1][0])).toBe(view.breathingZone.series.time_s[0]);
+    expect(Number(rows[10][10])).toBe(view.breathingZone.series.respirable.mean[9]);
   });
 });

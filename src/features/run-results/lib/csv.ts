@@ -1,6 +1,6 @@
-import { FRACTIONS } from '../../../../workers/engine/types.ts';
+import { FRACTIONS } from '../../../../shared/vocabulary/fractions.ts';
 import { FRACTION_LABEL } from './format.ts';
-import type { RunView } from './normalise-result.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 
 // Full precision in files: rounding is for the screen, the engineer's spreadsheet decides its own.
 function cell(value: number | string): string {
@@ -12,7 +12,7 @@ export function toCsv(header: string[], rows: (number | string)[][]): string {
   return [header, ...rows].map((row) => row.map(cell).join(',')).join('\r\n') + '\r\n';
 }
 
-export function fractionTableCsv(view: RunView): string {
+export function fractionTableCsv(view: RunResult): string {
   const header = [
     'Fraction',
     'Task mean (mg/m³)',
@@ -27,15 +27,16 @@ export function fractionTableCsv(view: RunView): string {
     '8-h TWA upper 95 % bound (% of limit)',
   ];
   const rows = FRACTIONS.map((f) => {
-    const s = view.fractions[f];
+    const s = view.breathingZone.fractions[f];
     const l = view.limit?.fraction === f ? view.limit : undefined;
     return [FRACTION_LABEL[f], s.taskMean_mgPerM3, ...s.taskMeanCi95_mgPerM3, s.twa8h_mgPerM3, ...s.twa8hCi95_mgPerM3, s.peak15min_mgPerM3, l?.value_mgPerM3 ?? '', l?.percentOfLimit ?? '', l?.percentOfLimitUpper ?? ''];
   });
   return toCsv(header, rows);
 }
 
-export function seriesCsv(view: RunView): string {
+export function seriesCsv(view: RunResult): string {
   const header = ['Time (s)', ...FRACTIONS.flatMap((f) => [`${FRACTION_LABEL[f]} mean (mg/m³)`, `${FRACTION_LABEL[f]} 95 % CI low (mg/m³)`, `${FRACTION_LABEL[f]} 95 % CI high (mg/m³)`])];
-  const rows = view.series.time_s.map((t, i) => [t, ...FRACTIONS.flatMap((f) => [view.series.bands[f].mean[i], view.series.bands[f].lo[i], view.series.bands[f].hi[i]])]);
+  const series = view.breathingZone.series;
+  const rows = series.time_s.map((t, i) => [t, ...FRACTIONS.flatMap((f) => [series[f].mean[i], series[f].lo[i], series[f].hi[i]])]);
   return toCsv(header, rows);
 }

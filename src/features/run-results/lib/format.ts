@@ -1,5 +1,5 @@
 import { formatSig } from '../../../../shared/units.ts';
-import type { Ci } from './normalise-result.ts';
+import type { Ci } from '../../../../shared/schemas/run-result.ts';
 
 const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
 

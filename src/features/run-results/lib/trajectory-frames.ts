@@ -1,4 +1,4 @@
-import type { RunView } from './normalise-result.ts';
+import type { Trajectories } from '../../../../shared/schemas/run-result.ts';
 
 export interface Dot {
   slot: number;
@@ -7,8 +7,6 @@ export interface Dot {
   y_m: number;
   z_m: number;
 }
-
-type Trajectories = RunView['trajectories'];
 
 const same = (p: Float32Array, a: number, b: number) => p[a] === p[b] && p[a + 1] === p[b + 1] && p[a + 2] === p[b + 2];
 

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
-import type { Results } from '../../../../workers/engine/index';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Button } from '../../../components/ui/button';
 import { ErrorMessage } from '../../../components/ui/status';
 import { RunCancelledError, runSimulation, warmUpWorkers, type RunProgress } from '../../../lib/simulation-bridge';
@@ -9,7 +9,7 @@ type State = { phase: 'idle' } | { phase: 'running'; progress: RunProgress } | {
 
 const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` : `${Math.ceil(s / 60)} min`) : '…');
 
-export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: Results, input: Scenario) => void }) {
+export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: RunResult, input: Scenario) => void }) {
   const [state, setState] = useState<State>({ phase: 'idle' });
   const abort = useRef<AbortController | null>(null);
   useEffect(() => {

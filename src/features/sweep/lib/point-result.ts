@@ -1,5 +1,6 @@
 import type { Banner } from '../../../../shared/physics/index.ts';
-import type { Fraction, Results } from '../../../../workers/engine/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
+import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 
 /** What the sweep keeps of one run: the limit fraction's 8-h TWA with its interval and the verdict. */
 export interface PointResult {
@@ -13,8 +14,8 @@ export interface PointResult {
   particles: number;
 }
 
-// The rest of Results (series, maps, trajectories) is dropped: twelve full runs would hold tens of megabytes.
-export function pointResult(results: Results): PointResult {
+// The rest of RunResult (series, maps, trajectories) is dropped: twelve full runs would hold tens of megabytes.
+export function pointResult(results: RunResult): PointResult {
   const limit = results.limit;
   if (!limit) throw new Error('The run has no exposure limit, so the sweep cannot compare it with a target.');
   const s = results.breathingZone.fractions[limit.fraction];

@@ -1,0 +1,87 @@
+import { z } from 'zod';
+import { BANNERS, FATES, type Fate, FRACTIONS, type Fraction } from '../vocabulary/fractions.ts';
+import { float32List, int32List, measured, numberList, pair } from './run-result-lists.ts';
+
+const conc = z.number().finite().gte(0);
+const ci = z.tuple([z.number().finite(), z.number().finite()]);
+// Shares are mass ratios summed in floating point: allow the last bit of rounding either side of [0, 1].
+const share = z.number().finite().gte(-1e-9).lte(1 + 1e-9);
+const count = z.number().int().gte(0);
+
+function perFraction<T extends z.ZodType>(schema: T) {
+  return Object.fromEntries(FRACTIONS.map((f) => [f, schema])) as Record<Fraction, T>;
+}
+function perFate<T extends z.ZodType>(schema: T) {
+  return Object.fromEntries(FATES.map((f) => [f, schema])) as Record<Fate, T>;
+}
+
+export const fractionSummarySchema = z.object({ taskMean_mgPerM3: conc, taskMeanCi95_mgPerM3: ci, twa8h_mgPerM3: conc, twa8hCi95_mgPerM3: ci, peak15min_mgPerM3: conc });
+
+export const seriesBandSchema = z.object({ mean: numberList, lo: numberList, hi: numberList });
+
+const gridShape = { nx: count, ny: count, cell_m: pair, origin_m: pair, values: float32List };
+type GridOut = { nx: number; ny: number; values: Float32Array };
+function cellsMatch(grid: GridOut, ctx: z.RefinementCtx) {
+  if (grid.values.length !== grid.nx * grid.ny) ctx.addIssue({ code: 'custom', path: ['values'], message: `must hold nx·ny = ${grid.nx * grid.ny} numbers, got ${grid.values.length}`, input: grid.values });
+}
+/** A plan-view map, values [ix][iy] as the engine writes them. */
+export const gridSchema = z.object(gridShape).superRefine(cellsMatch);
+const captureGridSchema = z.object({ ...gridShape, height_m: z.number() }).superRefine(cellsMatch);
+
+export const trajectoriesSchema = z
+  .object({
+    particles: count,
+    frames: count,
+    frameInterval_s: z.number().positive(),
+    /** [particle][frame][xyz]; NaN where the particle is not airborne. */
+    positions_m: float32List,
+    /** Size bin per sampled particle, −1 for an unused slot. */
+    bins: int32List,
+  })
+  .superRefine((t, ctx) => {
+    const expected = t.particles * t.frames * 3;
+    if (t.positions_m.length !== expected) ctx.addIssue({ code: 'custom', path: ['positions_m'], message: `must hold particles·frames·3 = ${expected} numbers, got ${t.positions_m.length}`, input: t.positions_m });
+  });
+
+export const resultLimitSchema = z.object({
+  fraction: z.enum(FRACTIONS),
+  value_mgPerM3: z.number().positive(),
+  percentOfLimit: z.number().finite(),
+  percentOfLimitUpper: z.number().finite(),
+  ratingCategory: z.union([z.literal(0), z.literal(1), z.literal(2), z.literal(3), z.literal(4)]),
+  banner: z.enum(BANNERS),
+});
+
+/** A run's result in the shape the current engine writes; typed arrays or their JSON lists both read. */
+export const runResultSchema = z.object({
+  engine: z.object({
+    version: z.string().min(1).max(40),
+    seed: z.union([z.number(), z.string()]),
+    particles: z.number().int().positive(),
+    batches: z.number().int().positive(),
+    timeStep_s: z.number().positive(),
+    stepFraction: z.number().positive(),
+    sizeBins: count,
+  }),
+  breathingZone: z.object({
+    volume_m3: z.number().positive(),
+    fractions: z.object(perFraction(fractionSummarySchema)),
+    series: z.object({ time_s: numberList, ...perFraction(seriesBandSchema) }),
+  }),
+  fate: z.object({ emitted_mg: conc, ...perFate(share) }),
+  limit: resultLimitSchema.optional(),
+  crossChecks: z.object({ fraction: z.enum(FRACTIONS), wellMixed_mgPerM3: measured, nearField_mgPerM3: measured, farField_mgPerM3: measured, eddySteady_mgPerM3: measured }),
+  maps: z.object({ deposition_mgPerM2: gridSchema, captureVelocity_mPerS: captureGridSchema }),
+  trajectories: trajectoriesSchema,
+  /** Diameter per size bin (index = trajectories.bins value); empty lists when the result predates them. */
+  sizeBins: z.object({ aerodynamic_m: numberList, physical_m: numberList }),
+  performance: z.object({ particleSteps: count, wallTime_s: z.number().gte(0), particleStepsPerS: z.number().gte(0) }),
+});
+
+export type RunResult = z.output<typeof runResultSchema>;
+export type FractionSummary = RunResult['breathingZone']['fractions'][Fraction];
+export type SeriesBand = RunResult['breathingZone']['series'][Fraction];
+export type Grid = z.output<typeof gridSchema>;
+export type ResultLimit = z.output<typeof resultLimitSchema>;
+export type Trajectories = RunResult['trajectories'];
+export type Ci = FractionSummary['twa8hCi95_mgPerM3'];
