@@ -1,6 +1,7 @@
 /**
- * Where each hood setting sits in packHoods' Float64Array (one HOOD_STRIDE per hood). Plain
- * module constants, so the compiled walk and evaluateHoods see literal offsets.
+ * Where each hood setting sits in packHoods' Float64Array (one HOOD_STRIDE per hood). A module
+ * that indexes with them in a hot loop copies them into its own module-level consts first (see
+ * hood-field.ts), so V8 compiles them as literal offsets.
  */
 export const HOOD_KIND = 0;
 /** Face centre, m. */

@@ -1,12 +1,18 @@
-import { OPENING_DISTANCE_FACTOR } from '../../shared/physics/hoods.ts';
+import * as fit from '../../shared/physics/hoods.ts';
 import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field.ts';
-import {
+import * as slots from './hood-slots.ts';
+import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel.ts';
+import { fillNormals } from './ziggurat.ts';
+
+// Module-level copies of imported numbers, which V8 compiles as literals (see hood-field.ts).
+const { OPENING_DISTANCE_FACTOR } = fit;
+const {
   HOOD_AIRFLOW, HOOD_AREA, HOOD_BOOTH_DEPTH, HOOD_COEFFICIENT, HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z,
   HOOD_FACE_VELOCITY, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_KIND, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_REACH, HOOD_WIDTH,
   HOOD_X, HOOD_Y, HOOD_Z, KIND_BOOTH, KIND_FLANGED, KIND_FLANGED_SLOT, KIND_SLOT,
-} from './hood-slots.ts';
-import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel.ts';
-import { fillNormals } from './ziggurat.ts';
+} = slots;
+// The fit's 10·X² and the 20·X of its derivative, from shared/physics so the engine and the hand calculation cannot drift apart.
+const GROWTH_FACTOR = 2 * OPENING_DISTANCE_FACTOR;
 
 // Long enough that a visit's set-up (some fifty loads) is small beside its steps, short enough
 // that a pass over the live particles still reports progress within a batch. The bridge test
@@ -70,8 +76,6 @@ export function walk(k: Kernel, i: number): number {
   const faceVelocity = h0[HOOD_FACE_VELOCITY], slotCoefficient = coefficient * h0[HOOD_WIDTH], reach = h0[HOOD_REACH], boothDepth = h0[HOOD_BOOTH_DEPTH];
   const slot = kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? 1 : 0;
   const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH ? 1 : 0, booth = kind === KIND_BOOTH ? 1 : 0;
-  // The fit's 10·X² and the 20·X of its derivative, from shared/physics so the engine and the hand calculation cannot drift apart.
-  const distanceFactor = +OPENING_DISTANCE_FACTOR, growthFactor = 2 * distanceFactor;
   const captureDepth_m = +CAPTURE_DEPTH_m, normalBlock = NORMAL_BLOCK | 0;
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
@@ -148,8 +152,8 @@ export function walk(k: Kernel, i: number): number {
           vy -= faceVelocity * ny;
           vz -= faceVelocity * nz;
         } else if (!flanged || ah > 0) {
-          let resistance = slot ? slotCoefficient * r : coefficient * (distanceFactor * s2 + area);
-          let growth = growthFactor * coefficient;
+          let resistance = slot ? slotCoefficient * r : coefficient * (OPENING_DISTANCE_FACTOR * s2 + area);
+          let growth = GROWTH_FACTOR * coefficient;
           if (resistance < area) {
             resistance = area;
             growth = 0;
