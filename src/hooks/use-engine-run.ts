@@ -12,7 +12,7 @@ const animationFrame: FrameScheduler = (callback) => {
 
 /**
  * The page's engine run: idle → running (progress, one update per frame) → done | cancelled |
- * failed. Starting warms the worker pool on mount; unmounting stops a run in flight.
+ * failed. It warms the worker pool on mount; unmounting stops a run in flight.
  */
 export function useEngineRun<R, P = RunProgress>(initialProgress: P) {
   const [state, setState] = useState<EngineRunState<R, P>>({ phase: 'idle' });
