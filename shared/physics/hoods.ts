@@ -12,18 +12,23 @@ export interface Hood extends HoodGeometry {
   airflow_m3PerS: number;
 }
 
+/**
+ * The fitted centre-line equations (Dalla Valle / ACGIH hood-types figure): an opening needs
+ * Q/V = C·(10·X² + A), a slot Q/V = C·L·X. The engine's sink model reads the same numbers.
+ */
+export const OPENING_DISTANCE_FACTOR = 10;
+export const HOOD_FIT_COEFFICIENT = { plain: 1, flanged: 0.75, slot: 3.7, 'flanged-slot': 2.6 } as const;
+
 // Airflow per unit centre-line velocity at distance X: Dalla Valle / ACGIH hood-types figure.
 function airflowPerVelocity_m2(hood: HoodGeometry, distance_m: number): number {
   const area_m2 = requirePositive('faceArea_m2', hood.faceArea_m2);
   switch (hood.kind) {
     case 'plain':
-      return 10 * distance_m ** 2 + area_m2;
     case 'flanged':
-      return 0.75 * (10 * distance_m ** 2 + area_m2);
+      return HOOD_FIT_COEFFICIENT[hood.kind] * (OPENING_DISTANCE_FACTOR * distance_m ** 2 + area_m2);
     case 'slot':
-      return 3.7 * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;
     case 'flanged-slot':
-      return 2.6 * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;
+      return HOOD_FIT_COEFFICIENT[hood.kind] * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;
     case 'booth':
       return area_m2;
     default:

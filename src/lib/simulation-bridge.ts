@@ -3,6 +3,7 @@ import { type Scenario, parseScenario } from '../../shared/schemas/scenario.ts';
 import type { RunResult } from '../../shared/schemas/run-result.ts';
 import { type BatchResult, combineBatches, prepareScenario } from '../../workers/engine/index.ts';
 import { referenceScenario } from '../../workers/engine/reference-scenario.ts';
+import { scheduleBatches } from '../../workers/schedule-batches.ts';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker.ts';
 
 export interface RunProgress {
@@ -11,12 +12,7 @@ export interface RunProgress {
   secondsLeft: number;
 }
 
-export class RunCancelledError extends Error {
-  constructor() {
-    super('The run was cancelled.');
-    this.name = 'RunCancelledError';
-  }
-}
+export { RunCancelledError } from '../../workers/schedule-batches.ts';
 
 interface PooledWorker {
   worker: Worker;
@@ -73,54 +69,27 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
   // Workers started here go straight to the run: a warm-up would only come before it.
   while (idle.length < size) idle.push(startWorker(false));
   const busy = idle.splice(0, size);
-  const done: BatchResult[] = [];
-  const partial = new Map<number, number>();
-  let next = 0;
-
-  const report = () => {
-    let batchesDone = done.length;
-    for (const f of partial.values()) batchesDone += f;
-    const fraction = batchesDone / prepared.batches;
+  const particles = prepared.particlesPerBatch * prepared.batches;
+  const report = (fraction: number) => {
     const elapsed_s = (performance.now() - started) / 1000;
-    const particles = fraction * prepared.particlesPerBatch * prepared.batches;
-    onProgress?.({ fraction, particlesPerS: elapsed_s > 0 ? particles / elapsed_s : 0, secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity });
+    onProgress?.({ fraction, particlesPerS: elapsed_s > 0 ? (fraction * particles) / elapsed_s : 0, secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity });
   };
-
-  // A busy loop never reads its message queue, so terminating is the only way to stop it.
-  const stopAll = () => busy.forEach((w) => w.worker.terminate());
-  let cancel = () => {};
-  const cancelled = new Promise<never>((_, reject) => {
-    cancel = () => {
-      stopAll();
-      reject(new RunCancelledError());
-    };
-  });
-  if (signal?.aborted) cancel();
-  signal?.addEventListener('abort', cancel, { once: true });
-
-  const drain = async (w: PooledWorker) => {
-    await w.api.prepare(prepared);
-    while (next < prepared.batches) {
-      const batchIndex = next++;
-      const result = await w.api.run(batchIndex, Comlink.proxy((fraction: number) => {
-        partial.set(batchIndex, fraction);
-        report();
-      }));
-      partial.delete(batchIndex);
-      done.push(result);
-      report();
-    }
-  };
-
+  let done: BatchResult[];
   try {
-    await Promise.race([Promise.all(busy.map(drain)), cancelled]);
+    done = await scheduleBatches(
+      busy.map(({ api }) => ({
+        prepare: () => api.prepare(prepared),
+        run: (batchIndex, onBatchProgress) => api.run(batchIndex, Comlink.proxy(onBatchProgress)),
+      })),
+      prepared.batches,
+      { signal, onProgress: onProgress && report },
+    );
   } catch (error) {
-    stopAll();
-    // The terminated workers are gone; start their replacements now rather than at the next run.
+    // A busy loop never reads its message queue, so terminating is the only way to stop it; the
+    // replacements start now rather than at the next run.
+    busy.forEach((w) => w.worker.terminate());
     warmUpWorkers();
     throw error;
-  } finally {
-    signal?.removeEventListener('abort', cancel);
   }
   idle.push(...busy);
   return combineBatches(prepared, done, (performance.now() - started) / 1000);

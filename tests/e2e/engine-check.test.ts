@@ -6,7 +6,7 @@ import { useServerAndBrowser } from '../helpers/e2e-setup';
 const env = useServerAndBrowser();
 
 describe('the engine in the browser worker pool', () => {
-  it('cancels a long run mid-way, then runs the default demo to a result with progress', async () => {
+  it('cancels a long run mid-way, runs again to a result, then runs the default demo with progress', async () => {
     const eng = DEMO_PEOPLE.find((p) => p.role === 'engineer')!;
     const page = await env.browser.newPage();
     await signIn(page, env.server.url, eng.email, eng.password);
@@ -22,6 +22,17 @@ describe('the engine in the browser worker pool', () => {
     await page.getByText('Run cancelled; nothing was kept.').waitFor();
     expect(await bar.count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Save this run' }).count()).toBe(0);
+    // Progress the stopped workers had already queued must not bring the bar back and lock Run (issue 17).
+    await page.waitForTimeout(1500);
+    expect(await bar.count()).toBe(0);
+    const run = page.getByRole('button', { name: /^▶ Run/ });
+    expect(await run.isEnabled()).toBe(true);
+    expect(await page.getByRole('button', { name: 'Cancel' }).count()).toBe(0);
+    await page.getByLabel('Particles').fill('3000');
+    await run.click();
+    await page.getByRole('button', { name: 'Save this run' }).waitFor({ timeout: 60_000 });
+    expect(await bar.count()).toBe(0);
+    expect(await run.isEnabled()).toBe(true);
 
     await page.goto(`${env.server.url}/dev/engine`);
     const started = Date.now();

@@ -1,4 +1,4 @@
-import { HOOD_STRIDE } from './hood-field.ts';
+import { HOOD_STRIDE } from './hood-slots.ts';
 import type { ParticleArrays } from './release.ts';
 import type { Xoshiro128 } from './rng.ts';
 import { stepRule } from './step-rule.ts';

@@ -1,4 +1,5 @@
-import { evaluateHoods, HOOD_STRIDE } from './hood-field.ts';
+import { evaluateHoods } from './hood-field.ts';
+import { HOOD_FACE_VELOCITY, HOOD_STRIDE } from './hood-slots.ts';
 import type { BatchResult, Grid, PreparedScenario, Results } from './types.ts';
 
 const MAP_CELLS = 40;
@@ -27,7 +28,7 @@ export function captureVelocityMap(p: PreparedScenario): Results['maps']['captur
       field[1] = p.draft_mPerS[1];
       field[2] = 0;
       const hit = evaluateHoods(p.hoods.params, p.hoods.count, (ix + 0.5) * cell[0], (iy + 0.5) * cell[1], z, field);
-      values[ix * ny + iy] = hit >= 0 ? p.hoods.params[hit * HOOD_STRIDE + 18] : Math.hypot(field[0], field[1], field[2]);
+      values[ix * ny + iy] = hit >= 0 ? p.hoods.params[hit * HOOD_STRIDE + HOOD_FACE_VELOCITY] : Math.hypot(field[0], field[1], field[2]);
     }
   }
   return { nx, ny, cell_m: cell, origin_m: [0, 0], values, height_m: z };

@@ -1,6 +1,18 @@
+import * as fit from '../../shared/physics/hoods.ts';
 import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field.ts';
+import * as slots from './hood-slots.ts';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel.ts';
 import { fillNormals } from './ziggurat.ts';
+
+// Module-level copies of imported numbers, which V8 compiles as literals (see hood-field.ts).
+const { OPENING_DISTANCE_FACTOR } = fit;
+const {
+  HOOD_AIRFLOW, HOOD_AREA, HOOD_BOOTH_DEPTH, HOOD_COEFFICIENT, HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z,
+  HOOD_FACE_VELOCITY, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_KIND, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_REACH, HOOD_WIDTH,
+  HOOD_X, HOOD_Y, HOOD_Z, KIND_BOOTH, KIND_FLANGED, KIND_FLANGED_SLOT, KIND_SLOT,
+} = slots;
+// The fit's 10·X² and the 20·X of its derivative, from shared/physics so the engine and the hand calculation cannot drift apart.
+const GROWTH_FACTOR = 2 * OPENING_DISTANCE_FACTOR;
 
 // Long enough that a visit's set-up (some fifty loads) is small beside its steps, short enough
 // that a pass over the live particles still reports progress within a batch. The bridge test
@@ -57,12 +69,13 @@ export function walk(k: Kernel, i: number): number {
   const L = sc[SCALAR.L], W = sc[SCALAR.W], H = sc[SCALAR.H], wrapX = sc[SCALAR.wrapX] > 0 ? 1 : 0, wrapY = sc[SCALAR.wrapY] > 0 ? 1 : 0;
   // Hood 0 in packHoods' layout.
   const h0 = k.hood0;
-  const kind = h0[0];
-  const hx = h0[1], hy = h0[2], hz = h0[3], nx = h0[4], ny = h0[5], nz = h0[6];
-  const e1x = h0[7], e1y = h0[8], e1z = h0[9], e2x = h0[10], e2y = h0[11], e2z = h0[12];
-  const halfWidth = h0[13], halfHeight = h0[14], airflow = h0[15], area = h0[16], coefficient = h0[17];
-  const faceVelocity = h0[18], slotCoefficient = h0[17] * h0[19], reach = h0[20], boothDepth = h0[21];
-  const slot = kind === 2 || kind === 3 ? 1 : 0, flanged = kind === 1 || kind === 3 || kind === 4 ? 1 : 0, booth = kind === 4 ? 1 : 0;
+  const kind = h0[HOOD_KIND];
+  const hx = h0[HOOD_X], hy = h0[HOOD_Y], hz = h0[HOOD_Z], nx = h0[HOOD_NX], ny = h0[HOOD_NY], nz = h0[HOOD_NZ];
+  const e1x = h0[HOOD_E1X], e1y = h0[HOOD_E1Y], e1z = h0[HOOD_E1Z], e2x = h0[HOOD_E2X], e2y = h0[HOOD_E2Y], e2z = h0[HOOD_E2Z];
+  const halfWidth = h0[HOOD_HALF_WIDTH], halfHeight = h0[HOOD_HALF_HEIGHT], airflow = h0[HOOD_AIRFLOW], area = h0[HOOD_AREA], coefficient = h0[HOOD_COEFFICIENT];
+  const faceVelocity = h0[HOOD_FACE_VELOCITY], slotCoefficient = coefficient * h0[HOOD_WIDTH], reach = h0[HOOD_REACH], boothDepth = h0[HOOD_BOOTH_DEPTH];
+  const slot = kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? 1 : 0;
+  const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH ? 1 : 0, booth = kind === KIND_BOOTH ? 1 : 0;
   const captureDepth_m = +CAPTURE_DEPTH_m, normalBlock = NORMAL_BLOCK | 0;
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
@@ -139,8 +152,8 @@ export function walk(k: Kernel, i: number): number {
           vy -= faceVelocity * ny;
           vz -= faceVelocity * nz;
         } else if (!flanged || ah > 0) {
-          let resistance = slot ? slotCoefficient * r : coefficient * (10 * s2 + area);
-          let growth = 20 * coefficient;
+          let resistance = slot ? slotCoefficient * r : coefficient * (OPENING_DISTANCE_FACTOR * s2 + area);
+          let growth = GROWTH_FACTOR * coefficient;
           if (resistance < area) {
             resistance = area;
             growth = 0;

@@ -1,5 +1,6 @@
 import { Worker } from 'node:worker_threads';
 import type { BatchResult, PreparedScenario } from '../engine/index.ts';
+import { type BatchWorker, scheduleBatches } from '../schedule-batches.ts';
 
 type ThreadMessage =
   | { type: 'progress'; batchIndex: number; fraction: number; particleSteps: number }
@@ -15,6 +16,40 @@ function startThread(): Worker {
   return new Worker(boot, { eval: true });
 }
 
+interface Pending {
+  onProgress: (fraction: number, particleSteps: number) => void;
+  resolve: (result: BatchResult) => void;
+  reject: (error: unknown) => void;
+}
+
+/** One thread in the scheduler's terms; a thread runs one batch at a time. */
+function threadWorker(thread: Worker, prepared: PreparedScenario): BatchWorker<BatchResult> & { detach(): void } {
+  let pending: Pending | undefined;
+  const onMessage = (m: ThreadMessage) => {
+    if (m.type === 'progress') pending?.onProgress(m.fraction, m.particleSteps);
+    else {
+      const done = pending;
+      pending = undefined;
+      done?.resolve(m.result);
+    }
+  };
+  const onError = (error: unknown) => pending?.reject(error);
+  thread.on('message', onMessage);
+  thread.on('error', onError);
+  return {
+    prepare: () => thread.postMessage({ type: 'prepare', prepared }),
+    run: (batchIndex, onProgress) =>
+      new Promise<BatchResult>((resolve, reject) => {
+        pending = { onProgress, resolve, reject };
+        thread.postMessage({ type: 'run', batchIndex });
+      }),
+    detach() {
+      thread.off('message', onMessage);
+      thread.off('error', onError);
+    },
+  };
+}
+
 /** Worker threads kept alive across runs (JIT warm-up is paid once); batches go to whichever thread is free. */
 export class ThreadPool {
   private readonly workers: Worker[];
@@ -24,49 +59,12 @@ export class ThreadPool {
   }
 
   async run(prepared: PreparedScenario, onProgress?: PoolProgress): Promise<BatchResult[]> {
-    const results: BatchResult[] = [];
-    const partial = new Map<number, { fraction: number; steps: number }>();
-    let next = 0;
-    const report = () => {
-      let fraction = results.length;
-      let steps = results.reduce((a, r) => a + r.particleSteps, 0);
-      for (const p of partial.values()) {
-        fraction += p.fraction;
-        steps += p.steps;
-      }
-      onProgress?.(fraction / prepared.batches, steps);
-    };
-    const used = this.workers.slice(0, Math.min(this.workers.length, prepared.batches));
-    await Promise.all(
-      used.map(
-        (worker) =>
-          new Promise<void>((resolve, reject) => {
-            const give = () => {
-              if (next < prepared.batches) worker.postMessage({ type: 'run', batchIndex: next++ });
-              else finish(resolve);
-            };
-            const onMessage = (m: ThreadMessage) => {
-              if (m.type === 'progress') partial.set(m.batchIndex, { fraction: m.fraction, steps: m.particleSteps });
-              else {
-                partial.delete(m.result.batchIndex);
-                results.push(m.result);
-                give();
-              }
-              report();
-            };
-            const finish = (then: () => void) => {
-              worker.off('message', onMessage);
-              worker.off('error', reject);
-              then();
-            };
-            worker.on('error', reject);
-            worker.on('message', onMessage);
-            worker.postMessage({ type: 'prepare', prepared });
-            give();
-          }),
-      ),
-    );
-    return results;
+    const threads = this.workers.slice(0, Math.min(this.workers.length, prepared.batches)).map((w) => threadWorker(w, prepared));
+    try {
+      return await scheduleBatches(threads, prepared.batches, { onProgress });
+    } finally {
+      threads.forEach((t) => t.detach());
+    }
   }
 
   async close(): Promise<void> {

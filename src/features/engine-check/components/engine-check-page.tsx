@@ -1,20 +1,13 @@
-import { useEffect, useRef, useState } from 'react';
 import { parseScenario } from '../../../../shared/schemas/scenario.ts';
 import { Cautions } from '../../../components/cautions.tsx';
 import { Button } from '../../../components/ui/button.tsx';
-import { type RunProgress, RunCancelledError, runSimulation, warmUpWorkers } from '../../../lib/simulation-bridge.ts';
+import { RUN_START, useEngineRun } from '../../../hooks/use-engine-run.ts';
+import { runSimulation } from '../../../lib/simulation-bridge.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 // Raw text keeps the JSON out of the TypeScript project graph; the schema checks it on load.
 import defaultScenarioText from '../../../../shared/demo-scenarios/default.json?raw';
 
 const scenario = parseScenario(JSON.parse(defaultScenarioText));
-
-type State =
-  | { kind: 'idle' }
-  | { kind: 'running'; progress: RunProgress }
-  | { kind: 'done'; results: RunResult }
-  | { kind: 'cancelled' }
-  | { kind: 'failed'; message: string };
 
 const mg = (v: number) => v.toPrecision(3);
 const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
@@ -43,34 +36,20 @@ function ResultSummary({ results }: { results: RunResult }) {
 }
 
 export function EngineCheckPage() {
-  const [state, setState] = useState<State>({ kind: 'idle' });
-  const abort = useRef<AbortController | null>(null);
-  useEffect(() => {
-    warmUpWorkers();
-    return () => abort.current?.abort();
-  }, []);
+  const run = useEngineRun<RunResult>(RUN_START);
+  const state = run.state;
+  const start = () => void run.start((options) => runSimulation(scenario, options));
 
-  const start = async () => {
-    abort.current = new AbortController();
-    setState({ kind: 'running', progress: { fraction: 0, particlesPerS: 0, secondsLeft: Infinity } });
-    try {
-      const results = await runSimulation(scenario, { signal: abort.current.signal, onProgress: (progress) => setState({ kind: 'running', progress }) });
-      setState({ kind: 'done', results });
-    } catch (error) {
-      setState(error instanceof RunCancelledError ? { kind: 'cancelled' } : { kind: 'failed', message: (error as Error).message });
-    }
-  };
-
-  const percent = state.kind === 'running' ? Math.round(100 * state.progress.fraction) : 0;
+  const percent = state.phase === 'running' ? Math.round(100 * state.progress.fraction) : 0;
   return (
     <main className="mx-auto max-w-3xl bg-paper p-8 text-ink">
       <h1 className="text-2xl font-semibold">Engine check</h1>
       <p className="mt-1 text-muted">{scenario.name}</p>
       <div className="mt-4 flex gap-3">
-        <Button onClick={start} disabled={state.kind === 'running'}>Run</Button>
-        <Button variant="secondary" onClick={() => abort.current?.abort()} disabled={state.kind !== 'running'}>Cancel</Button>
+        <Button onClick={start} disabled={state.phase === 'running'}>Run</Button>
+        <Button variant="secondary" onClick={run.cancel} disabled={state.phase !== 'running'}>Cancel</Button>
       </div>
-      {state.kind === 'running' && (
+      {state.phase === 'running' && (
         <div className="mt-4">
           <div role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} className="h-2 w-full overflow-hidden rounded bg-line">
             <div className="h-full bg-accent" style={{ width: `${percent}%` }} />
@@ -81,9 +60,9 @@ export function EngineCheckPage() {
           </p>
         </div>
       )}
-      {state.kind === 'cancelled' && <p className="mt-4 text-muted">Cancelled.</p>}
-      {state.kind === 'failed' && <p role="alert" className="mt-4 text-act">Run failed: {state.message}</p>}
-      {state.kind === 'done' && <ResultSummary results={state.results} />}
+      {state.phase === 'cancelled' && <p className="mt-4 text-muted">Cancelled.</p>}
+      {state.phase === 'failed' && <p role="alert" className="mt-4 text-act">Run failed: {state.error instanceof Error ? state.error.message : String(state.error)}</p>}
+      {state.phase === 'done' && <ResultSummary results={state.result} />}
       <Cautions compact />
     </main>
   );

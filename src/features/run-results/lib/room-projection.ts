@@ -1,5 +1,6 @@
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { HOOD_STRIDE, packHoods } from '../../../../workers/engine/hood-field.ts';
+import { packHoods } from '../../../../workers/engine/hood-field.ts';
+import { HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_STRIDE, HOOD_X, HOOD_Y, HOOD_Z } from '../../../../workers/engine/hood-slots.ts';
 
 export type ViewKind = 'plan' | 'elevation';
 
@@ -43,13 +44,13 @@ export function hoodOutlines(hoods: Scenario['hoods']): HoodOutline[] {
   const p = packHoods(hoods);
   return hoods.map((hood, h) => {
     const o = h * HOOD_STRIDE;
-    const c: [number, number, number] = [p[o + 1], p[o + 2], p[o + 3]];
-    const e1 = [p[o + 7], p[o + 8], p[o + 9]];
-    const e2 = [p[o + 10], p[o + 11], p[o + 12]];
-    const hw = p[o + 13];
-    const hh = p[o + 14];
+    const c: [number, number, number] = [p[o + HOOD_X], p[o + HOOD_Y], p[o + HOOD_Z]];
+    const e1 = [p[o + HOOD_E1X], p[o + HOOD_E1Y], p[o + HOOD_E1Z]];
+    const e2 = [p[o + HOOD_E2X], p[o + HOOD_E2Y], p[o + HOOD_E2Z]];
+    const hw = p[o + HOOD_HALF_WIDTH];
+    const hh = p[o + HOOD_HALF_HEIGHT];
     const corner = (a: number, b: number): [number, number, number] => [0, 1, 2].map((k) => c[k] + a * hw * e1[k] + b * hh * e2[k]) as [number, number, number];
-    return { name: hood.name ?? `Hood ${h + 1}`, corners: [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)], centre: c, normal: [p[o + 4], p[o + 5], p[o + 6]] };
+    return { name: hood.name ?? `Hood ${h + 1}`, corners: [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)], centre: c, normal: [p[o + HOOD_NX], p[o + HOOD_NY], p[o + HOOD_NZ]] };
   });
 }
 

@@ -1,33 +1,20 @@
-import { useEffect, useRef, useState } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Button } from '../../../components/ui/button';
 import { ErrorMessage } from '../../../components/ui/status';
-import { RunCancelledError, runSimulation, warmUpWorkers, type RunProgress } from '../../../lib/simulation-bridge';
-
-type State = { phase: 'idle' } | { phase: 'running'; progress: RunProgress } | { phase: 'cancelled' } | { phase: 'failed'; error: unknown };
+import { RUN_START, useEngineRun } from '../../../hooks/use-engine-run';
+import { runSimulation } from '../../../lib/simulation-bridge';
 
 const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` : `${Math.ceil(s / 60)} min`) : '…');
 
 export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: RunResult, input: Scenario) => void }) {
-  const [state, setState] = useState<State>({ phase: 'idle' });
-  const abort = useRef<AbortController | null>(null);
-  useEffect(() => {
-    warmUpWorkers();
-    return () => abort.current?.abort();
-  }, []);
+  const run = useEngineRun<RunResult>(RUN_START);
+  const state = run.state;
 
   async function start() {
     if (!scenario) return;
-    abort.current = new AbortController();
-    setState({ phase: 'running', progress: { fraction: 0, particlesPerS: 0, secondsLeft: Infinity } });
-    try {
-      const result = await runSimulation(scenario, { signal: abort.current.signal, onProgress: (progress) => setState({ phase: 'running', progress }) });
-      setState({ phase: 'idle' });
-      onResult(result, scenario);
-    } catch (error) {
-      setState(error instanceof RunCancelledError ? { phase: 'cancelled' } : { phase: 'failed', error });
-    }
+    const result = await run.start((options) => runSimulation(scenario, options));
+    if (result) onResult(result, scenario);
   }
 
   const running = state.phase === 'running';
@@ -39,7 +26,7 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
           ▶ Run {scenario ? `${scenario.run.particles.toLocaleString()} particles` : ''}
         </Button>
         {running && (
-          <Button variant="secondary" onClick={() => abort.current?.abort()}>
+          <Button variant="secondary" onClick={run.cancel}>
             Cancel
           </Button>
         )}

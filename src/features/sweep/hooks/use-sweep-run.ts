@@ -1,5 +1,6 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
-import { RunCancelledError, runSimulation, warmUpWorkers } from '../../../lib/simulation-bridge';
+import { useCallback } from 'react';
+import { type EngineRunState, useEngineRun } from '../../../hooks/use-engine-run';
+import { runSimulation } from '../../../lib/simulation-bridge';
 import { pointResult, type PointResult } from '../lib/point-result';
 import type { SweepPoint } from '../lib/sweep-points';
 
@@ -17,42 +18,49 @@ export type SweepState =
   | { phase: 'cancelled'; results: PointResult[] }
   | { phase: 'failed'; error: unknown; results: PointResult[] };
 
-/** Runs the points one after another so each gets the whole worker pool; one abort stops the lot. */
+type Progress = SweepProgress & { results: PointResult[] };
+
+const START: Progress = { fraction: 0, pointsDone: 0, points: 0, secondsLeft: Infinity, results: [] };
+
+function sweepState(state: EngineRunState<PointResult[], Progress>): SweepState {
+  switch (state.phase) {
+    case 'idle':
+      return state;
+    case 'running':
+      return { phase: 'running', progress: state.progress, results: state.progress.results };
+    case 'done':
+      return { phase: 'done', results: state.result };
+    case 'cancelled':
+      return { phase: 'cancelled', results: state.last.results };
+    case 'failed':
+      return { phase: 'failed', error: state.error, results: state.last.results };
+  }
+}
+
+/** Runs the points one after another so each gets the whole worker pool; one cancel stops the lot. */
 export function useSweepRun() {
-  const [state, setState] = useState<SweepState>({ phase: 'idle' });
-  const abort = useRef<AbortController | null>(null);
-  useEffect(() => {
-    warmUpWorkers();
-    return () => abort.current?.abort();
-  }, []);
+  const run = useEngineRun<PointResult[], Progress>(START);
+  const { start: startRun } = run;
 
-  const start = useCallback(async (points: SweepPoint[]) => {
-    abort.current?.abort();
-    const controller = new AbortController();
-    abort.current = controller;
-    const results: PointResult[] = [];
-    const started = performance.now();
-    const progress = (fraction: number): SweepProgress => {
-      const elapsed_s = (performance.now() - started) / 1000;
-      return { fraction, pointsDone: results.length, points: points.length, secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity };
-    };
-    setState({ phase: 'running', progress: progress(0), results: [] });
-    try {
-      for (const point of points) {
-        const run = await runSimulation(point.scenario, {
-          signal: controller.signal,
-          onProgress: (p) => setState({ phase: 'running', progress: progress((results.length + p.fraction) / points.length), results: [...results] }),
-        });
-        results.push(pointResult(run));
-        setState({ phase: 'running', progress: progress(results.length / points.length), results: [...results] });
-      }
-      setState({ phase: 'done', results });
-    } catch (error) {
-      setState(error instanceof RunCancelledError ? { phase: 'cancelled', results } : { phase: 'failed', error, results });
-    }
-  }, []);
+  const start = useCallback(
+    (points: SweepPoint[]) =>
+      startRun(async ({ signal, onProgress }) => {
+        const results: PointResult[] = [];
+        const started = performance.now();
+        const progress = (fraction: number): Progress => {
+          const elapsed_s = (performance.now() - started) / 1000;
+          return { fraction, pointsDone: results.length, points: points.length, secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity, results: [...results] };
+        };
+        onProgress(progress(0));
+        for (const point of points) {
+          const result = await runSimulation(point.scenario, { signal, onProgress: (p) => onProgress(progress((results.length + p.fraction) / points.length)) });
+          results.push(pointResult(result));
+          onProgress(progress(results.length / points.length));
+        }
+        return results;
+      }, { ...START, points: points.length }),
+    [startRun],
+  );
 
-  const cancel = useCallback(() => abort.current?.abort(), []);
-  const reset = useCallback(() => setState({ phase: 'idle' }), []);
-  return { state, start, cancel, reset };
+  return { state: sweepState(run.state), start, cancel: run.cancel, reset: run.reset };
 }

@@ -1,0 +1,91 @@
+/** A worker as the scheduler sees it: the browser's Web Workers and Node's threads both fit. */
+export interface BatchWorker<R> {
+  prepare(): void | Promise<void>;
+  run(batchIndex: number, onProgress: (fraction: number, particleSteps: number) => void): Promise<R>;
+}
+
+/** The part of AbortSignal the scheduler uses, so it needs neither DOM nor Node types. */
+export interface CancelSignal {
+  readonly aborted: boolean;
+  addEventListener(type: 'abort', listener: () => void, options?: { once?: boolean }): void;
+  removeEventListener(type: 'abort', listener: () => void): void;
+}
+
+export interface ScheduleOptions {
+  /** Share of all batches done (partial batches count by their own share) and particle-steps so far; never decreases. */
+  onProgress?: (fraction: number, particleSteps: number) => void;
+  signal?: CancelSignal;
+}
+
+export class RunCancelledError extends Error {
+  constructor() {
+    super('The run was cancelled.');
+    this.name = 'RunCancelledError';
+  }
+}
+
+/**
+ * Hands batch indices 0…batches−1 to whichever worker is free and returns the results in batch
+ * order, so nothing downstream depends on how many workers ran or which finished first. The first
+ * worker error or a cancel rejects at once; the caller stops the workers (a busy loop cannot be
+ * interrupted from here), and anything they report afterwards is ignored.
+ */
+export async function scheduleBatches<R extends { particleSteps: number }>(
+  workers: readonly BatchWorker<R>[],
+  batches: number,
+  { onProgress, signal }: ScheduleOptions = {},
+): Promise<R[]> {
+  if (workers.length === 0 && batches > 0) throw new RangeError('scheduleBatches needs at least one worker');
+  const results: R[] = new Array(batches);
+  const partial = new Map<number, { fraction: number; steps: number }>();
+  let finished = 0;
+  let finishedSteps = 0;
+  let next = 0;
+  let settled = false;
+  let lastFraction = 0;
+
+  const report = () => {
+    if (settled || !onProgress) return;
+    let fraction = finished;
+    let steps = finishedSteps;
+    for (const p of partial.values()) {
+      fraction += p.fraction;
+      steps += p.steps;
+    }
+    // Shares come from the workers' own reports; the scheduler never lets the total step back.
+    lastFraction = Math.max(lastFraction, Math.min(1, fraction / batches));
+    onProgress(lastFraction, steps);
+  };
+
+  const drain = async (worker: BatchWorker<R>) => {
+    await worker.prepare();
+    while (!settled && next < batches) {
+      const batchIndex = next++;
+      const result = await worker.run(batchIndex, (fraction, steps) => {
+        if (settled || results[batchIndex]) return;
+        partial.set(batchIndex, { fraction, steps });
+        report();
+      });
+      if (settled) return;
+      partial.delete(batchIndex);
+      results[batchIndex] = result;
+      finished++;
+      finishedSteps += result.particleSteps;
+      report();
+    }
+  };
+
+  let onAbort = () => {};
+  const cancelled = new Promise<never>((_, reject) => {
+    onAbort = () => reject(new RunCancelledError());
+  });
+  if (signal?.aborted) onAbort();
+  signal?.addEventListener('abort', onAbort, { once: true });
+  try {
+    await Promise.race([Promise.all(workers.slice(0, batches).map(drain)), cancelled]);
+  } finally {
+    settled = true;
+    signal?.removeEventListener('abort', onAbort);
+  }
+  return results;
+}
