@@ -12,7 +12,7 @@ export { inhalableFraction, thoracicFraction, respirableFraction, conventionFrac
 export type { SamplingConvention } from './conventions.ts';
 export { hatchChoate, conventionMassFraction } from './lognormal.ts';
 export type { HatchChoateDiameters } from './lognormal.ts';
-export { hoodCenterlineVelocity, hoodRequiredAirflow } from './hoods.ts';
+export { HOOD_FIT_COEFFICIENT, OPENING_DISTANCE_FACTOR, hoodCenterlineVelocity, hoodRequiredAirflow } from './hoods.ts';
 export type { Hood, HoodGeometry, HoodKind } from './hoods.ts';
 export { captureVelocityRange } from './capture-velocity.ts';
 export type { CaptureVelocityRange, ReleaseCondition } from './capture-velocity.ts';

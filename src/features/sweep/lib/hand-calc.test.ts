@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Hood } from '../../../../shared/schemas/scenario.ts';
-import { handCalcAnswer } from './hand-calc.ts';
+import { handCalcAnswer, HOOD_EQUATION } from './hand-calc.ts';
 
 // [C] physics.md §8 check values: a plain opening of A = 0.1 m² drawing Q = 0.5 m³/s gives
 // V(0.1, 0.2, 0.3, 0.5 m) = 2.50, 1.00, 0.50, 0.192 m/s on its centre line.
@@ -39,5 +39,15 @@ describe('hand-calculation answer (Dalla Valle / ACGIH)', () => {
     const a = handCalcAnswer(plain, 0.2, 'active', 'faceScale');
     expect(a).toMatchObject({ kind: 'faceScale', faceScale: expect.closeTo(1, 9) });
     expect(handCalcAnswer(plain, 0.3, 'active', 'faceScale')).toMatchObject({ faceScale: null });
+  });
+
+  it('quotes the equations of the hood-types figure (ACGIH Industrial Ventilation; Dalla Valle) [S]', () => {
+    expect(HOOD_EQUATION).toEqual({
+      plain: 'Q = V (10 X² + A)',
+      flanged: 'Q = 0.75 V (10 X² + A)',
+      slot: 'Q = 3.7 L V X',
+      'flanged-slot': 'Q = 2.6 L V X',
+      booth: 'Q = V W H',
+    });
   });
 });

@@ -1,4 +1,4 @@
-import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type HoodGeometry, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { captureVelocityRange, HOOD_FIT_COEFFICIENT as C, hoodCenterlineVelocity, hoodRequiredAirflow, type HoodGeometry, OPENING_DISTANCE_FACTOR, type ReleaseCondition } from '../../../../shared/physics/index.ts';
 import type { Hood } from '../../../../shared/schemas/scenario.ts';
 import type { SweepParameter } from './sweep-points.ts';
 
@@ -9,10 +9,10 @@ export type HandCalc =
 
 /** The published equation behind each answer, quoted in the sentence so the engineer can redo it by hand. */
 export const HOOD_EQUATION: Record<Hood['kind'], string> = {
-  plain: 'Q = V (10 X² + A)',
-  flanged: 'Q = 0.75 V (10 X² + A)',
-  slot: 'Q = 3.7 L V X',
-  'flanged-slot': 'Q = 2.6 L V X',
+  plain: `Q = V (${OPENING_DISTANCE_FACTOR} X² + A)`,
+  flanged: `Q = ${C.flanged} V (${OPENING_DISTANCE_FACTOR} X² + A)`,
+  slot: `Q = ${C.slot} L V X`,
+  'flanged-slot': `Q = ${C['flanged-slot']} L V X`,
   booth: 'Q = V W H',
 };
 
