@@ -1,7 +1,7 @@
 import type { Knex } from 'knex';
 import type { Person } from '../../shared/schemas/auth';
 import type { Role } from '../../shared/auth/permissions';
-import type { Db } from '../db/knex';
+import type { Conn, Db } from '../db/knex';
 
 type Row = {
   id: number;
@@ -70,6 +70,20 @@ export async function updatePerson(
   if (patch.passwordHash) cols.password_hash = patch.passwordHash;
   if (patch.lastSignInAt) cols.last_sign_in_at = patch.lastSignInAt;
   await db('people').where({ id }).update(cols);
+}
+
+export async function rolesOf(db: Conn, ids: number[]): Promise<{ id: number; role: Role }[]> {
+  return (await db('people').whereIn('id', ids).select('id', 'role')) as { id: number; role: Role }[];
+}
+
+export async function findByEmail(db: Conn, email: string): Promise<Person | undefined> {
+  const row = await db<Row>('people').where({ email }).first();
+  return row ? toPerson(row) : undefined;
+}
+
+export async function firstWithRole(db: Conn, role: Role): Promise<Person | undefined> {
+  const row = await db<Row>('people').where({ role }).first();
+  return row ? toPerson(row) : undefined;
 }
 
 export async function countPeople(db: Db): Promise<number> {

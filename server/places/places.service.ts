@@ -1,5 +1,5 @@
 import type { RoomInput, SiteInput, WorkstationInput } from '../../shared/schemas/workspace';
-import type { Db } from '../db/knex';
+import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
 import { rooms, sites, workstations } from './places.repo';
@@ -20,7 +20,7 @@ async function insideRoom(db: Db, roomId: number, data: WorkstationInput['data']
 
 export const placesService = {
   async createSite(db: Db, actor: Actor, input: SiteInput) {
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       const id = await sites.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'site.created', targetType: 'site', targetId: id, detail: { name: input.name } });
       return (await sites.get(trx, id))!;
@@ -28,7 +28,7 @@ export const placesService = {
   },
   async createRoom(db: Db, actor: Actor, input: RoomInput) {
     if (!(await sites.get(db, input.siteId))) throw new AppError(400, 'invalid_input', 'That site does not exist', [{ path: 'body.siteId', message: `No site ${input.siteId}` }]);
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       const id = await rooms.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'room.created', targetType: 'room', targetId: id, detail: { name: input.name } });
       return (await rooms.get(trx, id))!;
@@ -36,7 +36,7 @@ export const placesService = {
   },
   async createWorkstation(db: Db, actor: Actor, input: WorkstationInput) {
     await insideRoom(db, input.roomId, input.data);
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       const id = await workstations.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'workstation.created', targetType: 'workstation', targetId: id, detail: { name: input.name } });
       return (await workstations.get(trx, id))!;
@@ -46,7 +46,7 @@ export const placesService = {
     const current = await workstations.get(db, id);
     if (!current) throw notFound('Workstation');
     await insideRoom(db, current.roomId as number, input.data);
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       await workstations.update(trx, id, input);
       await writeAudit(trx, { actor, action: 'workstation.changed', targetType: 'workstation', targetId: id });
       return (await workstations.get(trx, id))!;

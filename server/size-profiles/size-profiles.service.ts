@@ -1,7 +1,7 @@
 import type { CreateSizeProfileInput, UploadFields } from '../../shared/schemas/size-profiles';
 import { buildFromForm, buildFromUpload, type FormInput, type ProfileData } from '../../shared/size-profiles/index';
 import { writeAudit } from '../audit/audit.repo';
-import type { Db } from '../db/knex';
+import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { readCsvRecords } from './csv-records';
 import { findSizeProfile, insertSizeProfile, softDeleteSizeProfile } from './size-profiles.repo';
@@ -10,7 +10,7 @@ type Actor = { id: number; email: string };
 export type UploadedFile = { originalname: string; buffer: Buffer };
 
 async function store(db: Db, actor: Actor, name: string, data: ProfileData, detail: Record<string, unknown>) {
-  const id = await db.transaction(async (trx) => {
+  const id = await withTransaction(db, async (trx) => {
     const newId = await insertSizeProfile(trx, name, data, actor.id);
     await writeAudit(trx, { actor, action: 'size_profile.created', targetType: 'size_profile', targetId: newId, detail: { name, kind: data.kind, ...detail } });
     return newId;
@@ -37,7 +37,7 @@ export async function uploadSizeProfile(db: Db, actor: Actor, fields: UploadFiel
 }
 
 export async function deleteSizeProfile(db: Db, actor: Actor, id: number) {
-  await db.transaction(async (trx) => {
+  await withTransaction(db, async (trx) => {
     const found = await findSizeProfile(trx, id);
     if (!found || !(await softDeleteSizeProfile(trx, id))) throw notFound('Size profile');
     await writeAudit(trx, { actor, action: 'size_profile.deleted', targetType: 'size_profile', targetId: id, detail: { name: found.name } });

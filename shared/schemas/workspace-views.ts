@@ -70,13 +70,17 @@ export type RunListItem = {
   id: number;
   seed: string;
   engine_version: string;
+  input_hash: string;
   particles: number;
   limit_fraction: string | null;
   twa8h_mgPerM3: number | null;
   twa8h_lo_mgPerM3: number | null;
   twa8h_hi_mgPerM3: number | null;
+  respirable_twa8h_mgPerM3: number | null;
   percent_of_limit: number | null;
+  rating_category: number | null;
   banner: Banner | null;
+  created_by: number | null;
   created_at: string;
   outOfDate: boolean;
 };
@@ -106,3 +110,7 @@ export type WorkstationRecord = JsonRecord<WorkstationData> & { roomId: number }
 export type RoomRecord = JsonRecord<RoomData> & { siteId: number; workstations: WorkstationRecord[] };
 export type SiteTree = JsonRecord<{ address: string; notes: string }> & { rooms: RoomRecord[] };
 export type WorkstationDetail = WorkstationRecord & { room: JsonRecord<RoomData> & { siteId: number }; approval: Approval | null; operatorIds: number[] };
+export type OperatorAssignment = { workstationId: number; personIds: number[] };
+
+export type AuditEntry = { id: number; actorEmail: string | null; action: string; targetType: string | null; targetId: string | null; detail: Record<string, unknown> | null; createdAt: string };
+export type OutboxMessage = { id: number; to: string; subject: string; text: string; html: string | null; createdAt: string };
