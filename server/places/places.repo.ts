@@ -1,6 +1,7 @@
 import type { z } from 'zod';
 import type { roomDataSchema, siteDataSchema, workstationDataSchema } from '../../shared/schemas/workspace';
-import type { Conn, Db } from '../db/knex';
+import type { SiteTree } from '../../shared/schemas/workspace-views';
+import type { Conn } from '../db/knex';
 import { jsonTable } from '../db/json-table';
 
 export const sites = jsonTable<z.infer<typeof siteDataSchema>>('sites');
@@ -39,7 +40,7 @@ export async function operatorIds(db: Conn, workstationId: number): Promise<numb
 }
 
 // One tree for the workspace navigation: sites → rooms → workstations.
-export async function placesTree(db: Db) {
+export async function placesTree(db: Conn): Promise<SiteTree[]> {
   const [s, r, w] = await Promise.all([sites.list(db), rooms.list(db), workstations.list(db)]);
   return s.map((site) => ({
     ...site,
