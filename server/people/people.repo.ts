@@ -29,7 +29,9 @@ export async function findCredentials(db: Db, email: string) {
   return row ? { person: toPerson(row), passwordHash: row.password_hash } : undefined;
 }
 
-export async function listPeople(db: Db, q: { page: number; pageSize: number; sort?: string; order: 'asc' | 'desc' }): Promise<Page<Person>> {
+export type PeopleQuery = { page: number; pageSize: number; sort?: string; order: 'asc' | 'desc' };
+
+export async function listPeople(db: Db, q: PeopleQuery): Promise<Page<Person>> {
   const column = SORTABLE[q.sort ?? 'name'] ?? 'name';
   const [{ count }] = await db('people').count<{ count: number }[]>({ count: '*' });
   const rows = await db<Row>('people')

@@ -1,16 +1,19 @@
-import type { InviteInput, UpdatePersonInput } from '../../shared/schemas/auth';
+import type { InviteInput, Person, UpdatePersonInput } from '../../shared/schemas/auth';
+import type { Page } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import type { Mailer } from '../mail/mailer';
 import { AppError, notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
 import { hashPassword } from '../auth/password';
-import { findByEmail, findPerson, insertPerson, updatePerson } from './people.repo';
+import { findByEmail, findPerson, insertPerson, listPeople, updatePerson, type PeopleQuery } from './people.repo';
 import { findUsableToken, issueToken, markTokenUsed } from './tokens.repo';
 import { passwordLinkMail } from './people.mails';
 
 type Actor = { id: number; email: string };
 
-export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: InviteInput, baseUrl: string) {
+export const listPeoplePage = (db: Db, q: PeopleQuery): Promise<Page<Person>> => listPeople(db, q);
+
+export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: InviteInput, baseUrl: string): Promise<Person> {
   const taken = await findByEmail(db, input.email);
   if (taken) throw new AppError(409, 'email_taken', `Someone with the e-mail ${input.email} already has an account`, [{ path: 'body.email', message: 'Already in use' }]);
   const { id, token } = await withTransaction(db, async (trx) => {
@@ -23,7 +26,7 @@ export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: 
   return (await findPerson(db, id))!;
 }
 
-export async function changePerson(db: Db, actor: Actor, id: number, patch: UpdatePersonInput) {
+export async function changePerson(db: Db, actor: Actor, id: number, patch: UpdatePersonInput): Promise<Person> {
   const person = await findPerson(db, id);
   if (!person) throw notFound('Person');
   if (id === actor.id && (patch.status === 'deactivated' || (patch.role && patch.role !== 'admin'))) {
