@@ -1,6 +1,7 @@
 import type { Knex } from 'knex';
 
-// Row types as the migrations in migrations/ create them; knex checks every db('<table>') call against them.
+// Row types as the migrations in migrations/ create them. knex checks db('<table>') calls against them;
+// queries over aliased joins ('scenarios as s') declare their joined row type in the repo.
 type Stamps = { created_by: number | null; created_at: string; updated_at: string; deleted_at: string | null };
 
 export type PersonRow = {
