@@ -1,5 +1,5 @@
 import type { AgentData } from '../../shared/schemas/workspace';
-import { jsonTable } from '../lib/json-table';
+import { jsonTable } from '../db/json-table';
 
 export const agents = jsonTable<AgentData>('dust_agents');
 

@@ -1,5 +1,6 @@
 import type { AgentInput } from '../../shared/schemas/workspace';
-import type { Db } from '../db/knex';
+import type { AgentRecord } from '../../shared/schemas/workspace-views';
+import { withTransaction, type Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
 import { agents } from './agents.repo';
@@ -7,17 +8,25 @@ import { agents } from './agents.repo';
 type Actor = { id: number; email: string };
 
 export const agentsService = {
-  async create(db: Db, actor: Actor, input: AgentInput) {
-    return db.transaction(async (trx) => {
+  list(db: Db): Promise<AgentRecord[]> {
+    return agents.list(db);
+  },
+  async get(db: Db, id: number): Promise<AgentRecord> {
+    const agent = await agents.get(db, id);
+    if (!agent) throw notFound('Dust agent');
+    return agent;
+  },
+  async create(db: Db, actor: Actor, input: AgentInput): Promise<AgentRecord> {
+    return withTransaction(db, async (trx) => {
       const id = await agents.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'agent.created', targetType: 'agent', targetId: id, detail: { name: input.name } });
       return (await agents.get(trx, id))!;
     });
   },
-  async update(db: Db, actor: Actor, id: number, input: AgentInput) {
+  async update(db: Db, actor: Actor, id: number, input: AgentInput): Promise<AgentRecord> {
     const before = await agents.get(db, id);
     if (!before) throw notFound('Dust agent');
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       await agents.update(trx, id, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
       await writeAudit(trx, { actor, action: overridden ? 'agent.limit_overridden' : 'agent.changed', targetType: 'agent', targetId: id, detail: overridden ? { override: input.data.override } : undefined });

@@ -1,13 +1,24 @@
-import type { Approval } from '../../shared/schemas/workspace-views';
-import type { Db } from '../db/knex';
+import type { Approval, Banner } from '../../shared/schemas/workspace-views';
+import type { Conn } from '../db/knex';
+import type { ApprovalRow } from '../db/tables';
 
 export type CurrentApproval = Approval;
+
+type JoinedRow = ApprovalRow & {
+  scenario_name: string;
+  scenario_hash: string;
+  scenario_deleted: string | null;
+  run_hash: string;
+  banner: string | null;
+  percent_of_limit: number | null;
+  approver: string;
+};
 
 const today = () => new Date().toISOString().slice(0, 10);
 
 // Needs review when the review date has passed or the scenario changed after the approved run.
-export async function currentApproval(db: Db, workstationId: number): Promise<CurrentApproval | null> {
-  const a = await db('approvals as ap')
+export async function currentApproval(db: Conn, workstationId: number): Promise<CurrentApproval | null> {
+  const a: JoinedRow | undefined = await db('approvals as ap')
     .join('scenarios as s', 's.id', 'ap.scenario_id')
     .join('runs as r', 'r.id', 'ap.run_id')
     .join('people as p', 'p.id', 'ap.approved_by')
@@ -28,10 +39,21 @@ export async function currentApproval(db: Db, workstationId: number): Promise<Cu
     reviewDate: a.review_date,
     approvedAt: a.approved_at,
     approvedBy: a.approver,
-    banner: a.banner,
+    banner: a.banner as Banner | null,
     percentOfLimit: a.percent_of_limit,
     expired,
     outOfDate,
     needsReview: expired || outOfDate,
   };
+}
+
+export type NewApproval = { workstationId: number; scenarioId: number; runId: number; note: string; reviewDate: string; approvedBy: number; approvedAt: string };
+
+// The workstation's earlier approval stays on record, marked superseded at the new one's time.
+export async function replaceApproval(db: Conn, a: NewApproval): Promise<number> {
+  await db('approvals').where({ workstation_id: a.workstationId }).whereNull('superseded_at').update({ superseded_at: a.approvedAt });
+  const [row] = await db('approvals')
+    .insert({ workstation_id: a.workstationId, scenario_id: a.scenarioId, run_id: a.runId, note: a.note, review_date: a.reviewDate, approved_by: a.approvedBy, approved_at: a.approvedAt })
+    .returning('id');
+  return typeof row === 'object' ? row.id : row;
 }

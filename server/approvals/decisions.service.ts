@@ -1,8 +1,12 @@
-import type { Db } from '../db/knex';
+import { withTransaction, type Db } from '../db/knex';
+import type { OperatorAssignment } from '../../shared/schemas/workspace-views';
 import type { Mailer } from '../mail/mailer';
 import { AppError, notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
-import { workstations } from '../places/places.repo';
+import { replaceOperators, workstations } from '../places/places.repo';
+import { rolesOf } from '../people/people.repo';
+import { findRunOfScenario } from '../scenarios/runs.repo';
+import { findScenario } from '../scenarios/scenarios.repo';
 
 type Actor = { id: number; email: string; name?: string };
 
@@ -10,9 +14,9 @@ const escape = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)}
 
 // The e-mail carries only the link and the scenario's name; the report itself stays behind sign-in.
 export async function shareReport(db: Db, mailer: Mailer, actor: Actor, scenarioId: number, body: { email: string; runId?: number }, base: string) {
-  const scenario = await db('scenarios').where({ id: scenarioId }).whereNull('deleted_at').first();
+  const scenario = await findScenario(db, scenarioId);
   if (!scenario) throw notFound('Scenario');
-  if (body.runId && !(await db('runs').where({ id: body.runId, scenario_id: scenarioId }).first())) {
+  if (body.runId && !(await findRunOfScenario(db, body.runId, scenarioId, { includeDeleted: true }))) {
     throw new AppError(400, 'invalid_input', 'That run does not belong to this scenario', [{ path: 'body.runId', message: `No run ${body.runId} here` }]);
   }
   const link = `${base}/reports/${scenarioId}${body.runId ? `?run=${body.runId}` : ''}`;
@@ -26,14 +30,13 @@ export async function shareReport(db: Db, mailer: Mailer, actor: Actor, scenario
   await writeAudit(db, { actor, action: 'report.shared', targetType: 'scenario', targetId: scenarioId, detail: { to: body.email, runId: body.runId ?? null } });
 }
 
-export async function assignOperators(db: Db, actor: Actor, workstationId: number, personIds: number[]) {
+export async function assignOperators(db: Db, actor: Actor, workstationId: number, personIds: number[]): Promise<OperatorAssignment> {
   if (!(await workstations.get(db, workstationId))) throw notFound('Workstation');
-  const people = await db('people').whereIn('id', personIds).select('id', 'role');
+  const people = await rolesOf(db, personIds);
   const bad = personIds.filter((id) => !people.some((p) => p.id === id && p.role === 'operator'));
   if (bad.length) throw new AppError(400, 'invalid_input', 'Only operators can be assigned to a station', bad.map((id) => ({ path: 'body.personIds', message: `Person ${id} is not an operator` })));
-  await db.transaction(async (trx) => {
-    await trx('workstation_operators').where({ workstation_id: workstationId }).delete();
-    if (personIds.length) await trx('workstation_operators').insert(personIds.map((id) => ({ workstation_id: workstationId, person_id: id })));
+  await withTransaction(db, async (trx) => {
+    await replaceOperators(trx, workstationId, personIds);
     await writeAudit(trx, { actor, action: 'workstation.operators_assigned', targetType: 'workstation', targetId: workstationId, detail: { personIds } });
   });
   return { workstationId, personIds };

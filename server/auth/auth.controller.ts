@@ -3,9 +3,8 @@ import type { NextFunction, Request, Response } from 'express';
 import type passport from 'passport';
 import type { Db } from '../db/knex';
 import { AppError } from '../lib/app-error';
-import { writeAudit } from '../audit/audit.repo';
-import { updatePerson } from '../people/people.repo';
 import { setPasswordWithToken } from '../people/people.service';
+import { recordFailedSignIn, recordSignIn, recordSignOut } from './auth.service';
 
 const WRONG = 'The e-mail or password is not right';
 
@@ -16,15 +15,14 @@ export function authController(db: Db, pp: passport.Authenticator) {
         try {
           if (err) return next(err);
           if (!user) {
-            await writeAudit(db, { actorEmail: req.body.email, action: 'auth.sign_in_failed' });
+            await recordFailedSignIn(db, req.body.email);
             return next(new AppError(401, 'invalid_credentials', WRONG));
           }
           // passport regenerates the session id at login, which defeats session fixation.
           req.login(user, async (loginErr) => {
             if (loginErr) return next(loginErr);
             req.session.csrfToken = randomBytes(24).toString('base64url');
-            await updatePerson(db, user.id, { lastSignInAt: new Date().toISOString() });
-            await writeAudit(db, { actor: user, action: 'auth.signed_in' });
+            await recordSignIn(db, user);
             res.json({ user, csrfToken: req.session.csrfToken });
           });
         } catch (e) {
@@ -37,7 +35,7 @@ export function authController(db: Db, pp: passport.Authenticator) {
       req.logout((err) => {
         if (err) return next(err);
         req.session.destroy(async () => {
-          if (user) await writeAudit(db, { actor: user, action: 'auth.signed_out' });
+          if (user) await recordSignOut(db, user);
           res.clearCookie('motewalk.sid');
           res.status(204).end();
         });

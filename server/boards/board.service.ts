@@ -1,9 +1,9 @@
+import type { Banner, StationBoard } from '../../shared/schemas/workspace-views';
 import type { Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
 import { currentApproval } from '../approvals/approvals.repo';
 import { workstations } from '../places/places.repo';
-
-type Banner = 'clear' | 'watch' | 'act';
+import { findScenario } from '../scenarios/scenarios.repo';
 
 // Operators get a banner they can act on: no valid assessment counts as Act, a stale one at least as Watch.
 function boardBanner(a: Awaited<ReturnType<typeof currentApproval>>): Banner {
@@ -31,15 +31,15 @@ function advice(banner: Banner, distance_cm: number | null, reason: string | nul
   return banner === 'watch' ? [...base, 'Exposure here is close to the limit: follow these rules exactly and report any change in the job, the material or the layout.'] : base;
 }
 
-export async function stationBoard(db: Db, workstationId: number) {
+export async function stationBoard(db: Db, workstationId: number): Promise<StationBoard> {
   const ws = await workstations.get(db, workstationId);
   if (!ws) throw notFound('Workstation');
   const approval = await currentApproval(db, workstationId);
   const banner = boardBanner(approval);
   let distance_cm: number | null = null;
   if (approval) {
-    const s = await db('scenarios').where({ id: approval.scenarioId }).first();
-    const d = s ? hoodDistance_m(JSON.parse(s.input)) : null;
+    const s = await findScenario(db, approval.scenarioId, { includeDeleted: true });
+    const d = s ? hoodDistance_m(s.input) : null;
     distance_cm = d === null ? null : Math.round(d * 100 / 5) * 5;
   }
   const reason = !approval ? 'There is no approved assessment for this station.' : approval.expired ? `The assessment was due for review on ${approval.reviewDate}.` : null;

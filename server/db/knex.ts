@@ -2,8 +2,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import knexFactory, { type Knex } from 'knex';
 import { migrationSource } from './migration-source';
+import type {} from './tables';
 
 export type Db = Knex;
+// Repo functions take either the database or a transaction, so a service can group writes.
+export type Conn = Db | Knex.Transaction;
+
+export const withTransaction = <T>(db: Db, work: (trx: Knex.Transaction) => Promise<T>): Promise<T> => db.transaction(work);
 
 export function createDb(filename: string, opts: { readonly?: boolean } = {}): Db {
   if (filename !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(filename)), { recursive: true });

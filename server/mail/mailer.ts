@@ -1,5 +1,6 @@
 import nodemailer from 'nodemailer';
 import type { Db } from '../db/knex';
+import { insertOutboxMail } from './outbox.repo';
 
 export type Mail = { to: string; subject: string; text: string; html?: string };
 export type Mailer = { send(mail: Mail): Promise<void> };
@@ -10,13 +11,7 @@ export function createOutboxMailer(db: Db, from: string): Mailer {
   return {
     async send(mail) {
       await transport.sendMail({ from, ...mail });
-      await db('outbox').insert({
-        to_address: mail.to,
-        subject: mail.subject,
-        text_body: mail.text,
-        html_body: mail.html ?? null,
-        created_at: new Date().toISOString(),
-      });
+      await insertOutboxMail(db, mail);
     },
   };
 }

@@ -2,15 +2,13 @@ import type { Request, Response } from 'express';
 import type { Db } from '../db/knex';
 import type { Mailer } from '../mail/mailer';
 import { baseUrl } from '../lib/base-url';
-import { listPeople } from './people.repo';
-import { changePerson, invitePerson, sendResetLink } from './people.service';
-
-type Query = { page: number; pageSize: number; sort?: string; order: 'asc' | 'desc' };
+import type { PeopleQuery } from './people.repo';
+import { changePerson, invitePerson, listPeoplePage, sendResetLink } from './people.service';
 
 export function peopleController(db: Db, mailer: Mailer, publicUrl?: string) {
   return {
     async list(req: Request, res: Response) {
-      res.json(await listPeople(db, req.query as unknown as Query));
+      res.json(await listPeoplePage(db, req.query as unknown as PeopleQuery));
     },
     async invite(req: Request, res: Response) {
       const person = await invitePerson(db, mailer, req.user!, req.body, baseUrl(req, publicUrl));

@@ -1,18 +1,10 @@
-import type { Knex } from 'knex';
 import type { Person } from '../../shared/schemas/auth';
+import type { Page } from '../../shared/schemas/workspace-views';
 import type { Role } from '../../shared/auth/permissions';
-import type { Db } from '../db/knex';
+import type { Conn, Db } from '../db/knex';
+import type { PersonRow } from '../db/tables';
 
-type Row = {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  status: Person['status'];
-  password_hash: string | null;
-  created_at: string;
-  last_sign_in_at: string | null;
-};
+type Row = PersonRow & { role: Role; status: Person['status'] };
 
 const toPerson = (r: Row): Person => ({
   id: r.id,
@@ -26,7 +18,7 @@ const toPerson = (r: Row): Person => ({
 
 const SORTABLE: Record<string, string> = { name: 'name', email: 'email', role: 'role', status: 'status', createdAt: 'created_at' };
 
-export async function findPerson(db: Db | Knex.Transaction, id: number): Promise<Person | undefined> {
+export async function findPerson(db: Conn, id: number): Promise<Person | undefined> {
   const row = await db<Row>('people').where({ id }).first();
   return row ? toPerson(row) : undefined;
 }
@@ -37,7 +29,9 @@ export async function findCredentials(db: Db, email: string) {
   return row ? { person: toPerson(row), passwordHash: row.password_hash } : undefined;
 }
 
-export async function listPeople(db: Db, q: { page: number; pageSize: number; sort?: string; order: 'asc' | 'desc' }) {
+export type PeopleQuery = { page: number; pageSize: number; sort?: string; order: 'asc' | 'desc' };
+
+export async function listPeople(db: Db, q: PeopleQuery): Promise<Page<Person>> {
   const column = SORTABLE[q.sort ?? 'name'] ?? 'name';
   const [{ count }] = await db('people').count<{ count: number }[]>({ count: '*' });
   const rows = await db<Row>('people')
@@ -49,7 +43,7 @@ export async function listPeople(db: Db, q: { page: number; pageSize: number; so
 }
 
 export async function insertPerson(
-  db: Db | Knex.Transaction,
+  db: Conn,
   p: { email: string; name: string; role: Role; status: Person['status']; passwordHash?: string | null },
 ): Promise<number> {
   const now = new Date().toISOString();
@@ -60,7 +54,7 @@ export async function insertPerson(
 }
 
 export async function updatePerson(
-  db: Db | Knex.Transaction,
+  db: Conn,
   id: number,
   patch: Partial<{ role: Role; status: Person['status']; passwordHash: string; lastSignInAt: string }>,
 ): Promise<void> {
@@ -70,6 +64,20 @@ export async function updatePerson(
   if (patch.passwordHash) cols.password_hash = patch.passwordHash;
   if (patch.lastSignInAt) cols.last_sign_in_at = patch.lastSignInAt;
   await db('people').where({ id }).update(cols);
+}
+
+export async function rolesOf(db: Conn, ids: number[]): Promise<{ id: number; role: Role }[]> {
+  return (await db('people').whereIn('id', ids).select('id', 'role')) as { id: number; role: Role }[];
+}
+
+export async function findByEmail(db: Conn, email: string): Promise<Person | undefined> {
+  const row = await db<Row>('people').where({ email }).first();
+  return row ? toPerson(row) : undefined;
+}
+
+export async function firstWithRole(db: Conn, role: Role): Promise<Person | undefined> {
+  const row = await db<Row>('people').where({ role }).first();
+  return row ? toPerson(row) : undefined;
 }
 
 export async function countPeople(db: Db): Promise<number> {

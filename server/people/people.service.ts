@@ -1,19 +1,22 @@
-import type { InviteInput, UpdatePersonInput } from '../../shared/schemas/auth';
-import type { Db } from '../db/knex';
+import type { InviteInput, Person, UpdatePersonInput } from '../../shared/schemas/auth';
+import type { Page } from '../../shared/schemas/workspace-views';
+import { withTransaction, type Db } from '../db/knex';
 import type { Mailer } from '../mail/mailer';
 import { AppError, notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
 import { hashPassword } from '../auth/password';
-import { findPerson, insertPerson, updatePerson } from './people.repo';
+import { findByEmail, findPerson, insertPerson, listPeople, updatePerson, type PeopleQuery } from './people.repo';
 import { findUsableToken, issueToken, markTokenUsed } from './tokens.repo';
 import { passwordLinkMail } from './people.mails';
 
 type Actor = { id: number; email: string };
 
-export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: InviteInput, baseUrl: string) {
-  const taken = await db('people').where({ email: input.email }).first();
+export const listPeoplePage = (db: Db, q: PeopleQuery): Promise<Page<Person>> => listPeople(db, q);
+
+export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: InviteInput, baseUrl: string): Promise<Person> {
+  const taken = await findByEmail(db, input.email);
   if (taken) throw new AppError(409, 'email_taken', `Someone with the e-mail ${input.email} already has an account`, [{ path: 'body.email', message: 'Already in use' }]);
-  const { id, token } = await db.transaction(async (trx) => {
+  const { id, token } = await withTransaction(db, async (trx) => {
     const newId = await insertPerson(trx, { ...input, status: 'invited' });
     const t = await issueToken(trx, newId, 'invite');
     await writeAudit(trx, { actor, action: 'person.invited', targetType: 'person', targetId: newId, detail: { email: input.email, role: input.role } });
@@ -23,7 +26,7 @@ export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: 
   return (await findPerson(db, id))!;
 }
 
-export async function changePerson(db: Db, actor: Actor, id: number, patch: UpdatePersonInput) {
+export async function changePerson(db: Db, actor: Actor, id: number, patch: UpdatePersonInput): Promise<Person> {
   const person = await findPerson(db, id);
   if (!person) throw notFound('Person');
   if (id === actor.id && (patch.status === 'deactivated' || (patch.role && patch.role !== 'admin'))) {
@@ -32,7 +35,7 @@ export async function changePerson(db: Db, actor: Actor, id: number, patch: Upda
   if (patch.status === 'active' && person.status === 'invited') {
     throw new AppError(400, 'invalid_input', 'An invited person becomes active by setting a password', [{ path: 'body.status', message: 'Send a new link instead' }]);
   }
-  await db.transaction(async (trx) => {
+  await withTransaction(db, async (trx) => {
     await updatePerson(trx, id, patch);
     if (patch.role && patch.role !== person.role) await writeAudit(trx, { actor, action: 'person.role_changed', targetType: 'person', targetId: id, detail: { from: person.role, to: patch.role } });
     if (patch.status && patch.status !== person.status) await writeAudit(trx, { actor, action: patch.status === 'deactivated' ? 'person.deactivated' : 'person.reactivated', targetType: 'person', targetId: id });
@@ -45,7 +48,7 @@ export async function sendResetLink(db: Db, mailer: Mailer, actor: Actor, id: nu
   if (!person) throw notFound('Person');
   if (person.status === 'deactivated') throw new AppError(400, 'deactivated', 'Reactivate this person before sending a link');
   const purpose = person.status === 'invited' ? 'invite' : 'reset';
-  const token = await db.transaction(async (trx) => {
+  const token = await withTransaction(db, async (trx) => {
     const t = await issueToken(trx, id, purpose);
     await writeAudit(trx, { actor, action: 'person.password_link_sent', targetType: 'person', targetId: id });
     return t;
@@ -65,7 +68,7 @@ async function sendOrExplain(mailer: Mailer, mail: Parameters<Mailer['send']>[0]
 
 export async function setPasswordWithToken(db: Db, token: string, password: string) {
   const passwordHash = await hashPassword(password);
-  return db.transaction(async (trx) => {
+  return withTransaction(db, async (trx) => {
     const found = await findUsableToken(trx, token);
     if (!found) throw new AppError(400, 'invalid_token', 'This link has expired or was already used. Ask an admin for a new one.', [{ path: 'body.token', message: 'Expired or used' }]);
     const person = await findPerson(trx, found.personId);

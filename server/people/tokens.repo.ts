@@ -1,13 +1,12 @@
 import { createHash, randomBytes } from 'node:crypto';
-import type { Knex } from 'knex';
-import type { Db } from '../db/knex';
+import type { Conn } from '../db/knex';
 
 export const TOKEN_LIFETIME_MS = 72 * 3600 * 1000;
 
 const digest = (token: string) => createHash('sha256').update(token).digest('hex');
 
 // Only the hash is stored: a leaked database does not leak working links.
-export async function issueToken(db: Db | Knex.Transaction, personId: number, purpose: 'invite' | 'reset', now = Date.now()): Promise<string> {
+export async function issueToken(db: Conn, personId: number, purpose: 'invite' | 'reset', now = Date.now()): Promise<string> {
   const token = randomBytes(32).toString('base64url');
   await db('password_tokens').where({ person_id: personId }).whereNull('used_at').update({ used_at: new Date(now).toISOString() });
   await db('password_tokens').insert({
@@ -20,12 +19,12 @@ export async function issueToken(db: Db | Knex.Transaction, personId: number, pu
   return token;
 }
 
-export async function findUsableToken(db: Db | Knex.Transaction, token: string, now = Date.now()) {
+export async function findUsableToken(db: Conn, token: string, now = Date.now()): Promise<{ id: number; personId: number; purpose: 'invite' | 'reset' } | undefined> {
   const row = await db('password_tokens').where({ token_hash: digest(token) }).whereNull('used_at').first();
   if (!row || Date.parse(row.expires_at) <= now) return undefined;
-  return { id: row.id as number, personId: row.person_id as number, purpose: row.purpose as 'invite' | 'reset' };
+  return { id: row.id, personId: row.person_id, purpose: row.purpose as 'invite' | 'reset' };
 }
 
-export async function markTokenUsed(db: Db | Knex.Transaction, id: number): Promise<void> {
+export async function markTokenUsed(db: Conn, id: number): Promise<void> {
   await db('password_tokens').where({ id }).update({ used_at: new Date().toISOString() });
 }

@@ -1,8 +1,10 @@
 import type { RoomInput, SiteInput, WorkstationInput } from '../../shared/schemas/workspace';
-import type { Db } from '../db/knex';
+import type { RoomRecord, SiteRecord, SiteTree, WorkstationDetail, WorkstationRecord } from '../../shared/schemas/workspace-views';
+import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
-import { rooms, sites, workstations } from './places.repo';
+import { currentApproval } from '../approvals/approvals.repo';
+import { operatorIds, placesTree, rooms, sites, workstations } from './places.repo';
 
 type Actor = { id: number; email: string };
 
@@ -19,34 +21,43 @@ async function insideRoom(db: Db, roomId: number, data: WorkstationInput['data']
 }
 
 export const placesService = {
-  async createSite(db: Db, actor: Actor, input: SiteInput) {
-    return db.transaction(async (trx) => {
+  tree(db: Db): Promise<SiteTree[]> {
+    return placesTree(db);
+  },
+  async getWorkstation(db: Db, id: number): Promise<WorkstationDetail> {
+    const ws = await workstations.get(db, id);
+    if (!ws) throw notFound('Workstation');
+    const room = (await rooms.get(db, ws.roomId))!;
+    return { ...ws, room, approval: await currentApproval(db, ws.id), operatorIds: await operatorIds(db, ws.id) };
+  },
+  async createSite(db: Db, actor: Actor, input: SiteInput): Promise<SiteRecord> {
+    return withTransaction(db, async (trx) => {
       const id = await sites.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'site.created', targetType: 'site', targetId: id, detail: { name: input.name } });
       return (await sites.get(trx, id))!;
     });
   },
-  async createRoom(db: Db, actor: Actor, input: RoomInput) {
+  async createRoom(db: Db, actor: Actor, input: RoomInput): Promise<RoomRecord> {
     if (!(await sites.get(db, input.siteId))) throw new AppError(400, 'invalid_input', 'That site does not exist', [{ path: 'body.siteId', message: `No site ${input.siteId}` }]);
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       const id = await rooms.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'room.created', targetType: 'room', targetId: id, detail: { name: input.name } });
       return (await rooms.get(trx, id))!;
     });
   },
-  async createWorkstation(db: Db, actor: Actor, input: WorkstationInput) {
+  async createWorkstation(db: Db, actor: Actor, input: WorkstationInput): Promise<WorkstationRecord> {
     await insideRoom(db, input.roomId, input.data);
-    return db.transaction(async (trx) => {
+    return withTransaction(db, async (trx) => {
       const id = await workstations.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'workstation.created', targetType: 'workstation', targetId: id, detail: { name: input.name } });
       return (await workstations.get(trx, id))!;
     });
   },
-  async updateWorkstation(db: Db, actor: Actor, id: number, input: Pick<WorkstationInput, 'name' | 'data'>) {
+  async updateWorkstation(db: Db, actor: Actor, id: number, input: Pick<WorkstationInput, 'name' | 'data'>): Promise<WorkstationRecord> {
     const current = await workstations.get(db, id);
     if (!current) throw notFound('Workstation');
-    await insideRoom(db, current.roomId as number, input.data);
-    return db.transaction(async (trx) => {
+    await insideRoom(db, current.roomId, input.data);
+    return withTransaction(db, async (trx) => {
       await workstations.update(trx, id, input);
       await writeAudit(trx, { actor, action: 'workstation.changed', targetType: 'workstation', targetId: id });
       return (await workstations.get(trx, id))!;

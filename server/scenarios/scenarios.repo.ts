@@ -1,8 +1,8 @@
-import type { Knex } from 'knex';
-import type { ScenarioListQuery } from '../../shared/schemas/workspace';
-import type { Db } from '../db/knex';
-
-type Conn = Db | Knex.Transaction;
+import type { Scenario } from '../../shared/schemas/scenario';
+import type { ControlTier, ScenarioListQuery } from '../../shared/schemas/workspace';
+import type { Banner, Page, ScenarioSummary } from '../../shared/schemas/workspace-views';
+import type { Conn } from '../db/knex';
+import type { RunRow, ScenarioRow } from '../db/tables';
 
 const SORT: Record<ScenarioListQuery['sort'], string> = {
   name: 's.name',
@@ -35,45 +35,54 @@ const COLUMNS = [
   'lr.twa8h_mgPerM3', 'lr.twa8h_lo_mgPerM3', 'lr.twa8h_hi_mgPerM3', 'lr.limit_fraction', 'lr.percent_of_limit', 'lr.rating_category', 'lr.banner', 'lr.created_at as run_created_at',
 ];
 
-export type ScenarioRow = Record<string, unknown> & { id: number; version: number; input_hash: string; status: string };
+type JoinedRow = ScenarioRow & {
+  workstation_name: string;
+  room_id: number;
+  room_name: string;
+  site_id: number;
+  site_name: string;
+  agent_name: string | null;
+  run_id: number | null;
+  run_input_hash: string | null;
+  run_created_at: string | null;
+} & Pick<RunRow, 'respirable_twa8h_mgPerM3' | 'twa8h_mgPerM3' | 'twa8h_lo_mgPerM3' | 'twa8h_hi_mgPerM3' | 'limit_fraction' | 'percent_of_limit' | 'rating_category' | 'banner'>;
 
-export function toSummary(r: ScenarioRow) {
+function toSummary(r: JoinedRow): ScenarioSummary {
   return {
     id: r.id,
-    name: r.name as string,
-    workstationId: r.workstation_id as number,
-    workstationName: r.workstation_name as string,
-    roomName: r.room_name as string,
-    siteId: r.site_id as number,
-    siteName: r.site_name as string,
-    agentId: r.agent_id as number | null,
-    agentName: (r.agent_name as string | null) ?? null,
-    sizeProfileId: (r.size_profile_id as number | null) ?? null,
-    controlDescription: r.control_description as string,
-    controlTier: r.control_tier as string,
-    status: r.status,
+    name: r.name,
+    workstationId: r.workstation_id,
+    workstationName: r.workstation_name,
+    roomName: r.room_name,
+    siteId: r.site_id,
+    siteName: r.site_name,
+    agentId: r.agent_id,
+    agentName: r.agent_name ?? null,
+    sizeProfileId: r.size_profile_id ?? null,
+    controlDescription: r.control_description,
+    controlTier: r.control_tier,
+    status: r.status as ScenarioSummary['status'],
     version: r.version,
-    createdAt: r.created_at as string,
-    updatedAt: r.updated_at as string,
+    createdAt: r.created_at,
+    updatedAt: r.updated_at,
     lastRun: r.run_id
       ? {
-          id: r.run_id as number,
+          id: r.run_id,
           createdAt: r.run_created_at as string,
           outOfDate: r.run_input_hash !== r.input_hash,
-          respirableTwa8h_mgPerM3: r.respirable_twa8h_mgPerM3 as number | null,
-          limitFraction: r.limit_fraction as string | null,
-          twa8h_mgPerM3: r.twa8h_mgPerM3 as number | null,
-          twa8hCi95_mgPerM3: [r.twa8h_lo_mgPerM3, r.twa8h_hi_mgPerM3] as [number | null, number | null],
-          percentOfLimit: r.percent_of_limit as number | null,
-          ratingCategory: r.rating_category as number | null,
-          banner: r.banner as 'clear' | 'watch' | 'act' | null,
+          respirableTwa8h_mgPerM3: r.respirable_twa8h_mgPerM3,
+          limitFraction: r.limit_fraction,
+          twa8h_mgPerM3: r.twa8h_mgPerM3,
+          twa8hCi95_mgPerM3: [r.twa8h_lo_mgPerM3, r.twa8h_hi_mgPerM3],
+          percentOfLimit: r.percent_of_limit,
+          ratingCategory: r.rating_category,
+          banner: r.banner as Banner | null,
         }
       : null,
   };
 }
-export type ScenarioSummary = ReturnType<typeof toSummary>;
 
-export async function listScenarios(db: Db, q: ScenarioListQuery) {
+export async function listScenarios(db: Conn, q: ScenarioListQuery): Promise<Page<ScenarioSummary>> {
   const filtered = baseQuery(db).modify((b) => {
     if (q.siteId) b.where('si.id', q.siteId);
     if (q.workstationId) b.where('w.id', q.workstationId);
@@ -90,17 +99,98 @@ export async function listScenarios(db: Db, q: ScenarioListQuery) {
     .orderBy('s.id')
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  return { items: (rows as ScenarioRow[]).map(toSummary), total: Number(count), page: q.page, pageSize: q.pageSize };
+  return { items: (rows as JoinedRow[]).map(toSummary), total: Number(count), page: q.page, pageSize: q.pageSize };
 }
 
-export async function getScenarioRow(db: Conn, id: number) {
-  return (await baseQuery(db).where('s.id', id).select([...COLUMNS, 's.input']).first()) as (ScenarioRow & { input: string }) | undefined;
+export async function findScenarioSummary(db: Conn, id: number): Promise<{ summary: ScenarioSummary; input: Scenario; inputHash: string } | undefined> {
+  const row = (await baseQuery(db).where('s.id', id).select([...COLUMNS, 's.input']).first()) as JoinedRow | undefined;
+  return row ? { summary: toSummary(row), input: JSON.parse(row.input), inputHash: row.input_hash } : undefined;
 }
 
-export async function listRuns(db: Conn, scenarioId: number) {
-  return db('runs')
-    .where({ scenario_id: scenarioId })
-    .whereNull('deleted_at')
-    .orderBy('id', 'desc')
-    .select('id', 'seed', 'engine_version', 'input_hash', 'particles', 'limit_fraction', 'twa8h_mgPerM3', 'twa8h_lo_mgPerM3', 'twa8h_hi_mgPerM3', 'respirable_twa8h_mgPerM3', 'percent_of_limit', 'rating_category', 'banner', 'created_by', 'created_at');
+export type StoredScenario = {
+  id: number;
+  workstationId: number;
+  name: string;
+  controlDescription: string;
+  status: ScenarioSummary['status'];
+  version: number;
+  input: Scenario;
+  inputHash: string;
+};
+
+const toStored = (r: ScenarioRow): StoredScenario => ({
+  id: r.id,
+  workstationId: r.workstation_id,
+  name: r.name,
+  controlDescription: r.control_description,
+  status: r.status as StoredScenario['status'],
+  version: r.version,
+  input: JSON.parse(r.input),
+  inputHash: r.input_hash,
+});
+
+// Boards and saved runs still name a scenario after it was deleted; everything else sees live ones only.
+export async function findScenario(db: Conn, id: number, opts: { includeDeleted?: boolean } = {}): Promise<StoredScenario | undefined> {
+  const row = await db('scenarios')
+    .where({ id })
+    .modify((b) => {
+      if (!opts.includeDeleted) b.whereNull('deleted_at');
+    })
+    .first();
+  return row ? toStored(row) : undefined;
+}
+
+export type ScenarioFields = {
+  workstationId: number;
+  agentId: number | null;
+  sizeProfileId: number | null;
+  name: string;
+  controlDescription: string;
+  controlTier: ControlTier;
+  input: unknown;
+  inputHash: string;
+};
+
+export async function insertScenario(db: Conn, values: ScenarioFields, actorId: number): Promise<number> {
+  const now = new Date().toISOString();
+  const [row] = await db('scenarios')
+    .insert({
+      workstation_id: values.workstationId,
+      agent_id: values.agentId,
+      size_profile_id: values.sizeProfileId,
+      name: values.name,
+      control_description: values.controlDescription,
+      control_tier: values.controlTier,
+      input: JSON.stringify(values.input),
+      input_hash: values.inputHash,
+      created_by: actorId,
+      updated_by: actorId,
+      created_at: now,
+      updated_at: now,
+    })
+    .returning('id');
+  return typeof row === 'object' ? row.id : row;
+}
+
+export async function updateScenario(db: Conn, id: number, patch: Partial<ScenarioFields> & { version: number }, actorId: number): Promise<void> {
+  const cols: Partial<ScenarioRow> = { version: patch.version, updated_by: actorId, updated_at: new Date().toISOString() };
+  if (patch.name !== undefined) cols.name = patch.name;
+  if (patch.workstationId !== undefined) cols.workstation_id = patch.workstationId;
+  if (patch.agentId !== undefined) cols.agent_id = patch.agentId;
+  if (patch.sizeProfileId !== undefined) cols.size_profile_id = patch.sizeProfileId;
+  if (patch.controlDescription !== undefined) cols.control_description = patch.controlDescription;
+  if (patch.controlTier !== undefined) cols.control_tier = patch.controlTier;
+  if (patch.input !== undefined) cols.input = JSON.stringify(patch.input);
+  if (patch.inputHash !== undefined) cols.input_hash = patch.inputHash;
+  await db('scenarios').where({ id }).update(cols);
+}
+
+export async function softDeleteScenario(db: Conn, id: number): Promise<void> {
+  await db('scenarios').where({ id }).update({ deleted_at: new Date().toISOString() });
+}
+
+// One approved option per workstation: approving one returns the others to draft.
+export async function markApproved(db: Conn, id: number, workstationId: number): Promise<void> {
+  await db('scenarios').where({ workstation_id: workstationId, status: 'approved' }).update({ status: 'draft' });
+  await db('scenarios').where({ id }).update({ status: 'approved' });
 }

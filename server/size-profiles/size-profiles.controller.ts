@@ -2,19 +2,15 @@ import type { Request, Response } from 'express';
 import type { SizeProfileListQuery } from '../../shared/schemas/size-profiles';
 import { FORMATS, type UploadFormat } from '../../shared/size-profiles/index';
 import type { Db } from '../db/knex';
-import { notFound } from '../lib/app-error';
-import { findSizeProfile, listSizeProfiles } from './size-profiles.repo';
-import { createSizeProfile, deleteSizeProfile, uploadSizeProfile } from './size-profiles.service';
+import { createSizeProfile, deleteSizeProfile, getSizeProfile, listSizeProfilePage, uploadSizeProfile } from './size-profiles.service';
 
 export function sizeProfilesController(db: Db) {
   return {
     async list(req: Request, res: Response) {
-      res.json(await listSizeProfiles(db, req.query as unknown as SizeProfileListQuery));
+      res.json(await listSizeProfilePage(db, req.query as unknown as SizeProfileListQuery));
     },
     async get(req: Request, res: Response) {
-      const profile = await findSizeProfile(db, Number(req.params.id));
-      if (!profile) throw notFound('Size profile');
-      res.json(profile);
+      res.json(await getSizeProfile(db, Number(req.params.id)));
     },
     async create(req: Request, res: Response) {
       res.status(201).json(await createSizeProfile(db, req.user!, req.body));

@@ -1,23 +1,9 @@
-import type { Knex } from 'knex';
 import type { SizeProfileDetail, SizeProfileListQuery, SizeProfileSummary } from '../../shared/schemas/size-profiles';
 import { toScenarioSizeProfile, type ProfileData, type ProfileKind } from '../../shared/size-profiles/index';
-import type { Db } from '../db/knex';
+import type { Conn, Db } from '../db/knex';
+import type { SizeProfileRow } from '../db/tables';
 
-type Row = {
-  id: number;
-  name: string;
-  kind: ProfileKind;
-  input: string;
-  bins: string;
-  fitted_mmad_m: number | null;
-  fitted_gsd: number | null;
-  respirable_fraction: number;
-  thoracic_fraction: number;
-  inhalable_fraction: number;
-  created_by: number | null;
-  created_by_name: string | null;
-  created_at: string;
-};
+type Row = SizeProfileRow & { kind: ProfileKind; created_by_name: string | null };
 
 const SUMMARY_COLUMNS = ['sp.id', 'sp.name', 'sp.kind', 'sp.fitted_mmad_m', 'sp.fitted_gsd', 'sp.respirable_fraction', 'sp.thoracic_fraction', 'sp.inhalable_fraction', 'sp.created_by', 'sp.created_at', 'p.name as created_by_name'];
 
@@ -43,7 +29,7 @@ const toSummary = (r: Row): SizeProfileSummary => ({
   createdAt: r.created_at,
 });
 
-const live = (db: Db | Knex.Transaction) => db('size_profiles as sp').leftJoin('people as p', 'p.id', 'sp.created_by').whereNull('sp.deleted_at');
+const live = (db: Conn) => db('size_profiles as sp').leftJoin('people as p', 'p.id', 'sp.created_by').whereNull('sp.deleted_at');
 
 export async function listSizeProfiles(db: Db, q: SizeProfileListQuery) {
   const [{ count }] = await db('size_profiles').whereNull('deleted_at').count<{ count: number }[]>({ count: '*' });
@@ -56,7 +42,7 @@ export async function listSizeProfiles(db: Db, q: SizeProfileListQuery) {
   return { items: rows.map(toSummary), total: Number(count), page: q.page, pageSize: q.pageSize };
 }
 
-export async function findSizeProfile(db: Db | Knex.Transaction, id: number): Promise<SizeProfileDetail | undefined> {
+export async function findSizeProfile(db: Conn, id: number): Promise<SizeProfileDetail | undefined> {
   const row = await live(db).where('sp.id', id).first<Row | undefined>([...SUMMARY_COLUMNS, 'sp.input', 'sp.bins']);
   if (!row) return undefined;
   const summary = toSummary(row);
@@ -64,7 +50,7 @@ export async function findSizeProfile(db: Db | Knex.Transaction, id: number): Pr
   return { ...summary, input: JSON.parse(row.input), bins, sizeProfile: toScenarioSizeProfile({ kind: row.kind, bins, fittedMmad_m: row.fitted_mmad_m, fittedGsd: row.fitted_gsd }) };
 }
 
-export async function insertSizeProfile(db: Db | Knex.Transaction, name: string, data: ProfileData, createdBy: number): Promise<number> {
+export async function insertSizeProfile(db: Conn, name: string, data: ProfileData, createdBy: number): Promise<number> {
   const [row] = await db('size_profiles')
     .insert({
       name,
@@ -83,7 +69,7 @@ export async function insertSizeProfile(db: Db | Knex.Transaction, name: string,
   return typeof row === 'object' ? row.id : row;
 }
 
-export async function softDeleteSizeProfile(db: Db | Knex.Transaction, id: number): Promise<boolean> {
+export async function softDeleteSizeProfile(db: Conn, id: number): Promise<boolean> {
   const changed = await db('size_profiles').where({ id }).whereNull('deleted_at').update({ deleted_at: new Date().toISOString() });
   return changed > 0;
 }

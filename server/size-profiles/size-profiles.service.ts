@@ -1,16 +1,24 @@
-import type { CreateSizeProfileInput, UploadFields } from '../../shared/schemas/size-profiles';
+import type { CreateSizeProfileInput, SizeProfileDetail, SizeProfileList, SizeProfileListQuery, UploadFields } from '../../shared/schemas/size-profiles';
 import { buildFromForm, buildFromUpload, type FormInput, type ProfileData } from '../../shared/size-profiles/index';
 import { writeAudit } from '../audit/audit.repo';
-import type { Db } from '../db/knex';
+import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { readCsvRecords } from './csv-records';
-import { findSizeProfile, insertSizeProfile, softDeleteSizeProfile } from './size-profiles.repo';
+import { findSizeProfile, insertSizeProfile, listSizeProfiles, softDeleteSizeProfile } from './size-profiles.repo';
 
 type Actor = { id: number; email: string };
 export type UploadedFile = { originalname: string; buffer: Buffer };
 
-async function store(db: Db, actor: Actor, name: string, data: ProfileData, detail: Record<string, unknown>) {
-  const id = await db.transaction(async (trx) => {
+export const listSizeProfilePage = (db: Db, q: SizeProfileListQuery): Promise<SizeProfileList> => listSizeProfiles(db, q);
+
+export async function getSizeProfile(db: Db, id: number): Promise<SizeProfileDetail> {
+  const profile = await findSizeProfile(db, id);
+  if (!profile) throw notFound('Size profile');
+  return profile;
+}
+
+async function store(db: Db, actor: Actor, name: string, data: ProfileData, detail: Record<string, unknown>): Promise<SizeProfileDetail> {
+  const id = await withTransaction(db, async (trx) => {
     const newId = await insertSizeProfile(trx, name, data, actor.id);
     await writeAudit(trx, { actor, action: 'size_profile.created', targetType: 'size_profile', targetId: newId, detail: { name, kind: data.kind, ...detail } });
     return newId;
@@ -18,13 +26,13 @@ async function store(db: Db, actor: Actor, name: string, data: ProfileData, deta
   return (await findSizeProfile(db, id))!;
 }
 
-export async function createSizeProfile(db: Db, actor: Actor, input: CreateSizeProfileInput) {
+export async function createSizeProfile(db: Db, actor: Actor, input: CreateSizeProfileInput): Promise<SizeProfileDetail> {
   const { name, ...form } = input;
   return store(db, actor, name, buildFromForm(form as FormInput), {});
 }
 
 // Nothing is written unless every row passes; one 422 carries every problem found.
-export async function uploadSizeProfile(db: Db, actor: Actor, fields: UploadFields, file: UploadedFile | undefined) {
+export async function uploadSizeProfile(db: Db, actor: Actor, fields: UploadFields, file: UploadedFile | undefined): Promise<SizeProfileDetail> {
   if (!file) throw new AppError(400, 'invalid_input', 'Choose a CSV file to upload', [{ path: 'file', message: 'No file was sent' }]);
   const records = readCsvRecords(file);
   const built = buildFromUpload(fields.format, records, { fileName: file.originalname, density_kgPerM3: fields.density_kgPerM3 });
@@ -37,7 +45,7 @@ export async function uploadSizeProfile(db: Db, actor: Actor, fields: UploadFiel
 }
 
 export async function deleteSizeProfile(db: Db, actor: Actor, id: number) {
-  await db.transaction(async (trx) => {
+  await withTransaction(db, async (trx) => {
     const found = await findSizeProfile(trx, id);
     if (!found || !(await softDeleteSizeProfile(trx, id))) throw notFound('Size profile');
     await writeAudit(trx, { actor, action: 'size_profile.deleted', targetType: 'size_profile', targetId: id, detail: { name: found.name } });

@@ -70,13 +70,17 @@ export type RunListItem = {
   id: number;
   seed: string;
   engine_version: string;
+  input_hash: string;
   particles: number;
   limit_fraction: string | null;
   twa8h_mgPerM3: number | null;
   twa8h_lo_mgPerM3: number | null;
   twa8h_hi_mgPerM3: number | null;
+  respirable_twa8h_mgPerM3: number | null;
   percent_of_limit: number | null;
+  rating_category: number | null;
   banner: Banner | null;
+  created_by: number | null;
   created_at: string;
   outOfDate: boolean;
 };
@@ -102,7 +106,12 @@ export type JsonRecord<T> = { id: number; name: string; data: T; createdAt: stri
 export type AgentRecord = JsonRecord<AgentData>;
 export type RoomData = { length_m: number; width_m: number; height_m: number; airChanges_perH: number; draftSpeed_mPerS: number; draftDirection_deg: number; temperature_K: number };
 export type WorkstationData = { description: string; source: { x_m: number; y_m: number; z_m: number }; worker: { x_m: number; y_m: number; z_m: number; posture: 'standing' | 'seated' }; releaseType: 'quiet' | 'low' | 'active' | 'high' };
+export type SiteRecord = JsonRecord<{ address: string; notes: string }>;
+export type RoomRecord = JsonRecord<RoomData> & { siteId: number };
 export type WorkstationRecord = JsonRecord<WorkstationData> & { roomId: number };
-export type RoomRecord = JsonRecord<RoomData> & { siteId: number; workstations: WorkstationRecord[] };
-export type SiteTree = JsonRecord<{ address: string; notes: string }> & { rooms: RoomRecord[] };
-export type WorkstationDetail = WorkstationRecord & { room: JsonRecord<RoomData> & { siteId: number }; approval: Approval | null; operatorIds: number[] };
+export type SiteTree = SiteRecord & { rooms: (RoomRecord & { workstations: WorkstationRecord[] })[] };
+export type WorkstationDetail = WorkstationRecord & { room: RoomRecord; approval: Approval | null; operatorIds: number[] };
+export type OperatorAssignment = { workstationId: number; personIds: number[] };
+
+export type AuditEntry = { id: number; actorEmail: string | null; action: string; targetType: string | null; targetId: string | null; detail: Record<string, unknown> | null; createdAt: string };
+export type OutboxMessage = { id: number; to: string; subject: string; text: string; html: string | null; createdAt: string };

@@ -1,21 +1,26 @@
-import fs from 'node:fs';
-import path from 'node:path';
+import type { Express } from 'express';
 
 export type RouteKey = `${'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE'} /api${string}`;
 
-// Reads the routes from the source, so a route added anywhere shows up here without anyone listing it.
-export function routeInventory(root = path.resolve('server')): RouteKey[] {
-  const app = fs.readFileSync(path.join(root, 'app.ts'), 'utf8');
-  const imports = new Map<string, string>();
-  for (const m of app.matchAll(/import \{([^}]+)\} from '\.\/([^']+)'/g)) for (const name of m[1].split(',').map((s) => s.trim())) imports.set(name, m[2]);
-  const keys: RouteKey[] = [];
-  for (const m of app.matchAll(/api\.(get|post|put|patch|delete)\('([^']+)'/g)) keys.push(`${m[1].toUpperCase()} /api${m[2]}` as RouteKey);
-  for (const m of app.matchAll(/api\.use\('([^']+)', (\w+)\(/g)) {
-    const [prefix, fn] = [m[1] === '/' ? '' : m[1], m[2]];
-    const file = fs.readFileSync(path.join(root, `${imports.get(fn)}.ts`), 'utf8');
-    const body = file.split(/export function /).find((chunk) => chunk.startsWith(`${fn}(`));
-    if (!body) throw new Error(`route function ${fn} not found in ${imports.get(fn)}`);
-    for (const r of body.matchAll(/\br\.(get|post|put|patch|delete)\('([^']+)'/g)) keys.push(`${r[1].toUpperCase()} /api${prefix}${r[2] === '/' ? '' : r[2]}` as RouteKey);
-  }
-  return keys;
+type Layer = { rawPath?: unknown; route?: { path: unknown; methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };
+
+const METHODS = new Set(['get', 'post', 'put', 'patch', 'delete']);
+const join = (prefix: string, path: string) => prefix + (path === '/' ? '' : path);
+
+// Walks the built app's router stack, so every mounted route shows up whatever its router is called.
+export function routeInventory(app: Express): RouteKey[] {
+  const keys: string[] = [];
+  const walk = (stack: Layer[], prefix: string) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        if (typeof layer.route.path !== 'string') throw new Error(`route under ${prefix || '/'} has a non-string path; list it by hand`);
+        for (const method of Object.keys(layer.route.methods)) if (METHODS.has(method)) keys.push(`${method.toUpperCase()} ${join(prefix, layer.route.path) || '/'}`);
+      } else if (Array.isArray(layer.handle?.stack)) {
+        if (typeof layer.rawPath !== 'string') throw new Error(`router mounted under ${prefix || '/'} has no string path (Express's layers changed?)`);
+        walk(layer.handle.stack, join(prefix, layer.rawPath));
+      }
+    }
+  };
+  walk((app as unknown as { router: { stack: Layer[] } }).router.stack, '');
+  return keys.filter((k): k is RouteKey => /^[A-Z]+ \/api(\/|$)/.test(k));
 }

@@ -65,7 +65,7 @@ const concrete = (key: string) => key.replace(':workstationId', String(boardId))
 
 describe('access to every API route', () => {
   it('has a permission rule for every route the server defines', () => {
-    const routes = routeInventory();
+    const routes = routeInventory(t.app);
     expect(routes.length).toBeGreaterThan(30);
     expect(routes.filter((r) => !(r in RULES))).toEqual([]);
     expect(Object.keys(RULES).filter((r) => !routes.includes(r as RouteKey))).toEqual([]);

@@ -6,6 +6,8 @@ import { runResultSchema, toJsonFriendly } from '../../../shared/schemas/runs';
 import { combineBatches, prepareScenario, runBatch } from '../../../workers/engine/index';
 import type { Db } from '../knex';
 import { placesService } from '../../places/places.service';
+import { firstWorkstationId, hasAnySite, replaceOperators } from '../../places/places.repo';
+import { firstWithRole } from '../../people/people.repo';
 import { agentsService } from '../../agents/agents.service';
 import { scenariosService } from '../../scenarios/scenarios.service';
 import { DEMO_AGENTS, DEMO_SITES } from './places';
@@ -22,7 +24,7 @@ function simulate(scenario: Scenario) {
 }
 
 export async function seedDemoWorkspace(db: Db, actor: { id: number; email: string }, opts: { particles?: number; log?: (s: string) => void } = {}) {
-  if (await db('sites').first()) return false;
+  if (await hasAnySite(db)) return false;
   const agentIds: Record<string, number> = {};
   for (const [key, agent] of Object.entries(DEMO_AGENTS)) agentIds[key] = (await agentsService.create(db, actor, agent)).id;
   for (const place of DEMO_SITES) {
@@ -58,8 +60,8 @@ export async function seedDemoWorkspace(db: Db, actor: { id: number; email: stri
       opts.log?.(`  ran "${created.name}" at ${place.workstation.name} (${input.run.particles} particles, ${((Date.now() - t0) / 1000).toFixed(1)} s)`);
     }
   }
-  const operator = await db('people').where({ role: 'operator' }).first();
-  const bench = await db('workstations').orderBy('id').first();
-  if (operator && bench) await db('workstation_operators').insert({ workstation_id: bench.id, person_id: operator.id });
+  const operator = await firstWithRole(db, 'operator');
+  const benchId = await firstWorkstationId(db);
+  if (operator && benchId !== undefined) await replaceOperators(db, benchId, [operator.id]);
   return true;
 }

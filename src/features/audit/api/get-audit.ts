@@ -1,9 +1,9 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page } from '../../../../shared/schemas/workspace-views';
+import type { AuditEntry, Page } from '../../../../shared/schemas/workspace-views';
 import { api } from '../../../config/paths';
 import { apiFetch } from '../../../lib/api-client';
 
-export type AuditEntry = { id: number; actorEmail: string | null; action: string; targetType: string | null; targetId: string | null; detail: Record<string, unknown> | null; createdAt: string };
+export type { AuditEntry };
 export type AuditFilters = { actor?: string; action?: string; workstationId?: number; page?: number };
 
 export function getAudit(f: AuditFilters) {

@@ -1,11 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Person } from '../../../../shared/schemas/auth';
+import type { Page } from '../../../../shared/schemas/workspace-views';
 import { api } from '../../../config/paths';
 import { apiFetch } from '../../../lib/api-client';
 
-export type PeoplePage = { items: Person[]; total: number; page: number; pageSize: number };
-
-export const getPeople = () => apiFetch<PeoplePage>(`${api.people}?pageSize=200&sort=name`);
+export const getPeople = () => apiFetch<Page<Person>>(`${api.people}?pageSize=200&sort=name`);
 
 export const peopleQueryOptions = () => queryOptions({ queryKey: ['people'], queryFn: getPeople });
 
