@@ -23,4 +23,5 @@ export type { NearFarFieldModel, NearFarFieldConcentration } from './near-far-fi
 export { eddyContinuousSource, eddyPuff, eddyDiffusivityFromVentilation } from './eddy.ts';
 export type { ContinuousSource, Puff, ReflectingBoundary } from './eddy.ts';
 export { timeWeightedAverage, exposureRatingCategory, bannerFor } from './exposure.ts';
-export type { Banner, ExposureRating, ExposureSegment } from './exposure.ts';
+export type { ExposureRating, ExposureSegment } from './exposure.ts';
+export type { Banner } from '../vocabulary/fractions.ts';

@@ -1,10 +1,8 @@
 import type { Banner, ExposureRating } from '../../shared/physics/index.ts';
 
-export const FRACTIONS = ['total', 'inhalable', 'thoracic', 'respirable'] as const;
-export type Fraction = (typeof FRACTIONS)[number];
+import type { Fate, Fraction } from '../../shared/vocabulary/fractions.ts';
 
-export const FATES = ['captured', 'settled', 'exhausted', 'airborne'] as const;
-export type Fate = (typeof FATES)[number];
+export { FATES, FRACTIONS, type Fate, type Fraction } from '../../shared/vocabulary/fractions.ts';
 
 /** Per-size-bin tables; index b is one bin. Everything the step loop reads is here. */
 export interface SizeBins {
