@@ -15,3 +15,5 @@ export const isControlTier = (tier: string): tier is ControlTier => (CONTROL_TIE
 
 // An unknown tier from an older record sorts after every known one.
 export const controlTierRank = (tier: string): number => (isControlTier(tier) ? CONTROL_TIERS.indexOf(tier) : CONTROL_TIERS.length);
+
+export const controlTierLabel = (tier: string): string => (isControlTier(tier) ? CONTROL_TIER_LABEL[tier] : tier);

@@ -11,7 +11,7 @@ import { useCompareColumns, type CompareSources } from '../../features/compare/h
 import { formatSelection, MAX_SELECTED, MIN_SELECTED, parseSelection, toggleId } from '../../features/compare/lib/selection';
 import { targetFor } from '../../features/compare/lib/target';
 import { normaliseResult } from '../../features/run-results/lib/normalise-result';
-import { RATING } from '../../features/run-results/lib/status';
+import { RATING_LABEL } from '../../../shared/vocabulary/index.ts';
 import { runQueryOptions } from '../../features/scenarios/api/get-run';
 import { scenarioQueryOptions } from '../../features/scenarios/api/get-scenario';
 import { scenarioKeys, useScenarios } from '../../features/scenarios/api/get-scenarios';
@@ -22,7 +22,7 @@ const SOURCES: CompareSources<ReturnType<typeof scenarioKeys.detail>, (string | 
   run: runQueryOptions,
   figures: (result) => {
     const view = normaliseResult(result);
-    return { ...view, ratingName: view.limit ? RATING[view.limit.ratingCategory].name : undefined };
+    return { ...view, ratingName: view.limit ? RATING_LABEL[view.limit.ratingCategory].name : undefined };
   },
 };
 

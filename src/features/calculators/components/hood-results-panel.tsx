@@ -2,7 +2,7 @@ import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
 import type { HoodFigures } from '../lib/hood-figures';
 import { TRANSPORT_VELOCITY_mPerS } from '../lib/hood-figures';
 import { displayNumber, plainNumber } from '../lib/format';
-import { HOOD_LABELS } from './hood-form';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { ResultGrid, ResultItem } from './result-item';
 
 const perHour = (airflow_m3PerS: number) => `${displayNumber(cubicMetresPerSecondToPerHour(airflow_m3PerS))} m³/h`;
@@ -18,7 +18,7 @@ export function HoodResultsPanel({ f, distance_m, basis }: { f: HoodFigures; dis
   const booth = f.geometry.kind === 'booth';
   return (
     <section aria-labelledby="hood-results" className="space-y-4">
-      <h2 id="hood-results">{HOOD_LABELS[f.geometry.kind]}, {displayNumber(f.geometry.faceArea_m2)} m² face, {plainNumber(f.validUpTo_m / 1.5)} m equivalent diameter</h2>
+      <h2 id="hood-results">{HOOD_KIND_LABEL[f.geometry.kind]}, {displayNumber(f.geometry.faceArea_m2)} m² face, {plainNumber(f.validUpTo_m / 1.5)} m equivalent diameter</h2>
       <ResultGrid label="Hood results">
         <ResultItem
           label={booth ? 'Velocity at the booth face' : `Centre-line velocity at ${plainNumber(distance_m)} m`}

@@ -1,3 +1,4 @@
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import type { Fraction } from '../../../../workers/engine/types.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { downloadCsv } from '../../../lib/csv.ts';
@@ -7,7 +8,7 @@ import { FAN_ASSUMPTIONS } from '../lib/fan-power.ts';
 import { airflow_m3PerH } from '../lib/labels.ts';
 import { comparedFraction } from '../lib/reference.ts';
 import { leastAirflowMeeting, type Target, type TargetId } from '../lib/target.ts';
-import { FRACTION_WORD, type CompareColumn } from '../lib/types.ts';
+import { type CompareColumn } from '../lib/types.ts';
 import { ComparisonTable } from './comparison-table.tsx';
 import { FractionChoice } from './fraction-choice.tsx';
 import { OverlayChart } from './overlay-chart.tsx';
@@ -51,7 +52,7 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
           hood losses of the real system decide the fan.
         </li>
         <li>
-          Differences are against the first column on the {FRACTION_WORD[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their statistical error when |z| &gt; {Z_CRITICAL}, the
+          Differences are against the first column on the {FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their statistical error when |z| &gt; {Z_CRITICAL}, the
           standard normal 97.5 % quantile (two-sided 5 % test), with z = difference / √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own.
         </li>
         <li>The target is judged on the upper 95 % bound of the 8-h TWA of the limit's fraction; among options that meet it, the one with the least total hood airflow is marked.</li>

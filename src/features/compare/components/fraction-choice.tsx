@@ -1,6 +1,7 @@
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { useId } from 'react';
 import type { Fraction } from '../../../../workers/engine/types.ts';
-import { FRACTION_WORD, TABLE_FRACTIONS } from '../lib/types.ts';
+import { TABLE_FRACTIONS } from '../lib/types.ts';
 
 export function FractionChoice({ value, onChange, limitFraction }: { value: Fraction; onChange: (f: Fraction) => void; limitFraction: Fraction }) {
   const name = useId();
@@ -13,7 +14,7 @@ export function FractionChoice({ value, onChange, limitFraction }: { value: Frac
       {TABLE_FRACTIONS.map((f) => (
         <label key={f} className={`cursor-pointer rounded-full border px-3 py-1 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${value === f ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line bg-white'}`}>
           <input type="radio" name={name} value={f} checked={value === f} onChange={() => onChange(f)} className="sr-only" />
-          {FRACTION_WORD[f]}
+          {FRACTION_LABEL[f]}
           {f === limitFraction && <span className="text-muted"> (limit)</span>}
         </label>
       ))}

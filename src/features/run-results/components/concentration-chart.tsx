@@ -4,7 +4,8 @@ import { Group } from '@visx/group';
 import { scaleLinear } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
 import type { Fraction } from '../../../../workers/engine/types.ts';
-import { FRACTION_LABEL, num } from '../lib/format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { num } from '../lib/format.ts';
 import type { RunView } from '../lib/normalise-result.ts';
 import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from '../../../components/chart-style.ts';
 

@@ -1,4 +1,5 @@
-import { FRACTION_LABEL, num } from '../lib/format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { num } from '../lib/format.ts';
 import type { RunView } from '../lib/normalise-result.ts';
 import { Section } from './section.tsx';
 

@@ -1,6 +1,6 @@
 import { useId } from 'react';
 import { FRACTIONS, type Fraction } from '../../../../workers/engine/types.ts';
-import { FRACTION_LABEL } from '../lib/format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 
 // Native radios: arrow keys move between fractions without any extra key handling.
 export function FractionPicker({ value, onChange, limitFraction }: { value: Fraction; onChange: (f: Fraction) => void; limitFraction?: Fraction }) {

@@ -3,7 +3,8 @@ import { type Column, DataTable } from '../../../components/ui/data-table.tsx';
 import { FRACTIONS, type Fraction } from '../../../../workers/engine/types.ts';
 import { fractionTableCsv, seriesCsv } from '../lib/csv.ts';
 import { downloadText } from '../../../lib/download.ts';
-import { ciText, FRACTION_LABEL, num, percent } from '../lib/format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { ciText, num, percent } from '../lib/format.ts';
 import type { FractionView, RunView } from '../lib/normalise-result.ts';
 import { Section } from './section.tsx';
 

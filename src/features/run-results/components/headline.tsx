@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { ciText, FRACTION_LABEL, num, percent, relativeError } from '../lib/format.ts';
+import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { BANNER_CLASSES, BannerBadge } from '../../../components/banner-badge.tsx';
+import { ciText, num, percent, relativeError } from '../lib/format.ts';
 import type { RunView } from '../lib/normalise-result.ts';
-import { BANNER, RATING } from '../lib/status.ts';
-import { BannerBadge } from './banner-badge.tsx';
 
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (
@@ -25,10 +25,10 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
   return (
     <div>
       {limit ? (
-        <div className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER[limit.banner].border} ${BANNER[limit.banner].soft}`}>
+        <div className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER_CLASSES[limit.banner].border} ${BANNER_CLASSES[limit.banner].soft}`}>
           <BannerBadge banner={limit.banner} size="lg" />
           <p className="max-w-xl text-sm text-ink">
-            {BANNER[limit.banner].meaning} ({num(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
+            {BANNER_LABEL[limit.banner].meaning} ({num(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
             {agent ? ` for ${agent}` : ''}
             {source ? `, ${source}` : ''}).
           </p>
@@ -51,8 +51,8 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
         )}
         {limit && (
           <Figure label="Exposure rating category" testId="rating">
-            {limit.ratingCategory} · {RATING[limit.ratingCategory].name}
-            <span className="block text-xs font-normal text-muted">AIHA band: {RATING[limit.ratingCategory].band}</span>
+            {limit.ratingCategory} · {RATING_LABEL[limit.ratingCategory].name}
+            <span className="block text-xs font-normal text-muted">AIHA band: {RATING_LABEL[limit.ratingCategory].band}</span>
           </Figure>
         )}
         <Figure label="Statistical error" testId="statistical-error">

@@ -1,5 +1,5 @@
 import { FRACTIONS } from '../../../../workers/engine/types.ts';
-import { FRACTION_LABEL } from './format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import type { RunView } from './normalise-result.ts';
 
 // Full precision in files: rounding is for the screen, the engineer's spreadsheet decides its own.

@@ -16,8 +16,6 @@ export const ciText = ([lo, hi]: Ci, digits = 3): string => `${num(lo, digits)}â
 
 export const percent = (value: number, digits = 2): string => (Number.isFinite(value) ? `${num(value, digits)} %` : 'â€”');
 
-export const FRACTION_LABEL = { total: 'Total', inhalable: 'Inhalable', thoracic: 'Thoracic', respirable: 'Respirable' } as const;
-
 // Relative half-width of the 95 % interval; the lower bound is clipped at zero, so the upper side is the honest one.
 export function relativeError(mean: number, [, hi]: Ci): number {
   return mean > 0 ? (100 * (hi - mean)) / mean : NaN;

@@ -2,7 +2,8 @@ import { useMemo, useState, type FormEvent } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
-import { faceText, HOOD_KIND_LABEL, PARAMETER } from '../lib/parameter-format';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { faceText, PARAMETER } from '../lib/parameter-format';
 import { buildSweepPoints, distanceRange_m, MAX_POINTS, MIN_POINTS, sourceDistance_m, type SweepParameter, type SweepPoint, type SweepSpec } from '../lib/sweep-points';
 
 export interface SweepRequest {

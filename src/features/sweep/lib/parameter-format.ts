@@ -1,10 +1,9 @@
 import type { Hood } from '../../../../shared/schemas/scenario.ts';
 import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { sig } from '../../../lib/format.ts';
 import type { Preferred } from './target-crossing.ts';
 import type { SweepParameter } from './sweep-points.ts';
-
-export const HOOD_KIND_LABEL: Record<Hood['kind'], string> = { plain: 'Plain hood', flanged: 'Flanged hood', slot: 'Slot hood', 'flanged-slot': 'Flanged slot hood', booth: 'Booth' };
 
 /** The form's unit for each parameter; SI stays inside, the conversion happens here only. */
 export const PARAMETER: Record<SweepParameter, { label: string; unit: string; axis: string; preferred: Preferred; toSi: (v: number) => number; fromSi: (v: number) => number }> = {
