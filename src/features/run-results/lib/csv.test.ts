@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { scenarioInput } from '../../../../tests/fixtures/workspace';
 import { runEngine } from '../../../../tests/helpers/run-engine';
-import { fractionTableCsv, seriesCsv, toCsv } from './csv';
+import { toCsv } from '../../../lib/csv';
+import { fractionTableCsv, seriesCsv } from './csv';
 import { normaliseResult } from './normalise-result';
 
 const view = normaliseResult(runEngine(scenarioInput()).result);
