@@ -1,3 +1,4 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { useState, type FormEvent } from 'react';
 import { agentInputSchema } from '../../../../shared/schemas/workspace';
 import { FRACTION_LABEL, LIMIT_FRACTIONS } from '../../../../shared/vocabulary/index.ts';
@@ -8,7 +9,7 @@ import { ErrorMessage, Notice } from '../../../components/ui/status';
 import { fieldErrors } from '../../../lib/form-errors';
 import { useSaveAgent } from '../api/save-agent';
 
-const num = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
+const num = decimalOrNaN;
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
 
 export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () => void }) {

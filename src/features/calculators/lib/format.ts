@@ -20,12 +20,6 @@ export function displayDiameter(diameter_m: number, digits = 3): string {
   return `${displayNumber(diameter_m * 1e3, digits)} mm`;
 }
 
-// Empty and half-typed fields become NaN, which the schema reports as "Enter a number".
-export function toNumber(text: string): number {
-  const trimmed = text.trim().replace(',', '.');
-  return trimmed === '' ? NaN : Number(trimmed);
-}
-
 // Echoes of what the user typed keep their own precision: "1 s", not "1.00 s".
 export const plainNumber = (value: number): string => String(Number(value.toPrecision(4)));
 

@@ -1,3 +1,4 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/index.ts';
 import { useState } from 'react';
 import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
@@ -8,7 +9,7 @@ import { ErrorMessage, Notice } from '../../../components/ui/status';
 import { useSchemaSubmit } from '../../../hooks/use-schema-submit';
 import { useCreateRoom, useCreateSite, useCreateWorkstation } from '../api/create-place';
 
-const n = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
+const n = decimalOrNaN;
 const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
 
 export function NewSiteForm() {

@@ -6,12 +6,5 @@ export function formatInput(value: number | undefined): string {
   return String(Number(value.toPrecision(6)));
 }
 
-export function parseInput(text: string): number | null {
-  const trimmed = text.trim().replace(',', '.').replace('−', '-');
-  if (trimmed === '') return null;
-  const n = Number(trimmed);
-  return Number.isFinite(n) ? n : null;
-}
-
 export const metres = (v_m: number) => `${v_m.toFixed(2)} m`;
 export const speed = (v_mPerS: number) => `${formatSig(v_mPerS, 2)} m/s`;

@@ -1,3 +1,4 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { useMemo, useState, type FormEvent } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { Button } from '../../../components/ui/button';
@@ -40,12 +41,12 @@ export function SweepForm({ scenario, disabled, onStart }: { scenario: Scenario;
 
   const checked = useMemo(() => {
     const p = PARAMETER[draft.parameter];
-    const targetFraction = Number(draft.target);
-    const particles = Number(draft.particles);
+    const targetFraction = decimalOrNaN(draft.target);
+    const particles = decimalOrNaN(draft.particles);
     if (!(targetFraction > 0 && targetFraction <= 10)) return { error: `Enter the target as a fraction of the limit above 0 (0.5 is half the limit), got “${draft.target}”.` };
     if (!(Number.isInteger(particles) && particles >= 100)) return { error: `Particles per point must be a whole number of at least 100, got “${draft.particles}”.` };
     const base = { ...scenario, run: { ...scenario.run, particles } };
-    const spec: SweepSpec = { hoodIndex: draft.hoodIndex, parameter: draft.parameter, from: p.toSi(Number(draft.from)), to: p.toSi(Number(draft.to)), count: Number(draft.count) };
+    const spec: SweepSpec = { hoodIndex: draft.hoodIndex, parameter: draft.parameter, from: p.toSi(decimalOrNaN(draft.from)), to: p.toSi(decimalOrNaN(draft.to)), count: decimalOrNaN(draft.count) };
     try {
       return { request: { spec, points: buildSweepPoints(base, spec), targetFraction, particles } };
     } catch (error) {
