@@ -1,3 +1,4 @@
+import { trimSig } from '../../../../shared/format/index.ts';
 import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { lazy, Suspense, useMemo, useState } from 'react';
 import { airflowToPerSecond, hoodCalculatorSchema } from '../../../../shared/schemas/calculators.ts';
@@ -28,7 +29,7 @@ function withUnitChange(form: HoodFormState, patch: Partial<HoodFormState>): Hoo
   if (!Number.isFinite(value)) return next;
   const perS = airflowToPerSecond(value, form.airflowUnit);
   const converted = patch.airflowUnit === 'm3PerH' ? cubicMetresPerSecondToPerHour(perS) : perS;
-  return { ...next, airflow: String(Number(converted.toPrecision(4))) };
+  return { ...next, airflow: trimSig(converted, 4) };
 }
 
 export function HoodCalculatorPage() {

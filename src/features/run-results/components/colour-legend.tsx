@@ -1,4 +1,4 @@
-import { num } from '../lib/format.ts';
+import { readableNumber } from '../../../../shared/format/index.ts';
 import { rampColour, type SequentialScale } from '../lib/colour-scale.ts';
 import { ACCENT, INK, MUTED } from '../../../components/chart-style.ts';
 
@@ -35,7 +35,7 @@ export function ColourLegend({ scale, unit, title, band }: { scale: SequentialSc
         </g>
       </svg>
       <p className="sr-only">
-        Scale from {num(scale.min)} to {num(scale.max)} {unit}
+        Scale from {readableNumber(scale.min)} to {readableNumber(scale.max)} {unit}
         {band ? `; ${band.label}` : ''}.
       </p>
     </div>

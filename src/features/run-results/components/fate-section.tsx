@@ -1,5 +1,5 @@
+import { readableNumber } from '../../../../shared/format/index.ts';
 import { FATES, type Fate } from '../../../../workers/engine/types.ts';
-import { num } from '../lib/format.ts';
 import type { RunView } from '../lib/normalise-result.ts';
 import { Section } from './section.tsx';
 
@@ -17,8 +17,8 @@ export function FateSection({ view }: { view: RunView }) {
   const widths = FATES.map((f) => 1000 * Math.max(0, shares[f] || 0));
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));
   return (
-    <Section title="Where the dust went" intro={`Fate of the ${num(emitted_mg)} mg emitted during the simulated window.`}>
-      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE[f].label} ${num(100 * shares[f], 3)} %`).join(', ')}>
+    <Section title="Where the dust went" intro={`Fate of the ${readableNumber(emitted_mg)} mg emitted during the simulated window.`}>
+      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE[f].label} ${readableNumber(100 * shares[f], 3)} %`).join(', ')}>
         {FATES.map((f, i) => {
           const w = widths[i];
           return <rect key={f} x={starts[i]} y={0} width={w} height={44} fill={FATE[f].colour} stroke="white" strokeWidth={w > 2 ? 2 : 0} vectorEffect="non-scaling-stroke" data-testid={`fate-${f}`} />;
@@ -40,14 +40,14 @@ export function FateSection({ view }: { view: RunView }) {
                 <span aria-hidden="true" className="mr-2 inline-block h-3 w-3 rounded-sm align-middle" style={{ background: FATE[f].colour }} />
                 {FATE[f].label}
               </th>
-              <td className="py-1.5 text-right tabular-nums">{num(100 * shares[f], 3)}</td>
-              <td className="py-1.5 text-right tabular-nums">{num(shares[f] * emitted_mg, 3)}</td>
+              <td className="py-1.5 text-right tabular-nums">{readableNumber(100 * shares[f], 3)}</td>
+              <td className="py-1.5 text-right tabular-nums">{readableNumber(shares[f] * emitted_mg, 3)}</td>
             </tr>
           ))}
           <tr className="border-t-2 border-ink font-semibold">
             <th scope="row" className="py-1.5 text-left">Sum</th>
-            <td className="py-1.5 text-right tabular-nums" data-testid="fate-sum">{num(100 * total, 4)}</td>
-            <td className="py-1.5 text-right tabular-nums">{num(total * emitted_mg, 4)}</td>
+            <td className="py-1.5 text-right tabular-nums" data-testid="fate-sum">{readableNumber(100 * total, 4)}</td>
+            <td className="py-1.5 text-right tabular-nums">{readableNumber(total * emitted_mg, 4)}</td>
           </tr>
         </tbody>
       </table>

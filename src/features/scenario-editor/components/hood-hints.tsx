@@ -1,5 +1,6 @@
+import { formatSig } from '../../../../shared/format/index.ts';
 import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { cubicMetresPerSecondToPerHour, formatSig } from '../../../../shared/units.ts';
+import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
 import type { HoodInput } from '../lib/hood-axis';
 import { hoodHint, type CaptureVerdict, type HoodHint } from '../lib/hood-hints';
 

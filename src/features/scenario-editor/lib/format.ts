@@ -1,4 +1,4 @@
-import { formatSig } from '../../../../shared/units.ts';
+import { formatSig } from '../../../../shared/format/index.ts';
 
 // Six significant digits hide binary noise such as 19.999999999999977 °C without losing typed precision.
 export function formatInput(value: number | undefined): string {

@@ -1,5 +1,6 @@
+import { formatSig } from '../../../../shared/format/index.ts';
 import type { MassBins } from '../../../../shared/size-profiles/index';
-import { formatSig, metresToMicrometres } from '../../../../shared/units';
+import { metresToMicrometres } from '../../../../shared/units';
 
 export type HistogramBar = { lower_um: number; upper_um: number; perLogWidth: number };
 
