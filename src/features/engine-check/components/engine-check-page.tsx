@@ -1,3 +1,4 @@
+import { percentText } from '../../../../shared/format/index.ts';
 import { useEffect, useRef, useState } from 'react';
 import { parseScenario } from '../../../../shared/schemas/scenario.ts';
 import { Cautions } from '../../../components/cautions.tsx';
@@ -17,7 +18,7 @@ type State =
   | { kind: 'failed'; message: string };
 
 const mg = (v: number) => v.toPrecision(3);
-const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
+const pct = (v: number) => percentText(100 * v);
 
 function ResultSummary({ results }: { results: Results }) {
   const r = results.breathingZone.fractions.respirable;
@@ -29,7 +30,7 @@ function ResultSummary({ results }: { results: Results }) {
       </p>
       {results.limit && (
         <p>
-          {results.limit.percentOfLimit.toFixed(1)} % of the {results.limit.value_mgPerM3} mg/m³ limit; banner: <strong>{results.limit.banner}</strong>
+          {percentText(results.limit.percentOfLimit)} of the {results.limit.value_mgPerM3} mg/m³ limit; banner: <strong>{results.limit.banner}</strong>
         </p>
       )}
       <p className="text-sm text-muted">

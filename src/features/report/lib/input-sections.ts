@@ -1,3 +1,4 @@
+import { countText } from '../../../../shared/format/index.ts';
 import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index.ts';
 import type { Hood, Scenario } from '../../../../shared/schemas/scenario.ts';
 import type { AgentData } from '../../../../shared/schemas/workspace.ts';
@@ -16,7 +17,7 @@ export interface AgentInfo {
 }
 
 const n = (v: number, digits = 3) => sig(v, digits);
-const m3h = (v_m3PerS: number) => `${Math.round(cubicMetresPerSecondToPerHour(v_m3PerS)).toLocaleString('en-GB')} m³/h`;
+const m3h = (v_m3PerS: number) => `${countText(cubicMetresPerSecondToPerHour(v_m3PerS))} m³/h`;
 const at = (p: { x_m: number; y_m: number; z_m: number }) => `x ${n(p.x_m)} m, y ${n(p.y_m)} m, height ${n(p.z_m)} m`;
 const FRACTION = { total: 'total', inhalable: 'inhalable', thoracic: 'thoracic', respirable: 'respirable' } as const;
 
@@ -68,7 +69,7 @@ export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfil
     { title: 'Dust agent and limit', rows: agentRows(s, opts.agent) },
     { title: 'Size profile', rows: [['Profile', opts.sizeProfileName ?? 'entered with the scenario'], ['Distribution', profileText(s.dust.sizeProfile)]] },
     { title: 'Worker', rows: [['Breathing-zone centre', at(s.worker)], ['Breathing-zone radius', `${n(s.worker.radius_m)} m`], ['Posture', s.worker.posture ?? 'not given']] },
-    { title: 'Simulation settings', rows: [['Particles', s.run.particles.toLocaleString('en-GB')], ['Seed', String(s.run.seed)], ['Batches', String(s.run.batches)], ['Largest time step', `${n(s.run.maxTimeStep_s)} s`]] },
+    { title: 'Simulation settings', rows: [['Particles', countText(s.run.particles)], ['Seed', String(s.run.seed)], ['Batches', String(s.run.batches)], ['Largest time step', `${n(s.run.maxTimeStep_s)} s`]] },
   ];
 }
 

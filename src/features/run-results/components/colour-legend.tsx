@@ -1,4 +1,4 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
 import { rampColour, type SequentialScale } from '../lib/colour-scale.ts';
 import { ACCENT, INK, MUTED } from '../../../components/chart-style.ts';
 
@@ -22,7 +22,7 @@ export function ColourLegend({ scale, unit, title, band }: { scale: SequentialSc
             return (
               <g key={t} transform={`translate(${x} 0)`}>
                 <line y2={4} stroke={MUTED} />
-                <text y={15} textAnchor="middle" fontSize={11} fill={INK}>{String(Number(t.toPrecision(2)))}</text>
+                <text y={15} textAnchor="middle" fontSize={11} fill={INK}>{trimSig(t, 2)}</text>
               </g>
             );
           })}

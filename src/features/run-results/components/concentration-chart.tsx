@@ -1,4 +1,4 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
@@ -15,7 +15,7 @@ const MARGIN = { top: 20, right: 24, bottom: 52, left: 78 };
 // A limit far above the curve would flatten it to the axis; past this ratio it is stated in words instead.
 const LIMIT_IN_VIEW = 5;
 
-const tick = (v: unknown) => String(Number(Number(v).toPrecision(3)));
+const tick = (v: unknown) => trimSig(Number(v), 3);
 
 export function ConcentrationChart({ view, fraction }: { view: RunView; fraction: Fraction }) {
   const band = view.series.bands[fraction];

@@ -1,4 +1,4 @@
-import { percentText, readableNumber } from '../../../../shared/format/index.ts';
+import { countText, percentText, readableNumber } from '../../../../shared/format/index.ts';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/vocabulary/index.ts';
@@ -59,7 +59,7 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
         <Figure label="Statistical error" testId="statistical-error">
           ± {readableNumber(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence
           <span className="block text-xs font-normal text-muted">
-            {view.engine.particles.toLocaleString('en')} particles in {view.engine.batches} batches
+            {countText(view.engine.particles)} particles in {view.engine.batches} batches
           </span>
         </Figure>
       </dl>

@@ -1,4 +1,4 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
 import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import { sequentialScale } from '../lib/colour-scale.ts';
@@ -34,7 +34,7 @@ export function MapsSection({ view, scenario }: { view: RunView; scenario: Scena
           )}
         </figure>
         <figure className="rounded-lg border border-line bg-white p-3">
-          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${Number(cap.height_m.toPrecision(3))} m, the source height` : ''}</figcaption>
+          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${trimSig(cap.height_m, 3)} m, the source height` : ''}</figcaption>
           {cap && capScale ? (
             <>
               <GridMap grid={cap} scale={capScale} scenario={scenario} label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`} />

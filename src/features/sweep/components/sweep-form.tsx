@@ -1,3 +1,4 @@
+import { countText, trimSig } from '../../../../shared/format/index.ts';
 import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { useMemo, useState, type FormEvent } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
@@ -16,7 +17,7 @@ export interface SweepRequest {
 
 type Draft = { hoodIndex: number; parameter: SweepParameter; from: string; to: string; count: string; target: string; particles: string };
 
-const round = (v: number, digits = 3) => String(Number(v.toPrecision(digits)));
+const round = (v: number, digits = 3) => trimSig(v, digits);
 
 // Defaults bracket the current setting by a factor of two each way, so the current design sits mid-range.
 function defaultRange(scenario: Scenario, hoodIndex: number, parameter: SweepParameter): [string, string] {
@@ -78,7 +79,7 @@ export function SweepForm({ scenario, disabled, onStart }: { scenario: Scenario;
       <TextField label="Target" unit="× limit" inputMode="decimal" value={draft.target} onChange={(e) => set({ target: e.target.value })} hint="Upper 95 % bound of the 8-h TWA must stay at or below this; 0.5 is half the limit." />
       <TextField label="Particles per point" type="number" min={100} step={100} value={draft.particles} onChange={(e) => set({ particles: e.target.value })} hint="Fewer particles run faster but widen every interval." />
       <p className="text-sm text-muted sm:col-span-2 lg:col-span-4">
-        {HOOD_KIND_LABEL[hood.kind]}: {faceText(hood)} face, {Math.round(PARAMETER.airflow.fromSi(hood.airflow_m3PerS)).toLocaleString('en-GB')} m³/h, {round(sourceDistance_m(scenario, draft.hoodIndex))} m from the source along its axis.
+        {HOOD_KIND_LABEL[hood.kind]}: {faceText(hood)} face, {countText(PARAMETER.airflow.fromSi(hood.airflow_m3PerS))} m³/h, {round(sourceDistance_m(scenario, draft.hoodIndex))} m from the source along its axis.
         {draft.parameter === 'distance' && ` The face slides along its axis and must stay inside the room: ${round(lo, 2)} to ${round(hi, 2)} m.`}
         {' '}Every point uses the scenario's seed ({String(scenario.run.seed)}), so the differences between points are not blurred by different random draws.
       </p>

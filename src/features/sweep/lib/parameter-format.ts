@@ -1,3 +1,4 @@
+import { countText } from '../../../../shared/format/index.ts';
 import type { Hood } from '../../../../shared/schemas/scenario.ts';
 import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
 import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
@@ -17,7 +18,7 @@ const plain = (v: number, digits = 3) => sig(v, digits);
 /** A parameter value in the form's unit with its unit, e.g. "0.25 m", "1,260 m³/h", "1.2 × current face". */
 export function formatValue(parameter: SweepParameter, value_si: number): string {
   if (parameter === 'distance') return `${plain(value_si)} m`;
-  if (parameter === 'airflow') return `${Math.round(cubicMetresPerSecondToPerHour(value_si)).toLocaleString('en-GB')} m³/h`;
+  if (parameter === 'airflow') return `${countText(cubicMetresPerSecondToPerHour(value_si))} m³/h`;
   return `${plain(value_si)} × current face`;
 }
 
