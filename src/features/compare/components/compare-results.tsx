@@ -8,9 +8,9 @@ import { FAN_ASSUMPTIONS } from '../lib/fan-power.ts';
 import { airflow_m3PerH } from '../lib/labels.ts';
 import { comparedFraction } from '../lib/reference.ts';
 import { leastAirflowMeeting, type Target, type TargetId } from '../lib/target.ts';
-import { type CompareColumn } from '../lib/types.ts';
+import { TABLE_FRACTIONS, type CompareColumn } from '../lib/types.ts';
 import { ComparisonTable } from './comparison-table.tsx';
-import { FractionChoice } from './fraction-choice.tsx';
+import { FractionPicker } from '../../../components/fraction-picker.tsx';
 import { OverlayChart } from './overlay-chart.tsx';
 import { TargetPicker } from './target-picker.tsx';
 
@@ -60,7 +60,7 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
       <section aria-labelledby="chart-heading" className="mt-8">
         <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
           <h2 id="chart-heading">Breathing-zone concentration</h2>
-          <FractionChoice value={chartFraction ?? fraction} onChange={onChartFractionChange} limitFraction={fraction} />
+          <FractionPicker fractions={TABLE_FRACTIONS} legend="Size fraction in the chart" value={chartFraction ?? fraction} onChange={onChartFractionChange} limitFraction={fraction} />
         </div>
         <OverlayChart columns={columns} fraction={chartFraction ?? fraction} />
       </section>
