@@ -1,15 +1,10 @@
 import { readableNumber } from '../../../../shared/format/index.ts';
-import { FATES, type Fate } from '../../../../workers/engine/types.ts';
+import { FATE_LABEL, FATES, type Fate } from '../../../../shared/vocabulary/index.ts';
 import type { RunView } from '../lib/normalise-result.ts';
 import { Section } from './section.tsx';
 
 // Fate colours are our own; each segment also carries its word in the list, never colour alone.
-const FATE: Record<Fate, { label: string; colour: string }> = {
-  captured: { label: 'Captured by hood', colour: '#1f6f6a' },
-  settled: { label: 'Settled on the floor', colour: '#a07a3c' },
-  exhausted: { label: 'Exhausted with room air', colour: '#7d8796' },
-  airborne: { label: 'Still airborne at the end', colour: '#c9b98f' },
-};
+const FATE_COLOUR: Record<Fate, string> = { captured: '#1f6f6a', settled: '#a07a3c', exhausted: '#7d8796', airborne: '#c9b98f' };
 
 export function FateSection({ view }: { view: RunView }) {
   const { emitted_mg, shares } = view.fate;
@@ -18,10 +13,10 @@ export function FateSection({ view }: { view: RunView }) {
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));
   return (
     <Section title="Where the dust went" intro={`Fate of the ${readableNumber(emitted_mg)} mg emitted during the simulated window.`}>
-      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE[f].label} ${readableNumber(100 * shares[f], 3)} %`).join(', ')}>
+      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE_LABEL[f]} ${readableNumber(100 * shares[f], 3)} %`).join(', ')}>
         {FATES.map((f, i) => {
           const w = widths[i];
-          return <rect key={f} x={starts[i]} y={0} width={w} height={44} fill={FATE[f].colour} stroke="white" strokeWidth={w > 2 ? 2 : 0} vectorEffect="non-scaling-stroke" data-testid={`fate-${f}`} />;
+          return <rect key={f} x={starts[i]} y={0} width={w} height={44} fill={FATE_COLOUR[f]} stroke="white" strokeWidth={w > 2 ? 2 : 0} vectorEffect="non-scaling-stroke" data-testid={`fate-${f}`} />;
         })}
       </svg>
       <table className="mt-3 w-full max-w-xl text-sm">
@@ -37,8 +32,8 @@ export function FateSection({ view }: { view: RunView }) {
           {FATES.map((f) => (
             <tr key={f} className="border-t border-line">
               <th scope="row" className="py-1.5 text-left font-normal">
-                <span aria-hidden="true" className="mr-2 inline-block h-3 w-3 rounded-sm align-middle" style={{ background: FATE[f].colour }} />
-                {FATE[f].label}
+                <span aria-hidden="true" className="mr-2 inline-block h-3 w-3 rounded-sm align-middle" style={{ background: FATE_COLOUR[f] }} />
+                {FATE_LABEL[f]}
               </th>
               <td className="py-1.5 text-right tabular-nums">{readableNumber(100 * shares[f], 3)}</td>
               <td className="py-1.5 text-right tabular-nums">{readableNumber(shares[f] * emitted_mg, 3)}</td>
