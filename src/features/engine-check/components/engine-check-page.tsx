@@ -1,4 +1,4 @@
-import { percentText } from '../../../../shared/format/index.ts';
+import { formatSig, percentText } from '../../../../shared/format/index.ts';
 import { useEffect, useRef, useState } from 'react';
 import { parseScenario } from '../../../../shared/schemas/scenario.ts';
 import { Cautions } from '../../../components/cautions.tsx';
@@ -17,7 +17,7 @@ type State =
   | { kind: 'cancelled' }
   | { kind: 'failed'; message: string };
 
-const mg = (v: number) => v.toPrecision(3);
+const mg = (v: number) => formatSig(v, 3);
 const pct = (v: number) => percentText(100 * v);
 
 function ResultSummary({ results }: { results: Results }) {
