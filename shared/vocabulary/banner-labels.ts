@@ -14,5 +14,3 @@ export const BANNER_LABEL: Record<Banner, BannerLabel> = {
   watch: { word: 'Watch', icon: '!', meaning: 'Upper 95 % bound of the 8-h TWA between half the limit and the limit', colour: 'watch' },
   act: { word: 'Act', icon: '✕', meaning: 'Upper 95 % bound of the 8-h TWA above the limit', colour: 'act' },
 };
-
-export const bannerText = (banner: Banner): string => `${BANNER_LABEL[banner].icon} ${BANNER_LABEL[banner].word}`;
