@@ -62,34 +62,3 @@ describe('temperature and pressure conversions', () => {
     expect(units.pascalsToKilopascals(101325)).toBeCloseTo(101.325, 12);
   });
 });
-
-describe('formatSig', () => {
-  it('rounds to the requested significant digits with plain decimals', () => {
-    expect(units.formatSig(0.000123456, 3)).toBe('0.000123');
-    expect(units.formatSig(3.14159, 3)).toBe('3.14');
-    expect(units.formatSig(123456, 2)).toBe('120000');
-    expect(units.formatSig(-0.0496, 2)).toBe('-0.050');
-  });
-
-  it('keeps trailing zeros that are significant', () => {
-    expect(units.formatSig(2.5, 3)).toBe('2.50');
-    expect(units.formatSig(9.996, 3)).toBe('10.0');
-  });
-
-  it('switches to exponent notation for very small and very large values', () => {
-    expect(units.formatSig(1.234e-7, 3)).toBe('1.23e-7');
-    expect(units.formatSig(6.02e23, 2)).toBe('6.0e+23');
-  });
-
-  it('writes zero, infinities and NaN readably', () => {
-    expect(units.formatSig(0, 3)).toBe('0');
-    expect(units.formatSig(Infinity, 3)).toBe('∞');
-    expect(units.formatSig(-Infinity, 3)).toBe('−∞');
-    expect(units.formatSig(NaN, 3)).toBe('NaN');
-  });
-
-  it('rejects a digit count that is not a positive integer, quoting it', () => {
-    expect(() => units.formatSig(1, 0)).toThrow(/digits.*got 0/);
-    expect(() => units.formatSig(1, 2.5)).toThrow(RangeError);
-  });
-});

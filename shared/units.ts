@@ -28,16 +28,3 @@ export const celsiusToKelvin = (temperature_C: number): number => temperature_C 
 
 export const pascalsToKilopascals = (pressure_Pa: number): number => pressure_Pa / 1e3;
 export const kilopascalsToPascals = (pressure_kPa: number): number => pressure_kPa * 1e3;
-
-// Plain decimals read better in tables; exponents only where a decimal would need many zeros.
-export function formatSig(value: number, digits: number): string {
-  if (!Number.isInteger(digits) || digits < 1 || digits > 21) {
-    throw new RangeError(`digits must be an integer from 1 to 21, got ${String(digits)}`);
-  }
-  if (!Number.isFinite(value)) return Number.isNaN(value) ? 'NaN' : value > 0 ? '∞' : '−∞';
-  if (value === 0) return '0';
-  const rounded = Number(value.toPrecision(digits));
-  const exponent = Math.floor(Math.log10(Math.abs(rounded)));
-  if (exponent < -4 || exponent >= 15) return rounded.toExponential(digits - 1);
-  return rounded.toFixed(Math.max(0, digits - 1 - exponent));
-}

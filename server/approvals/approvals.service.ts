@@ -1,3 +1,4 @@
+import { reviewDueDate } from '../../shared/approval/review-date';
 import type { ApproveInput } from '../../shared/schemas/workspace';
 import type { Approval } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
@@ -9,12 +10,6 @@ import { currentApproval, replaceApproval } from './approvals.repo';
 
 type Actor = { id: number; email: string };
 
-// 12 months by default; a Watch result earns a shorter look (6 months).
-export function defaultReviewDate(banner: string | null, from = new Date()): string {
-  const d = new Date(from);
-  d.setUTCMonth(d.getUTCMonth() + (banner === 'watch' ? 6 : 12));
-  return d.toISOString().slice(0, 10);
-}
 
 export async function approveScenario(db: Db, actor: Actor, scenarioId: number, input: ApproveInput): Promise<Approval | null> {
   const workstationId = await withTransaction(db, async (trx) => {
@@ -24,7 +19,7 @@ export async function approveScenario(db: Db, actor: Actor, scenarioId: number, 
     if (!run) throw new AppError(400, 'invalid_input', 'Choose a saved run of this scenario', [{ path: 'body.runId', message: `Run ${input.runId} is not a saved run of this scenario` }]);
     if (run.inputHash !== scenario.inputHash) throw new AppError(409, 'run_out_of_date', 'The scenario changed after this run. Run it again and save the run before approving.');
     if (run.banner === 'act') throw new AppError(409, 'above_limit', 'This run is above the limit (Act). An option that fails its limit cannot be approved as the current control.');
-    const reviewDate = input.reviewDate ?? defaultReviewDate(run.banner);
+    const reviewDate = input.reviewDate ?? reviewDueDate(run.banner, new Date());
     if (reviewDate <= new Date().toISOString().slice(0, 10)) throw new AppError(400, 'invalid_input', 'The review date must be in the future', [{ path: 'body.reviewDate', message: 'Pick a later date' }]);
     const now = new Date().toISOString();
     await markApproved(trx, scenarioId, scenario.workstationId);

@@ -1,4 +1,6 @@
-export type ReleaseCondition = 'quiet' | 'low' | 'active' | 'high';
+import type { ReleaseType as ReleaseCondition } from '../vocabulary/release-types.ts';
+
+export type { ReleaseCondition };
 
 export interface CaptureVelocityRange {
   min_mPerS: number;

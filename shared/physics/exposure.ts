@@ -1,3 +1,4 @@
+import type { Banner } from '../vocabulary/fractions.ts';
 import { requireNonNegative, requirePositive } from './validate.ts';
 
 export interface ExposureSegment {
@@ -6,7 +7,6 @@ export interface ExposureSegment {
 }
 
 export type ExposureRating = 0 | 1 | 2 | 3 | 4;
-export type Banner = 'clear' | 'watch' | 'act';
 
 const EIGHT_HOURS_s = 8 * 3600;
 

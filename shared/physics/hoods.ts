@@ -1,6 +1,8 @@
 import { requireNonNegative, requirePositive } from './validate.ts';
 
-export type HoodKind = 'plain' | 'flanged' | 'slot' | 'flanged-slot' | 'booth';
+import type { HoodKind } from '../vocabulary/hood-kinds.ts';
+
+export type { HoodKind };
 
 export interface HoodGeometry {
   kind: HoodKind;

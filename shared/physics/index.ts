@@ -23,7 +23,8 @@ export type { NearFarFieldModel, NearFarFieldConcentration } from './near-far-fi
 export { eddyContinuousSource, eddyPuff, eddyDiffusivityFromVentilation, roomEddyDiffusivity, MEASURED_ROOM_DIFFUSIVITY_m2PerS } from './eddy.ts';
 export type { ContinuousSource, Puff, ReflectingBoundary, RoomDiffusivity } from './eddy.ts';
 export { timeWeightedAverage, exposureRatingCategory, bannerFor } from './exposure.ts';
-export type { Banner, ExposureRating, ExposureSegment } from './exposure.ts';
+export type { ExposureRating, ExposureSegment } from './exposure.ts';
+export type { Banner } from '../vocabulary/fractions.ts';
 export { sinkPanelVelocity } from './sink-panel.ts';
 export { hoodFace } from './hood-face.ts';
 export type { HoodFace } from './hood-face.ts';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { airProperties } from '../physics/index.ts';
+import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index.ts';
 import { celsiusToKelvin, cubicMetresPerHourToPerSecond, kilopascalsToPascals, micrometresToMetres, millimetresToMetres, nanometresToMetres } from '../units.ts';
 
 // NaN arrives from an empty or half-typed field; z.number() refuses it, and the message says what to do.
@@ -45,8 +46,7 @@ export const particleCalculatorSchema = z
 export type ParticleCalculatorInput = z.input<typeof particleCalculatorSchema>;
 export type ParticleCalculatorValues = z.output<typeof particleCalculatorSchema>;
 
-export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
-export const RELEASE_CONDITIONS = ['quiet', 'low', 'active', 'high'] as const;
+export { HOOD_KINDS, RELEASE_TYPES as RELEASE_CONDITIONS };
 export const AIRFLOW_UNITS = ['m3PerH', 'm3PerS'] as const;
 export type AirflowUnit = (typeof AIRFLOW_UNITS)[number];
 export const airflowToPerSecond = (value: number, unit: AirflowUnit): number => (unit === 'm3PerH' ? cubicMetresPerHourToPerSecond(value) : value);
@@ -62,7 +62,7 @@ const hoodCommon = {
   width_m: face('width'),
   height_m: face('height'),
   distance_m: distance,
-  release: z.enum(RELEASE_CONDITIONS),
+  release: z.enum(RELEASE_TYPES),
 };
 
 // The engineer knows either the fan's airflow or the capture velocity they need; the other one is computed.

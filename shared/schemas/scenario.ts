@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index.ts';
 
 const finite = (min?: { gt?: number; gte?: number }) => {
   let schema = z.number();
@@ -72,7 +73,7 @@ const directionSchema = z.union([
 
 const hoodSchema = z.object({
   name: z.string().optional(),
-  kind: z.enum(['plain', 'flanged', 'slot', 'flanged-slot', 'booth']),
+  kind: z.enum(HOOD_KINDS),
   x_m: finite(),
   y_m: finite(),
   z_m: finite(),
@@ -80,7 +81,7 @@ const hoodSchema = z.object({
   faceWidth_m: positive(),
   faceHeight_m: positive(),
   airflow_m3PerS: nonNegative(),
-  releaseType: z.enum(['quiet', 'low', 'active', 'high']).optional(),
+  releaseType: z.enum(RELEASE_TYPES).optional(),
 });
 
 const workerSchema = z.object({

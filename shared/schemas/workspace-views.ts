@@ -1,8 +1,9 @@
+import type { Banner } from '../vocabulary/fractions.ts';
 import type { AgentData } from './workspace';
 import type { Scenario, ScenarioInput } from './scenario';
 
 // Shapes the API answers with; the server builds them, the client reads them.
-export type Banner = 'clear' | 'watch' | 'act';
+export type { Banner };
 
 export type LastRun = {
   id: number;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CONTROL_TIERS, LIMIT_FRACTIONS, RELEASE_TYPES } from '../vocabulary/index.ts';
 import { scenarioSchema } from './scenario';
 
 const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
@@ -28,19 +29,17 @@ export const workstationDataSchema = z
     description: z.string().trim().max(500).default(''),
     source: z.object({ x_m: nonNegative('Source x'), y_m: nonNegative('Source y'), z_m: nonNegative('Source height') }).strict(),
     worker: z.object({ x_m: nonNegative('Worker x'), y_m: nonNegative('Worker y'), z_m: nonNegative('Breathing-zone height'), posture: z.enum(['standing', 'seated']) }).strict(),
-    releaseType: z.enum(['quiet', 'low', 'active', 'high']),
+    releaseType: z.enum(RELEASE_TYPES),
   })
   .strict();
 export const workstationInputSchema = z.object({ roomId: z.number().int().positive(), name, data: workstationDataSchema }).strict();
 export type WorkstationInput = z.infer<typeof workstationInputSchema>;
 
-export const FRACTIONS = ['inhalable', 'thoracic', 'respirable'] as const;
-
 export const agentDataSchema = z
   .object({
     density_kgPerM3: positive('Particle density').max(25_000),
     shapeFactor: z.number().finite().min(1, 'Shape factor is at least 1 (a sphere)').max(5),
-    limitFraction: z.enum(FRACTIONS),
+    limitFraction: z.enum(LIMIT_FRACTIONS),
     limit8h_mgPerM3: positive('8-h limit').max(1000),
     limit15min_mgPerM3: positive('15-min limit').max(1000).nullable().default(null),
     jurisdiction: z.string().trim().min(1, 'Say where the limit applies').max(120),
@@ -58,8 +57,7 @@ export const agentInputSchema = z.object({ name, data: agentDataSchema }).strict
 export type AgentInput = z.infer<typeof agentInputSchema>;
 export type AgentData = z.infer<typeof agentDataSchema>;
 
-export const CONTROL_TIERS = ['elimination', 'substitution', 'engineering', 'administrative', 'respiratory', 'none'] as const;
-export type ControlTier = (typeof CONTROL_TIERS)[number];
+export { CONTROL_TIERS, type ControlTier } from '../vocabulary/control-tiers.ts';
 
 export const scenarioMetaSchema = z
   .object({

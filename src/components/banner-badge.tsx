@@ -1,22 +1,30 @@
-import type { Banner } from '../../shared/schemas/workspace-views';
+import type { Banner } from '../../shared/vocabulary/fractions.ts';
+import { BANNER_LABEL } from '../../shared/vocabulary/banner-labels.ts';
 
-const LOOK: Record<Banner, { word: string; icon: string; cls: string; help: string }> = {
-  clear: { word: 'Clear', icon: '✓', cls: 'border-clear bg-clear-soft text-clear', help: 'Upper 95 % bound of the 8-h TWA is below half the limit' },
-  watch: { word: 'Watch', icon: '!', cls: 'border-watch bg-watch-soft text-watch', help: 'Upper 95 % bound of the 8-h TWA is between half the limit and the limit' },
-  act: { word: 'Act', icon: '✕', cls: 'border-act bg-act-soft text-act', help: 'Upper 95 % bound of the 8-h TWA is above the limit' },
+// Tailwind only keeps class names it can read whole, so each token's classes are spelled out here.
+export const BANNER_CLASSES: Record<Banner, { text: string; soft: string; border: string }> = {
+  clear: { text: 'text-clear', soft: 'bg-clear-soft', border: 'border-clear' },
+  watch: { text: 'text-watch', soft: 'bg-watch-soft', border: 'border-watch' },
+  act: { text: 'text-act', soft: 'bg-act-soft', border: 'border-act' },
 };
 
-// Word and icon as well as colour, so the state reads without colour vision.
+const SIZE = {
+  md: { box: 'gap-1.5 px-2.5 py-1 text-sm', icon: 'h-5 w-5 text-xs' },
+  lg: { box: 'gap-3 px-4 py-2.5 text-2xl', icon: 'h-9 w-9 text-xl' },
+};
+
+/** Clear / Watch / Act as word, icon and colour together, so the state reads without colour vision. */
 export function BannerBadge({ banner, size = 'md' }: { banner: Banner | null | undefined; size?: 'md' | 'lg' }) {
   if (!banner) return <span className="text-sm text-muted">Not run</span>;
-  const look = LOOK[banner];
-  const big = size === 'lg';
+  const b = BANNER_LABEL[banner];
+  const c = BANNER_CLASSES[b.colour];
+  const s = SIZE[size];
   return (
-    <span title={look.help} className={`inline-flex items-center gap-1.5 rounded-full border font-bold ${look.cls} ${big ? 'px-5 py-2 text-2xl' : 'px-2.5 py-0.5 text-xs'}`}>
-      <span aria-hidden="true">{look.icon}</span>
-      {look.word}
+    <span data-testid="banner" data-banner={banner} title={b.meaning} className={`inline-flex items-center rounded-full border-2 font-bold ${c.border} ${c.soft} ${c.text} ${s.box}`}>
+      <span aria-hidden="true" className={`inline-flex shrink-0 items-center justify-center rounded-full bg-current ${s.icon}`}>
+        <span className="text-white">{b.icon}</span>
+      </span>
+      {b.word}
     </span>
   );
 }
-
-export const bannerHelp = (banner: Banner) => LOOK[banner].help;

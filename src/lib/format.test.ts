@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { percent, sig } from './format';
+import { sig } from './format';
 
 describe('sig', () => {
   it('keeps three significant digits in the readable range', () => {
@@ -13,6 +13,5 @@ describe('sig', () => {
   it('shows a dash for missing or non-finite values', () => {
     expect(sig(null)).toBe('—');
     expect(sig(Number.NaN)).toBe('—');
-    expect(percent(undefined)).toBe('—');
   });
 });

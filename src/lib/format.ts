@@ -1,12 +1,11 @@
+import { trimSig } from '../../shared/format/index.ts';
 // Figures for tables: significant digits, never a long float tail.
 export function sig(value: number | null | undefined, digits = 3): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
   if (value === 0) return '0';
   const abs = Math.abs(value);
-  if (abs >= 1e-3 && abs < 1e5) return Number(value.toPrecision(digits)).toString();
+  if (abs >= 1e-3 && abs < 1e5) return trimSig(value, digits);
   return value.toExponential(digits - 1);
 }
-
-export const percent = (value: number | null | undefined, digits = 0) => (value === null || value === undefined || !Number.isFinite(value) ? '—' : `${value.toFixed(digits)} %`);
 
 export const dateTime = (iso: string | null | undefined) => (iso ? new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' }) : '—');

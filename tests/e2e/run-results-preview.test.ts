@@ -5,7 +5,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { createServer, type ViteDevServer } from 'vite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PREVIEW_SCENARIO } from '../../src/features/run-results/dev/preview-scenario';
-import { num } from '../../src/features/run-results/lib/format';
+import { readableNumber } from '../../shared/format/index.ts';
 import { runEngine } from '../helpers/run-engine';
 import { launchBrowser, shot } from '../helpers/browser';
 
@@ -38,7 +38,7 @@ describe('the run results preview', () => {
     const { result } = runEngine(PREVIEW_SCENARIO);
     const expected = (result as { breathingZone: { fractions: { respirable: { twa8h_mgPerM3: number } } }; limit: { banner: string } });
     expect(await page.getByTestId('banner').first().getAttribute('data-banner')).toBe(expected.limit.banner);
-    expect(await page.getByTestId('twa').textContent()).toContain(`${num(expected.breathingZone.fractions.respirable.twa8h_mgPerM3)} mg/m³`);
+    expect(await page.getByTestId('twa').textContent()).toContain(`${readableNumber(expected.breathingZone.fractions.respirable.twa8h_mgPerM3)} mg/m³`);
     for (const heading of ['Headline', 'Breathing-zone concentration over time', 'Concentrations by size fraction', 'Where the dust went', 'Particle paths, plan and elevation', 'Floor deposition and capture velocity', 'Analytic cross-checks', 'Cautions']) {
       await expect.poll(() => page.getByRole('heading', { name: heading }).count()).toBe(1);
     }

@@ -60,7 +60,7 @@ describe('an engineer sweeps the hood airflow, keeps the best point and prints i
     const table = page.getByRole('table', { name: 'Sweep points' });
     await table.getByRole('button', { name: /Upper 95 %/ }).click();
     await table.getByRole('row').nth(1).getByRole('button', { name: 'Save as new scenario' }).click();
-    const link = table.getByRole('link', { name: /^Open “Flanged hood at [\d,]+ m³\/h”$/ });
+    const link = table.getByRole('link', { name: /^Open “Flanged opening at [\d,]+ m³\/h”$/ });
     await link.waitFor();
     savedName = (await link.innerText()).replace(/^Open “|”$/g, '');
     savedId = Number(/\/scenarios\/(\d+)$/.exec((await link.getAttribute('href'))!)![1]);
@@ -73,7 +73,7 @@ describe('an engineer sweeps the hood airflow, keeps the best point and prints i
     const report = page.getByRole('article', { name: `Report: ${savedName}` });
     await report.waitFor();
     for (const heading of ['1. Inputs', '2. Assumptions, the model and its limits', '3. Results', '4. Approval and sign-off']) await report.getByRole('heading', { name: heading }).waitFor();
-    expect(await report.getByRole('cell', { name: savedName.replace('Flanged hood at ', '') }).count()).toBe(1);
+    expect(await report.getByRole('cell', { name: savedName.replace('Flanged opening at ', '') }).count()).toBe(1);
     expect(await report.getByText('Respirable crystalline silica').count()).toBeGreaterThan(0);
     expect(await report.getByText(/no saved run yet/).count()).toBe(1);
     await report.getByRole('complementary', { name: 'Cautions' }).waitFor();

@@ -1,7 +1,7 @@
-import type { Fraction } from '../../shared/vocabulary/fractions.ts';
 import type { RunResult } from '../../shared/schemas/run-result.ts';
+import type { Fate, Fraction } from '../../shared/vocabulary/fractions.ts';
 
-export { FATES, type Fate, FRACTIONS, type Fraction } from '../../shared/vocabulary/fractions.ts';
+export { FATES, FRACTIONS, type Fate, type Fraction } from '../../shared/vocabulary/fractions.ts';
 
 /** Per-size-bin tables; index b is one bin. Everything the step loop reads is here. */
 export interface SizeBins {

@@ -1,8 +1,9 @@
+import { percentText } from '../../shared/format/index.ts';
 import type { RunResult } from '../../shared/schemas/run-result.ts';
 import { FRACTIONS } from '../../shared/vocabulary/fractions.ts';
 
 const mg = (v: number) => (v >= 0.1 ? v.toFixed(3) : v.toPrecision(3));
-const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
+const pct = (v: number) => percentText(100 * v);
 
 // Typed arrays would serialise as index-keyed objects; the JSON output wants plain arrays.
 export function resultsToJson(results: RunResult): string {
@@ -24,7 +25,7 @@ export function summary(name: string, r: RunResult): string {
   }
   if (r.limit) {
     const l = r.limit;
-    lines.push('', `Limit ${l.value_mgPerM3} mg/m³ (${l.fraction}): ${l.percentOfLimit.toFixed(1)} % of limit (upper CI ${l.percentOfLimitUpper.toFixed(1)} %), rating category ${l.ratingCategory}, banner ${l.banner.toUpperCase()}`);
+    lines.push('', `Limit ${l.value_mgPerM3} mg/m³ (${l.fraction}): ${percentText(l.percentOfLimit)} of limit (upper CI ${percentText(l.percentOfLimitUpper)}), rating category ${l.ratingCategory}, banner ${l.banner.toUpperCase()}`);
   }
   const fate = r.fate;
   lines.push('', `Fate of ${fate.emitted_mg.toFixed(1)} mg emitted: captured ${pct(fate.captured)}, settled ${pct(fate.settled)}, exhausted ${pct(fate.exhausted)}, airborne at end ${pct(fate.airborne)}`);

@@ -11,7 +11,7 @@ import { ScenarioPicker } from '../../features/compare/components/scenario-picke
 import { useCompareColumns, type CompareSources } from '../../features/compare/hooks/use-compare-columns';
 import { formatSelection, MAX_SELECTED, MIN_SELECTED, parseSelection, toggleId } from '../../features/compare/lib/selection';
 import { targetFor } from '../../features/compare/lib/target';
-import { RATING } from '../../features/run-results/lib/status';
+import { RATING_LABEL } from '../../../shared/vocabulary/index.ts';
 import { runQueryOptions } from '../../features/scenarios/api/get-run';
 import { scenarioQueryOptions } from '../../features/scenarios/api/get-scenario';
 import { scenarioKeys, useScenarios } from '../../features/scenarios/api/get-scenarios';
@@ -28,7 +28,7 @@ const SOURCES: CompareSources<ReturnType<typeof scenarioKeys.detail>, (string | 
       series: { time_s: breathingZone.series.time_s, bands: breathingZone.series },
       fate: { emitted_mg, shares },
       limit,
-      ratingName: limit ? RATING[limit.ratingCategory].name : undefined,
+      ratingName: limit ? RATING_LABEL[limit.ratingCategory].name : undefined,
     };
   },
 };

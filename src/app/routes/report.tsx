@@ -1,3 +1,4 @@
+import { countText } from '../../../shared/format/index.ts';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
@@ -47,7 +48,7 @@ function Report({ detail }: { detail: ScenarioDetail }) {
       <select className="rounded-md border border-line bg-white px-2 py-1" value={runId ?? ''} onChange={(e) => setParams({ run: e.target.value })} disabled={detail.runs.length === 0}>
         {detail.runs.length === 0 && <option value="">no saved runs</option>}
         {detail.runs.map((x) => (
-          <option key={x.id} value={x.id}>{`${dateTime(x.created_at)} · ${x.particles.toLocaleString('en-GB')} particles${x.outOfDate ? ' · out of date' : ''}`}</option>
+          <option key={x.id} value={x.id}>{`${dateTime(x.created_at)} · ${countText(x.particles)} particles${x.outOfDate ? ' · out of date' : ''}`}</option>
         ))}
       </select>
       <Link className="underline" to={paths.scenario(detail.id)}>open the scenario</Link>

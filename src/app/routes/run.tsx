@@ -1,3 +1,4 @@
+import { countText } from '../../../shared/format/index.ts';
 import { Link, useParams } from 'react-router-dom';
 import { Page } from '../../components/ui/page';
 import { ErrorMessage, Spinner } from '../../components/ui/status';
@@ -18,7 +19,7 @@ export function RunRoute() {
       title={`Run of “${r.scenarioName}”`}
       intro={
         <>
-          Saved {dateTime(r.createdAt)} · engine {r.engineVersion} · seed <code>{r.seed}</code> · {r.particles.toLocaleString()} particles ·{' '}
+          Saved {dateTime(r.createdAt)} · engine {r.engineVersion} · seed <code>{r.seed}</code> · {countText(r.particles)} particles ·{' '}
           <Link className="underline" to={paths.scenario(r.scenarioId)}>open the scenario</Link> · <Link className="underline" to={`${paths.report(r.scenarioId)}?run=${r.id}`}>report</Link>
         </>
       }

@@ -1,4 +1,5 @@
 import { Link, useParams } from 'react-router-dom';
+import { BannerBadge } from '../../components/banner-badge';
 import { Page } from '../../components/ui/page';
 import { EmptyState, ErrorMessage, Spinner } from '../../components/ui/status';
 import { paths } from '../../config/paths';
@@ -45,7 +46,7 @@ export function StationRoute() {
           {items.map((b) => (
             <li key={b.workstationId}>
               <Link to={paths.board(b.workstationId)} className="block rounded-lg border border-line bg-white p-4 text-lg font-semibold hover:border-accent">
-                {b.workstationName} · {b.banner === 'clear' ? '✓ Clear' : b.banner === 'watch' ? '! Watch' : '✕ Act'}
+                {b.workstationName} · <BannerBadge banner={b.banner} />
               </Link>
             </li>
           ))}

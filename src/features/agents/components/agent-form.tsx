@@ -1,5 +1,7 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { useState, type FormEvent } from 'react';
-import { agentInputSchema, FRACTIONS } from '../../../../shared/schemas/workspace';
+import { agentInputSchema } from '../../../../shared/schemas/workspace';
+import { FRACTION_LABEL, LIMIT_FRACTIONS } from '../../../../shared/vocabulary/index.ts';
 import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -7,7 +9,7 @@ import { ErrorMessage, Notice } from '../../../components/ui/status';
 import { fieldErrors } from '../../../lib/form-errors';
 import { useSaveAgent } from '../api/save-agent';
 
-const num = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
+const num = decimalOrNaN;
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
 
 export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () => void }) {
@@ -58,7 +60,7 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
       <TextField label="Particle density" unit="kg/m³" inputMode="decimal" value={f.density} onChange={set('density')} error={e['data.density_kgPerM3']} />
       <TextField label="Dynamic shape factor" unit="–" inputMode="decimal" value={f.shape} onChange={set('shape')} error={e['data.shapeFactor']} hint="1 for a sphere" />
       <SelectField label="Limit applies to" value={f.fraction} onChange={set('fraction')}>
-        {FRACTIONS.map((x) => <option key={x} value={x}>{x} fraction</option>)}
+        {LIMIT_FRACTIONS.map((x) => <option key={x} value={x}>{FRACTION_LABEL[x]} fraction</option>)}
       </SelectField>
       <TextField label="8-h limit (TWA)" unit="mg/m³" inputMode="decimal" value={f.limit8h} onChange={set('limit8h')} error={e['data.limit8h_mgPerM3']} />
       <TextField label="15-min limit" unit="mg/m³" inputMode="decimal" value={f.limit15} onChange={set('limit15')} error={e['data.limit15min_mgPerM3']} hint="Leave empty if none" />

@@ -1,9 +1,9 @@
+import { formatSig, readableNumber } from '../../../../shared/format/index.ts';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { decadeColumns, decadeRows, decadeTableCsv, decadeTableTsv } from '../lib/decade-table';
 import { copyText, downloadText } from '../../../lib/download';
 import { diameterTick } from '../lib/chart-ticks';
-import { displayNumber } from '../lib/format';
 import type { ParticleMedium } from '../lib/particle-properties';
 
 type CopyState = 'idle' | 'copied' | 'blocked';
@@ -46,7 +46,7 @@ export function DecadeTableView({ medium }: { medium: ParticleMedium }) {
               <tr key={row.diameter_m} className="border-t border-line">
                 <th scope="row" className="whitespace-nowrap px-3 py-2 text-left font-semibold">{diameterTick(row.diameter_m)}</th>
                 {columns.map((c) => (
-                  <td key={c.key} className="whitespace-nowrap px-3 py-2 text-right tabular-nums">{c.header.endsWith('(%)') ? c.value(row).toFixed(1) : displayNumber(c.value(row))}</td>
+                  <td key={c.key} className="whitespace-nowrap px-3 py-2 text-right tabular-nums">{c.header.endsWith('(%)') ? formatSig(c.value(row), 3) : readableNumber(c.value(row))}</td>
                 ))}
               </tr>
             ))}

@@ -1,3 +1,5 @@
+import { trimSig } from '../../../../shared/format/index.ts';
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { lazy, Suspense, useMemo, useState } from 'react';
 import { airflowToPerSecond, hoodCalculatorSchema } from '../../../../shared/schemas/calculators.ts';
 import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
@@ -5,7 +7,6 @@ import { Cautions } from '../../../components/cautions';
 import { Page } from '../../../components/ui/page';
 import { Spinner } from '../../../components/ui/status';
 import { fieldErrors } from '../../../lib/form-errors';
-import { toNumber } from '../lib/format';
 import { hoodFigures } from '../lib/hood-figures';
 import { HOOD_DEFAULTS, HoodForm, type HoodFormState } from './hood-form';
 import { HoodResultsPanel } from './hood-results-panel';
@@ -14,21 +15,21 @@ import { InvalidInputs } from './result-item';
 const HoodChart = lazy(() => import('./hood-chart'));
 
 function toInput(form: HoodFormState) {
-  const common = { kind: form.kind, width_m: toNumber(form.width_m), height_m: toNumber(form.height_m), distance_m: toNumber(form.distance_m), release: form.release };
+  const common = { kind: form.kind, width_m: decimalOrNaN(form.width_m), height_m: decimalOrNaN(form.height_m), distance_m: decimalOrNaN(form.distance_m), release: form.release };
   return form.basis === 'airflow'
-    ? { ...common, basis: 'airflow' as const, airflow: toNumber(form.airflow), airflowUnit: form.airflowUnit }
-    : { ...common, basis: 'capture' as const, captureVelocity_mPerS: toNumber(form.captureVelocity_mPerS) };
+    ? { ...common, basis: 'airflow' as const, airflow: decimalOrNaN(form.airflow), airflowUnit: form.airflowUnit }
+    : { ...common, basis: 'capture' as const, captureVelocity_mPerS: decimalOrNaN(form.captureVelocity_mPerS) };
 }
 
 // Switching the airflow unit keeps the same physical airflow rather than reinterpreting the digits.
 function withUnitChange(form: HoodFormState, patch: Partial<HoodFormState>): HoodFormState {
   const next = { ...form, ...patch };
   if (!patch.airflowUnit || patch.airflowUnit === form.airflowUnit) return next;
-  const value = toNumber(form.airflow);
+  const value = decimalOrNaN(form.airflow);
   if (!Number.isFinite(value)) return next;
   const perS = airflowToPerSecond(value, form.airflowUnit);
   const converted = patch.airflowUnit === 'm3PerH' ? cubicMetresPerSecondToPerHour(perS) : perS;
-  return { ...next, airflow: String(Number(converted.toPrecision(4))) };
+  return { ...next, airflow: trimSig(converted, 4) };
 }
 
 export function HoodCalculatorPage() {

@@ -1,10 +1,11 @@
+import { readableNumber } from '../../../../shared/format/index.ts';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { LinePath } from '@visx/shape';
 import { decadeTicks, plainTick } from '../lib/chart-ticks';
-import { displayNumber, plainNumber } from '../lib/format';
+import { plainNumber } from '../lib/format';
 import type { HoodFigures } from '../lib/hood-figures';
 import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from '../../../components/chart-style';
 
@@ -35,7 +36,7 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
         <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-3 w-5 bg-clear-soft outline outline-1 outline-clear" />Published capture range</span>
         {!booth && <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-3 w-5 bg-paper-deep" />Beyond the equation&apos;s range</span>}
       </figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Centre-line velocity from the face to ${displayNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}>
+      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Centre-line velocity from the face to ${readableNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}>
         <Group left={MARGIN.left} top={MARGIN.top}>
           {!booth && f.validUpTo_m < xMax && <rect x={x(f.validUpTo_m)} width={innerW - x(f.validUpTo_m)} y={0} height={innerH} fill={PAPER_DEEP} />}
           <rect x={0} width={innerW} y={y(f.range.max_mPerS)} height={y(f.range.min_mPerS) - y(f.range.max_mPerS)} fill={CLEAR_SOFT} fillOpacity={0.85} data-testid="capture-band" />
@@ -45,14 +46,14 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
             <g data-testid="validity-marker">
               <line x1={x(f.validUpTo_m)} x2={x(f.validUpTo_m)} y1={0} y2={innerH} stroke={WATCH} strokeWidth={1.5} strokeDasharray="6 4" />
               <text x={x(f.validUpTo_m) + 6} y={14} fill={WATCH} fontSize={12} fontWeight={600}>
-                1.5 hood diameters: {displayNumber(f.validUpTo_m)} m
+                1.5 hood diameters: {readableNumber(f.validUpTo_m)} m
               </text>
             </g>
           )}
           <line x1={x(distance_m)} x2={x(distance_m)} y1={y(f.centerline_mPerS)} y2={innerH} stroke={INK} strokeDasharray="2 3" />
           <circle cx={x(distance_m)} cy={y(f.centerline_mPerS)} r={5} fill="white" stroke={INK} strokeWidth={2} />
           <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
-            {displayNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
+            {readableNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
           </text>
           <AxisLeft scale={y} tickValues={yTicks} tickFormat={(v) => plainTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label="Centre-line velocity (m/s, log scale)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={40} />
           <AxisBottom top={innerH} scale={x} numTicks={8} tickFormat={(v) => plainTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Distance from the face along the centre line (m)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={18} />

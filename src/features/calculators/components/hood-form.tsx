@@ -1,5 +1,6 @@
 import { captureVelocityRange, type HoodKind, type ReleaseCondition } from '../../../../shared/physics/index.ts';
 import { HOOD_KINDS, RELEASE_CONDITIONS, type AirflowUnit } from '../../../../shared/schemas/calculators.ts';
+import { HOOD_KIND_LABEL, isSlotKind, RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { SelectField, TextField } from '../../../components/ui/field';
 
 export type HoodFormState = {
@@ -26,16 +27,14 @@ export const HOOD_DEFAULTS: HoodFormState = {
   release: 'low',
 };
 
-export const HOOD_LABELS: Record<HoodKind, string> = { plain: 'Plain opening', flanged: 'Flanged opening', slot: 'Slot', 'flanged-slot': 'Flanged slot', booth: 'Booth' };
-const RELEASE_LABELS: Record<ReleaseCondition, string> = { quiet: 'Quiet', low: 'Low', active: 'Active', high: 'High' };
 const numeric = { type: 'text', inputMode: 'decimal', autoComplete: 'off', spellCheck: false } as const;
 
 export function HoodForm({ form, errors, onChange }: { form: HoodFormState; errors: Record<string, string>; onChange: (patch: Partial<HoodFormState>) => void }) {
-  const slot = form.kind === 'slot' || form.kind === 'flanged-slot';
+  const slot = isSlotKind(form.kind);
   return (
     <form aria-label="Hood and airflow" onSubmit={(e) => e.preventDefault()} className="grid gap-4 rounded-lg border border-line bg-white p-4 md:grid-cols-2 lg:grid-cols-1">
       <SelectField label="Hood kind" value={form.kind} onChange={(e) => onChange({ kind: e.target.value as HoodKind })}>
-        {HOOD_KINDS.map((k) => <option key={k} value={k}>{HOOD_LABELS[k]}</option>)}
+        {HOOD_KINDS.map((k) => <option key={k} value={k}>{HOOD_KIND_LABEL[k]}</option>)}
       </SelectField>
       <div className="grid grid-cols-2 gap-2">
         <TextField label="Face width" unit="m" {...numeric} value={form.width_m} error={errors.width_m} onChange={(e) => onChange({ width_m: e.target.value })} />
@@ -70,7 +69,7 @@ export function HoodForm({ form, errors, onChange }: { form: HoodFormState; erro
               <label key={r} className={`flex gap-2 rounded-md border p-2 text-sm ${form.release === r ? 'border-accent bg-accent-soft' : 'border-line'}`}>
                 <input type="radio" name="release" className="mt-1" checked={form.release === r} onChange={() => onChange({ release: r })} />
                 <span>
-                  <span className="font-semibold">{RELEASE_LABELS[r]}</span> · {range.min_mPerS}–{range.max_mPerS} m/s
+                  <span className="font-semibold">{RELEASE_TYPE_LABEL[r].word}</span> · {range.min_mPerS}–{range.max_mPerS} m/s
                   <span className="block text-xs text-muted">{range.description}; e.g. {range.examples.join(', ')}</span>
                 </span>
               </label>

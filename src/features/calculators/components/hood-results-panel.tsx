@@ -1,11 +1,12 @@
+import { readableNumber } from '../../../../shared/format/index.ts';
 import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
 import type { HoodFigures } from '../lib/hood-figures';
 import { TRANSPORT_VELOCITY_mPerS } from '../lib/hood-figures';
-import { displayNumber, plainNumber } from '../lib/format';
-import { HOOD_LABELS } from './hood-form';
+import { plainNumber } from '../lib/format';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { ResultGrid, ResultItem } from './result-item';
 
-const perHour = (airflow_m3PerS: number) => `${displayNumber(cubicMetresPerSecondToPerHour(airflow_m3PerS))} m³/h`;
+const perHour = (airflow_m3PerS: number) => `${readableNumber(cubicMetresPerSecondToPerHour(airflow_m3PerS))} m³/h`;
 
 const VERDICT = {
   below: { icon: '✕', text: 'below the published range for this release', tone: 'text-act' },
@@ -18,11 +19,11 @@ export function HoodResultsPanel({ f, distance_m, basis }: { f: HoodFigures; dis
   const booth = f.geometry.kind === 'booth';
   return (
     <section aria-labelledby="hood-results" className="space-y-4">
-      <h2 id="hood-results">{HOOD_LABELS[f.geometry.kind]}, {displayNumber(f.geometry.faceArea_m2)} m² face, {plainNumber(f.validUpTo_m / 1.5)} m equivalent diameter</h2>
+      <h2 id="hood-results">{HOOD_KIND_LABEL[f.geometry.kind]}, {readableNumber(f.geometry.faceArea_m2)} m² face, {plainNumber(f.validUpTo_m / 1.5)} m equivalent diameter</h2>
       <ResultGrid label="Hood results">
         <ResultItem
           label={booth ? 'Velocity at the booth face' : `Centre-line velocity at ${plainNumber(distance_m)} m`}
-          value={displayNumber(f.centerline_mPerS)}
+          value={readableNumber(f.centerline_mPerS)}
           unit="m/s"
           testId="centerline-velocity"
           note={<span className={verdict.tone} data-testid="capture-verdict"><span aria-hidden="true">{verdict.icon} </span>{verdict.text}</span>}
@@ -30,22 +31,22 @@ export function HoodResultsPanel({ f, distance_m, basis }: { f: HoodFigures; dis
         <ResultItem label="Published capture velocity" value={`${f.range.min_mPerS}–${f.range.max_mPerS}`} unit="m/s" testId="capture-range" note={`${f.range.description}; e.g. ${f.range.examples.join(', ')}`} />
         <ResultItem
           label={basis === 'capture' ? 'Required airflow' : 'Airflow entered'}
-          value={displayNumber(f.airflow_m3PerS)}
+          value={readableNumber(f.airflow_m3PerS)}
           unit="m³/s"
           testId="airflow"
           note={perHour(f.airflow_m3PerS)}
         />
         <ResultItem
           label={`Airflow for the published range at ${plainNumber(distance_m)} m`}
-          value={`${displayNumber(f.requiredForRange_m3PerS.min)}–${displayNumber(f.requiredForRange_m3PerS.max)}`}
+          value={`${readableNumber(f.requiredForRange_m3PerS.min)}–${readableNumber(f.requiredForRange_m3PerS.max)}`}
           unit="m³/s"
           testId="required-airflow"
           note={`${perHour(f.requiredForRange_m3PerS.min)} to ${perHour(f.requiredForRange_m3PerS.max)}`}
         />
-        <ResultItem label="Face velocity" value={displayNumber(f.faceVelocity_mPerS)} unit="m/s" testId="face-velocity" note="Airflow divided by face area" />
+        <ResultItem label="Face velocity" value={readableNumber(f.faceVelocity_mPerS)} unit="m/s" testId="face-velocity" note="Airflow divided by face area" />
         <ResultItem
           label="Duct diameter for this airflow"
-          value={`${displayNumber(f.ductDiameter_m.min * 1000)}–${displayNumber(f.ductDiameter_m.max * 1000)}`}
+          value={`${readableNumber(f.ductDiameter_m.min * 1000)}–${readableNumber(f.ductDiameter_m.max * 1000)}`}
           unit="mm"
           testId="duct-diameter"
           note={`Keeps transport velocity at ${TRANSPORT_VELOCITY_mPerS.min}–${TRANSPORT_VELOCITY_mPerS.max} m/s, the guidance for average industrial dust (ACGIH)`}
@@ -60,7 +61,7 @@ function ValidityNote({ f, distance_m }: { f: HoodFigures; distance_m: number })
   if (f.geometry.kind === 'booth') {
     return <p className="text-sm text-muted" data-testid="validity">A booth&apos;s capture velocity is its face velocity; the distance does not enter, and the figure says nothing about air in front of the face.</p>;
   }
-  const limit = `${displayNumber(f.validUpTo_m)} m`;
+  const limit = `${readableNumber(f.validUpTo_m)} m`;
   return (
     <div className="space-y-2 text-sm" data-testid="validity">
       <p className={f.beyondValidity ? 'font-semibold text-watch' : 'text-muted'}>

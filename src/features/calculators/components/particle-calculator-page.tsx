@@ -1,3 +1,4 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { lazy, Suspense, useMemo, useState } from 'react';
 import { particleCalculatorSchema } from '../../../../shared/schemas/calculators.ts';
 import { Cautions } from '../../../components/cautions';
@@ -5,7 +6,7 @@ import { Page } from '../../../components/ui/page';
 import { Spinner } from '../../../components/ui/status';
 import { fieldErrors } from '../../../lib/form-errors';
 import { crossoverDiameter } from '../lib/crossover';
-import { displayDiameter, plainNumber, toNumber } from '../lib/format';
+import { displayDiameter, plainNumber } from '../lib/format';
 import { mediumFor, particleProperties } from '../lib/particle-properties';
 import { DecadeTableView } from './decade-table-view';
 import { PARTICLE_DEFAULTS, ParticleForm, type ParticleFormState } from './particle-form';
@@ -21,12 +22,12 @@ export function ParticleCalculatorPage() {
     () =>
       particleCalculatorSchema.safeParse({
         ...form,
-        diameter: toNumber(form.diameter),
-        density_kgPerM3: toNumber(form.density_kgPerM3),
-        shapeFactor: toNumber(form.shapeFactor),
-        temperature_C: toNumber(form.temperature_C),
-        pressure_kPa: toNumber(form.pressure_kPa),
-        window_s: toNumber(form.window_s),
+        diameter: decimalOrNaN(form.diameter),
+        density_kgPerM3: decimalOrNaN(form.density_kgPerM3),
+        shapeFactor: decimalOrNaN(form.shapeFactor),
+        temperature_C: decimalOrNaN(form.temperature_C),
+        pressure_kPa: decimalOrNaN(form.pressure_kPa),
+        window_s: decimalOrNaN(form.window_s),
       }),
     [form],
   );

@@ -1,4 +1,4 @@
-import { displayNumber, powerOfTen } from './format.ts';
+import { powerOfTen, readableNumber, trimSig } from '../../../../shared/format/index.ts';
 
 // Log axes read best with one labelled tick per decade.
 export function decadeTicks(min: number, max: number): number[] {
@@ -15,9 +15,9 @@ export function logSpace(min: number, max: number, count: number): number[] {
 
 const DIAMETER_LABELS: Record<number, string> = { [-9]: '1 nm', [-8]: '10 nm', [-7]: '100 nm', [-6]: '1 µm', [-5]: '10 µm', [-4]: '100 µm', [-3]: '1 mm' };
 
-export const diameterTick = (d_m: number): string => DIAMETER_LABELS[Math.round(Math.log10(d_m))] ?? displayNumber(d_m);
+export const diameterTick = (d_m: number): string => DIAMETER_LABELS[Math.round(Math.log10(d_m))] ?? readableNumber(d_m);
 
 export const powerTick = powerOfTen;
 
 // Round tick values print without float noise (0.15000000000000002 → 0.15).
-export const plainTick = (value: number): string => String(Number(value.toPrecision(3)));
+export const plainTick = (value: number): string => trimSig(value, 3);

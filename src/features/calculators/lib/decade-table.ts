@@ -1,3 +1,4 @@
+import { toCsv } from '../../../lib/csv.ts';
 import { particleProperties, type ParticleMedium, type ParticleProperties } from './particle-properties.ts';
 
 export const DECADE_DIAMETERS_m = [1e-9, 1e-8, 1e-7, 1e-6, 1e-5, 1e-4] as const;
@@ -32,21 +33,18 @@ export function decadeRows(medium: ParticleMedium): ParticleProperties[] {
 }
 
 // Six significant digits survive a spreadsheet round trip without pretending to more precision than the formulas have.
-const cell = (value: number): string => String(Number(value.toPrecision(6)));
-
-function delimited(medium: ParticleMedium, separator: string, quote: (text: string) => string): string {
+function table(medium: ParticleMedium): { header: string[]; rows: number[][] } {
   const columns = decadeColumns(medium.window_s);
-  const lines = [columns.map((c) => quote(c.header)).join(separator)];
-  for (const row of decadeRows(medium)) lines.push(columns.map((c) => cell(c.value(row))).join(separator));
-  return `${lines.join('\r\n')}\r\n`;
+  return { header: columns.map((c) => c.header), rows: decadeRows(medium).map((row) => columns.map((c) => Number(c.value(row).toPrecision(6)))) };
 }
 
-// RFC 4180: CRLF line ends, fields quoted when they could hold a comma.
 export function decadeTableCsv(medium: ParticleMedium): string {
-  return delimited(medium, ',', (text) => `"${text.replaceAll('"', '""')}"`);
+  const { header, rows } = table(medium);
+  return toCsv(header, rows);
 }
 
 // Tab-separated text pastes into spreadsheet cells directly.
 export function decadeTableTsv(medium: ParticleMedium): string {
-  return delimited(medium, '\t', (text) => text);
+  const { header, rows } = table(medium);
+  return [header, ...rows].map((r) => r.join('\t')).join('\r\n') + '\r\n';
 }

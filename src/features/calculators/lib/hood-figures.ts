@@ -5,6 +5,7 @@ import {
   type CaptureVelocityRange,
   type HoodGeometry,
 } from '../../../../shared/physics/index.ts';
+import { isSlotKind } from '../../../../shared/vocabulary/index.ts';
 import { airflowToPerSecond, type HoodCalculatorInput } from '../../../../shared/schemas/calculators.ts';
 
 // [S] ACGIH: duct transport velocity for average industrial dust.
@@ -54,7 +55,7 @@ export function hoodFigures(input: HoodCalculatorInput): HoodFigures {
   const centerline_mPerS = velocityAt(input.distance_m);
   const validUpTo_m = VALID_DIAMETERS * Math.sqrt((4 * faceArea_m2) / Math.PI);
   const aspect = Math.min(input.width_m, input.height_m) / Math.max(input.width_m, input.height_m);
-  const isSlot = input.kind === 'slot' || input.kind === 'flanged-slot';
+  const isSlot = isSlotKind(input.kind);
   return {
     geometry,
     airflow_m3PerS,

@@ -1,3 +1,4 @@
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { downloadCsv } from '../../../lib/csv.ts';
@@ -7,9 +8,9 @@ import { FAN_ASSUMPTIONS } from '../lib/fan-power.ts';
 import { airflow_m3PerH } from '../lib/labels.ts';
 import { comparedFraction } from '../lib/reference.ts';
 import { leastAirflowMeeting, type Target, type TargetId } from '../lib/target.ts';
-import { FRACTION_WORD, type CompareColumn } from '../lib/types.ts';
+import { TABLE_FRACTIONS, type CompareColumn } from '../lib/types.ts';
 import { ComparisonTable } from './comparison-table.tsx';
-import { FractionChoice } from './fraction-choice.tsx';
+import { FractionPicker } from '../../../components/fraction-picker.tsx';
 import { OverlayChart } from './overlay-chart.tsx';
 import { TargetPicker } from './target-picker.tsx';
 
@@ -51,7 +52,7 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
           hood losses of the real system decide the fan.
         </li>
         <li>
-          Differences are against the first column on the {FRACTION_WORD[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their statistical error when |z| &gt; {Z_CRITICAL}, the
+          Differences are against the first column on the {FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their statistical error when |z| &gt; {Z_CRITICAL}, the
           standard normal 97.5 % quantile (two-sided 5 % test), with z = difference / √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own.
         </li>
         <li>The target is judged on the upper 95 % bound of the 8-h TWA of the limit's fraction; among options that meet it, the one with the least total hood airflow is marked.</li>
@@ -59,7 +60,7 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
       <section aria-labelledby="chart-heading" className="mt-8">
         <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
           <h2 id="chart-heading">Breathing-zone concentration</h2>
-          <FractionChoice value={chartFraction ?? fraction} onChange={onChartFractionChange} limitFraction={fraction} />
+          <FractionPicker fractions={TABLE_FRACTIONS} legend="Size fraction in the chart" value={chartFraction ?? fraction} onChange={onChartFractionChange} limitFraction={fraction} />
         </div>
         <OverlayChart columns={columns} fraction={chartFraction ?? fraction} />
       </section>

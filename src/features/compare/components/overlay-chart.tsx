@@ -1,3 +1,4 @@
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
@@ -6,7 +7,7 @@ import { Area, LinePath } from '@visx/shape';
 import { useState } from 'react';
 import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { plain } from '../lib/labels.ts';
-import { FRACTION_WORD, type CompareColumn } from '../lib/types.ts';
+import { type CompareColumn } from '../lib/types.ts';
 import { chartSeries, limitsFor, SERIES_LOOK } from './chart-series.ts';
 
 const WIDTH = 900;
@@ -35,7 +36,7 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
   const yOf = (v: number) => y(log ? Math.max(v, floor) : v) ?? 0;
   const tMax = Math.max(1, ...series.flatMap((s) => s.points.map((p) => p.t_min)));
   const x = scaleLinear({ domain: [0, tMax], range: [0, INNER_W] });
-  const word = FRACTION_WORD[fraction].toLowerCase();
+  const word = FRACTION_LABEL[fraction].toLowerCase();
 
   if (series.length === 0) return <p className="text-sm text-muted">None of the chosen scenarios has a saved run to draw.</p>;
   return (
@@ -72,7 +73,7 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
             );
           })}
           {limits.map((l) => <line key={l.value_mgPerM3} x1={0} x2={INNER_W} y1={yOf(l.value_mgPerM3)} y2={yOf(l.value_mgPerM3)} stroke="var(--color-act)" strokeWidth={1.5} strokeDasharray="7 5" />)}
-          <AxisLeft scale={y} numTicks={log ? LOG_DECADES : 6} tickFormat={(v) => plain(Number(v), 2)} stroke="var(--color-muted)" tickStroke="var(--color-muted)" tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label={`${FRACTION_WORD[fraction]} concentration (mg/m³)`} labelProps={axisLabel} labelOffset={56} />
+          <AxisLeft scale={y} numTicks={log ? LOG_DECADES : 6} tickFormat={(v) => plain(Number(v), 2)} stroke="var(--color-muted)" tickStroke="var(--color-muted)" tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label={`${FRACTION_LABEL[fraction]} concentration (mg/m³)`} labelProps={axisLabel} labelOffset={56} />
           <AxisBottom top={INNER_H} scale={x} numTicks={10} tickFormat={(v) => plain(Number(v))} stroke="var(--color-muted)" tickStroke="var(--color-muted)" tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Time since the task started (min)" labelProps={axisLabel} labelOffset={16} />
         </Group>
       </svg>

@@ -1,13 +1,11 @@
+import { controlTierLabel, FATES, FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { toCsv } from '../../../lib/csv.ts';
-import { TIER_WORDS } from './control-order.ts';
 import { compareMeans } from './differ.ts';
 import { roughFanPower_W } from './fan-power.ts';
 import { airflow_m3PerH, hoodText } from './labels.ts';
 import { leastAirflowMeeting, meetsTarget, type Target } from './target.ts';
-import { FRACTION_WORD, TABLE_FRACTIONS, type CompareColumn } from './types.ts';
+import { TABLE_FRACTIONS, type CompareColumn } from './types.ts';
 import { comparedFraction, estimateOf } from './reference.ts';
-
-const FATE_KEYS = ['captured', 'settled', 'exhausted', 'airborne'] as const;
 
 /** One row per scenario, raw numbers with units in the header, so a spreadsheet can compute with them. */
 export function comparisonCsv(columns: readonly CompareColumn[], target: Target): string {
@@ -15,10 +13,10 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
   const best = leastAirflowMeeting(columns, target);
   const header = [
     'Scenario', 'Workstation', 'Site', 'Control tier', 'Control', 'Hoods', 'Total hood airflow (m³/h)', 'Rough fan power (W)',
-    ...TABLE_FRACTIONS.flatMap((f) => [`${FRACTION_WORD[f]} 8-h TWA (mg/m³)`, `${FRACTION_WORD[f]} 8-h TWA lower 95 % (mg/m³)`, `${FRACTION_WORD[f]} 8-h TWA upper 95 % (mg/m³)`, `${FRACTION_WORD[f]} peak 15-min (mg/m³)`]),
+    ...TABLE_FRACTIONS.flatMap((f) => [`${FRACTION_LABEL[f]} 8-h TWA (mg/m³)`, `${FRACTION_LABEL[f]} 8-h TWA lower 95 % (mg/m³)`, `${FRACTION_LABEL[f]} 8-h TWA upper 95 % (mg/m³)`, `${FRACTION_LABEL[f]} peak 15-min (mg/m³)`]),
     'Limit fraction', 'Limit (mg/m³)', '% of limit', '% of limit upper 95 %', 'Exposure rating category', 'Rating', 'Banner',
-    ...FATE_KEYS.map((k) => `${k[0].toUpperCase()}${k.slice(1)} (% of emitted)`),
-    `${FRACTION_WORD[fraction]} 8-h TWA difference from first (mg/m³)`, 'Difference from first (%)', 'z', 'Beyond statistical error',
+    ...FATES.map((k) => `${k[0].toUpperCase()}${k.slice(1)} (% of emitted)`),
+    `${FRACTION_LABEL[fraction]} 8-h TWA difference from first (mg/m³)`, 'Difference from first (%)', 'z', 'Beyond statistical error',
     `Meets target: ${target.label}`, 'Least airflow meeting target',
   ];
   const reference = columns[0] ? estimateOf(columns[0], fraction) : null;
@@ -27,11 +25,11 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
     const own = estimateOf(c, fraction);
     const diff = i > 0 && reference && own ? compareMeans(reference, own) : null;
     return [
-      c.name, c.workstationName, c.siteName, TIER_WORDS[c.controlTier] ?? c.controlTier, c.controlDescription, c.hoods.map(hoodText).join('; '),
+      c.name, c.workstationName, c.siteName, controlTierLabel(c.controlTier), c.controlDescription, c.hoods.map(hoodText).join('; '),
       airflow_m3PerH(c.totalAirflow_m3PerS), roughFanPower_W(c.totalAirflow_m3PerS),
       ...TABLE_FRACTIONS.flatMap((f) => (r ? [r.fractions[f].twa8h_mgPerM3, r.fractions[f].twa8hCi95_mgPerM3[0], r.fractions[f].twa8hCi95_mgPerM3[1], r.fractions[f].peak15min_mgPerM3] : [null, null, null, null])),
       r?.limit?.fraction, r?.limit?.value_mgPerM3, r?.limit?.percentOfLimit, r?.limit?.percentOfLimitUpper, r?.limit?.ratingCategory, r?.ratingName, r?.limit ? r.limit.banner : r ? 'No limit' : 'Not run',
-      ...FATE_KEYS.map((k) => (r ? 100 * r.fate.shares[k] : '')),
+      ...FATES.map((k) => (r ? 100 * r.fate.shares[k] : '')),
       diff?.difference, diff?.differencePercent, diff?.z, diff ? (diff.differs ? 'yes' : 'no') : '',
       r ? (meetsTarget(c, target) ? 'yes' : 'no') : '', best === c.id ? 'yes' : 'no',
     ];

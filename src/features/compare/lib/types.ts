@@ -36,5 +36,3 @@ export interface CompareColumn {
 
 /** The three health-related fractions the table reports, finest first. */
 export const TABLE_FRACTIONS = ['respirable', 'thoracic', 'inhalable'] as const satisfies readonly Fraction[];
-
-export const FRACTION_WORD: Record<Fraction, string> = { total: 'Total', inhalable: 'Inhalable', thoracic: 'Thoracic', respirable: 'Respirable' };

@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from 'react';
+import { reviewDueDate, reviewMonthsFor } from '../../../../shared/approval/review-date';
 import type { Banner } from '../../../../shared/schemas/workspace-views';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
@@ -6,15 +7,10 @@ import { ErrorMessage, Notice } from '../../../components/ui/status';
 import { issueFor } from '../../../lib/api-client';
 import { useApprove } from '../api/approve';
 
-function suggestedReview(banner: Banner | null): string {
-  const d = new Date();
-  d.setUTCMonth(d.getUTCMonth() + (banner === 'watch' ? 6 : 12));
-  return d.toISOString().slice(0, 10);
-}
 
 export function ApproveForm({ scenarioId, run }: { scenarioId: number; run: { id: number; banner: Banner | null; outOfDate: boolean } | null }) {
   const [note, setNote] = useState('');
-  const [reviewDate, setReviewDate] = useState(suggestedReview(run?.banner ?? null));
+  const [reviewDate, setReviewDate] = useState(() => reviewDueDate(run?.banner ?? null, new Date()));
   const approve = useApprove();
   if (!run) return <p className="text-sm text-muted">Save a run of this scenario before approving it.</p>;
   if (run.outOfDate) return <p className="text-sm text-watch">⟳ The latest saved run is out of date: run and save again before approving.</p>;
@@ -26,7 +22,7 @@ export function ApproveForm({ scenarioId, run }: { scenarioId: number; run: { id
   return (
     <form onSubmit={submit} aria-label="Approve as the station's current control" className="grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-start">
       <TextField label="Note (what was checked)" value={note} onChange={(e) => setNote(e.target.value)} />
-      <TextField label="Review by" type="date" value={reviewDate} onChange={(e) => setReviewDate(e.target.value)} error={issueFor(approve.error, 'body.reviewDate')} hint={run.banner === 'watch' ? 'Watch result: 6 months suggested' : '12 months suggested'} />
+      <TextField label="Review by" type="date" value={reviewDate} onChange={(e) => setReviewDate(e.target.value)} error={issueFor(approve.error, 'body.reviewDate')} hint={`${run.banner === 'watch' ? 'Watch result: ' : ''}${reviewMonthsFor(run.banner)} months suggested`} />
       <Button type="submit" className="sm:mt-6" disabled={approve.isPending}>★ Approve</Button>
       <div className="sm:col-span-3">
         {approve.isSuccess && <Notice>Approved. The station board now shows this control, to be reviewed by {approve.data.reviewDate}.</Notice>}

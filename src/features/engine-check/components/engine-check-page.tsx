@@ -1,3 +1,4 @@
+import { formatSig, percentText } from '../../../../shared/format/index.ts';
 import { parseScenario } from '../../../../shared/schemas/scenario.ts';
 import { Cautions } from '../../../components/cautions.tsx';
 import { Button } from '../../../components/ui/button.tsx';
@@ -9,8 +10,8 @@ import defaultScenarioText from '../../../../shared/demo-scenarios/default.json?
 
 const scenario = parseScenario(JSON.parse(defaultScenarioText));
 
-const mg = (v: number) => v.toPrecision(3);
-const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
+const mg = (v: number) => formatSig(v, 3);
+const pct = (v: number) => percentText(100 * v);
 
 function ResultSummary({ results }: { results: RunResult }) {
   const r = results.breathingZone.fractions.respirable;
@@ -22,7 +23,7 @@ function ResultSummary({ results }: { results: RunResult }) {
       </p>
       {results.limit && (
         <p>
-          {results.limit.percentOfLimit.toFixed(1)} % of the {results.limit.value_mgPerM3} mg/m³ limit; banner: <strong>{results.limit.banner}</strong>
+          {percentText(results.limit.percentOfLimit)} of the {results.limit.value_mgPerM3} mg/m³ limit; banner: <strong>{results.limit.banner}</strong>
         </p>
       )}
       <p className="text-sm text-muted">

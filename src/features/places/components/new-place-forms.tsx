@@ -1,3 +1,5 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
+import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/index.ts';
 import { useState } from 'react';
 import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
 import type { SiteTree } from '../../../../shared/schemas/workspace-views';
@@ -7,7 +9,7 @@ import { ErrorMessage, Notice } from '../../../components/ui/status';
 import { useSchemaSubmit } from '../../../hooks/use-schema-submit';
 import { useCreateRoom, useCreateSite, useCreateWorkstation } from '../api/create-place';
 
-const n = (v: string) => (v.trim() === '' ? Number.NaN : Number(v));
+const n = decimalOrNaN;
 const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
 
 export function NewSiteForm() {
@@ -96,10 +98,7 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
         <TextField key={k} label={label} unit="m" inputMode="decimal" value={vals[k]} onChange={(e) => setVals({ ...vals, [k]: e.target.value })} error={errors[`data.${k}`]} />
       ))}
       <SelectField label="Release type" value={releaseType} onChange={(e) => setReleaseType(e.target.value)}>
-        <option value="quiet">Practically no velocity, quiet air</option>
-        <option value="low">Low velocity, moderately still air</option>
-        <option value="active">Active generation, rapid air motion</option>
-        <option value="high">High initial velocity (grinding, blasting)</option>
+        {RELEASE_TYPES.map((r) => <option key={r} value={r}>{RELEASE_TYPE_LABEL[r].description}</option>)}
       </SelectField>
       <Button type="submit" className="self-end" disabled={m.isPending}>Add workstation</Button>
       {m.isSuccess && <div className="sm:col-span-3"><Notice>Workstation “{m.data.name}” added.</Notice></div>}

@@ -1,3 +1,4 @@
+import { countText } from '../../../../shared/format/index.ts';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { Approval } from '../../../../shared/schemas/workspace-views';
@@ -56,7 +57,7 @@ export function ReportDocument({ scenarioId, title, place, control, input, run, 
         <dl className="mt-3 grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2 print:grid-cols-2">
           <div><dt className="inline font-semibold">Workstation: </dt><dd className="inline">{place.workstation}, {place.room}, {place.site}</dd></div>
           <div><dt className="inline font-semibold">Control: </dt><dd className="inline">{control || 'not described'}</dd></div>
-          <div><dt className="inline font-semibold">Run: </dt><dd className="inline">{run ? `${dateTime(run.createdAt)} · ${run.particles.toLocaleString('en-GB')} particles · seed ${run.seed} · engine ${run.engineVersion}` : 'no saved run'}</dd></div>
+          <div><dt className="inline font-semibold">Run: </dt><dd className="inline">{run ? `${dateTime(run.createdAt)} · ${countText(run.particles)} particles · seed ${run.seed} · engine ${run.engineVersion}` : 'no saved run'}</dd></div>
           <div><dt className="inline font-semibold">Run by: </dt><dd className="inline">{run ? (run.ranBy ?? 'not recorded') : '—'}</dd></div>
           <div><dt className="inline font-semibold">Report printed: </dt><dd className="inline">{dateTime(new Date().toISOString())}</dd></div>
         </dl>

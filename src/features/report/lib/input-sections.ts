@@ -1,7 +1,9 @@
+import { countText } from '../../../../shared/format/index.ts';
 import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index.ts';
 import type { Hood, Scenario } from '../../../../shared/schemas/scenario.ts';
 import type { AgentData } from '../../../../shared/schemas/workspace.ts';
 import { cubicMetresPerSecondToPerHour, kelvinToCelsius, metresToMicrometres } from '../../../../shared/units.ts';
+import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL, type ReleaseType } from '../../../../shared/vocabulary/index.ts';
 import { sig } from '../../../lib/format.ts';
 
 export type Row = [label: string, value: string];
@@ -15,11 +17,9 @@ export interface AgentInfo {
 }
 
 const n = (v: number, digits = 3) => sig(v, digits);
-const m3h = (v_m3PerS: number) => `${Math.round(cubicMetresPerSecondToPerHour(v_m3PerS)).toLocaleString('en-GB')} m³/h`;
+const m3h = (v_m3PerS: number) => `${countText(cubicMetresPerSecondToPerHour(v_m3PerS))} m³/h`;
 const at = (p: { x_m: number; y_m: number; z_m: number }) => `x ${n(p.x_m)} m, y ${n(p.y_m)} m, height ${n(p.z_m)} m`;
 const FRACTION = { total: 'total', inhalable: 'inhalable', thoracic: 'thoracic', respirable: 'respirable' } as const;
-const HOOD_KIND = { plain: 'Plain opening', flanged: 'Flanged opening', slot: 'Slot', 'flanged-slot': 'Flanged slot', booth: 'Booth face' } as const;
-const RELEASE = { quiet: 'quiet air, practically no velocity', low: 'low velocity, moderately still air', active: 'active generation, rapid air motion', high: 'high initial velocity' } as const;
 
 function direction(d: Hood['direction']): string {
   if ('x' in d) return `vector (${n(d.x)}, ${n(d.y)}, ${n(d.z)})`;
@@ -51,7 +51,7 @@ function agentRows(s: Scenario, agent: AgentInfo | undefined): Row[] {
 }
 
 /** The scenario as run, in reading order and plain words with units, for the report's inputs section. */
-export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfileName?: string; releaseType?: keyof typeof RELEASE } = {}): InputSection[] {
+export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfileName?: string; releaseType?: ReleaseType } = {}): InputSection[] {
   const r = s.room;
   const volume_m3 = r.length_m * r.width_m * r.height_m;
   const eddy = r.eddyDiffusivity_m2PerS;
@@ -65,11 +65,11 @@ export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfil
         ['Eddy diffusivity', eddy === undefined ? `${n(eddyDiffusivityFromVentilation(r.airChanges_perH, volume_m3))} m²/s, estimated from the ventilation` : `${n(eddy)} m²/s, entered`],
       ],
     },
-    { title: 'Source and emission', rows: [['Source position', `${at(s.source)}, ${s.source.shape}${s.source.size_m > 0 ? ` ${n(s.source.size_m)} m` : ''}`], ...(opts.releaseType ? [['Release type', RELEASE[opts.releaseType]] as Row] : []), ...emissionRows(s.source)] },
+    { title: 'Source and emission', rows: [['Source position', `${at(s.source)}, ${s.source.shape}${s.source.size_m > 0 ? ` ${n(s.source.size_m)} m` : ''}`], ...(opts.releaseType ? [['Release type', RELEASE_TYPE_LABEL[opts.releaseType].description] as Row] : []), ...emissionRows(s.source)] },
     { title: 'Dust agent and limit', rows: agentRows(s, opts.agent) },
     { title: 'Size profile', rows: [['Profile', opts.sizeProfileName ?? 'entered with the scenario'], ['Distribution', profileText(s.dust.sizeProfile)]] },
     { title: 'Worker', rows: [['Breathing-zone centre', at(s.worker)], ['Breathing-zone radius', `${n(s.worker.radius_m)} m`], ['Posture', s.worker.posture ?? 'not given']] },
-    { title: 'Simulation settings', rows: [['Particles', s.run.particles.toLocaleString('en-GB')], ['Seed', String(s.run.seed)], ['Batches', String(s.run.batches)], ['Largest time step', `${n(s.run.maxTimeStep_s)} s`]] },
+    { title: 'Simulation settings', rows: [['Particles', countText(s.run.particles)], ['Seed', String(s.run.seed)], ['Batches', String(s.run.batches)], ['Largest time step', `${n(s.run.maxTimeStep_s)} s`]] },
   ];
 }
 
@@ -86,7 +86,7 @@ export interface HoodRow {
 export function hoodRows(s: Scenario): HoodRow[] {
   return s.hoods.map((h, i) => ({
     name: h.name ?? `Hood ${i + 1}`,
-    kind: HOOD_KIND[h.kind],
+    kind: HOOD_KIND_LABEL[h.kind],
     face: `${Math.round(h.faceWidth_m * 1000)} × ${Math.round(h.faceHeight_m * 1000)} mm`,
     position: at(h),
     direction: direction(h.direction),

@@ -1,4 +1,4 @@
-import { num } from '../lib/format.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
 import { rampColour, type SequentialScale } from '../lib/colour-scale.ts';
 import { ACCENT, INK, MUTED } from '../../../components/chart-style.ts';
 
@@ -22,7 +22,7 @@ export function ColourLegend({ scale, unit, title, band }: { scale: SequentialSc
             return (
               <g key={t} transform={`translate(${x} 0)`}>
                 <line y2={4} stroke={MUTED} />
-                <text y={15} textAnchor="middle" fontSize={11} fill={INK}>{String(Number(t.toPrecision(2)))}</text>
+                <text y={15} textAnchor="middle" fontSize={11} fill={INK}>{trimSig(t, 2)}</text>
               </g>
             );
           })}
@@ -35,7 +35,7 @@ export function ColourLegend({ scale, unit, title, band }: { scale: SequentialSc
         </g>
       </svg>
       <p className="sr-only">
-        Scale from {num(scale.min)} to {num(scale.max)} {unit}
+        Scale from {readableNumber(scale.min)} to {readableNumber(scale.max)} {unit}
         {band ? `; ${band.label}` : ''}.
       </p>
     </div>

@@ -1,10 +1,11 @@
+import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
 import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { FRACTION_LABEL, num } from '../lib/format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from '../../../components/chart-style.ts';
 
@@ -14,7 +15,7 @@ const MARGIN = { top: 20, right: 24, bottom: 52, left: 78 };
 // A limit far above the curve would flatten it to the axis; past this ratio it is stated in words instead.
 const LIMIT_IN_VIEW = 5;
 
-const tick = (v: unknown) => String(Number(Number(v).toPrecision(3)));
+const tick = (v: unknown) => trimSig(Number(v), 3);
 
 export function ConcentrationChart({ view, fraction }: { view: RunResult; fraction: Fraction }) {
   const band = view.breathingZone.series[fraction];
@@ -35,9 +36,9 @@ export function ConcentrationChart({ view, fraction }: { view: RunResult; fracti
       <figcaption className="mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
         <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-0.5 w-5 bg-accent" />Mean, {name}</span>
         <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-3 w-5 bg-accent-soft outline outline-1 outline-accent/40" />95 % confidence band</span>
-        {showLimit && <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block w-5 border-t-2 border-dashed border-act" />Limit {num(limit)} mg/m³</span>}
+        {showLimit && <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block w-5 border-t-2 border-dashed border-act" />Limit {readableNumber(limit)} mg/m³</span>}
       </figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Breathing-zone ${name} concentration over ${num(tMax)} min, peaking at ${num(Math.max(...points.map((p) => p.mean)))} mg/m³`}>
+      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Breathing-zone ${name} concentration over ${readableNumber(tMax)} min, peaking at ${readableNumber(Math.max(...points.map((p) => p.mean)))} mg/m³`}>
         <Group left={MARGIN.left} top={MARGIN.top}>
           <GridRows scale={y} width={innerW} numTicks={6} stroke={LINE} strokeOpacity={0.7} />
           <Area data={points} x={(p) => x(p.t)} y0={(p) => y(Number.isFinite(p.lo) ? p.lo : p.mean)} y1={(p) => y(Number.isFinite(p.hi) ? p.hi : p.mean)} fill={ACCENT_SOFT} stroke={ACCENT} strokeOpacity={0.25} data-testid="ci-band" />
@@ -47,7 +48,7 @@ export function ConcentrationChart({ view, fraction }: { view: RunResult; fracti
           <AxisBottom top={innerH} scale={x} numTicks={10} tickFormat={tick} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Time since the task started (min)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={16} />
         </Group>
       </svg>
-      {limit !== undefined && !showLimit && <p className="mt-1 text-sm text-muted">The limit, {num(limit)} mg/m³, is more than {LIMIT_IN_VIEW} times the highest value here and lies above the chart.</p>}
+      {limit !== undefined && !showLimit && <p className="mt-1 text-sm text-muted">The limit, {readableNumber(limit)} mg/m³, is more than {LIMIT_IN_VIEW} times the highest value here and lies above the chart.</p>}
       {limit === undefined && view.limit && <p className="mt-1 text-sm text-muted">The limit applies to the {FRACTION_LABEL[view.limit.fraction].toLowerCase()} fraction, so no limit line is drawn for this one.</p>}
     </figure>
   );

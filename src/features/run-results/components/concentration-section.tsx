@@ -2,7 +2,8 @@ import { useState } from 'react';
 import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { ConcentrationChart } from './concentration-chart.tsx';
-import { FractionPicker } from './fraction-picker.tsx';
+import { FractionPicker } from '../../../components/fraction-picker.tsx';
+import { FRACTIONS } from '../../../../shared/vocabulary/fractions.ts';
 import { Section } from './section.tsx';
 
 export function ConcentrationSection({ view }: { view: RunResult }) {
@@ -10,7 +11,7 @@ export function ConcentrationSection({ view }: { view: RunResult }) {
   return (
     <Section title="Breathing-zone concentration over time" intro="Mean over the batches with its 95 % confidence band, in the breathing zone around the worker's head, during the simulated task.">
       <div className="mb-3">
-        <FractionPicker value={fraction} onChange={setFraction} limitFraction={view.limit?.fraction} />
+        <FractionPicker fractions={FRACTIONS} legend="Size fraction shown" value={fraction} onChange={setFraction} limitFraction={view.limit?.fraction} />
       </div>
       <ConcentrationChart view={view} fraction={fraction} />
     </Section>

@@ -1,4 +1,5 @@
-import { FRACTION_LABEL, num } from '../lib/format.ts';
+import { readableNumber } from '../../../../shared/format/index.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Section } from './section.tsx';
 
@@ -14,7 +15,7 @@ function rows(view: RunResult): Row[] {
   ];
 }
 
-const ratio = (mc: number, model: number) => (model > 0 && Number.isFinite(mc) ? `${num(mc / model, 2)}×` : '—');
+const ratio = (mc: number, model: number) => (model > 0 && Number.isFinite(mc) ? `${readableNumber(mc / model, 2)}×` : '—');
 
 export function CrossChecks({ view }: { view: RunResult }) {
   const fraction = view.crossChecks.fraction;
@@ -36,14 +37,14 @@ export function CrossChecks({ view }: { view: RunResult }) {
           <tbody>
             <tr className="border-t border-line bg-accent-soft/50">
               <th scope="row" className="px-3 py-2 text-left font-semibold">Monte-Carlo, breathing zone</th>
-              <td className="px-3 py-2 text-right font-semibold tabular-nums" data-testid="cross-check-mc">{num(mc)}</td>
+              <td className="px-3 py-2 text-right font-semibold tabular-nums" data-testid="cross-check-mc">{readableNumber(mc)}</td>
               <td className="px-3 py-2 text-right text-muted">—</td>
               <td className="px-3 py-2 text-muted">Particles followed one by one with settling, hood suction, draft and turbulent and Brownian diffusion; counted while inside the breathing zone.</td>
             </tr>
             {rows(view).map((r) => (
               <tr key={r.key} className="border-t border-line">
                 <th scope="row" className="px-3 py-2 text-left font-normal">{r.model}</th>
-                <td className="px-3 py-2 text-right tabular-nums">{num(r.value)}</td>
+                <td className="px-3 py-2 text-right tabular-nums">{readableNumber(r.value)}</td>
                 <td className="px-3 py-2 text-right tabular-nums">{ratio(mc, r.value)}</td>
                 <td className="px-3 py-2 text-muted">{r.assumes}</td>
               </tr>

@@ -1,15 +1,10 @@
-import { FATES, type Fate } from '../../../../shared/vocabulary/fractions.ts';
-import { num } from '../lib/format.ts';
+import { readableNumber } from '../../../../shared/format/index.ts';
+import { FATE_LABEL, FATES, type Fate } from '../../../../shared/vocabulary/index.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Section } from './section.tsx';
 
 // Fate colours are our own; each segment also carries its word in the list, never colour alone.
-const FATE: Record<Fate, { label: string; colour: string }> = {
-  captured: { label: 'Captured by hood', colour: '#1f6f6a' },
-  settled: { label: 'Settled on the floor', colour: '#a07a3c' },
-  exhausted: { label: 'Exhausted with room air', colour: '#7d8796' },
-  airborne: { label: 'Still airborne at the end', colour: '#c9b98f' },
-};
+const FATE_COLOUR: Record<Fate, string> = { captured: '#1f6f6a', settled: '#a07a3c', exhausted: '#7d8796', airborne: '#c9b98f' };
 
 export function FateSection({ view }: { view: RunResult }) {
   const { emitted_mg, ...shares } = view.fate;
@@ -17,11 +12,11 @@ export function FateSection({ view }: { view: RunResult }) {
   const widths = FATES.map((f) => 1000 * Math.max(0, shares[f] || 0));
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));
   return (
-    <Section title="Where the dust went" intro={`Fate of the ${num(emitted_mg)} mg emitted during the simulated window.`}>
-      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE[f].label} ${num(100 * shares[f], 3)} %`).join(', ')}>
+    <Section title="Where the dust went" intro={`Fate of the ${readableNumber(emitted_mg)} mg emitted during the simulated window.`}>
+      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE_LABEL[f]} ${readableNumber(100 * shares[f], 3)} %`).join(', ')}>
         {FATES.map((f, i) => {
           const w = widths[i];
-          return <rect key={f} x={starts[i]} y={0} width={w} height={44} fill={FATE[f].colour} stroke="white" strokeWidth={w > 2 ? 2 : 0} vectorEffect="non-scaling-stroke" data-testid={`fate-${f}`} />;
+          return <rect key={f} x={starts[i]} y={0} width={w} height={44} fill={FATE_COLOUR[f]} stroke="white" strokeWidth={w > 2 ? 2 : 0} vectorEffect="non-scaling-stroke" data-testid={`fate-${f}`} />;
         })}
       </svg>
       <table className="mt-3 w-full max-w-xl text-sm">
@@ -37,17 +32,17 @@ export function FateSection({ view }: { view: RunResult }) {
           {FATES.map((f) => (
             <tr key={f} className="border-t border-line">
               <th scope="row" className="py-1.5 text-left font-normal">
-                <span aria-hidden="true" className="mr-2 inline-block h-3 w-3 rounded-sm align-middle" style={{ background: FATE[f].colour }} />
-                {FATE[f].label}
+                <span aria-hidden="true" className="mr-2 inline-block h-3 w-3 rounded-sm align-middle" style={{ background: FATE_COLOUR[f] }} />
+                {FATE_LABEL[f]}
               </th>
-              <td className="py-1.5 text-right tabular-nums">{num(100 * shares[f], 3)}</td>
-              <td className="py-1.5 text-right tabular-nums">{num(shares[f] * emitted_mg, 3)}</td>
+              <td className="py-1.5 text-right tabular-nums">{readableNumber(100 * shares[f], 3)}</td>
+              <td className="py-1.5 text-right tabular-nums">{readableNumber(shares[f] * emitted_mg, 3)}</td>
             </tr>
           ))}
           <tr className="border-t-2 border-ink font-semibold">
             <th scope="row" className="py-1.5 text-left">Sum</th>
-            <td className="py-1.5 text-right tabular-nums" data-testid="fate-sum">{num(100 * total, 4)}</td>
-            <td className="py-1.5 text-right tabular-nums">{num(total * emitted_mg, 4)}</td>
+            <td className="py-1.5 text-right tabular-nums" data-testid="fate-sum">{readableNumber(100 * total, 4)}</td>
+            <td className="py-1.5 text-right tabular-nums">{readableNumber(total * emitted_mg, 4)}</td>
           </tr>
         </tbody>
       </table>

@@ -1,9 +1,11 @@
+import { percentText, readableNumber } from '../../../../shared/format/index.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { type Column, DataTable } from '../../../components/ui/data-table.tsx';
 import { FRACTIONS, type Fraction } from '../../../../shared/vocabulary/fractions.ts';
 import { fractionTableCsv, seriesCsv } from '../lib/csv.ts';
 import { downloadText } from '../../../lib/download.ts';
-import { ciText, FRACTION_LABEL, num, percent } from '../lib/format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { ciText } from '../lib/format.ts';
 import type { FractionSummary, RunResult } from '../../../../shared/schemas/run-result.ts';
 import { Section } from './section.tsx';
 
@@ -11,7 +13,7 @@ type Row = FractionSummary & { fraction: Fraction; percent?: number; percentUppe
 
 const withCi = (value: number, ci: [number, number]) => (
   <>
-    {num(value)}
+    {readableNumber(value)}
     <span className="block text-xs text-muted">{ciText(ci)}</span>
   </>
 );
@@ -20,12 +22,12 @@ const COLUMNS: Column<Row>[] = [
   { key: 'fraction', header: 'Fraction', render: (r) => FRACTION_LABEL[r.fraction], sortValue: (r) => FRACTIONS.indexOf(r.fraction) },
   { key: 'task', header: 'Task mean (mg/m³, 95 % CI)', align: 'right', render: (r) => withCi(r.taskMean_mgPerM3, r.taskMeanCi95_mgPerM3), sortValue: (r) => r.taskMean_mgPerM3 },
   { key: 'twa', header: '8-h TWA (mg/m³, 95 % CI)', align: 'right', render: (r) => withCi(r.twa8h_mgPerM3, r.twa8hCi95_mgPerM3), sortValue: (r) => r.twa8h_mgPerM3 },
-  { key: 'peak', header: 'Peak 15-min average (mg/m³)', align: 'right', render: (r) => num(r.peak15min_mgPerM3), sortValue: (r) => r.peak15min_mgPerM3 },
+  { key: 'peak', header: 'Peak 15-min average (mg/m³)', align: 'right', render: (r) => readableNumber(r.peak15min_mgPerM3), sortValue: (r) => r.peak15min_mgPerM3 },
   {
     key: 'percent',
     header: '% of limit (upper 95 %)',
     align: 'right',
-    render: (r) => (r.percent === undefined ? <span className="text-muted" title="The limit applies to another fraction">—</span> : <>{percent(r.percent)}<span className="block text-xs text-muted">up to {percent(r.percentUpper ?? NaN)}</span></>),
+    render: (r) => (r.percent === undefined ? <span className="text-muted" title="The limit applies to another fraction">—</span> : <>{percentText(r.percent)}<span className="block text-xs text-muted">up to {percentText(r.percentUpper ?? NaN)}</span></>),
     sortValue: (r) => r.percent ?? null,
   },
 ];

@@ -1,9 +1,10 @@
+import { countText, percentText, readableNumber } from '../../../../shared/format/index.ts';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { ciText, FRACTION_LABEL, num, percent, relativeError } from '../lib/format.ts';
+import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { BANNER_CLASSES, BannerBadge } from '../../../components/banner-badge.tsx';
+import { ciText, relativeError } from '../lib/format.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { BANNER, RATING } from '../lib/status.ts';
-import { BannerBadge } from './banner-badge.tsx';
 
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (
@@ -25,10 +26,10 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
   return (
     <div>
       {limit ? (
-        <div className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER[limit.banner].border} ${BANNER[limit.banner].soft}`}>
+        <div className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER_CLASSES[limit.banner].border} ${BANNER_CLASSES[limit.banner].soft}`}>
           <BannerBadge banner={limit.banner} size="lg" />
           <p className="max-w-xl text-sm text-ink">
-            {BANNER[limit.banner].meaning} ({num(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
+            {BANNER_LABEL[limit.banner].meaning} ({readableNumber(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
             {agent ? ` for ${agent}` : ''}
             {source ? `, ${source}` : ''}).
           </p>
@@ -40,25 +41,25 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
       )}
       <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Figure label={`8-h TWA, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="twa">
-          {num(s.twa8h_mgPerM3)} mg/m³
+          {readableNumber(s.twa8h_mgPerM3)} mg/m³
           <span className="block text-xs font-normal text-muted">95 % CI {ciText(s.twa8hCi95_mgPerM3)} mg/m³</span>
         </Figure>
         {limit && (
           <Figure label="Share of the limit" testId="percent-of-limit">
-            {percent(limit.percentOfLimit)}
-            <span className="block text-xs font-normal text-muted">upper 95 % bound {percent(limit.percentOfLimitUpper)}</span>
+            {percentText(limit.percentOfLimit)}
+            <span className="block text-xs font-normal text-muted">upper 95 % bound {percentText(limit.percentOfLimitUpper)}</span>
           </Figure>
         )}
         {limit && (
           <Figure label="Exposure rating category" testId="rating">
-            {limit.ratingCategory} · {RATING[limit.ratingCategory].name}
-            <span className="block text-xs font-normal text-muted">AIHA band: {RATING[limit.ratingCategory].band}</span>
+            {limit.ratingCategory} · {RATING_LABEL[limit.ratingCategory].name}
+            <span className="block text-xs font-normal text-muted">AIHA band: {RATING_LABEL[limit.ratingCategory].band}</span>
           </Figure>
         )}
         <Figure label="Statistical error" testId="statistical-error">
-          ± {num(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence
+          ± {readableNumber(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence
           <span className="block text-xs font-normal text-muted">
-            {view.engine.particles.toLocaleString('en')} particles in {view.engine.batches} batches
+            {countText(view.engine.particles)} particles in {view.engine.batches} batches
           </span>
         </Figure>
       </dl>

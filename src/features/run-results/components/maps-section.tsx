@@ -1,7 +1,7 @@
+import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
 import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
 import type { Scenario } from '../../../../shared/schemas/scenario.ts';
 import { sequentialScale } from '../lib/colour-scale.ts';
-import { num } from '../lib/format.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 import { ColourLegend } from './colour-legend.tsx';
 import { GridMap } from './grid-map.tsx';
@@ -25,7 +25,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
           <figcaption className="mb-2 text-sm font-semibold">Dust settled on the floor</figcaption>
           {dep && depScale ? (
             <>
-              <GridMap grid={dep} scale={depScale} scenario={scenario} skipZero label={`Floor deposition map, up to ${num(Math.max(...dep.values))} mg/m²`} />
+              <GridMap grid={dep} scale={depScale} scenario={scenario} skipZero label={`Floor deposition map, up to ${readableNumber(Math.max(...dep.values))} mg/m²`} />
               <ColourLegend scale={depScale} unit="mg/m²" title="Deposited mass per floor area" />
               <p className="mt-1 text-xs text-muted">White cells received no simulated particle.</p>
             </>
@@ -34,10 +34,10 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
           )}
         </figure>
         <figure className="rounded-lg border border-line bg-white p-3">
-          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${Number(cap.height_m.toPrecision(3))} m, the source height` : ''}</figcaption>
+          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${trimSig(cap.height_m, 3)} m, the source height` : ''}</figcaption>
           {cap && capScale ? (
             <>
-              <GridMap grid={cap} scale={capScale} scenario={scenario} label={`Capture-velocity map, ${num(Math.min(...cap.values))} to ${num(Math.max(...cap.values))} m/s`} />
+              <GridMap grid={cap} scale={capScale} scenario={scenario} label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`} />
               <ColourLegend scale={capScale} unit="m/s" title="Capture velocity (hoods plus cross-draft)" band={range && { from: range.min_mPerS, to: Math.min(range.max_mPerS, capScale.max), label: `${release} release: ${range.min_mPerS}–${range.max_mPerS} m/s` }} />
               <p className="mt-1 text-xs text-muted">
                 {range

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { scenarioInput } from '../../../../tests/fixtures/workspace';
 import { runEngine } from '../../../../tests/helpers/run-engine';
-import { fractionTableCsv, seriesCsv, toCsv } from './csv';
+import { toCsv } from '../../../lib/csv';
+import { fractionTableCsv, seriesCsv } from './csv';
 import { parseRunResult } from '../../../../shared/schemas/run-result-stored';
 
 const view = parseRunResult(runEngine(scenarioInput()).result);

@@ -1,16 +1,10 @@
 import { FRACTIONS } from '../../../../shared/vocabulary/fractions.ts';
-import { FRACTION_LABEL } from './format.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
 import type { RunResult } from '../../../../shared/schemas/run-result.ts';
 
-// Full precision in files: rounding is for the screen, the engineer's spreadsheet decides its own.
-function cell(value: number | string): string {
-  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
-  return /[",\n\r]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
+import { toCsv } from '../../../lib/csv.ts';
 
-export function toCsv(header: string[], rows: (number | string)[][]): string {
-  return [header, ...rows].map((row) => row.map(cell).join(',')).join('\r\n') + '\r\n';
-}
+// Full precision in files: rounding is for the screen, the engineer's spreadsheet decides its own.
 
 export function fractionTableCsv(view: RunResult): string {
   const header = [

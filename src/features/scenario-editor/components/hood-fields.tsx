@@ -1,4 +1,5 @@
 import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour, metresToMillimetres, millimetresToMetres } from '../../../../shared/units.ts';
+import { HOOD_KIND_LABEL, HOOD_KINDS } from '../../../../shared/vocabulary/index.ts';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/field';
 import { hoodAngles, type HoodInput } from '../lib/hood-axis';
@@ -6,13 +7,7 @@ import { isSlot } from '../lib/hood-hints';
 import { NumberField } from './number-field';
 import { FieldGrid } from './section';
 
-const KINDS: { value: HoodInput['kind']; label: string }[] = [
-  { value: 'plain', label: 'Plain opening' },
-  { value: 'flanged', label: 'Flanged opening' },
-  { value: 'slot', label: 'Slot' },
-  { value: 'flanged-slot', label: 'Flanged slot' },
-  { value: 'booth', label: 'Booth' },
-];
+const KINDS = HOOD_KINDS.map((value) => ({ value, label: HOOD_KIND_LABEL[value] }));
 
 type Props = {
   hood: HoodInput;

@@ -1,5 +1,7 @@
+import { metres } from '../lib/format';
+import { formatSig } from '../../../../shared/format/index.ts';
 import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { cubicMetresPerSecondToPerHour, formatSig } from '../../../../shared/units.ts';
+import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
 import type { HoodInput } from '../lib/hood-axis';
 import { hoodHint, type CaptureVerdict, type HoodHint } from '../lib/hood-hints';
 
@@ -11,7 +13,6 @@ const VERDICT: Record<CaptureVerdict, { icon: string; words: string; tone: strin
   above: { icon: '▲', words: 'Above', tone: 'border-watch bg-watch-soft text-watch' },
 };
 
-const m = (v: number) => `${v.toFixed(2)} m`;
 const mps = (v: number) => `${formatSig(v, 2)} m/s`;
 
 function Warning({ children }: { children: string }) {
@@ -27,9 +28,9 @@ function warnings(h: HoodHint): string[] {
   const out: string[] = [];
   if (h.behind) out.push('The source is behind the face, so the centre-line equation says nothing about it. Turn the hood toward the source.');
   if (h.beyondValidity && h.rule === 'slot')
-    out.push(`The source is ${m(h.axial_m)} out; one slot is usually counted on to about ${m(h.validUpTo_m)} (common practice). Expect less than this figure.`);
+    out.push(`The source is ${metres(h.axial_m)} out; one slot is usually counted on to about ${metres(h.validUpTo_m)} (common practice). Expect less than this figure.`);
   if (h.beyondValidity && h.rule === 'diameters')
-    out.push(`The source is ${m(h.axial_m)} out, past 1.5 equivalent diameters (${m(h.validUpTo_m)}), where the equation stops holding. Expect less than this figure.`);
+    out.push(`The source is ${metres(h.axial_m)} out, past 1.5 equivalent diameters (${metres(h.validUpTo_m)}), where the equation stops holding. Expect less than this figure.`);
   if (h.farOffAxis) out.push('The source is well off the hood axis; the air there moves slower than the centre-line figure.');
   return out;
 }
@@ -44,7 +45,7 @@ export function HoodHints({ hood, index, source, releaseType }: { hood: HoodInpu
   return (
     <div className="flex flex-col gap-3 rounded-md bg-paper p-4 text-sm" data-testid={`hood-hints-${index}`} aria-live="polite">
       <p>
-        Source {m(Math.abs(h.axial_m))} {h.behind ? 'behind' : 'in front of'} the face along its axis, {m(h.offAxis_m)} off the axis.
+        Source {metres(Math.abs(h.axial_m))} {h.behind ? 'behind' : 'in front of'} the face along its axis, {metres(h.offAxis_m)} off the axis.
       </p>
       {h.centerline_mPerS !== null && verdict && (
         <p className={`flex items-start gap-2 rounded-md border px-3 py-2 ${verdict.tone}`} data-testid={`hood-verdict-${index}`}>

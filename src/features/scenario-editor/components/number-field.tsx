@@ -1,6 +1,7 @@
+import { parseDecimal } from '../../../../shared/format/parse-decimal.ts';
 import { useState, type ReactNode } from 'react';
 import { TextField } from '../../../components/ui/field';
-import { formatInput, parseInput } from '../lib/format';
+import { formatInput } from '../lib/format';
 
 type Common = {
   label: string;
@@ -25,10 +26,10 @@ export function NumberField({ label, value, onValue, unit, toDisplay = same, fro
   const editing = draft !== null && Object.is(draft.si, value);
   const text = editing ? draft.text : formatInput(value === undefined ? undefined : toDisplay(value));
   const blank = text.trim() === '';
-  const unreadable = editing && parseInput(text) === null && !(blank && optional);
+  const unreadable = editing && parseDecimal(text) === null && !(blank && optional);
 
   const change = (next: string) => {
-    const shown = parseInput(next);
+    const shown = parseDecimal(next);
     if (shown === null) {
       const cleared = next.trim() === '' && optional;
       setDraft({ text: next, si: cleared ? undefined : value });

@@ -1,5 +1,5 @@
+import { formatSig } from '../../../../shared/format/index.ts';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { formatSig } from '../../../../shared/units.ts';
 import { DEFAULTS } from '../lib/defaults';
 import type { ViewFrame } from '../lib/view-frame';
 import { RoomView } from './room-view';

@@ -1,6 +1,7 @@
+import { formatSig } from '../../../../shared/format/index.ts';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
 import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index.ts';
-import { celsiusToKelvin, formatSig, kelvinToCelsius } from '../../../../shared/units.ts';
+import { celsiusToKelvin, kelvinToCelsius } from '../../../../shared/units.ts';
 import { DEFAULTS } from '../lib/defaults';
 import { withRoom } from '../lib/update';
 import { NumberField } from './number-field';

@@ -1,3 +1,4 @@
+import { metres } from '../lib/format';
 import { useRef, type ReactNode } from 'react';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
 import { withHood, withSource, withWorker } from '../lib/update';
@@ -17,7 +18,6 @@ type Props = {
 };
 
 const AXES = { plan: { a: 'x', b: 'y', span: 'width_m' }, elevation: { a: 'x', b: 'z', span: 'height_m' } } as const;
-const m = (v: number) => `${v.toFixed(2)} m`;
 
 export function RoomView({ view, title, value, onChange, readOnly, testId, overlay }: Props) {
   const svgRef = useRef<SVGSVGElement>(null);
@@ -27,7 +27,7 @@ export function RoomView({ view, title, value, onChange, readOnly, testId, overl
   // The second coordinate is y in plan and z in elevation; the same drag writes whichever this view shows.
   const b = (p: { y_m: number; z_m: number }) => (view === 'plan' ? p.y_m : p.z_m);
   const patch = (a_m: number, b_m: number) => (view === 'plan' ? { x_m: a_m, y_m: b_m } : { x_m: a_m, z_m: b_m });
-  const label = (what: string, p: { x_m: number; y_m: number; z_m: number }) => `${what}, x ${m(p.x_m)}, ${bName} ${m(b(p))}`;
+  const label = (what: string, p: { x_m: number; y_m: number; z_m: number }) => `${what}, x ${metres(p.x_m)}, ${bName} ${metres(b(p))}`;
   const common = { svgRef, frame, readOnly };
 
   return (

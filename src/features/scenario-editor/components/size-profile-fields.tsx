@@ -1,5 +1,6 @@
+import { formatSig } from '../../../../shared/format/index.ts';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { formatSig, metresToMicrometres, micrometresToMetres } from '../../../../shared/units.ts';
+import { metresToMicrometres, micrometresToMetres } from '../../../../shared/units.ts';
 import { SelectField } from '../../../components/ui/field';
 import { withDust } from '../lib/update';
 import { NumberField } from './number-field';

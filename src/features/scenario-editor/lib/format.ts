@@ -1,16 +1,9 @@
-import { formatSig } from '../../../../shared/units.ts';
+import { formatSig, trimSig } from '../../../../shared/format/index.ts';
 
 // Six significant digits hide binary noise such as 19.999999999999977 °C without losing typed precision.
 export function formatInput(value: number | undefined): string {
   if (value === undefined || !Number.isFinite(value)) return '';
-  return String(Number(value.toPrecision(6)));
-}
-
-export function parseInput(text: string): number | null {
-  const trimmed = text.trim().replace(',', '.').replace('−', '-');
-  if (trimmed === '') return null;
-  const n = Number(trimmed);
-  return Number.isFinite(n) ? n : null;
+  return trimSig(value, 6);
 }
 
 export const metres = (v_m: number) => `${v_m.toFixed(2)} m`;

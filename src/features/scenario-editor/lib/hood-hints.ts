@@ -1,4 +1,5 @@
 import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { isSlotKind } from '../../../../shared/vocabulary/index.ts';
 import { hoodAxis, type HoodInput } from './hood-axis.ts';
 
 // [M] the centre-line equations hold out to about 1.5 equivalent hood diameters.
@@ -27,7 +28,7 @@ export interface HoodHint {
   farOffAxis: boolean;
 }
 
-export const isSlot = (kind: HoodInput['kind']) => kind === 'slot' || kind === 'flanged-slot';
+export const isSlot = isSlotKind;
 
 export function captureVerdict(velocity_mPerS: number, range: CaptureVelocityRange): CaptureVerdict {
   if (velocity_mPerS < range.min_mPerS * (1 - VERDICT_SLACK)) return 'below';

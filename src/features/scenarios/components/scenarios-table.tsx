@@ -1,3 +1,4 @@
+import { percentText } from '../../../../shared/format/index.ts';
 import { Link } from 'react-router-dom';
 import type { ScenarioSummary } from '../../../../shared/schemas/workspace-views';
 import { BannerBadge } from '../../../components/banner-badge';
@@ -6,7 +7,7 @@ import { DataTable, type Column, type TableSort } from '../../../components/ui/d
 import { EmptyState, ErrorMessage, Spinner } from '../../../components/ui/status';
 import { paths } from '../../../config/paths';
 import { downloadCsv, toCsv } from '../../../lib/csv';
-import { dateTime, percent, sig } from '../../../lib/format';
+import { dateTime, sig } from '../../../lib/format';
 import { useScenarios, type ScenarioFilters } from '../api/get-scenarios';
 
 const COLUMNS: Column<ScenarioSummary>[] = [
@@ -16,7 +17,7 @@ const COLUMNS: Column<ScenarioSummary>[] = [
   { key: 'agent', header: 'Dust agent', sortValue: () => 0, render: (s) => s.agentName ?? '—' },
   { key: 'status', header: 'Status', sortValue: () => 0, render: (s) => (s.status === 'approved' ? <span>★ Approved{s.needsReview && <span className="block text-xs font-semibold text-watch">⟳ needs review</span>}</span> : 'Draft') },
   { key: 'respirableTwa', header: 'Respirable 8-h TWA (mg/m³)', align: 'right', sortValue: () => 0, render: (s) => sig(s.lastRun?.respirableTwa8h_mgPerM3) },
-  { key: 'percentOfLimit', header: '% of limit', align: 'right', sortValue: () => 0, render: (s) => percent(s.lastRun?.percentOfLimit) },
+  { key: 'percentOfLimit', header: '% of limit', align: 'right', sortValue: () => 0, render: (s) => percentText(s.lastRun?.percentOfLimit) },
   { key: 'banner', header: 'Banner', sortValue: () => 0, render: (s) => <span className="inline-flex items-center gap-2"><BannerBadge banner={s.lastRun?.banner} />{s.lastRun?.outOfDate && <span className="text-xs font-semibold text-watch">⟳ out of date</span>}</span> },
   { key: 'updatedAt', header: 'Changed', sortValue: () => 0, render: (s) => dateTime(s.updatedAt) },
 ];

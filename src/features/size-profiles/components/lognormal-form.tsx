@@ -1,3 +1,4 @@
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { useState, type FormEvent } from 'react';
 import { createSizeProfileSchema } from '../../../../shared/schemas/size-profiles';
 import { micrometresToMetres } from '../../../../shared/units';
@@ -8,7 +9,7 @@ import { fieldErrors } from '../../../lib/form-errors';
 import { useCreateSizeProfile } from '../api/create-size-profile';
 
 type Mode = 'mmad' | 'cmd' | 'respirable';
-const number = (text: string) => (text.trim() === '' ? undefined : Number(text));
+const number = (text: string) => (text.trim() === '' ? undefined : decimalOrNaN(text));
 
 export function LognormalForm() {
   const [mode, setMode] = useState<Mode>('mmad');

@@ -3,6 +3,7 @@ import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import type { MassBins } from '../../../../shared/size-profiles/index';
+import { formatSig } from '../../../../shared/format/index.ts';
 import { decadeTicks_um, histogramBars } from '../lib/chart-data';
 import { ACCENT, ACCENT_SOFT, CHART, LINE, MUTED, axisLabel, tickLabel } from './chart-style';
 
@@ -18,12 +19,12 @@ export function SizeHistogram({ bins }: { bins: MassBins }) {
   return (
     <figure className="rounded-lg border border-line bg-white p-3">
       <figcaption className="mb-2 text-sm font-semibold">Mass distribution (histogram, per unit of log width)</figcaption>
-      <svg viewBox={`0 0 ${width} ${height}`} className="h-auto w-full" role="img" aria-label={`Histogram of mass fraction per log width over ${bars.length} bins from ${min_um.toPrecision(3)} to ${max_um.toPrecision(3)} µm`}>
+      <svg viewBox={`0 0 ${width} ${height}`} className="h-auto w-full" role="img" aria-label={`Histogram of mass fraction per log width over ${bars.length} bins from ${formatSig(min_um, 3)} to ${formatSig(max_um, 3)} µm`}>
         <Group left={margin.left} top={margin.top}>
           <GridRows scale={y} width={innerW} stroke={LINE} strokeOpacity={0.6} numTicks={5} />
           {bars.map((b, i) => (
             <rect key={i} x={x(b.lower_um)} width={Math.max(0.5, x(b.upper_um) - x(b.lower_um))} y={y(b.perLogWidth)} height={innerH - y(b.perLogWidth)} fill={ACCENT_SOFT} stroke={ACCENT} strokeWidth={1}>
-              <title>{`${b.lower_um.toPrecision(3)}–${b.upper_um.toPrecision(3)} µm: ${b.perLogWidth.toPrecision(3)} per log width`}</title>
+              <title>{`${formatSig(b.lower_um, 3)}–${formatSig(b.upper_um, 3)} µm: ${formatSig(b.perLogWidth, 3)} per log width`}</title>
             </rect>
           ))}
           <AxisLeft scale={y} numTicks={5} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label="dM/dlog d (mass fraction per decade)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={36} />

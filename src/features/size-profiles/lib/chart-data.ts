@@ -1,5 +1,6 @@
+import { formatSig, percentText } from '../../../../shared/format/index.ts';
 import type { MassBins } from '../../../../shared/size-profiles/index';
-import { formatSig, metresToMicrometres } from '../../../../shared/units';
+import { metresToMicrometres } from '../../../../shared/units';
 
 export type HistogramBar = { lower_um: number; upper_um: number; perLogWidth: number };
 
@@ -21,7 +22,7 @@ export function cumulativePoints(bins: MassBins): { d_um: number; F: number }[] 
 }
 
 export const micrometres = (d_m: number | null) => (d_m === null ? '—' : `${formatSig(metresToMicrometres(d_m), 3)} µm`);
-export const percent = (f: number) => `${formatSig(100 * f, 3)} %`;
+export const percent = (f: number) => percentText(100 * f);
 export const plain = (v: number | null) => (v === null ? '—' : formatSig(v, 3));
 
 export function decadeTicks_um(min_um: number, max_um: number): number[] {

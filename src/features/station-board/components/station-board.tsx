@@ -1,24 +1,28 @@
 import type { StationBoard as Board } from '../../../../shared/schemas/workspace-views';
+import { BANNER_LABEL, type Banner } from '../../../../shared/vocabulary/index.ts';
+import { BANNER_CLASSES } from '../../../components/banner-badge';
 import { Cautions } from '../../../components/cautions';
 
-const LOOK = {
-  clear: { word: 'Clear', icon: '✓', title: 'Controls are working as assessed', cls: 'border-clear bg-clear-soft text-clear' },
-  watch: { word: 'Watch', icon: '!', title: 'Close to the limit: follow the rules exactly', cls: 'border-watch bg-watch-soft text-watch' },
-  act: { word: 'Act', icon: '✕', title: 'Stop: the controls are not confirmed', cls: 'border-act bg-act-soft text-act' },
-} as const;
+// The operator's board says what the state means at the bench, not how it was computed.
+const FOR_OPERATOR: Record<Banner, string> = {
+  clear: 'Controls are working as assessed',
+  watch: 'Close to the limit: follow the rules exactly',
+  act: 'Stop: the controls are not confirmed',
+};
 
 export function StationBoard({ board }: { board: Board }) {
-  const look = LOOK[board.banner];
+  const look = BANNER_LABEL[board.banner];
+  const c = BANNER_CLASSES[look.colour];
   return (
     <article aria-labelledby={`board-${board.workstationId}`} className="mx-auto max-w-3xl">
       <h1 id={`board-${board.workstationId}`} className="text-3xl">{board.workstationName}</h1>
-      <div role="status" data-testid="station-banner" className={`mt-6 flex items-center gap-6 rounded-2xl border-4 p-6 ${look.cls}`}>
+      <div role="status" data-testid="station-banner" className={`mt-6 flex items-center gap-6 rounded-2xl border-4 p-6 ${c.border} ${c.soft} ${c.text}`}>
         <span aria-hidden="true" className="flex h-20 w-20 shrink-0 items-center justify-center rounded-full border-4 border-current text-5xl font-bold">
           {look.icon}
         </span>
         <div>
           <p className="text-5xl font-bold">{look.word}</p>
-          <p className="mt-1 text-xl font-semibold">{look.title}</p>
+          <p className="mt-1 text-xl font-semibold">{FOR_OPERATOR[board.banner]}</p>
         </div>
       </div>
       {board.needsReview && (

@@ -1,8 +1,11 @@
+import { countText, trimSig } from '../../../../shared/format/index.ts';
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
 import { useMemo, useState, type FormEvent } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
-import { faceText, HOOD_KIND_LABEL, PARAMETER } from '../lib/parameter-format';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { faceText, PARAMETER } from '../lib/parameter-format';
 import { buildSweepPoints, distanceRange_m, MAX_POINTS, MIN_POINTS, sourceDistance_m, type SweepParameter, type SweepPoint, type SweepSpec } from '../lib/sweep-points';
 
 export interface SweepRequest {
@@ -14,7 +17,7 @@ export interface SweepRequest {
 
 type Draft = { hoodIndex: number; parameter: SweepParameter; from: string; to: string; count: string; target: string; particles: string };
 
-const round = (v: number, digits = 3) => String(Number(v.toPrecision(digits)));
+const round = (v: number, digits = 3) => trimSig(v, digits);
 
 // Defaults bracket the current setting by a factor of two each way, so the current design sits mid-range.
 function defaultRange(scenario: Scenario, hoodIndex: number, parameter: SweepParameter): [string, string] {
@@ -39,12 +42,12 @@ export function SweepForm({ scenario, disabled, onStart }: { scenario: Scenario;
 
   const checked = useMemo(() => {
     const p = PARAMETER[draft.parameter];
-    const targetFraction = Number(draft.target);
-    const particles = Number(draft.particles);
+    const targetFraction = decimalOrNaN(draft.target);
+    const particles = decimalOrNaN(draft.particles);
     if (!(targetFraction > 0 && targetFraction <= 10)) return { error: `Enter the target as a fraction of the limit above 0 (0.5 is half the limit), got “${draft.target}”.` };
     if (!(Number.isInteger(particles) && particles >= 100)) return { error: `Particles per point must be a whole number of at least 100, got “${draft.particles}”.` };
     const base = { ...scenario, run: { ...scenario.run, particles } };
-    const spec: SweepSpec = { hoodIndex: draft.hoodIndex, parameter: draft.parameter, from: p.toSi(Number(draft.from)), to: p.toSi(Number(draft.to)), count: Number(draft.count) };
+    const spec: SweepSpec = { hoodIndex: draft.hoodIndex, parameter: draft.parameter, from: p.toSi(decimalOrNaN(draft.from)), to: p.toSi(decimalOrNaN(draft.to)), count: decimalOrNaN(draft.count) };
     try {
       return { request: { spec, points: buildSweepPoints(base, spec), targetFraction, particles } };
     } catch (error) {
@@ -76,7 +79,7 @@ export function SweepForm({ scenario, disabled, onStart }: { scenario: Scenario;
       <TextField label="Target" unit="× limit" inputMode="decimal" value={draft.target} onChange={(e) => set({ target: e.target.value })} hint="Upper 95 % bound of the 8-h TWA must stay at or below this; 0.5 is half the limit." />
       <TextField label="Particles per point" type="number" min={100} step={100} value={draft.particles} onChange={(e) => set({ particles: e.target.value })} hint="Fewer particles run faster but widen every interval." />
       <p className="text-sm text-muted sm:col-span-2 lg:col-span-4">
-        {HOOD_KIND_LABEL[hood.kind]}: {faceText(hood)} face, {Math.round(PARAMETER.airflow.fromSi(hood.airflow_m3PerS)).toLocaleString('en-GB')} m³/h, {round(sourceDistance_m(scenario, draft.hoodIndex))} m from the source along its axis.
+        {HOOD_KIND_LABEL[hood.kind]}: {faceText(hood)} face, {countText(PARAMETER.airflow.fromSi(hood.airflow_m3PerS))} m³/h, {round(sourceDistance_m(scenario, draft.hoodIndex))} m from the source along its axis.
         {draft.parameter === 'distance' && ` The face slides along its axis and must stay inside the room: ${round(lo, 2)} to ${round(hi, 2)} m.`}
         {' '}Every point uses the scenario's seed ({String(scenario.run.seed)}), so the differences between points are not blurred by different random draws.
       </p>

@@ -1,3 +1,4 @@
+import { percentText } from '../../../../shared/format/index.ts';
 import { Link } from 'react-router-dom';
 import { BannerBadge } from '../../../components/banner-badge';
 import { Button } from '../../../components/ui/button';
@@ -23,8 +24,8 @@ export function SweepTable({ rows, parameter, onSave, canSave }: { rows: TableRo
     { key: 'value', header: PARAMETER[parameter].label, render: (r) => formatValue(parameter, r.value), sortValue: (r) => r.value, align: 'right' },
     { key: 'twa', header: '8-h TWA (mg/m³)', render: (r) => sig(r.result.twa8h_mgPerM3), sortValue: (r) => r.result.twa8h_mgPerM3, align: 'right' },
     { key: 'ci', header: '95 % CI (mg/m³)', render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`, align: 'right' },
-    { key: 'pct', header: '% of limit', render: (r) => `${sig(r.result.percentOfLimit)} %`, sortValue: (r) => r.result.percentOfLimit, align: 'right' },
-    { key: 'upper', header: 'Upper 95 % (% of limit)', render: (r) => `${sig(r.result.percentOfLimitUpper)} %`, sortValue: (r) => r.result.percentOfLimitUpper, align: 'right' },
+    { key: 'pct', header: '% of limit', render: (r) => percentText(r.result.percentOfLimit), sortValue: (r) => r.result.percentOfLimit, align: 'right' },
+    { key: 'upper', header: 'Upper 95 % (% of limit)', render: (r) => percentText(r.result.percentOfLimitUpper), sortValue: (r) => r.result.percentOfLimitUpper, align: 'right' },
     { key: 'banner', header: 'Banner', render: (r) => <BannerBadge banner={r.result.banner} />, sortValue: (r) => ['clear', 'watch', 'act'].indexOf(r.result.banner) },
     {
       key: 'save',

@@ -1,10 +1,10 @@
+import { countText } from '../../../../shared/format/index.ts';
 import type { Hood } from '../../../../shared/schemas/scenario.ts';
 import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { sig } from '../../../lib/format.ts';
 import type { Preferred } from './target-crossing.ts';
 import type { SweepParameter } from './sweep-points.ts';
-
-export const HOOD_KIND_LABEL: Record<Hood['kind'], string> = { plain: 'Plain hood', flanged: 'Flanged hood', slot: 'Slot hood', 'flanged-slot': 'Flanged slot hood', booth: 'Booth' };
 
 /** The form's unit for each parameter; SI stays inside, the conversion happens here only. */
 export const PARAMETER: Record<SweepParameter, { label: string; unit: string; axis: string; preferred: Preferred; toSi: (v: number) => number; fromSi: (v: number) => number }> = {
@@ -18,7 +18,7 @@ const plain = (v: number, digits = 3) => sig(v, digits);
 /** A parameter value in the form's unit with its unit, e.g. "0.25 m", "1,260 m³/h", "1.2 × current face". */
 export function formatValue(parameter: SweepParameter, value_si: number): string {
   if (parameter === 'distance') return `${plain(value_si)} m`;
-  if (parameter === 'airflow') return `${Math.round(cubicMetresPerSecondToPerHour(value_si)).toLocaleString('en-GB')} m³/h`;
+  if (parameter === 'airflow') return `${countText(cubicMetresPerSecondToPerHour(value_si))} m³/h`;
   return `${plain(value_si)} × current face`;
 }
 

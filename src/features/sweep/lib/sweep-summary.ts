@@ -1,11 +1,11 @@
 import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
+import { RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index.ts';
 import { sig } from '../../../lib/format.ts';
 import type { HandCalc } from './hand-calc.ts';
 import { formatValue } from './parameter-format.ts';
 import type { SweepParameter } from './sweep-points.ts';
 import type { Crossing } from './target-crossing.ts';
 
-const RELEASE_WORDS: Record<ReleaseCondition, string> = { quiet: 'release into quiet air', low: 'low-velocity release', active: 'active generation', high: 'high-velocity release' };
 const QUANTITY: Record<SweepParameter, string> = { distance: 'distance', airflow: 'airflow', faceScale: 'face size' };
 // Differences smaller than this are within what a swept grid and an interpolation can resolve.
 const AGREE_WITHIN = 0.1;
@@ -23,7 +23,7 @@ export function crossingSentence(crossing: Crossing, parameter: SweepParameter, 
 
 export function handCalcSentence(calc: HandCalc, release: ReleaseCondition, equation: string): string {
   const range = captureVelocityRange(release);
-  const v = `${sig(calc.captureVelocity_mPerS, 2)} m/s, the low end of the ${sig(range.min_mPerS, 2)}–${sig(range.max_mPerS, 2)} m/s range for ${RELEASE_WORDS[release]}`;
+  const v = `${sig(calc.captureVelocity_mPerS, 2)} m/s, the low end of the ${sig(range.min_mPerS, 2)}–${sig(range.max_mPerS, 2)} m/s range for ${RELEASE_TYPE_LABEL[release].phrase}`;
   if (calc.kind === 'airflow') return `Hand calculation (${equation}): a capture velocity of ${v}, at the source distance of ${formatValue('distance', calc.distance_m)}, needs ${formatValue('airflow', calc.airflow_m3PerS)}.`;
   if (calc.kind === 'distance') {
     return calc.distance_m === null
