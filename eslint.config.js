@@ -36,7 +36,7 @@ export default tseslint.config(
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       'import/no-cycle': ['error', { ignoreExternal: true }],
       'import/no-extraneous-dependencies': ['error', { devDependencies: ['**/*.test.ts', '**/*.test.tsx', '**/*.test-helper.ts', 'tests/**', 'vite.config.ts', 'eslint.config.js', 'workers/node/bench.ts', 'workers/node/memory-figure.ts'] }],
-      'import/extensions': 'off',
+      'import/extensions': ['error', 'never', { json: 'always', css: 'always' }],
       'import/no-restricted-paths': [
         'error',
         {

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import * as units from './units.ts';
+import * as units from './units';
 
 describe('length conversions', () => {
   it('turns 2.5 µm into 2.5e-6 m and back', () => {

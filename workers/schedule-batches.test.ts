@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { type BatchWorker, RunCancelledError, scheduleBatches } from './schedule-batches.ts';
+import { type BatchWorker, RunCancelledError, scheduleBatches } from './schedule-batches';
 
 interface FakeResult {
   batchIndex: number;

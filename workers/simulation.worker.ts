@@ -1,5 +1,5 @@
 import * as Comlink from 'comlink';
-import { type BatchResult, type PreparedScenario, runBatch, transferables } from './engine/index.ts';
+import { type BatchResult, type PreparedScenario, runBatch, transferables } from './engine/index';
 
 let prepared: PreparedScenario | undefined;
 

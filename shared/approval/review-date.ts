@@ -1,4 +1,4 @@
-import type { Banner } from '../vocabulary/fractions.ts';
+import type { Banner } from '../vocabulary/fractions';
 
 /** Months until an approved control is looked at again: a Watch result is close enough to the limit to earn a shorter look. */
 export const reviewMonthsFor = (banner: Banner | null): number => (banner === 'watch' ? 6 : 12);

@@ -1,4 +1,4 @@
-import { formatSig } from './significant.ts';
+import { formatSig } from './significant';
 
 /** A value already in percent (e.g. % of limit), to three significant digits everywhere it is shown. */
 export const percentText = (value_pct: number | null | undefined, digits = 3): string =>

@@ -1,4 +1,4 @@
-export { countText, percentText } from './figures.ts';
-export { decimalOrNaN, parseDecimal } from './parse-decimal.ts';
-export { powerOfTen, readableNumber, superscript } from './readable.ts';
-export { formatSig, trimSig } from './significant.ts';
+export { countText, percentText } from './figures';
+export { decimalOrNaN, parseDecimal } from './parse-decimal';
+export { powerOfTen, readableNumber, superscript } from './readable';
+export { formatSig, trimSig } from './significant';

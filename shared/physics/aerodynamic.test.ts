@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { aerodynamicDiameter, physicalDiameter, slipCorrection } from './index.ts';
+import { aerodynamicDiameter, physicalDiameter, slipCorrection } from './index';
 
 describe('aerodynamicDiameter', () => {
   it('approaches d·√(ρ/(χρ₀)) above 3 µm ([M] Hinds Eq. 3.26 form, from memory)', () => {

@@ -1,8 +1,8 @@
-import { type AirProperties, STANDARD_AIR } from './air.ts';
-import { UNIT_DENSITY_kgPerM3 } from './constants.ts';
-import { solveIncreasingPositive } from './root.ts';
-import { slipCorrection } from './slip.ts';
-import { requirePositive } from './validate.ts';
+import { type AirProperties, STANDARD_AIR } from './air';
+import { UNIT_DENSITY_kgPerM3 } from './constants';
+import { solveIncreasingPositive } from './root';
+import { slipCorrection } from './slip';
+import { requirePositive } from './validate';
 
 // Both sides of Hinds Eq. 3.26 are d²·ρ·Cc(d); d²·Cc(d) increases with d, so one root exists.
 function settlingGroup(diameter_m: number, density_kgPerM3: number, air: AirProperties): number {

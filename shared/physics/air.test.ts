@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { airProperties } from './index.ts';
+import { airProperties } from './index';
 
 describe('airProperties', () => {
   it('gives dry-air density 1.204 kg/m³ at 20 °C and 1 atm ([C] ideal gas, M = 28.9644 g/mol)', () => {

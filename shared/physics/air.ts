@@ -1,5 +1,5 @@
-import { AIR_MOLAR_MASS_kgPerMol, GAS_CONSTANT_JPerMolK } from './constants.ts';
-import { requirePositive } from './validate.ts';
+import { AIR_MOLAR_MASS_kgPerMol, GAS_CONSTANT_JPerMolK } from './constants';
+import { requirePositive } from './validate';
 
 export interface AirConditions {
   temperature_K: number;

@@ -1,4 +1,4 @@
-import type { ReleaseType as ReleaseCondition } from '../vocabulary/release-types.ts';
+import type { ReleaseType as ReleaseCondition } from '../vocabulary/release-types';
 
 export type { ReleaseCondition };
 

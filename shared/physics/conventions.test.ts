@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { inhalableFraction, respirableFraction, thoracicFraction } from './index.ts';
+import { inhalableFraction, respirableFraction, thoracicFraction } from './index';
 
 // [S] Soderholm 1989, Ann. Occup. Hyg. 33:301; ISO 7708:1995 tables, ±0.5 percentage points.
 const ISO_7708_TABLE: [number, number, number][] = [

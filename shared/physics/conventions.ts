@@ -1,5 +1,5 @@
-import { normalCdf } from './normal.ts';
-import { requireNonNegative } from './validate.ts';
+import { normalCdf } from './normal';
+import { requireNonNegative } from './validate';
 
 export type SamplingConvention = 'inhalable' | 'thoracic' | 'respirable';
 

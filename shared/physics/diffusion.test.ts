@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { diffusionCoefficient, rmsDisplacement } from './index.ts';
+import { diffusionCoefficient, rmsDisplacement } from './index';
 
 // [M] Hinds Table 7.1, from memory; tolerance 3 %.
 const HINDS_TABLE_7_1: [number, number][] = [

@@ -1,7 +1,7 @@
-import { type AirProperties, STANDARD_AIR } from './air.ts';
-import { BOLTZMANN_J_PER_K } from './constants.ts';
-import { slipCorrection } from './slip.ts';
-import { requireNonNegative, requirePositive } from './validate.ts';
+import { type AirProperties, STANDARD_AIR } from './air';
+import { BOLTZMANN_J_PER_K } from './constants';
+import { slipCorrection } from './slip';
+import { requireNonNegative, requirePositive } from './validate';
 
 // Stokes–Einstein with slip, D = k·T·Cc/(3π·μ·d) (Hinds Eq. 7.7).
 export function diffusionCoefficient(diameter_m: number, air: AirProperties = STANDARD_AIR): number {

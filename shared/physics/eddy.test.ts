@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { eddyContinuousSource, eddyDiffusivityFromVentilation, eddyPuff } from './index.ts';
+import { eddyContinuousSource, eddyDiffusivityFromVentilation, eddyPuff } from './index';
 
 const source = { generation_mgPerS: 0.1, diffusivity_m2PerS: 0.005 };
 

@@ -1,5 +1,5 @@
-import { erfc, erfcx } from './normal.ts';
-import { requireNonNegative, requirePositive, requireTime } from './validate.ts';
+import { erfc, erfcx } from './normal';
+import { requireNonNegative, requirePositive, requireTime } from './validate';
 
 export type ReflectingBoundary = 'free' | 'floor' | 'wall-floor' | 'corner';
 

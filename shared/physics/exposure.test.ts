@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { bannerFor, exposureRatingCategory, timeWeightedAverage } from './index.ts';
+import { bannerFor, exposureRatingCategory, timeWeightedAverage } from './index';
 
 const hours = (h: number) => h * 3600;
 

@@ -1,5 +1,5 @@
-import type { Banner } from '../vocabulary/fractions.ts';
-import { requireNonNegative, requirePositive } from './validate.ts';
+import type { Banner } from '../vocabulary/fractions';
+import { requireNonNegative, requirePositive } from './validate';
 
 export interface ExposureSegment {
   concentration_mgPerM3: number;

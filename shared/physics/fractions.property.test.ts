@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { conventionMassFraction, inhalableFraction, respirableFraction, thoracicFraction } from './index.ts';
+import { conventionMassFraction, inhalableFraction, respirableFraction, thoracicFraction } from './index';
 
 const diameter_m = fc.double({ min: 0, max: 200e-6, noNaN: true });
 const conventions = [inhalableFraction, thoracicFraction, respirableFraction];

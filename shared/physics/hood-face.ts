@@ -1,5 +1,5 @@
-import type { HoodGeometry } from './hoods.ts';
-import { requirePositive } from './validate.ts';
+import type { HoodGeometry } from './hoods';
+import { requirePositive } from './validate';
 
 export interface HoodFace {
   halfWidth_m: number;

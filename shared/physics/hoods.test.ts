@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow } from './index.ts';
+import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow } from './index';
 
 describe('hoodCenterlineVelocity', () => {
   it.each([

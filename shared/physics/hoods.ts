@@ -1,6 +1,6 @@
-import { requireNonNegative, requirePositive } from './validate.ts';
+import { requireNonNegative, requirePositive } from './validate';
 
-import type { HoodKind } from '../vocabulary/hood-kinds.ts';
+import type { HoodKind } from '../vocabulary/hood-kinds';
 
 export type { HoodKind };
 

@@ -5,7 +5,7 @@ import {
   NOZZLE_HALF_WIDTH_PER_DIAMETER,
   jetCentrelineSpeed,
   jetHalfWidth,
-} from './round-jet.ts';
+} from './round-jet';
 
 // ν_T ≈ 0.028·u_c·r½ across the self-similar round jet (Pope, Turbulent Flows, ch. 5, from memory).
 export const JET_EDDY_VISCOSITY_RATIO = 0.028;

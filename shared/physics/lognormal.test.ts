@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { conventionMassFraction, hatchChoate, respirableFraction, thoracicFraction, inhalableFraction } from './index.ts';
+import { conventionMassFraction, hatchChoate, respirableFraction, thoracicFraction, inhalableFraction } from './index';
 
 // Independent check: trapezoid over d itself (not ln d) of E(d)·(mass lognormal density in d).
 function trapezoidOverDiameter(mmad_m: number, gsd: number, fraction: (d_m: number) => number): number {

@@ -1,5 +1,5 @@
-import { type SamplingConvention, conventionFraction } from './conventions.ts';
-import { requireAtLeast, requirePositive } from './validate.ts';
+import { type SamplingConvention, conventionFraction } from './conventions';
+import { requireAtLeast, requirePositive } from './validate';
 
 export interface HatchChoateDiameters {
   massMedian_m: number;

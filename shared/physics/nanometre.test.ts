@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { aerodynamicDiameter, diffusionCoefficient, physicalDiameter, slipCorrection } from './index.ts';
+import { aerodynamicDiameter, diffusionCoefficient, physicalDiameter, slipCorrection } from './index';
 
 describe('the physics core from 1 nm', () => {
   it('gives Cc(1 nm) = 224.3 and Cc(10 nm) = 22.98 within 0.5 % ([S] Hinds App. A11)', () => {

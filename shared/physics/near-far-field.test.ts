@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { nearFieldFarField } from './index.ts';
-import { integrateRk4 } from './rk4.test-helper.ts';
+import { nearFieldFarField } from './index';
+import { integrateRk4 } from './rk4.test-helper';
 
 const model = {
   generation_mgPerS: 0.5,

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import stdlibNormalCdf from '@stdlib/stats-base-dists-normal-cdf';
 import stdlibErfc from '@stdlib/math-base-special-erfc';
-import { erfc, erfcx, normalCdf, normalQuantile } from './index.ts';
+import { erfc, erfcx, normalCdf, normalQuantile } from './index';
 
 const grid = (from: number, to: number, steps: number) =>
   Array.from({ length: steps + 1 }, (_, i) => from + ((to - from) * i) / steps);

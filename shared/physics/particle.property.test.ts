@@ -6,7 +6,7 @@ import {
   settlingVelocity,
   slipCorrection,
   stokesSettlingVelocity,
-} from './index.ts';
+} from './index';
 
 const diameter_m = fc.double({ min: -8, max: Math.log10(300e-6), noNaN: true }).map((e) => 10 ** e);
 const density_kgPerM3 = fc.double({ min: 100, max: 20000, noNaN: true });

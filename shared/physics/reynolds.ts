@@ -1,5 +1,5 @@
-import { type AirProperties, STANDARD_AIR } from './air.ts';
-import { requireFinite, requirePositive } from './validate.ts';
+import { type AirProperties, STANDARD_AIR } from './air';
+import { requireFinite, requirePositive } from './validate';
 
 // Particle Reynolds number Re = ρ_a·V·d/μ (Hinds Eq. 2.41).
 export function particleReynolds(diameter_m: number, velocity_mPerS: number, air: AirProperties = STANDARD_AIR): number {

@@ -1,5 +1,5 @@
-import type { DepositionVelocities } from './surface-deposition.ts';
-import { requireNonNegative, requirePositive } from './validate.ts';
+import type { DepositionVelocities } from './surface-deposition';
+import { requireNonNegative, requirePositive } from './validate';
 
 export interface RoomSurfaces {
   vertical_m2: number;

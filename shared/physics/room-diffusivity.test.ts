@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { eddyDiffusivityFromVentilation, roomEddyDiffusivity } from './index.ts';
+import { eddyDiffusivityFromVentilation, roomEddyDiffusivity } from './index';
 
 describe('roomEddyDiffusivity', () => {
   it('clamps the 100 × 100 × 20 m hall at 3 ACH (estimate 1.78 m²/s) to the 0.013 m²/s measured at most in rooms ([S] Cheng et al. 2011)', () => {

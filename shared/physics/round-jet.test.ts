@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { bisect } from './root.ts';
+import { bisect } from './root';
 import {
   jetCentrelineSpeed,
   jetDiffusivityAndGradient,
@@ -7,7 +7,7 @@ import {
   jetHalfWidth,
   jetVelocity,
   jetVolumeFlux,
-} from './index.ts';
+} from './index';
 
 const out = new Float64Array(3);
 const U0 = 50;

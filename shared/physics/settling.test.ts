@@ -7,7 +7,7 @@ import {
   settlingVelocity,
   slipCorrection,
   stokesSettlingVelocity,
-} from './index.ts';
+} from './index';
 
 const relative = (actual: number, expected: number) => Math.abs(actual / expected - 1);
 

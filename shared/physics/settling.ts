@@ -1,9 +1,9 @@
-import { type AirProperties, STANDARD_AIR } from './air.ts';
-import { GRAVITY_MPerS2 } from './constants.ts';
-import { bisect } from './root.ts';
-import { particleReynolds } from './reynolds.ts';
-import { slipCorrection } from './slip.ts';
-import { requirePositive } from './validate.ts';
+import { type AirProperties, STANDARD_AIR } from './air';
+import { GRAVITY_MPerS2 } from './constants';
+import { bisect } from './root';
+import { particleReynolds } from './reynolds';
+import { slipCorrection } from './slip';
+import { requirePositive } from './validate';
 
 // Particle relaxation time τ = ρ_p·d²·Cc/(18μ) (Hinds Eq. 5.3).
 export function relaxationTime(diameter_m: number, density_kgPerM3: number, air: AirProperties = STANDARD_AIR): number {

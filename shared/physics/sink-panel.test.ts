@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { hoodCenterlineVelocity, hoodFace, sinkPanelVelocity } from './index.ts';
-import type { Hood, HoodFace } from './index.ts';
+import { hoodCenterlineVelocity, hoodFace, sinkPanelVelocity } from './index';
+import type { Hood, HoodFace } from './index';
 
 const out = new Float64Array(3);
 

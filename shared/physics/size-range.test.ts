@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { hatchChoate, massOutsideRange } from './index.ts';
+import { hatchChoate, massOutsideRange } from './index';
 
 describe('massOutsideRange', () => {
   it('leaves Φ(−1) = 0.1587 out on each side for bounds at MMD/σg and MMD·σg ([S] standard normal table)', () => {

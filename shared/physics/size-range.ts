@@ -1,5 +1,5 @@
-import { normalCdf } from './normal.ts';
-import { requireAtLeast, requirePositive } from './validate.ts';
+import { normalCdf } from './normal';
+import { requireAtLeast, requirePositive } from './validate';
 
 export interface MassLeftOut {
   below: number;

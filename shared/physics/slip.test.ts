@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { ALLEN_RAABE_SLIP, airProperties, slipCorrection } from './index.ts';
+import { ALLEN_RAABE_SLIP, airProperties, slipCorrection } from './index';
 
 // [S] Hinds, Aerosol Technology 2nd ed., App. A11; tolerance 0.5 %.
 const HINDS_A11: [number, number][] = [

@@ -1,5 +1,5 @@
-import { type AirConditions, type AirProperties, STANDARD_AIR, scaleMeanFreePath } from './air.ts';
-import { requirePositive } from './validate.ts';
+import { type AirConditions, type AirProperties, STANDARD_AIR, scaleMeanFreePath } from './air';
+import { requirePositive } from './validate';
 
 // A coefficient set carries the λ it was fitted with, so it is never paired with another λ.
 export interface SlipCoefficients {

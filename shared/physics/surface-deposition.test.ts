@@ -7,8 +7,8 @@ import {
   diffusionCoefficient,
   roomDepositionRate,
   settlingVelocity,
-} from './index.ts';
-import { bisect } from './root.ts';
+} from './index';
+import { bisect } from './root';
 
 const U_STAR = 0.01;
 

@@ -1,7 +1,7 @@
-import { type AirProperties, STANDARD_AIR } from './air.ts';
-import { diffusionCoefficient } from './diffusion.ts';
-import { settlingVelocity } from './settling.ts';
-import { requirePositive } from './validate.ts';
+import { type AirProperties, STANDARD_AIR } from './air';
+import { diffusionCoefficient } from './diffusion';
+import { settlingVelocity } from './settling';
+import { requirePositive } from './validate';
 
 export interface DepositionVelocities {
   vertical_mPerS: number;

@@ -6,7 +6,7 @@ import {
   nearFieldFarField,
   timeWeightedAverage,
   wellMixedConcentration,
-} from './index.ts';
+} from './index';
 
 const positive = (min: number, max: number) => fc.double({ min, max, noNaN: true });
 const hoodKind = fc.constantFrom('plain', 'flanged', 'slot', 'flanged-slot');

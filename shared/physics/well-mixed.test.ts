@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { airChangesPerHour, settlingLossRate, settlingVelocity, wellMixedConcentration } from './index.ts';
-import { integrateRk4 } from './rk4.test-helper.ts';
+import { airChangesPerHour, settlingLossRate, settlingVelocity, wellMixedConcentration } from './index';
+import { integrateRk4 } from './rk4.test-helper';
 
 const room = { generation_mgPerS: 0.2, airflow_m3PerS: 0.1, volume_m3: 60, lossRate_perS: 2e-4, initial_mgPerM3: 3 };
 

@@ -1,4 +1,4 @@
-import { requireNonNegative, requirePositive, requireTime } from './validate.ts';
+import { requireNonNegative, requirePositive, requireTime } from './validate';
 
 export interface WellMixedRoom {
   generation_mgPerS: number;

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { airProperties } from '../physics/index.ts';
-import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index.ts';
-import { celsiusToKelvin, cubicMetresPerHourToPerSecond, kilopascalsToPascals, micrometresToMetres, millimetresToMetres, nanometresToMetres } from '../units.ts';
+import { airProperties } from '../physics/index';
+import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index';
+import { celsiusToKelvin, cubicMetresPerHourToPerSecond, kilopascalsToPascals, micrometresToMetres, millimetresToMetres, nanometresToMetres } from '../units';
 
 // NaN arrives from an empty or half-typed field; z.number() refuses it, and the message says what to do.
 const number = () => z.number({ error: 'Enter a number' });

@@ -1,6 +1,6 @@
 import type { z } from 'zod';
-import { type RunResult, runResultSchema } from './run-result.ts';
-import { describe } from './run-result-lists.ts';
+import { type RunResult, runResultSchema } from './run-result';
+import { describe } from './run-result-lists';
 
 type Obj = Record<string, unknown>;
 const isObj = (v: unknown): v is Obj => !!v && typeof v === 'object' && !Array.isArray(v);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { BANNERS, FATES, type Fate, FRACTIONS, type Fraction } from '../vocabulary/fractions.ts';
-import { float32List, int32List, measured, numberList, pair } from './run-result-lists.ts';
+import { BANNERS, FATES, type Fate, FRACTIONS, type Fraction } from '../vocabulary/fractions';
+import { float32List, int32List, measured, numberList, pair } from './run-result-lists';
 
 const conc = z.number().finite().gte(0);
 const ci = z.tuple([z.number().finite(), z.number().finite()]);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { runResultSchema } from './run-result.ts';
+import { runResultSchema } from './run-result';
 import { scenarioSchema } from './scenario';
 
 export { runResultSchema };

@@ -1,6 +1,6 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { ScenarioError, parseScenario } from './scenario.ts';
+import { ScenarioError, parseScenario } from './scenario';
 
 const valid = () => ({
   room: { length_m: 6, width_m: 5, height_m: 3 },

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index.ts';
+import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index';
 
 const finite = (min?: { gt?: number; gte?: number }) => {
   let schema = z.number();

@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { MAX_DENSITY_kgPerM3, MIN_DENSITY_kgPerM3 } from '../size-profiles/counter.ts';
-import { UPLOAD_FORMATS } from '../size-profiles/formats.ts';
-import type { MassBins } from '../size-profiles/mass-bins.ts';
-import type { ProfileInput, ProfileKind } from '../size-profiles/profile.ts';
-import type { ScenarioSizeProfile } from '../size-profiles/to-scenario.ts';
+import { MAX_DENSITY_kgPerM3, MIN_DENSITY_kgPerM3 } from '../size-profiles/counter';
+import { UPLOAD_FORMATS } from '../size-profiles/formats';
+import type { MassBins } from '../size-profiles/mass-bins';
+import type { ProfileInput, ProfileKind } from '../size-profiles/profile';
+import type { ScenarioSizeProfile } from '../size-profiles/to-scenario';
 
 const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
 const density_kgPerM3 = z.number().min(MIN_DENSITY_kgPerM3, `Density must be at least ${MIN_DENSITY_kgPerM3} kg/m³`).max(MAX_DENSITY_kgPerM3, `Density must be at most ${MAX_DENSITY_kgPerM3} kg/m³`);

@@ -1,4 +1,4 @@
-import type { Banner } from '../vocabulary/fractions.ts';
+import type { Banner } from '../vocabulary/fractions';
 import type { AgentData } from './workspace';
 import type { Scenario, ScenarioInput } from './scenario';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CONTROL_TIERS, LIMIT_FRACTIONS, RELEASE_TYPES } from '../vocabulary/index.ts';
+import { CONTROL_TIERS, LIMIT_FRACTIONS, RELEASE_TYPES } from '../vocabulary/index';
 import { scenarioSchema } from './scenario';
 
 const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
@@ -57,7 +57,7 @@ export const agentInputSchema = z.object({ name, data: agentDataSchema }).strict
 export type AgentInput = z.infer<typeof agentInputSchema>;
 export type AgentData = z.infer<typeof agentDataSchema>;
 
-export { CONTROL_TIERS, type ControlTier } from '../vocabulary/control-tiers.ts';
+export { CONTROL_TIERS, type ControlTier } from '../vocabulary/control-tiers';
 
 export const scenarioMetaSchema = z
   .object({

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { conventionMassFraction, inhalableFraction, respirableFraction, thoracicFraction } from '../physics/index.ts';
-import { binFractions } from './bin-fractions.ts';
-import { lognormalBins } from './lognormal-input.ts';
+import { conventionMassFraction, inhalableFraction, respirableFraction, thoracicFraction } from '../physics/index';
+import { binFractions } from './bin-fractions';
+import { lognormalBins } from './lognormal-input';
 
 // [S] ISO 7708:1995 / Soderholm 1989 table (physics.md §6), ±0.5 percentage points.
 const TABLE: [number, number, number][] = [

@@ -1,5 +1,5 @@
-import { inhalableFraction, respirableFraction, thoracicFraction } from '../physics/index.ts';
-import type { MassBins } from './mass-bins.ts';
+import { inhalableFraction, respirableFraction, thoracicFraction } from '../physics/index';
+import type { MassBins } from './mass-bins';
 
 export type ConventionFractions = { respirable: number; thoracic: number; inhalable: number };
 

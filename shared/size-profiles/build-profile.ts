@@ -1,14 +1,14 @@
-import { conventionMassFraction } from '../physics/index.ts';
-import { binFractions } from './bin-fractions.ts';
-import { counterToBins, densityIssue, parseCounter } from './counter.ts';
-import { fitLognormal } from './fit-lognormal.ts';
-import type { UploadFormat } from './formats.ts';
-import { impactorToBins, parseImpactor } from './impactor.ts';
-import { type Checked, type CsvRecord, byRow, failed, passed } from './issues.ts';
-import { type LognormalInput, DEFAULT_RESPIRABLE_GSD, lognormalBins, lognormalMmad, mmadForRespirableFraction } from './lognormal-input.ts';
-import type { MassBins } from './mass-bins.ts';
-import { parsePlainBins, plainBinsToBins } from './plain-bins.ts';
-import type { ProfileData, ProfileInput } from './profile.ts';
+import { conventionMassFraction } from '../physics/index';
+import { binFractions } from './bin-fractions';
+import { counterToBins, densityIssue, parseCounter } from './counter';
+import { fitLognormal } from './fit-lognormal';
+import type { UploadFormat } from './formats';
+import { impactorToBins, parseImpactor } from './impactor';
+import { type Checked, type CsvRecord, byRow, failed, passed } from './issues';
+import { type LognormalInput, DEFAULT_RESPIRABLE_GSD, lognormalBins, lognormalMmad, mmadForRespirableFraction } from './lognormal-input';
+import type { MassBins } from './mass-bins';
+import { parsePlainBins, plainBinsToBins } from './plain-bins';
+import type { ProfileData, ProfileInput } from './profile';
 
 function fromBins(input: ProfileInput, bins: MassBins): ProfileData {
   const fit = fitLognormal(bins);

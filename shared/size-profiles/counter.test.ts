@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { aerodynamicDiameter } from '../physics/index.ts';
-import { counterToBins } from './counter.ts';
-import { plainBinsToBins } from './plain-bins.ts';
+import { aerodynamicDiameter } from '../physics/index';
+import { counterToBins } from './counter';
+import { plainBinsToBins } from './plain-bins';
 
 describe('counter bins to mass bins', () => {
   it('weights each count by its geometric mid-diameter cubed (sphere mass, Hinds Eq. 3.x volume πd³/6)', () => {

@@ -1,9 +1,9 @@
-import { aerodynamicDiameter } from '../physics/index.ts';
-import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues.ts';
-import { FORMATS } from './formats.ts';
-import { type MassBins, checkAmount, normalise, totalIssue } from './mass-bins.ts';
-import { readTable } from './read-table.ts';
-import { type SizeRange, checkRanges, rangesToBins, toRanges } from './size-ranges.ts';
+import { aerodynamicDiameter } from '../physics/index';
+import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues';
+import { FORMATS } from './formats';
+import { type MassBins, checkAmount, normalise, totalIssue } from './mass-bins';
+import { readTable } from './read-table';
+import { type SizeRange, checkRanges, rangesToBins, toRanges } from './size-ranges';
 
 export const MIN_DENSITY_kgPerM3 = 100;
 export const MAX_DENSITY_kgPerM3 = 25_000;

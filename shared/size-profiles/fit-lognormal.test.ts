@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { normalCdf } from '../physics/index.ts';
-import { fitLognormal } from './fit-lognormal.ts';
-import { lognormalBins } from './lognormal-input.ts';
+import { normalCdf } from '../physics/index';
+import { fitLognormal } from './fit-lognormal';
+import { lognormalBins } from './lognormal-input';
 
 // Bins of a known lognormal: mass between edges is Φ(ln(d_hi/MMAD)/ln σg) − Φ(ln(d_lo/MMAD)/ln σg) (analytic).
 function analyticBins(mmad_m: number, gsd: number, edges_um: number[]) {

@@ -1,5 +1,5 @@
-import { normalQuantile } from '../physics/index.ts';
-import type { MassBins } from './mass-bins.ts';
+import { normalQuantile } from '../physics/index';
+import type { MassBins } from './mass-bins';
 
 export type LognormalFit = { mmad_m: number; gsd: number };
 

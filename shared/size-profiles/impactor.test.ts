@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { impactorToBins, parseImpactor } from './impactor.ts';
-import { recordsFromRows } from './issues.ts';
+import { impactorToBins, parseImpactor } from './impactor';
+import { recordsFromRows } from './issues';
 
 const csv = (text: string) => recordsFromRows(text.trim().split('\n').map((l) => l.split(',')));
 

@@ -1,7 +1,7 @@
-import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues.ts';
-import { FORMATS } from './formats.ts';
-import { type MassBins, checkAmount, checkSize, micrometres, normalise, totalIssue } from './mass-bins.ts';
-import { readTable } from './read-table.ts';
+import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues';
+import { FORMATS } from './formats';
+import { type MassBins, checkAmount, checkSize, micrometres, normalise, totalIssue } from './mass-bins';
+import { readTable } from './read-table';
 
 export type ImpactorStage = { cutPoint_m: number | null; mass_mg: number };
 

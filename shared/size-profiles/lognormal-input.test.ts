@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { aerodynamicDiameter, conventionMassFraction } from '../physics/index.ts';
-import { buildFromForm } from './build-profile.ts';
-import { lognormalBins, lognormalMmad, mmadForRespirableFraction } from './lognormal-input.ts';
-import { toScenarioSizeProfile } from './to-scenario.ts';
+import { aerodynamicDiameter, conventionMassFraction } from '../physics/index';
+import { buildFromForm } from './build-profile';
+import { lognormalBins, lognormalMmad, mmadForRespirableFraction } from './lognormal-input';
+import { toScenarioSizeProfile } from './to-scenario';
 
 describe('lognormal and respirable-only inputs', () => {
   it('turns a CMD into an MMAD by Hatch–Choate, then into aerodynamic diameter ([S] Hinds Eq. 4.40; §5)', () => {

@@ -1,5 +1,5 @@
-import { aerodynamicDiameter, conventionMassFraction, hatchChoate, normalCdf } from '../physics/index.ts';
-import type { MassBins } from './mass-bins.ts';
+import { aerodynamicDiameter, conventionMassFraction, hatchChoate, normalCdf } from '../physics/index';
+import type { MassBins } from './mass-bins';
 
 export type LognormalInput = { basis: 'mmad' | 'cmd'; median_m: number; gsd: number; density_kgPerM3?: number; shapeFactor?: number };
 

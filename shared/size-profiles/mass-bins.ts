@@ -1,5 +1,5 @@
-import type { RowIssue } from './issues.ts';
-import { MAX_AMOUNT, MAX_SIZE_um, MIN_SIZE_um } from './formats.ts';
+import type { RowIssue } from './issues';
+import { MAX_AMOUNT, MAX_SIZE_um, MIN_SIZE_um } from './formats';
 
 // Aerodynamic-diameter edges in increasing order; massFraction[i] lies between edges_m[i] and edges_m[i + 1].
 export type MassBins = { edges_m: number[]; massFraction: number[] };

@@ -1,8 +1,8 @@
-import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues.ts';
-import { FORMATS } from './formats.ts';
-import { type MassBins, checkAmount, normalise } from './mass-bins.ts';
-import { readTable } from './read-table.ts';
-import { type SizeRange, checkRanges, rangesToBins, toRanges } from './size-ranges.ts';
+import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues';
+import { FORMATS } from './formats';
+import { type MassBins, checkAmount, normalise } from './mass-bins';
+import { readTable } from './read-table';
+import { type SizeRange, checkRanges, rangesToBins, toRanges } from './size-ranges';
 
 // Rounded shares rarely add to exactly 1; a larger miss is more likely percentages or a lost row.
 export const SUM_TOLERANCE = 0.05;

@@ -1,8 +1,8 @@
-import type { ImpactorStage } from './impactor.ts';
-import type { LognormalInput } from './lognormal-input.ts';
-import type { MassBins } from './mass-bins.ts';
-import type { ConventionFractions } from './bin-fractions.ts';
-import type { SizeRange } from './size-ranges.ts';
+import type { ImpactorStage } from './impactor';
+import type { LognormalInput } from './lognormal-input';
+import type { MassBins } from './mass-bins';
+import type { ConventionFractions } from './bin-fractions';
+import type { SizeRange } from './size-ranges';
 
 export const PROFILE_KINDS = ['impactor', 'counter', 'bins', 'lognormal', 'respirable'] as const;
 export type ProfileKind = (typeof PROFILE_KINDS)[number];

@@ -1,5 +1,5 @@
-import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues.ts';
-import { MAX_DATA_ROWS, MIN_DATA_ROWS } from './formats.ts';
+import { type Checked, type CsvRecord, type RowIssue, failed, passed } from './issues';
+import { MAX_DATA_ROWS, MIN_DATA_ROWS } from './formats';
 
 export type TableRow = { row: number; values: Record<string, number | null> };
 // Rows come back even when some cells fail, so the format's own checks still see every good cell.

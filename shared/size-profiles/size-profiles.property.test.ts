@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { binFractions } from './bin-fractions.ts';
-import { buildFromUpload } from './build-profile.ts';
-import { UPLOAD_FORMATS } from './formats.ts';
-import { recordsFromRows } from './issues.ts';
+import { binFractions } from './bin-fractions';
+import { buildFromUpload } from './build-profile';
+import { UPLOAD_FORMATS } from './formats';
+import { recordsFromRows } from './issues';
 
 const tolerance = 1e-12;
 

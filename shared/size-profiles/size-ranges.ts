@@ -1,6 +1,6 @@
-import type { RowIssue } from './issues.ts';
-import { checkSize, micrometres } from './mass-bins.ts';
-import type { TableRow } from './read-table.ts';
+import type { RowIssue } from './issues';
+import { checkSize, micrometres } from './mass-bins';
+import type { TableRow } from './read-table';
 
 export type SizeRange = { lower_m: number; upper_m: number; amount: number };
 

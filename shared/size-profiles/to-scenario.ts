@@ -1,5 +1,5 @@
-import type { Scenario } from '../schemas/scenario.ts';
-import type { ProfileData } from './profile.ts';
+import type { Scenario } from '../schemas/scenario';
+import type { ProfileData } from './profile';
 
 export type ScenarioSizeProfile = Scenario['dust']['sizeProfile'];
 

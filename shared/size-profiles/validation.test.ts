@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { buildFromUpload } from './build-profile.ts';
-import type { UploadFormat } from './formats.ts';
-import { type CsvRecord, recordsFromRows } from './issues.ts';
+import { buildFromUpload } from './build-profile';
+import type { UploadFormat } from './formats';
+import { type CsvRecord, recordsFromRows } from './issues';
 
 const csv = (text: string): CsvRecord[] => recordsFromRows(text.split('\n').map((l) => l.split(',')));
 const issuesOf = (format: UploadFormat, text: string, density_kgPerM3?: number) => {

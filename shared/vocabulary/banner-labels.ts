@@ -1,4 +1,4 @@
-import type { Banner } from './fractions.ts';
+import type { Banner } from './fractions';
 
 /** `colour` names the design token (--color-clear, --color-clear-soft); the client maps it to its classes. */
 export interface BannerLabel {

@@ -1,4 +1,4 @@
-import type { Fate } from './fractions.ts';
+import type { Fate } from './fractions';
 
 export const FATE_LABEL: Record<Fate, string> = {
   captured: 'Captured by hood',

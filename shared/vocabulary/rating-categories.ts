@@ -1,4 +1,4 @@
-import type { ExposureRating } from '../physics/exposure.ts';
+import type { ExposureRating } from '../physics/exposure';
 
 // AIHA exposure rating category names and bands, on the 95th percentile as a share of the OEL.
 export const RATING_LABEL: Record<ExposureRating, { name: string; band: string }> = {

@@ -1,9 +1,9 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router-dom';
-import { setUnauthenticatedHandler } from '../lib/api-client';
-import { meQueryOptions } from '../lib/auth';
-import { queryClient } from '../lib/query-client';
-import { paths } from '../config/paths';
+import { setUnauthenticatedHandler } from '@/lib/api-client';
+import { meQueryOptions } from '@/lib/auth';
+import { queryClient } from '@/lib/query-client';
+import { paths } from '@/config/paths';
 import { router } from './router';
 
 // A 401 anywhere means the session ended: forget the user and go to sign-in.

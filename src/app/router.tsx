@@ -1,8 +1,8 @@
 import { lazy, Suspense, type ReactNode } from 'react';
 import { createBrowserRouter } from 'react-router-dom';
 import type { Permission } from '../../shared/auth/permissions';
-import { paths } from '../config/paths';
-import { Spinner } from '../components/ui/status';
+import { paths } from '@/config/paths';
+import { Spinner } from '@/components/ui/status';
 import { AppShell } from './routes/app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute, RouteError } from './routes/not-found';
@@ -18,17 +18,17 @@ const ScenarioRoute = lazy(() => import('./routes/scenario').then((m) => ({ defa
 const WorkstationRoute = lazy(() => import('./routes/workstation').then((m) => ({ default: m.WorkstationRoute })));
 const ScenariosRoute = lazy(() => import('./routes/scenarios').then((m) => ({ default: m.ScenariosRoute })));
 const StationRoute = lazy(() => import('./routes/station').then((m) => ({ default: m.StationRoute })));
-const PeoplePage = lazy(() => import('../features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
-const ParticleCalculatorPage = lazy(() => import('../features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
-const HoodCalculatorPage = lazy(() => import('../features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
-const AgentsPage = lazy(() => import('../features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
-const SizeProfilesPage = lazy(() => import('../features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })));
-const SizeProfileDetailPage = lazy(() => import('../features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })));
+const PeoplePage = lazy(() => import('@/features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
+const ParticleCalculatorPage = lazy(() => import('@/features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
+const HoodCalculatorPage = lazy(() => import('@/features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
+const AgentsPage = lazy(() => import('@/features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
+const SizeProfilesPage = lazy(() => import('@/features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })));
+const SizeProfileDetailPage = lazy(() => import('@/features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })));
 const SweepRoute = lazy(() => import('./routes/sweep').then((m) => ({ default: m.SweepRoute })));
 const ReportRoute = lazy(() => import('./routes/report').then((m) => ({ default: m.ReportRoute })));
 const CompareRoute = lazy(() => import('./routes/compare').then((m) => ({ default: m.CompareRoute })));
-const EngineCheckPage = lazy(() => import('../features/engine-check/components/engine-check-page').then((m) => ({ default: m.EngineCheckPage })));
-const OutboxPage = lazy(() => import('../features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
+const EngineCheckPage = lazy(() => import('@/features/engine-check/components/engine-check-page').then((m) => ({ default: m.EngineCheckPage })));
+const OutboxPage = lazy(() => import('@/features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (
   <RequireUser permission={permission}>

@@ -1,5 +1,5 @@
-import type { Banner } from '../../shared/vocabulary/fractions.ts';
-import { BANNER_LABEL } from '../../shared/vocabulary/banner-labels.ts';
+import type { Banner } from '../../shared/vocabulary/fractions';
+import { BANNER_LABEL } from '../../shared/vocabulary/banner-labels';
 
 // Tailwind only keeps class names it can read whole, so each token's classes are spelled out here.
 export const BANNER_CLASSES: Record<Banner, { text: string; soft: string; border: string }> = {

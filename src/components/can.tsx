@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { can, type Permission } from '../../shared/auth/permissions';
-import { useUser } from '../lib/auth';
+import { useUser } from '@/lib/auth';
 
 // Hides what the server would refuse; the server still checks every request.
 export function Can({ permission, children, fallback = null }: { permission: Permission; children: ReactNode; fallback?: ReactNode }) {

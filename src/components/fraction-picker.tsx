@@ -1,6 +1,6 @@
 import { useId } from 'react';
-import { FRACTION_LABEL } from '../../shared/vocabulary/fraction-labels.ts';
-import type { Fraction } from '../../shared/vocabulary/fractions.ts';
+import { FRACTION_LABEL } from '../../shared/vocabulary/fraction-labels';
+import type { Fraction } from '../../shared/vocabulary/fractions';
 
 type Props = { fractions: readonly Fraction[]; legend: string; value: Fraction; onChange: (f: Fraction) => void; limitFraction?: Fraction };
 

@@ -1,9 +1,9 @@
 import { useCallback, useEffect, useState } from 'react';
-import { type EngineRunState, type EngineTask, type FrameScheduler, engineRunController } from '../lib/engine-run';
-import { type RunProgress, warmUpWorkers } from '../lib/simulation-bridge';
+import { type EngineRunState, type EngineTask, type FrameScheduler, engineRunController } from '@/lib/engine-run';
+import { type RunProgress, warmUpWorkers } from '@/lib/simulation-bridge';
 
-export type { EngineRunState, EngineTask } from '../lib/engine-run';
-export { RUN_START } from '../lib/engine-run';
+export type { EngineRunState, EngineTask } from '@/lib/engine-run';
+export { RUN_START } from '@/lib/engine-run';
 
 const animationFrame: FrameScheduler = (callback) => {
   const id = requestAnimationFrame(callback);

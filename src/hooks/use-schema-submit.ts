@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import type { z } from 'zod';
-import { fieldErrors } from '../lib/form-errors';
+import { fieldErrors } from '@/lib/form-errors';
 
 type Mutation<T, R> = { mutate: (v: T, o: { onSuccess: (r: R) => void }) => void; error: unknown };
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Role } from '../../shared/auth/permissions';
-import { api } from '../config/paths';
+import { api } from '@/config/paths';
 import { ApiError, apiFetch, setCsrfToken } from './api-client';
 
 export type SignedInUser = { id: number; email: string; name: string; role: Role; status: string };

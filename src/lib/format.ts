@@ -1,4 +1,4 @@
-import { trimSig } from '../../shared/format/index.ts';
+import { trimSig } from '../../shared/format/index';
 // Figures for tables: significant digits, never a long float tail.
 export function sig(value: number | null | undefined, digits = 3): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';

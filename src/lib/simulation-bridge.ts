@@ -1,10 +1,10 @@
 import * as Comlink from 'comlink';
-import { type Scenario, parseScenario } from '../../shared/schemas/scenario.ts';
-import type { RunResult } from '../../shared/schemas/run-result.ts';
-import { type BatchResult, combineBatches, prepareScenario } from '../../workers/engine/index.ts';
-import { referenceScenario } from '../../workers/engine/reference-scenario.ts';
-import { scheduleBatches } from '../../workers/schedule-batches.ts';
-import type { SimulationWorkerApi } from '../../workers/simulation.worker.ts';
+import { type Scenario, parseScenario } from '../../shared/schemas/scenario';
+import type { RunResult } from '../../shared/schemas/run-result';
+import { type BatchResult, combineBatches, prepareScenario } from '../../workers/engine/index';
+import { referenceScenario } from '../../workers/engine/reference-scenario';
+import { scheduleBatches } from '../../workers/schedule-batches';
+import type { SimulationWorkerApi } from '../../workers/simulation.worker';
 
 export interface RunProgress {
   fraction: number;
@@ -12,7 +12,7 @@ export interface RunProgress {
   secondsLeft: number;
 }
 
-export { RunCancelledError } from '../../workers/schedule-batches.ts';
+export { RunCancelledError } from '../../workers/schedule-batches';
 
 interface PooledWorker {
   worker: Worker;

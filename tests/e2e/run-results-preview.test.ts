@@ -4,8 +4,8 @@ import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { createServer, type ViteDevServer } from 'vite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { PREVIEW_SCENARIO } from '../../src/features/run-results/dev/preview-scenario';
-import { readableNumber } from '../../shared/format/index.ts';
+import { PREVIEW_SCENARIO } from '@/features/run-results/dev/preview-scenario';
+import { readableNumber } from '../../shared/format/index';
 import { runEngine } from '../helpers/run-engine';
 import { launchBrowser, shot } from '../helpers/browser';
 

@@ -1,4 +1,4 @@
-import type { PreparedScenario } from './types.ts';
+import type { PreparedScenario } from './types';
 
 type Room = PreparedScenario['room'];
 

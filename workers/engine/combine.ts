@@ -1,9 +1,9 @@
-import { bannerFor, exposureRatingCategory } from '../../shared/physics/index.ts';
-import { crossChecks } from './cross-checks.ts';
-import { captureVelocityMap, depositionMap } from './maps.ts';
-import { batchEstimate } from './statistics.ts';
-import { type BatchResult, type Fate, FATES, type Fraction, type FractionSummary, FRACTIONS, type PreparedScenario, type Results, type SeriesBand } from './types.ts';
-import { ENGINE_VERSION } from './version.ts';
+import { bannerFor, exposureRatingCategory } from '../../shared/physics/index';
+import { crossChecks } from './cross-checks';
+import { captureVelocityMap, depositionMap } from './maps';
+import { batchEstimate } from './statistics';
+import { type BatchResult, type Fate, FATES, type Fraction, type FractionSummary, FRACTIONS, type PreparedScenario, type Results, type SeriesBand } from './types';
+import { ENGINE_VERSION } from './version';
 
 const SHIFT_min = 480;
 const SHORT_TERM_s = 900;

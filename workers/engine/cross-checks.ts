@@ -1,6 +1,6 @@
-import { eddyContinuousSource, nearFieldFarField, wellMixedConcentration } from '../../shared/physics/index.ts';
-import type { Fraction, PreparedScenario, Results } from './types.ts';
-import { FRACTIONS } from './types.ts';
+import { eddyContinuousSource, nearFieldFarField, wellMixedConcentration } from '../../shared/physics/index';
+import type { Fraction, PreparedScenario, Results } from './types';
+import { FRACTIONS } from './types';
 
 const SAMPLES = 200;
 

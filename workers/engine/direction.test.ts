@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { batchTaskMeans, meanAndError, prepareTest, runAll } from './engine.test-helper.ts';
-import { withAirflow, workstation } from './workstation.test-helper.ts';
+import { batchTaskMeans, meanAndError, prepareTest, runAll } from './engine.test-helper';
+import { withAirflow, workstation } from './workstation.test-helper';
 
 // Same seed, same batches: common random numbers, so paired differences carry little noise.
 describe('direction checks with common random numbers', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { eddyContinuousSource, eddyPuff } from '../../shared/physics/index.ts';
-import { meanAndError, onlyBin, prepareTest, runAll, spherePoints, windowMeans, zoneAverage } from './engine.test-helper.ts';
-import type { PreparedScenario } from './types.ts';
+import { eddyContinuousSource, eddyPuff } from '../../shared/physics/index';
+import { meanAndError, onlyBin, prepareTest, runAll, spherePoints, windowMeans, zoneAverage } from './engine.test-helper';
+import type { PreparedScenario } from './types';
 
 // Tolerance: 3.5 standard errors of the batch mean (Student t with few batches, common practice).
 const K = 3.5;

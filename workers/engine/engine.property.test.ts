@@ -1,10 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { parseScenario } from '../../shared/schemas/scenario.ts';
-import { combineBatches } from './combine.ts';
-import { prepareScenario } from './prepare.ts';
-import { runBatch } from './run-batch.ts';
-import type { BatchResult, PreparedScenario } from './types.ts';
+import { parseScenario } from '../../shared/schemas/scenario';
+import { combineBatches } from './combine';
+import { prepareScenario } from './prepare';
+import { runBatch } from './run-batch';
+import type { BatchResult, PreparedScenario } from './types';
 
 const inside = (size: number) => fc.double({ min: 0, max: 1, noNaN: true }).map((u) => u * size);
 

@@ -1,8 +1,8 @@
-import { type ScenarioInput, parseScenario } from '../../shared/schemas/scenario.ts';
-import { batchSeries, taskMean } from './combine.ts';
-import { prepareScenario } from './prepare.ts';
-import { runBatch } from './run-batch.ts';
-import type { BatchResult, Fraction, PreparedScenario } from './types.ts';
+import { type ScenarioInput, parseScenario } from '../../shared/schemas/scenario';
+import { batchSeries, taskMean } from './combine';
+import { prepareScenario } from './prepare';
+import { runBatch } from './run-batch';
+import type { BatchResult, Fraction, PreparedScenario } from './types';
 
 // Loosely typed on purpose: parseScenario checks the merged result at run time.
 type Overrides = Record<string, unknown>;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { combineBatches } from './combine.ts';
-import { prepareTest, runAll } from './engine.test-helper.ts';
-import { workstation } from './workstation.test-helper.ts';
+import { combineBatches } from './combine';
+import { prepareTest, runAll } from './engine.test-helper';
+import { workstation } from './workstation.test-helper';
 
 // Seeded regression values (computed by this engine, not outside evidence). A change here means
 // results changed for the same scenario and seed: bump ENGINE_VERSION and say why in the commit.

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { hoodCenterlineVelocity } from '../../shared/physics/index.ts';
-import { prepareTest, runAll } from './engine.test-helper.ts';
-import { evaluateHoods, HOOD_KINDS, packHoods } from './hood-field.ts';
+import { hoodCenterlineVelocity } from '../../shared/physics/index';
+import { prepareTest, runAll } from './engine.test-helper';
+import { evaluateHoods, HOOD_KINDS, packHoods } from './hood-field';
 
 const hood = (kind: (typeof HOOD_KINDS)[number]) => ({ kind, x_m: 5, y_m: 5, z_m: 1.5, direction: { x: 1, y: 0, z: 0 }, faceWidth_m: 0.6, faceHeight_m: kind.includes('slot') ? 0.05 : 0.3, airflow_m3PerS: 0.3 });
 

@@ -1,7 +1,7 @@
-import type { Hood } from '../../shared/schemas/scenario.ts';
-import { hoodAxis } from '../../shared/schemas/hood-axis.ts';
-import * as fit from '../../shared/physics/hoods.ts';
-import * as slots from './hood-slots.ts';
+import type { Hood } from '../../shared/schemas/scenario';
+import { hoodAxis } from '../../shared/schemas/hood-axis';
+import * as fit from '../../shared/physics/hoods';
+import * as slots from './hood-slots';
 
 // Module-level copies rather than the imported bindings: V8 folds a module's own constants into
 // the compiled loop, while each use of an import stays a load and a check (about twice the time
@@ -13,7 +13,7 @@ const {
   HOOD_WIDTH, HOOD_X, HOOD_Y, HOOD_Z, KIND_BOOTH, KIND_FLANGED, KIND_FLANGED_SLOT, KIND_SLOT,
 } = slots;
 
-export { HOOD_STRIDE } from './hood-slots.ts';
+export { HOOD_STRIDE } from './hood-slots';
 export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
 /** A particle that crosses the face plane within the face outline and less than this behind it is captured. */
 export const CAPTURE_DEPTH_m = 0.1;

@@ -1,8 +1,8 @@
-import { HOOD_STRIDE } from './hood-slots.ts';
-import type { ParticleArrays } from './release.ts';
-import type { Xoshiro128 } from './rng.ts';
-import { stepRule } from './step-rule.ts';
-import type { PreparedScenario } from './types.ts';
+import { HOOD_STRIDE } from './hood-slots';
+import type { ParticleArrays } from './release';
+import type { Xoshiro128 } from './rng';
+import { stepRule } from './step-rule';
+import type { PreparedScenario } from './types';
 
 export const NORMAL_BLOCK = 3 * 2048;
 

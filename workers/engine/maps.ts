@@ -1,6 +1,6 @@
-import { evaluateHoods } from './hood-field.ts';
-import { HOOD_FACE_VELOCITY, HOOD_STRIDE } from './hood-slots.ts';
-import type { BatchResult, Grid, PreparedScenario, Results } from './types.ts';
+import { evaluateHoods } from './hood-field';
+import { HOOD_FACE_VELOCITY, HOOD_STRIDE } from './hood-slots';
+import type { BatchResult, Grid, PreparedScenario, Results } from './types';
 
 const MAP_CELLS = 40;
 

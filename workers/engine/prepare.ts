@@ -1,9 +1,9 @@
-import type { Scenario } from '../../shared/schemas/scenario.ts';
-import { airProperties, eddyDiffusivityFromVentilation } from '../../shared/physics/index.ts';
-import { zoneVolume_m3 } from './breathing-zone.ts';
-import { packHoods } from './hood-field.ts';
-import { buildSizeBins } from './size-bins.ts';
-import type { PreparedScenario } from './types.ts';
+import type { Scenario } from '../../shared/schemas/scenario';
+import { airProperties, eddyDiffusivityFromVentilation } from '../../shared/physics/index';
+import { zoneVolume_m3 } from './breathing-zone';
+import { packHoods } from './hood-field';
+import { buildSizeBins } from './size-bins';
+import type { PreparedScenario } from './types';
 
 export const TIME_BINS = 120;
 const TRAJECTORY_PARTICLES = 64;

@@ -1,5 +1,5 @@
-import type { Xoshiro128 } from './rng.ts';
-import type { PreparedScenario } from './types.ts';
+import type { Xoshiro128 } from './rng';
+import type { PreparedScenario } from './types';
 
 export interface ParticleArrays {
   count: number;

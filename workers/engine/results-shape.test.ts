@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { combineBatches } from './combine.ts';
-import { prepareTest, runAll } from './engine.test-helper.ts';
-import { releaseParticles } from './release.ts';
-import { batchStream } from './rng.ts';
-import { workstation } from './workstation.test-helper.ts';
+import { combineBatches } from './combine';
+import { prepareTest, runAll } from './engine.test-helper';
+import { releaseParticles } from './release';
+import { batchStream } from './rng';
+import { workstation } from './workstation.test-helper';
 
 const small = { ...workstation, run: { particles: 800, batches: 2, seed: 5 } };
 

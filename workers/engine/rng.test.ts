@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { Xoshiro128, batchStream } from './rng.ts';
+import { Xoshiro128, batchStream } from './rng';
 import stdlibNormalCdf from '@stdlib/stats-base-dists-normal-cdf';
-import { fillNormals } from './ziggurat.ts';
+import { fillNormals } from './ziggurat';
 
 describe('xoshiro128**', () => {
   it('reproduces the reference outputs for state (1, 2, 3, 4)', () => {

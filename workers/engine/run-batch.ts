@@ -1,7 +1,7 @@
-import { releaseParticles } from './release.ts';
-import { batchStream } from './rng.ts';
-import { type StepProgress, stepParticles } from './step-loop.ts';
-import type { BatchResult, PreparedScenario } from './types.ts';
+import { releaseParticles } from './release';
+import { batchStream } from './rng';
+import { type StepProgress, stepParticles } from './step-loop';
+import type { BatchResult, PreparedScenario } from './types';
 
 /** One independent batch; depends only on (prepared, batchIndex), never on which worker runs it. */
 export function runBatch(p: PreparedScenario, batchIndex: number, onProgress?: StepProgress): BatchResult {

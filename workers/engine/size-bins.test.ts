@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { STANDARD_AIR, normalCdf, respirableFraction } from '../../shared/physics/index.ts';
-import { prepareTest } from './engine.test-helper.ts';
-import { SIZE_BIN_COUNT, binEdges_m, massShares } from './size-bins.ts';
+import { STANDARD_AIR, normalCdf, respirableFraction } from '../../shared/physics/index';
+import { prepareTest } from './engine.test-helper';
+import { SIZE_BIN_COUNT, binEdges_m, massShares } from './size-bins';
 
 const dust = (sizeProfile: object) => ({ density_kgPerM3: 2650, shapeFactor: 1, sizeProfile }) as never;
 

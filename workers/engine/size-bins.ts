@@ -1,4 +1,4 @@
-import type { Scenario } from '../../shared/schemas/scenario.ts';
+import type { Scenario } from '../../shared/schemas/scenario';
 import {
   type AirProperties,
   aerodynamicDiameter,
@@ -10,8 +10,8 @@ import {
   respirableFraction,
   settlingVelocity,
   thoracicFraction,
-} from '../../shared/physics/index.ts';
-import { FRACTIONS, type SizeBins } from './types.ts';
+} from '../../shared/physics/index';
+import { FRACTIONS, type SizeBins } from './types';
 
 // 36 log-spaced aerodynamic bins over 0.1–100 µm (12 per decade, ratio 1.21): the respirable curve's
 // width ln 1.5 spans two bins, enough to resolve ISO 7708; mass outside the range is not simulated.

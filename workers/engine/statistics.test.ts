@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import tQuantile from '@stdlib/stats-base-dists-t-quantile';
-import { batchEstimate, tQuantile975 } from './statistics.ts';
+import { batchEstimate, tQuantile975 } from './statistics';
 
 const range = (from: number, to: number) => Array.from({ length: to - from + 1 }, (_, i) => from + i);
 

@@ -1,8 +1,8 @@
-import { Kernel, retire } from './kernel.ts';
-import type { ParticleArrays } from './release.ts';
-import type { Xoshiro128 } from './rng.ts';
-import type { PreparedScenario } from './types.ts';
-import { walk } from './walk.ts';
+import { Kernel, retire } from './kernel';
+import type { ParticleArrays } from './release';
+import type { Xoshiro128 } from './rng';
+import type { PreparedScenario } from './types';
+import { walk } from './walk';
 
 export interface Tallies {
   zoneResidence_s: Float64Array;

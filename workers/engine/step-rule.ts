@@ -1,5 +1,5 @@
-import { CAPTURE_DEPTH_m } from './hood-field.ts';
-import type { PreparedScenario } from './types.ts';
+import { CAPTURE_DEPTH_m } from './hood-field';
+import type { PreparedScenario } from './types';
 
 /**
  * Adaptive step rule. With f the run's stepFraction and d the distance to the nearest feature

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { onlyBin, prepareTest, runAll } from './engine.test-helper.ts';
+import { onlyBin, prepareTest, runAll } from './engine.test-helper';
 
 // One puff at t = 0 in a room far larger than the spread, so walls never matter.
 const puffRoom = { run: { particles: 4000, batches: 2, duration_s: 100, seed: 11 } };

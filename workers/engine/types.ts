@@ -1,7 +1,7 @@
-import type { RunResult } from '../../shared/schemas/run-result.ts';
-import type { Fate, Fraction } from '../../shared/vocabulary/fractions.ts';
+import type { RunResult } from '../../shared/schemas/run-result';
+import type { Fraction } from '../../shared/vocabulary/fractions';
 
-export { FATES, FRACTIONS, type Fate, type Fraction } from '../../shared/vocabulary/fractions.ts';
+export { FATES, FRACTIONS, type Fate, type Fraction } from '../../shared/vocabulary/fractions';
 
 /** Per-size-bin tables; index b is one bin. Everything the step loop reads is here. */
 export interface SizeBins {
@@ -73,5 +73,5 @@ export interface BatchResult {
   particles?: ParticleStates;
 }
 
-export type { FractionSummary, Grid, SeriesBand } from '../../shared/schemas/run-result.ts';
+export type { FractionSummary, Grid, SeriesBand } from '../../shared/schemas/run-result';
 export type Results = RunResult;

@@ -1,8 +1,8 @@
-import * as fit from '../../shared/physics/hoods.ts';
-import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field.ts';
-import * as slots from './hood-slots.ts';
-import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel.ts';
-import { fillNormals } from './ziggurat.ts';
+import * as fit from '../../shared/physics/hoods';
+import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field';
+import * as slots from './hood-slots';
+import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
+import { fillNormals } from './ziggurat';
 
 // Module-level copies of imported numbers, which V8 compiles as literals (see hood-field.ts).
 const { OPENING_DISTANCE_FACTOR } = fit;

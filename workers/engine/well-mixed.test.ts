@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { wellMixedConcentration } from '../../shared/physics/index.ts';
-import { meanAndError, onlyBin, prepareTest, runAll, windowMeans } from './engine.test-helper.ts';
+import { wellMixedConcentration } from '../../shared/physics/index';
+import { meanAndError, onlyBin, prepareTest, runAll, windowMeans } from './engine.test-helper';
 
 describe('small, strongly mixed room with ventilation and settling', () => {
   it('matches the well-mixed model with loss ACH/3600 + V_TS/H (box model, common practice)', () => {

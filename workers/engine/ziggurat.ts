@@ -1,4 +1,4 @@
-import type { Xoshiro128 } from './rng.ts';
+import type { Xoshiro128 } from './rng';
 
 // 128-layer ziggurat for the standard normal (Marsaglia & Tsang 2000), one 32-bit draw per normal.
 const LAYERS = 128;

@@ -1,6 +1,6 @@
 import { parentPort } from 'node:worker_threads';
-import { runBatch, transferables } from '../engine/index.ts';
-import type { PreparedScenario } from '../engine/index.ts';
+import { runBatch, transferables } from '../engine/index';
+import type { PreparedScenario } from '../engine/index';
 
 export type ThreadRequest = { type: 'prepare'; prepared: PreparedScenario } | { type: 'run'; batchIndex: number };
 

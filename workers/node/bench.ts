@@ -1,12 +1,12 @@
 import { readFile } from 'node:fs/promises';
 import { availableParallelism, loadavg } from 'node:os';
-import { parseScenario } from '../../shared/schemas/scenario.ts';
-import { combineBatches, prepareScenario } from '../engine/index.ts';
-import type { PreparedScenario } from '../engine/index.ts';
-import { writeReadmeSection } from '../../tests/helpers/readme-section.ts';
-import { describeMemory, measureBatchMemory } from './memory-figure.ts';
-import { referenceScenario } from '../engine/reference-scenario.ts';
-import { ThreadPool } from './thread-pool.ts';
+import { parseScenario } from '../../shared/schemas/scenario';
+import { combineBatches, prepareScenario } from '../engine/index';
+import type { PreparedScenario } from '../engine/index';
+import { writeReadmeSection } from '../../tests/helpers/readme-section';
+import { describeMemory, measureBatchMemory } from './memory-figure';
+import { referenceScenario } from '../engine/reference-scenario';
+import { ThreadPool } from './thread-pool';
 
 const TIMED_PASSES = 3;
 

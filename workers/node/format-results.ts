@@ -1,6 +1,6 @@
-import { percentText } from '../../shared/format/index.ts';
-import type { RunResult } from '../../shared/schemas/run-result.ts';
-import { FRACTIONS } from '../../shared/vocabulary/fractions.ts';
+import { percentText } from '../../shared/format/index';
+import type { RunResult } from '../../shared/schemas/run-result';
+import { FRACTIONS } from '../../shared/vocabulary/fractions';
 
 const mg = (v: number) => (v >= 0.1 ? v.toFixed(3) : v.toPrecision(3));
 const pct = (v: number) => percentText(100 * v);

@@ -1,7 +1,7 @@
 import { resourceUsage } from 'node:process';
-import { parseScenario } from '../../shared/schemas/scenario.ts';
-import { prepareScenario, runBatch } from '../engine/index.ts';
-import { referenceScenario } from '../engine/reference-scenario.ts';
+import { parseScenario } from '../../shared/schemas/scenario';
+import { prepareScenario, runBatch } from '../engine/index';
+import { referenceScenario } from '../engine/reference-scenario';
 
 export const MEMORY_PARTICLES = 1_000_000;
 export const MEMORY_TARGET_MB = 200;

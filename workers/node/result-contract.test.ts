@@ -2,14 +2,14 @@ import { describe, expect, it } from 'vitest';
 import before from '../../tests/fixtures/run-results/engine-1.0.0-before-size-bins.json';
 import v100 from '../../tests/fixtures/run-results/engine-1.0.0.json';
 import v120 from '../../tests/fixtures/run-results/engine-1.2.0.json';
-import { combineBatches } from '../engine/combine.ts';
-import { prepareTest, runAll } from '../engine/engine.test-helper.ts';
-import { workstation } from '../engine/workstation.test-helper.ts';
-import { ENGINE_VERSION } from '../engine/version.ts';
-import { resultsToJson } from './format-results.ts';
-import { runResultSchema } from '../../shared/schemas/run-result.ts';
-import { parseRunResult } from '../../shared/schemas/run-result-stored.ts';
-import { toJsonFriendly } from '../../shared/schemas/runs.ts';
+import { combineBatches } from '../engine/combine';
+import { prepareTest, runAll } from '../engine/engine.test-helper';
+import { workstation } from '../engine/workstation.test-helper';
+import { ENGINE_VERSION } from '../engine/version';
+import { resultsToJson } from './format-results';
+import { runResultSchema } from '../../shared/schemas/run-result';
+import { parseRunResult } from '../../shared/schemas/run-result-stored';
+import { toJsonFriendly } from '../../shared/schemas/runs';
 
 // A small hooded bench with a limit, so every optional part of the result is present.
 const prepared = prepareTest({ ...workstation, limit: { fraction: 'respirable', value_mgPerM3: 0.1 }, run: { particles: 400, batches: 2, seed: 5 } });

@@ -1,10 +1,10 @@
 import { readFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
-import { ScenarioError, parseScenario } from '../../shared/schemas/scenario.ts';
-import { combineBatches, prepareScenario } from '../engine/index.ts';
-import { resultsToJson, summary } from './format-results.ts';
-import { USAGE, parseSimArgs } from './sim-args.ts';
-import { runOnThreads } from './thread-pool.ts';
+import { ScenarioError, parseScenario } from '../../shared/schemas/scenario';
+import { combineBatches, prepareScenario } from '../engine/index';
+import { resultsToJson, summary } from './format-results';
+import { USAGE, parseSimArgs } from './sim-args';
+import { runOnThreads } from './thread-pool';
 
 async function readScenario(file: string): Promise<Record<string, unknown>> {
   let text: string;

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { parseScenario } from '../../shared/schemas/scenario.ts';
-import { combineBatches, prepareScenario } from '../engine/index.ts';
-import { workstation } from '../engine/workstation.test-helper.ts';
-import { runOnThreads } from './thread-pool.ts';
+import { parseScenario } from '../../shared/schemas/scenario';
+import { combineBatches, prepareScenario } from '../engine/index';
+import { workstation } from '../engine/workstation.test-helper';
+import { runOnThreads } from './thread-pool';
 
 describe('worker-thread pool', () => {
   it('gives identical results with 1, 2 and 3 threads for the same seed', async () => {

@@ -1,6 +1,6 @@
 import { Worker } from 'node:worker_threads';
-import type { BatchResult, PreparedScenario } from '../engine/index.ts';
-import { type BatchWorker, scheduleBatches } from '../schedule-batches.ts';
+import type { BatchResult, PreparedScenario } from '../engine/index';
+import { type BatchWorker, scheduleBatches } from '../schedule-batches';
 
 type ThreadMessage =
   | { type: 'progress'; batchIndex: number; fraction: number; particleSteps: number }

@@ -1,8 +1,8 @@
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { can, ROLE_LABELS, type Permission } from '../../../shared/auth/permissions';
-import { paths } from '../../config/paths';
-import { useUser } from '../../lib/auth';
-import { useLogout } from '../../features/auth/api/logout';
+import { paths } from '@/config/paths';
+import { useUser } from '@/lib/auth';
+import { useLogout } from '@/features/auth/api/logout';
 
 const NAV: { to: string; label: string; permission: Permission }[] = [
   { to: paths.scenarios, label: 'Scenarios', permission: 'scenarios:read' },

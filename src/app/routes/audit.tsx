@@ -1,5 +1,5 @@
-import { AuditPage } from '../../features/audit/components/audit-page';
-import { useSites } from '../../features/places/api/get-sites';
+import { AuditPage } from '@/features/audit/components/audit-page';
+import { useSites } from '@/features/places/api/get-sites';
 
 export function AuditRoute() {
   const sites = useSites().data?.items ?? [];

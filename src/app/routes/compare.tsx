@@ -1,20 +1,20 @@
 import { useEffect, useRef, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { parseRunResult } from '../../../shared/schemas/run-result-stored.ts';
-import { FRACTIONS, type Fraction } from '../../../shared/vocabulary/fractions.ts';
-import { Cautions } from '../../components/cautions';
-import { Page } from '../../components/ui/page';
-import { Button } from '../../components/ui/button';
-import { EmptyState, ErrorMessage, Spinner } from '../../components/ui/status';
-import { CompareResults } from '../../features/compare/components/compare-results';
-import { ScenarioPicker } from '../../features/compare/components/scenario-picker';
-import { useCompareColumns, type CompareSources } from '../../features/compare/hooks/use-compare-columns';
-import { formatSelection, MAX_SELECTED, MIN_SELECTED, parseSelection, toggleId } from '../../features/compare/lib/selection';
-import { targetFor } from '../../features/compare/lib/target';
-import { RATING_LABEL } from '../../../shared/vocabulary/index.ts';
-import { runQueryOptions } from '../../features/scenarios/api/get-run';
-import { scenarioQueryOptions } from '../../features/scenarios/api/get-scenario';
-import { scenarioKeys, useScenarios } from '../../features/scenarios/api/get-scenarios';
+import { parseRunResult } from '../../../shared/schemas/run-result-stored';
+import { FRACTIONS, type Fraction } from '../../../shared/vocabulary/fractions';
+import { Cautions } from '@/components/cautions';
+import { Page } from '@/components/ui/page';
+import { Button } from '@/components/ui/button';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { CompareResults } from '@/features/compare/components/compare-results';
+import { ScenarioPicker } from '@/features/compare/components/scenario-picker';
+import { useCompareColumns, type CompareSources } from '@/features/compare/hooks/use-compare-columns';
+import { formatSelection, MAX_SELECTED, MIN_SELECTED, parseSelection, toggleId } from '@/features/compare/lib/selection';
+import { targetFor } from '@/features/compare/lib/target';
+import { RATING_LABEL } from '../../../shared/vocabulary/index';
+import { runQueryOptions } from '@/features/scenarios/api/get-run';
+import { scenarioQueryOptions } from '@/features/scenarios/api/get-scenario';
+import { scenarioKeys, useScenarios } from '@/features/scenarios/api/get-scenarios';
 
 // Scenarios and runs come from the scenarios feature; the shared result schema reads a stored result of any engine version.
 const SOURCES: CompareSources<ReturnType<typeof scenarioKeys.detail>, (string | number)[]> = {

@@ -1,8 +1,8 @@
 import { Navigate } from 'react-router-dom';
 import { ROLE_HOME } from '../../../shared/auth/permissions';
-import { paths } from '../../config/paths';
-import { useUser } from '../../lib/auth';
-import { Spinner } from '../../components/ui/status';
+import { paths } from '@/config/paths';
+import { useUser } from '@/lib/auth';
+import { Spinner } from '@/components/ui/status';
 
 export function HomeRoute() {
   const { data: user, isPending } = useUser();

@@ -1,6 +1,6 @@
 import { Link, isRouteErrorResponse, useRouteError } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
 
 export function NotFoundRoute() {
   return (

@@ -1,9 +1,9 @@
-import { Can } from '../../components/can';
-import { Page } from '../../components/ui/page';
-import { EmptyState, ErrorMessage, Spinner } from '../../components/ui/status';
-import { useSites } from '../../features/places/api/get-sites';
-import { NewRoomForm, NewSiteForm, NewWorkstationForm } from '../../features/places/components/new-place-forms';
-import { PlacesTree } from '../../features/places/components/places-tree';
+import { Can } from '@/components/can';
+import { Page } from '@/components/ui/page';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { useSites } from '@/features/places/api/get-sites';
+import { NewRoomForm, NewSiteForm, NewWorkstationForm } from '@/features/places/components/new-place-forms';
+import { PlacesTree } from '@/features/places/components/places-tree';
 
 export function PlacesRoute() {
   const sites = useSites();

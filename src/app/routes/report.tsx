@@ -1,20 +1,20 @@
-import { countText } from '../../../shared/format/index.ts';
+import { countText } from '../../../shared/format/index';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { parseScenario } from '../../../shared/schemas/scenario';
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
-import { ErrorMessage, Spinner } from '../../components/ui/status';
-import { paths } from '../../config/paths';
-import { dateTime } from '../../lib/format';
-import { useAgents } from '../../features/agents/api/get-agents';
-import { useAudit } from '../../features/audit/api/get-audit';
-import { useWorkstation } from '../../features/places/api/get-sites';
-import { ReportDocument } from '../../features/report/components/report-document';
-import { RunResults } from '../../features/run-results/components/run-results';
-import { runQueryOptions } from '../../features/scenarios/api/get-run';
-import { useScenario } from '../../features/scenarios/api/get-scenario';
-import { useSizeProfile } from '../../features/size-profiles/api/get-size-profile';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { dateTime } from '@/lib/format';
+import { useAgents } from '@/features/agents/api/get-agents';
+import { useAudit } from '@/features/audit/api/get-audit';
+import { useWorkstation } from '@/features/places/api/get-sites';
+import { ReportDocument } from '@/features/report/components/report-document';
+import { RunResults } from '@/features/run-results/components/run-results';
+import { runQueryOptions } from '@/features/scenarios/api/get-run';
+import { useScenario } from '@/features/scenarios/api/get-scenario';
+import { useSizeProfile } from '@/features/size-profiles/api/get-size-profile';
 
 export function ReportRoute() {
   const id = Number(useParams().id);

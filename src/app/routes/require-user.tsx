@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { can, type Permission } from '../../../shared/auth/permissions';
-import { Page } from '../../components/ui/page';
-import { ErrorMessage, Spinner } from '../../components/ui/status';
-import { paths } from '../../config/paths';
-import { useUser } from '../../lib/auth';
+import { Page } from '@/components/ui/page';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { useUser } from '@/lib/auth';
 
 export function RequireUser({ permission, children }: { permission?: Permission; children: ReactNode }) {
   const { data: user, isPending, error } = useUser();

@@ -1,11 +1,11 @@
-import { countText } from '../../../shared/format/index.ts';
+import { countText } from '../../../shared/format/index';
 import { Link, useParams } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { ErrorMessage, Spinner } from '../../components/ui/status';
-import { paths } from '../../config/paths';
-import { RunResults } from '../../features/run-results/components/run-results';
-import { useRun } from '../../features/scenarios/api/get-run';
-import { dateTime } from '../../lib/format';
+import { Page } from '@/components/ui/page';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { RunResults } from '@/features/run-results/components/run-results';
+import { useRun } from '@/features/scenarios/api/get-run';
+import { dateTime } from '@/lib/format';
 
 // A saved run opens from the server as it was stored: nothing is re-run.
 export function RunRoute() {

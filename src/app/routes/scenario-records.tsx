@@ -1,8 +1,8 @@
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
-import { Can } from '../../components/can';
-import { ApproveForm } from '../../features/decisions/components/approve-form';
-import { ShareForm } from '../../features/decisions/components/share-form';
-import { SavedRuns } from '../../features/scenarios/components/saved-runs';
+import { Can } from '@/components/can';
+import { ApproveForm } from '@/features/decisions/components/approve-form';
+import { ShareForm } from '@/features/decisions/components/share-form';
+import { SavedRuns } from '@/features/scenarios/components/saved-runs';
 
 export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
   const latest = scenario.runs[0];

@@ -1,10 +1,10 @@
 import type { Scenario } from '../../../shared/schemas/scenario';
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
-import { Button } from '../../components/ui/button';
-import { ErrorMessage, Notice } from '../../components/ui/status';
-import type { RunResult } from '../../../shared/schemas/run-result.ts';
-import { useSaveRun } from '../../features/scenarios/api/save-run';
-import { RunPanel } from '../../features/scenarios/components/run-panel';
+import { Button } from '@/components/ui/button';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import type { RunResult } from '../../../shared/schemas/run-result';
+import { useSaveRun } from '@/features/scenarios/api/save-run';
+import { RunPanel } from '@/features/scenarios/components/run-panel';
 
 type Fresh = { result: RunResult; input: Scenario } | null;
 

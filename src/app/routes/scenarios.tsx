@@ -1,12 +1,12 @@
 import { Link, useSearchParams } from 'react-router-dom';
-import { Can } from '../../components/can';
-import { Cautions } from '../../components/cautions';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
-import { useAgents } from '../../features/agents/api/get-agents';
-import { useSites } from '../../features/places/api/get-sites';
-import { ScenarioFilters, type FilterValue } from '../../features/scenarios/components/scenario-filters';
-import { ScenariosTable } from '../../features/scenarios/components/scenarios-table';
+import { Can } from '@/components/can';
+import { Cautions } from '@/components/cautions';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { useAgents } from '@/features/agents/api/get-agents';
+import { useSites } from '@/features/places/api/get-sites';
+import { ScenarioFilters, type FilterValue } from '@/features/scenarios/components/scenario-filters';
+import { ScenariosTable } from '@/features/scenarios/components/scenarios-table';
 
 const NUMERIC = ['siteId', 'workstationId', 'agentId'] as const;
 

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { SetPasswordForm } from '../../features/auth/components/set-password-form';
-import { Notice } from '../../components/ui/status';
+import { paths } from '@/config/paths';
+import { SetPasswordForm } from '@/features/auth/components/set-password-form';
+import { Notice } from '@/components/ui/status';
 import { AuthCard } from './auth-card';
 
 export function SetPasswordRoute() {

@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { ROLE_HOME } from '../../../shared/auth/permissions';
-import { LoginForm } from '../../features/auth/components/login-form';
+import { LoginForm } from '@/features/auth/components/login-form';
 import { AuthCard } from './auth-card';
 
 export function SignInRoute() {

@@ -1,11 +1,11 @@
 import { Link, useParams } from 'react-router-dom';
-import { BannerBadge } from '../../components/banner-badge';
-import { Page } from '../../components/ui/page';
-import { EmptyState, ErrorMessage, Spinner } from '../../components/ui/status';
-import { paths } from '../../config/paths';
-import { useBoard, useBoards } from '../../features/station-board/api/get-boards';
-import { StationBoard } from '../../features/station-board/components/station-board';
-import { useUser } from '../../lib/auth';
+import { BannerBadge } from '@/components/banner-badge';
+import { Page } from '@/components/ui/page';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { useBoard, useBoards } from '@/features/station-board/api/get-boards';
+import { StationBoard } from '@/features/station-board/components/station-board';
+import { useUser } from '@/lib/auth';
 
 function OneBoard({ id }: { id: number }) {
   const board = useBoard(id);

@@ -3,13 +3,13 @@ import { Link, useParams } from 'react-router-dom';
 import { parseScenario } from '../../../shared/schemas/scenario';
 import { CONTROL_TIERS, type ControlTier } from '../../../shared/schemas/workspace';
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
-import { Page } from '../../components/ui/page';
-import { ErrorMessage, Spinner } from '../../components/ui/status';
-import { paths } from '../../config/paths';
-import { useWorkstation } from '../../features/places/api/get-sites';
-import { useCreateScenario } from '../../features/scenarios/api/create-scenario';
-import { useScenario } from '../../features/scenarios/api/get-scenario';
-import { SweepPanel, type SavePoint } from '../../features/sweep/components/sweep-panel';
+import { Page } from '@/components/ui/page';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { useWorkstation } from '@/features/places/api/get-sites';
+import { useCreateScenario } from '@/features/scenarios/api/create-scenario';
+import { useScenario } from '@/features/scenarios/api/get-scenario';
+import { SweepPanel, type SavePoint } from '@/features/sweep/components/sweep-panel';
 
 const tierOf = (tier: string): ControlTier => (CONTROL_TIERS as readonly string[]).includes(tier) ? (tier as ControlTier) : 'engineering';
 

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { ApiError } from '../../lib/api-client';
+import { ApiError } from '@/lib/api-client';
 
 export function Spinner({ label = 'Loading…' }: { label?: string }) {
   return (

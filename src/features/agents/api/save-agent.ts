@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { AgentInput } from '../../../../shared/schemas/workspace';
 import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { agentKeys } from './get-agents';
 
 export const saveAgent = ({ id, body }: { id?: number; body: AgentInput }) =>

@@ -1,13 +1,13 @@
-import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
 import { useState, type FormEvent } from 'react';
 import { agentInputSchema } from '../../../../shared/schemas/workspace';
-import { FRACTION_LABEL, LIMIT_FRACTIONS } from '../../../../shared/vocabulary/index.ts';
+import { FRACTION_LABEL, LIMIT_FRACTIONS } from '../../../../shared/vocabulary/index';
 import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { fieldErrors } from '../../../lib/form-errors';
-import { useSaveAgent } from '../api/save-agent';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { fieldErrors } from '@/lib/form-errors';
+import { useSaveAgent } from '@/features/agents/api/save-agent';
 
 const num = decimalOrNaN;
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));

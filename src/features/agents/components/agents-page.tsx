@@ -1,12 +1,12 @@
 import { useState } from 'react';
 import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
-import { Can } from '../../../components/can';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type Column } from '../../../components/ui/data-table';
-import { Page } from '../../../components/ui/page';
-import { ErrorMessage, Spinner } from '../../../components/ui/status';
-import { sig } from '../../../lib/format';
-import { useAgents } from '../api/get-agents';
+import { Can } from '@/components/can';
+import { Button } from '@/components/ui/button';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { Page } from '@/components/ui/page';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { sig } from '@/lib/format';
+import { useAgents } from '@/features/agents/api/get-agents';
 import { AgentForm } from './agent-form';
 
 export function AgentsPage() {

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { AuditEntry, Page } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 
 export type { AuditEntry };
 export type AuditFilters = { actor?: string; action?: string; workstationId?: number; page?: number };

@@ -1,12 +1,12 @@
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type Column } from '../../../components/ui/data-table';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { Page } from '../../../components/ui/page';
-import { EmptyState, ErrorMessage, Spinner } from '../../../components/ui/status';
-import { downloadCsv, toCsv } from '../../../lib/csv';
-import { dateTime } from '../../../lib/format';
-import { useAudit, type AuditEntry, type AuditFilters } from '../api/get-audit';
+import { Button } from '@/components/ui/button';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Page } from '@/components/ui/page';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { downloadCsv, toCsv } from '@/lib/csv';
+import { dateTime } from '@/lib/format';
+import { useAudit, type AuditEntry, type AuditFilters } from '@/features/audit/api/get-audit';
 
 const ACTIONS = ['auth.signed_in', 'auth.sign_in_failed', 'person.invited', 'person.role_changed', 'person.deactivated', 'site.created', 'room.created', 'workstation.created', 'workstation.changed', 'workstation.operators_assigned', 'agent.created', 'agent.changed', 'agent.limit_overridden', 'size_profile.created', 'size_profile.deleted', 'scenario.created', 'scenario.changed', 'scenario.deleted', 'run.saved', 'scenario.approved', 'report.shared'];
 

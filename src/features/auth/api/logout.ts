@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../config/paths';
-import { apiFetch, setCsrfToken } from '../../../lib/api-client';
-import { meQueryOptions } from '../../../lib/auth';
+import { api } from '@/config/paths';
+import { apiFetch, setCsrfToken } from '@/lib/api-client';
+import { meQueryOptions } from '@/lib/auth';
 
 export const logout = () => apiFetch<void>(api.logout, { method: 'POST', quiet401: true });
 

@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
 import { loginSchema } from '../../../../shared/schemas/auth';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
-import { ErrorMessage } from '../../../components/ui/status';
-import { fieldErrors } from '../../../lib/form-errors';
-import type { SignedInUser } from '../../../lib/auth';
-import { useLogin } from '../api/login';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorMessage } from '@/components/ui/status';
+import { fieldErrors } from '@/lib/form-errors';
+import type { SignedInUser } from '@/lib/auth';
+import { useLogin } from '@/features/auth/api/login';
 
 export function LoginForm({ onSignedIn }: { onSignedIn: (user: SignedInUser) => void }) {
   const [email, setEmail] = useState('');

@@ -1,10 +1,10 @@
 import { useState, type FormEvent } from 'react';
 import { setPasswordSchema } from '../../../../shared/schemas/auth';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
-import { ErrorMessage } from '../../../components/ui/status';
-import { fieldErrors } from '../../../lib/form-errors';
-import { useSetPassword } from '../api/set-password';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorMessage } from '@/components/ui/status';
+import { fieldErrors } from '@/lib/form-errors';
+import { useSetPassword } from '@/features/auth/api/set-password';
 
 export function SetPasswordForm({ token, onDone }: { token: string; onDone: (email: string) => void }) {
   const [password, setPassword] = useState('');

@@ -1,10 +1,10 @@
-import { formatSig, readableNumber } from '../../../../shared/format/index.ts';
+import { formatSig, readableNumber } from '../../../../shared/format/index';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { decadeColumns, decadeRows, decadeTableCsv, decadeTableTsv } from '../lib/decade-table';
-import { copyText, downloadText } from '../../../lib/download';
-import { diameterTick } from '../lib/chart-ticks';
-import type { ParticleMedium } from '../lib/particle-properties';
+import { Button } from '@/components/ui/button';
+import { decadeColumns, decadeRows, decadeTableCsv, decadeTableTsv } from '@/features/calculators/lib/decade-table';
+import { copyText, downloadText } from '@/lib/download';
+import { diameterTick } from '@/features/calculators/lib/chart-ticks';
+import type { ParticleMedium } from '@/features/calculators/lib/particle-properties';
 
 type CopyState = 'idle' | 'copied' | 'blocked';
 

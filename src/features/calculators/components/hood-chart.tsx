@@ -1,13 +1,13 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
+import { readableNumber } from '../../../../shared/format/index';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { LinePath } from '@visx/shape';
-import { decadeTicks, plainTick } from '../lib/chart-ticks';
-import { plainNumber } from '../lib/format';
-import type { HoodFigures } from '../lib/hood-figures';
-import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from '../../../components/chart-style';
+import { decadeTicks, plainTick } from '@/features/calculators/lib/chart-ticks';
+import { plainNumber } from '@/features/calculators/lib/format';
+import type { HoodFigures } from '@/features/calculators/lib/hood-figures';
+import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from '@/components/chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 360;

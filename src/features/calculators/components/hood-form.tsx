@@ -1,7 +1,7 @@
-import { captureVelocityRange, type HoodKind, type ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { HOOD_KINDS, RELEASE_CONDITIONS, type AirflowUnit } from '../../../../shared/schemas/calculators.ts';
-import { HOOD_KIND_LABEL, isSlotKind, RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { SelectField, TextField } from '../../../components/ui/field';
+import { captureVelocityRange, type HoodKind, type ReleaseCondition } from '../../../../shared/physics/index';
+import { HOOD_KINDS, RELEASE_CONDITIONS, type AirflowUnit } from '../../../../shared/schemas/calculators';
+import { HOOD_KIND_LABEL, isSlotKind, RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index';
+import { SelectField, TextField } from '@/components/ui/field';
 
 export type HoodFormState = {
   kind: HoodKind;

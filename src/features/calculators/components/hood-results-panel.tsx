@@ -1,9 +1,9 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
-import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
-import type { HoodFigures } from '../lib/hood-figures';
-import { TRANSPORT_VELOCITY_mPerS } from '../lib/hood-figures';
-import { plainNumber } from '../lib/format';
-import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { readableNumber } from '../../../../shared/format/index';
+import { cubicMetresPerSecondToPerHour } from '../../../../shared/units';
+import type { HoodFigures } from '@/features/calculators/lib/hood-figures';
+import { TRANSPORT_VELOCITY_mPerS } from '@/features/calculators/lib/hood-figures';
+import { plainNumber } from '@/features/calculators/lib/format';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index';
 import { ResultGrid, ResultItem } from './result-item';
 
 const perHour = (airflow_m3PerS: number) => `${readableNumber(cubicMetresPerSecondToPerHour(airflow_m3PerS))} m³/h`;

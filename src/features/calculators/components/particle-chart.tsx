@@ -4,11 +4,11 @@ import { Group } from '@visx/group';
 import { scaleLog } from '@visx/scale';
 import { LinePath } from '@visx/shape';
 import { useMemo } from 'react';
-import { CHART_MAX_DIAMETER_m, CHART_MIN_DIAMETER_m } from '../lib/crossover';
-import { decadeTicks, diameterTick, logSpace, powerTick } from '../lib/chart-ticks';
-import { displayDiameter, plainNumber } from '../lib/format';
-import { particleProperties, type ParticleMedium } from '../lib/particle-properties';
-import { ACCENT, INK, LINE, MUTED, WATCH, axisLabel, halo, tickLabel } from '../../../components/chart-style';
+import { CHART_MAX_DIAMETER_m, CHART_MIN_DIAMETER_m } from '@/features/calculators/lib/crossover';
+import { decadeTicks, diameterTick, logSpace, powerTick } from '@/features/calculators/lib/chart-ticks';
+import { displayDiameter, plainNumber } from '@/features/calculators/lib/format';
+import { particleProperties, type ParticleMedium } from '@/features/calculators/lib/particle-properties';
+import { ACCENT, INK, LINE, MUTED, WATCH, axisLabel, halo, tickLabel } from '@/components/chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 380;

@@ -1,5 +1,5 @@
-import { DIAMETER_UNITS, type DiameterUnit } from '../../../../shared/schemas/calculators.ts';
-import { SelectField, TextField } from '../../../components/ui/field';
+import { DIAMETER_UNITS, type DiameterUnit } from '../../../../shared/schemas/calculators';
+import { SelectField, TextField } from '@/components/ui/field';
 
 export type ParticleFormState = {
   diameter: string;

@@ -1,6 +1,6 @@
-import { formatSig, readableNumber } from '../../../../shared/format/index.ts';
-import { STOKES_REYNOLDS_LIMIT, type ParticleProperties } from '../lib/particle-properties';
-import { displayDiameter, plainNumber } from '../lib/format';
+import { formatSig, readableNumber } from '../../../../shared/format/index';
+import { STOKES_REYNOLDS_LIMIT, type ParticleProperties } from '@/features/calculators/lib/particle-properties';
+import { displayDiameter, plainNumber } from '@/features/calculators/lib/format';
 import { ResultGrid, ResultItem } from './result-item';
 
 function StokesVerdict({ p }: { p: ParticleProperties }) {

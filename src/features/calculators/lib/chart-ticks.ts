@@ -1,4 +1,4 @@
-import { powerOfTen, readableNumber, trimSig } from '../../../../shared/format/index.ts';
+import { powerOfTen, readableNumber, trimSig } from '../../../../shared/format/index';
 
 // Log axes read best with one labelled tick per decade.
 export function decadeTicks(min: number, max: number): number[] {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { crossoverDiameter } from './crossover.ts';
-import { mediumFor, particleProperties } from './particle-properties.ts';
+import { crossoverDiameter } from './crossover';
+import { mediumFor, particleProperties } from './particle-properties';
 
 const medium = (window_s: number, density_kgPerM3 = 1000) =>
   mediumFor({ density_kgPerM3, shapeFactor: 1, temperature_K: 293.15, pressure_Pa: 101325, window_s });

@@ -1,4 +1,4 @@
-import { particleProperties, type ParticleMedium } from './particle-properties.ts';
+import { particleProperties, type ParticleMedium } from './particle-properties';
 
 export const CHART_MIN_DIAMETER_m = 1e-9;
 export const CHART_MAX_DIAMETER_m = 1e-4;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { decadeTableCsv, decadeTableTsv } from './decade-table.ts';
-import { mediumFor } from './particle-properties.ts';
+import { decadeTableCsv, decadeTableTsv } from './decade-table';
+import { mediumFor } from './particle-properties';
 
 const unitDensity = mediumFor({ density_kgPerM3: 1000, shapeFactor: 1, temperature_K: 293.15, pressure_Pa: 101325, window_s: 1 });
 

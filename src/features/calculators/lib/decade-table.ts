@@ -1,5 +1,5 @@
-import { toCsv } from '../../../lib/csv.ts';
-import { particleProperties, type ParticleMedium, type ParticleProperties } from './particle-properties.ts';
+import { toCsv } from '@/lib/csv';
+import { particleProperties, type ParticleMedium, type ParticleProperties } from './particle-properties';
 
 export const DECADE_DIAMETERS_m = [1e-9, 1e-8, 1e-7, 1e-6, 1e-5, 1e-4] as const;
 

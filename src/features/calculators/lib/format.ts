@@ -1,4 +1,4 @@
-import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index';
 
 // Diameters read best in the unit that keeps them between 1 and 1000.
 export function displayDiameter(diameter_m: number, digits = 3): string {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { hoodFigures } from './hood-figures.ts';
+import { hoodFigures } from './hood-figures';
 
 const plain = { kind: 'plain' as const, width_m: Math.sqrt(0.1), height_m: Math.sqrt(0.1), release: 'low' as const };
 

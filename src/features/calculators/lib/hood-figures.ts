@@ -4,9 +4,9 @@ import {
   hoodRequiredAirflow,
   type CaptureVelocityRange,
   type HoodGeometry,
-} from '../../../../shared/physics/index.ts';
-import { isSlotKind } from '../../../../shared/vocabulary/index.ts';
-import { airflowToPerSecond, type HoodCalculatorInput } from '../../../../shared/schemas/calculators.ts';
+} from '../../../../shared/physics/index';
+import { isSlotKind } from '../../../../shared/vocabulary/index';
+import { airflowToPerSecond, type HoodCalculatorInput } from '../../../../shared/schemas/calculators';
 
 // [S] ACGIH: duct transport velocity for average industrial dust.
 export const TRANSPORT_VELOCITY_mPerS = { min: 18, max: 20 } as const;

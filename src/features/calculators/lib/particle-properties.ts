@@ -12,7 +12,7 @@ import {
   stokesSettlingVelocity,
   thoracicFraction,
   type AirProperties,
-} from '../../../../shared/physics/index.ts';
+} from '../../../../shared/physics/index';
 
 export interface ParticleMedium {
   density_kgPerM3: number;

@@ -1,5 +1,5 @@
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import type { CompareColumn } from '../lib/types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import type { CompareColumn } from '@/features/compare/lib/types';
 
 // Colour and dash pattern together, so four lines stay apart in grey print and for colour-blind readers.
 export const SERIES_LOOK = [

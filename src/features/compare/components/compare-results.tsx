@@ -1,18 +1,18 @@
-import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { Button } from '../../../components/ui/button.tsx';
-import { downloadCsv } from '../../../lib/csv.ts';
-import { comparisonCsv } from '../lib/comparison-csv.ts';
-import { Z_CRITICAL } from '../lib/differ.ts';
-import { FAN_ASSUMPTIONS } from '../lib/fan-power.ts';
-import { airflow_m3PerH } from '../lib/labels.ts';
-import { comparedFraction } from '../lib/reference.ts';
-import { leastAirflowMeeting, type Target, type TargetId } from '../lib/target.ts';
-import { TABLE_FRACTIONS, type CompareColumn } from '../lib/types.ts';
-import { ComparisonTable } from './comparison-table.tsx';
-import { FractionPicker } from '../../../components/fraction-picker.tsx';
-import { OverlayChart } from './overlay-chart.tsx';
-import { TargetPicker } from './target-picker.tsx';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import { Button } from '@/components/ui/button';
+import { downloadCsv } from '@/lib/csv';
+import { comparisonCsv } from '@/features/compare/lib/comparison-csv';
+import { Z_CRITICAL } from '@/features/compare/lib/differ';
+import { FAN_ASSUMPTIONS } from '@/features/compare/lib/fan-power';
+import { airflow_m3PerH } from '@/features/compare/lib/labels';
+import { comparedFraction } from '@/features/compare/lib/reference';
+import { leastAirflowMeeting, type Target, type TargetId } from '@/features/compare/lib/target';
+import { TABLE_FRACTIONS, type CompareColumn } from '@/features/compare/lib/types';
+import { ComparisonTable } from './comparison-table';
+import { FractionPicker } from '@/components/fraction-picker';
+import { OverlayChart } from './overlay-chart';
+import { TargetPicker } from './target-picker';
 
 type Props = {
   columns: CompareColumn[];

@@ -1,10 +1,10 @@
 import { Link } from 'react-router-dom';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { paths } from '../../../config/paths.ts';
-import { dateTime } from '../../../lib/format.ts';
-import type { Target } from '../lib/target.ts';
-import type { CompareColumn } from '../lib/types.ts';
-import { tableRows } from './table-rows.tsx';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import { paths } from '@/config/paths';
+import { dateTime } from '@/lib/format';
+import type { Target } from '@/features/compare/lib/target';
+import type { CompareColumn } from '@/features/compare/lib/types';
+import { tableRows } from './table-rows';
 
 type Props = { columns: CompareColumn[]; fraction: Fraction; target: Target; bestId: number | null };
 

@@ -1,14 +1,14 @@
-import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
 import { useState } from 'react';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { plain } from '../lib/labels.ts';
-import { type CompareColumn } from '../lib/types.ts';
-import { chartSeries, limitsFor, SERIES_LOOK } from './chart-series.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import { plain } from '@/features/compare/lib/labels';
+import { type CompareColumn } from '@/features/compare/lib/types';
+import { chartSeries, limitsFor, SERIES_LOOK } from './chart-series';
 
 const WIDTH = 900;
 const HEIGHT = 380;

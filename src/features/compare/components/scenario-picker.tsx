@@ -1,9 +1,9 @@
 import { useState } from 'react';
-import type { ScenarioSummary } from '../../../../shared/schemas/workspace-views.ts';
-import { BannerBadge } from '../../../components/banner-badge.tsx';
-import { TextField } from '../../../components/ui/field.tsx';
-import { ErrorMessage, Spinner } from '../../../components/ui/status.tsx';
-import { MAX_SELECTED } from '../lib/selection.ts';
+import type { ScenarioSummary } from '../../../../shared/schemas/workspace-views';
+import { BannerBadge } from '@/components/banner-badge';
+import { TextField } from '@/components/ui/field';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { MAX_SELECTED } from '@/features/compare/lib/selection';
 
 type Props = {
   scenarios: ScenarioSummary[] | undefined;

@@ -1,13 +1,13 @@
-import { controlTierLabel, FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
+import { controlTierLabel, FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import type { ReactNode } from 'react';
-import { BannerBadge } from '../../../components/banner-badge.tsx';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { compareMeans } from '../lib/differ.ts';
-import { roughFanPower_W } from '../lib/fan-power.ts';
-import { airflow_m3PerH, fanPowerText, hoodText, plain, share } from '../lib/labels.ts';
-import { estimateOf } from '../lib/reference.ts';
-import { meetsTarget, type Target } from '../lib/target.ts';
-import { TABLE_FRACTIONS, type CompareColumn } from '../lib/types.ts';
+import { BannerBadge } from '@/components/banner-badge';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import { compareMeans } from '@/features/compare/lib/differ';
+import { roughFanPower_W } from '@/features/compare/lib/fan-power';
+import { airflow_m3PerH, fanPowerText, hoodText, plain, share } from '@/features/compare/lib/labels';
+import { estimateOf } from '@/features/compare/lib/reference';
+import { meetsTarget, type Target } from '@/features/compare/lib/target';
+import { TABLE_FRACTIONS, type CompareColumn } from '@/features/compare/lib/types';
 
 export interface RowSpec {
   key: string;

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { TARGETS, type Target, type TargetId } from '../lib/target.ts';
+import { TARGETS, type Target, type TargetId } from '@/features/compare/lib/target';
 
 // Native radios: arrow keys move between targets without extra key handling.
 export function TargetPicker({ value, onChange }: { value: Target; onChange: (id: TargetId) => void }) {

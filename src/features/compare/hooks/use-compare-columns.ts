@@ -1,8 +1,8 @@
 import { useQueries, type QueryKey, type UseQueryOptions } from '@tanstack/react-query';
-import type { ScenarioDetail, SavedRun } from '../../../../shared/schemas/workspace-views.ts';
-import { buildColumn } from '../lib/build-column.ts';
-import { orderByHierarchy } from '../lib/control-order.ts';
-import type { CompareColumn, RunFigures } from '../lib/types.ts';
+import type { ScenarioDetail, SavedRun } from '../../../../shared/schemas/workspace-views';
+import { buildColumn } from '@/features/compare/lib/build-column';
+import { orderByHierarchy } from '@/features/compare/lib/control-order';
+import type { CompareColumn, RunFigures } from '@/features/compare/lib/types';
 
 /** How to fetch and read scenarios and runs; the route passes in the owning features' query options. */
 export interface CompareSources<KS extends QueryKey, KR extends QueryKey> {

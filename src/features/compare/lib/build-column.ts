@@ -1,5 +1,5 @@
-import type { ControlTier } from '../../../../shared/schemas/workspace.ts';
-import type { CompareColumn, HoodFigures, RunFigures } from './types.ts';
+import type { ControlTier } from '../../../../shared/schemas/workspace';
+import type { CompareColumn, HoodFigures, RunFigures } from './types';
 
 export interface ScenarioLike {
   id: number;

@@ -1,4 +1,4 @@
-import type { CompareColumn, Ci } from './types.ts';
+import type { CompareColumn, Ci } from './types';
 
 const band = { mean: [0, 1], lo: [0, 0.5], hi: [0, 1.5] };
 

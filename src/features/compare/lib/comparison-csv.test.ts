@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { column } from './column.test-helper.ts';
-import { comparisonCsv } from './comparison-csv.ts';
-import { targetFor } from './target.ts';
+import { column } from './column.test-helper';
+import { comparisonCsv } from './comparison-csv';
+import { targetFor } from './target';
 
 const parse = (csv: string) => csv.trim().split('\r\n').map((line) => line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/));
 

@@ -1,11 +1,11 @@
-import { controlTierLabel, FATES, FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { toCsv } from '../../../lib/csv.ts';
-import { compareMeans } from './differ.ts';
-import { roughFanPower_W } from './fan-power.ts';
-import { airflow_m3PerH, hoodText } from './labels.ts';
-import { leastAirflowMeeting, meetsTarget, type Target } from './target.ts';
-import { TABLE_FRACTIONS, type CompareColumn } from './types.ts';
-import { comparedFraction, estimateOf } from './reference.ts';
+import { controlTierLabel, FATES, FRACTION_LABEL } from '../../../../shared/vocabulary/index';
+import { toCsv } from '@/lib/csv';
+import { compareMeans } from './differ';
+import { roughFanPower_W } from './fan-power';
+import { airflow_m3PerH, hoodText } from './labels';
+import { leastAirflowMeeting, meetsTarget, type Target } from './target';
+import { TABLE_FRACTIONS, type CompareColumn } from './types';
+import { comparedFraction, estimateOf } from './reference';
 
 /** One row per scenario, raw numbers with units in the header, so a spreadsheet can compute with them. */
 export function comparisonCsv(columns: readonly CompareColumn[], target: Target): string {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { orderByHierarchy } from './control-order.ts';
+import { orderByHierarchy } from './control-order';
 
 describe('ordering options by the hierarchy of controls', () => {
   it('puts elimination first and no control last, ties by name', () => {

@@ -1,4 +1,4 @@
-import { controlTierRank } from '../../../../shared/vocabulary/index.ts';
+import { controlTierRank } from '../../../../shared/vocabulary/index';
 
 /** Hierarchy of controls first, then name, then id so equal names keep a stable order. */
 export function orderByHierarchy<T extends { controlTier: string; name: string; id: number }>(items: readonly T[]): T[] {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { normalQuantile } from '../../../../shared/physics/index.ts';
-import { compareMeans, standardError, Z_CRITICAL } from './differ.ts';
+import { normalQuantile } from '../../../../shared/physics/index';
+import { compareMeans, standardError, Z_CRITICAL } from './differ';
 
 const estimate = (mean: number, se: number) => ({ mean, ci95: [mean - Z_CRITICAL * se, mean + Z_CRITICAL * se] as [number, number] });
 

@@ -1,4 +1,4 @@
-import type { Ci } from './types.ts';
+import type { Ci } from './types';
 
 /**
  * Two-sided 5 % critical value: the standard normal 97.5 % quantile, Φ⁻¹(0.975) = 1.959964…

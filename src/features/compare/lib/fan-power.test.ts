@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { FAN_ASSUMPTIONS, roughFanPower_W } from './fan-power.ts';
+import { FAN_ASSUMPTIONS, roughFanPower_W } from './fan-power';
 
 describe('rough fan power', () => {
   it('is Q·Δp/η: 0.45 m³/s at 1000 Pa and 60 % gives 750 W', () => {

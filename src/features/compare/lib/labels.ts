@@ -1,7 +1,7 @@
-import { percentText, trimSig } from '../../../../shared/format/index.ts';
-import { hoodKindLabel } from '../../../../shared/vocabulary/index.ts';
-import { sig } from '../../../lib/format.ts';
-import type { HoodFigures } from './types.ts';
+import { percentText, trimSig } from '../../../../shared/format/index';
+import { hoodKindLabel } from '../../../../shared/vocabulary/index';
+import { sig } from '@/lib/format';
+import type { HoodFigures } from './types';
 
 export const airflow_m3PerH = (airflow_m3PerS: number) => airflow_m3PerS * 3600;
 

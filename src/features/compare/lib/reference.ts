@@ -1,6 +1,6 @@
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import type { Estimate } from './differ.ts';
-import type { CompareColumn } from './types.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import type { Estimate } from './differ';
+import type { CompareColumn } from './types';
 
 // Every column is compared on one fraction (the first column's limit fraction), so a difference never mixes two.
 export function comparedFraction(columns: readonly CompareColumn[]): Fraction {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatSelection, parseSelection, toggleId } from './selection.ts';
+import { formatSelection, parseSelection, toggleId } from './selection';
 
 describe('the selection in the link', () => {
   it('reads ids in the link order and drops repeats', () => {

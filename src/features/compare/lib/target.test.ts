@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { column } from './column.test-helper.ts';
-import { leastAirflowMeeting, meetsTarget, targetFor } from './target.ts';
+import { column } from './column.test-helper';
+import { leastAirflowMeeting, meetsTarget, targetFor } from './target';
 
 const half = targetFor('half');
 

@@ -1,4 +1,4 @@
-import type { CompareColumn } from './types.ts';
+import type { CompareColumn } from './types';
 
 export type TargetId = 'tenth' | 'half' | 'limit';
 

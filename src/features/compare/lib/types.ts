@@ -1,6 +1,6 @@
-import type { Banner, ExposureRating } from '../../../../shared/physics/index.ts';
-import type { ControlTier } from '../../../../shared/schemas/workspace.ts';
-import type { Fate, Fraction } from '../../../../shared/vocabulary/fractions.ts';
+import type { Banner, ExposureRating } from '../../../../shared/physics/index';
+import type { ControlTier } from '../../../../shared/schemas/workspace';
+import type { Fate, Fraction } from '../../../../shared/vocabulary/fractions';
 
 export type Ci = [number, number];
 

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ApproveInput } from '../../../../shared/schemas/workspace';
 import type { Approval } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 
 export const approveScenario = ({ scenarioId, body }: { scenarioId: number; body: ApproveInput }) => apiFetch<Approval>(api.approve(scenarioId), { method: 'POST', body });
 

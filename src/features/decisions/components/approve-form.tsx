@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
 import { reviewDueDate, reviewMonthsFor } from '../../../../shared/approval/review-date';
 import type { Banner } from '../../../../shared/schemas/workspace-views';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { issueFor } from '../../../lib/api-client';
-import { useApprove } from '../api/approve';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { issueFor } from '@/lib/api-client';
+import { useApprove } from '@/features/decisions/api/approve';
 
 
 export function ApproveForm({ scenarioId, run }: { scenarioId: number; run: { id: number; banner: Banner | null; outOfDate: boolean } | null }) {

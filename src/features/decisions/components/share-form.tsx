@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { issueFor } from '../../../lib/api-client';
-import { useShareReport } from '../api/share';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { issueFor } from '@/lib/api-client';
+import { useShareReport } from '@/features/decisions/api/share';
 
 export function ShareForm({ scenarioId, runId }: { scenarioId: number; runId?: number }) {
   const [email, setEmail] = useState('');

@@ -1,10 +1,10 @@
-import { formatSig, percentText } from '../../../../shared/format/index.ts';
-import { parseScenario } from '../../../../shared/schemas/scenario.ts';
-import { Cautions } from '../../../components/cautions.tsx';
-import { Button } from '../../../components/ui/button.tsx';
-import { RUN_START, useEngineRun } from '../../../hooks/use-engine-run.ts';
-import { runSimulation } from '../../../lib/simulation-bridge.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
+import { formatSig, percentText } from '../../../../shared/format/index';
+import { parseScenario } from '../../../../shared/schemas/scenario';
+import { Cautions } from '@/components/cautions';
+import { Button } from '@/components/ui/button';
+import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
+import { runSimulation } from '@/lib/simulation-bridge';
+import type { RunResult } from '../../../../shared/schemas/run-result';
 // Raw text keeps the JSON out of the TypeScript project graph; the schema checks it on load.
 import defaultScenarioText from '../../../../shared/demo-scenarios/default.json?raw';
 

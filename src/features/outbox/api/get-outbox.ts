@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { OutboxMessage, Page } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 
 export const getOutbox = () => apiFetch<Page<OutboxMessage>>(`${api.outbox}?pageSize=100`);
 

@@ -1,6 +1,6 @@
-import { Page } from '../../../components/ui/page';
-import { EmptyState, ErrorMessage, Spinner } from '../../../components/ui/status';
-import { useOutbox } from '../api/get-outbox';
+import { Page } from '@/components/ui/page';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { useOutbox } from '@/features/outbox/api/get-outbox';
 
 const linkify = (text: string) =>
   text.split(/(https?:\/\/\S+)/g).map((part, i) =>

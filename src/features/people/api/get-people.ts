@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Person } from '../../../../shared/schemas/auth';
 import type { Page } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 
 export const getPeople = () => apiFetch<Page<Person>>(`${api.people}?pageSize=200&sort=name`);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { InviteInput, Person } from '../../../../shared/schemas/auth';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { peopleQueryOptions } from './get-people';
 
 export const invitePerson = (input: InviteInput) => apiFetch<Person>(api.people, { method: 'POST', body: input });

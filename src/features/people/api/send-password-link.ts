@@ -1,6 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 
 export const sendPasswordLink = (id: number) => apiFetch<{ sent: boolean }>(api.passwordLink(id), { method: 'POST', body: {} });
 

@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
 import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/auth/permissions';
 import { inviteSchema } from '../../../../shared/schemas/auth';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { fieldErrors } from '../../../lib/form-errors';
-import { useInvitePerson } from '../api/invite-person';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { fieldErrors } from '@/lib/form-errors';
+import { useInvitePerson } from '@/features/people/api/invite-person';
 
 export function InviteForm() {
   const [form, setForm] = useState({ email: '', name: '', role: 'viewer' as Role });

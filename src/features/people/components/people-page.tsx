@@ -1,13 +1,13 @@
 import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/auth/permissions';
 import type { Person } from '../../../../shared/schemas/auth';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type Column } from '../../../components/ui/data-table';
-import { Page } from '../../../components/ui/page';
-import { EmptyState, ErrorMessage, Notice, Spinner } from '../../../components/ui/status';
-import { useUser } from '../../../lib/auth';
-import { usePeople } from '../api/get-people';
-import { useSendPasswordLink } from '../api/send-password-link';
-import { useUpdatePerson } from '../api/update-person';
+import { Button } from '@/components/ui/button';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { Page } from '@/components/ui/page';
+import { EmptyState, ErrorMessage, Notice, Spinner } from '@/components/ui/status';
+import { useUser } from '@/lib/auth';
+import { usePeople } from '@/features/people/api/get-people';
+import { useSendPasswordLink } from '@/features/people/api/send-password-link';
+import { useUpdatePerson } from '@/features/people/api/update-person';
 import { InviteForm } from './invite-form';
 
 const STATUS_TEXT: Record<Person['status'], string> = { invited: '✉ Invited', active: '● Active', deactivated: '⊘ Deactivated' };

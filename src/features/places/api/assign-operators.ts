@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { OperatorAssignment } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { placeKeys } from './get-sites';
 
 export const assignOperators = ({ workstationId, personIds }: { workstationId: number; personIds: number[] }) =>

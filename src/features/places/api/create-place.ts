@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { RoomInput, SiteInput, WorkstationInput } from '../../../../shared/schemas/workspace';
 import type { RoomRecord, SiteRecord, WorkstationRecord } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { placeKeys } from './get-sites';
 
 export const createSite = (body: SiteInput) => apiFetch<SiteRecord>(api.sites, { method: 'POST', body });

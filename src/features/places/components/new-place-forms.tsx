@@ -1,13 +1,13 @@
-import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
-import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/index.ts';
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
+import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/index';
 import { useState } from 'react';
 import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
 import type { SiteTree } from '../../../../shared/schemas/workspace-views';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { useSchemaSubmit } from '../../../hooks/use-schema-submit';
-import { useCreateRoom, useCreateSite, useCreateWorkstation } from '../api/create-place';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { useSchemaSubmit } from '@/hooks/use-schema-submit';
+import { useCreateRoom, useCreateSite, useCreateWorkstation } from '@/features/places/api/create-place';
 
 const n = decimalOrNaN;
 const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';

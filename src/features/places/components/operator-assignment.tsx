@@ -1,7 +1,7 @@
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { useAssignOperators } from '../api/assign-operators';
+import { Button } from '@/components/ui/button';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { useAssignOperators } from '@/features/places/api/assign-operators';
 
 type Operator = { id: number; name: string; email: string; status: string };
 

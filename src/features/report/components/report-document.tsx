@@ -1,11 +1,11 @@
-import { countText } from '../../../../shared/format/index.ts';
+import { countText } from '../../../../shared/format/index';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { Approval } from '../../../../shared/schemas/workspace-views';
-import { Cautions } from '../../../components/cautions';
-import { Button } from '../../../components/ui/button';
-import { dateTime } from '../../../lib/format';
-import type { AgentInfo } from '../lib/input-sections';
+import { Cautions } from '@/components/cautions';
+import { Button } from '@/components/ui/button';
+import { dateTime } from '@/lib/format';
+import type { AgentInfo } from '@/features/report/lib/input-sections';
 import { ReportInputs } from './report-inputs';
 import { ReportModel } from './report-model';
 import { ReportSignOff } from './report-sign-off';

@@ -1,5 +1,5 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
-import { hoodRows, inputSections, type AgentInfo } from '../lib/input-sections';
+import { hoodRows, inputSections, type AgentInfo } from '@/features/report/lib/input-sections';
 
 type Props = { scenario: Scenario; agent?: AgentInfo; sizeProfileName?: string; releaseType?: 'quiet' | 'low' | 'active' | 'high' };
 

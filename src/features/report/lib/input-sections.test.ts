@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseScenario } from '../../../../shared/schemas/scenario.ts';
-import { hoodRows, inputSections } from './input-sections.ts';
+import { parseScenario } from '../../../../shared/schemas/scenario';
+import { hoodRows, inputSections } from './input-sections';
 
 const scenario = parseScenario({
   room: { length_m: 8, width_m: 6, height_m: 3.5, airChanges_perH: 3, draftSpeed_mPerS: 0.15, draftDirection_deg: 0 },

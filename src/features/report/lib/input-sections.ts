@@ -1,10 +1,10 @@
-import { countText } from '../../../../shared/format/index.ts';
-import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index.ts';
-import type { Hood, Scenario } from '../../../../shared/schemas/scenario.ts';
-import type { AgentData } from '../../../../shared/schemas/workspace.ts';
-import { cubicMetresPerSecondToPerHour, kelvinToCelsius, metresToMicrometres } from '../../../../shared/units.ts';
-import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL, type ReleaseType } from '../../../../shared/vocabulary/index.ts';
-import { sig } from '../../../lib/format.ts';
+import { countText } from '../../../../shared/format/index';
+import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index';
+import type { Hood, Scenario } from '../../../../shared/schemas/scenario';
+import type { AgentData } from '../../../../shared/schemas/workspace';
+import { cubicMetresPerSecondToPerHour, kelvinToCelsius, metresToMicrometres } from '../../../../shared/units';
+import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL, type ReleaseType } from '../../../../shared/vocabulary/index';
+import { sig } from '@/lib/format';
 
 export type Row = [label: string, value: string];
 export interface InputSection {

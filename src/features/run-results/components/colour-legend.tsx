@@ -1,6 +1,6 @@
-import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
-import { rampColour, type SequentialScale } from '../lib/colour-scale.ts';
-import { ACCENT, INK, MUTED } from '../../../components/chart-style.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index';
+import { rampColour, type SequentialScale } from '@/features/run-results/lib/colour-scale';
+import { ACCENT, INK, MUTED } from '@/components/chart-style';
 
 const W = 320;
 const BAR = 14;

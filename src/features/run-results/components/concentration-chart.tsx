@@ -1,13 +1,13 @@
-import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
+import { readableNumber, trimSig } from '../../../../shared/format/index';
 import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from '../../../components/chart-style.ts';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { ACCENT, ACCENT_SOFT, ACT, LINE, MUTED, axisLabel, tickLabel } from '@/components/chart-style';
 
 const WIDTH = 760;
 const HEIGHT = 340;

@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { ConcentrationChart } from './concentration-chart.tsx';
-import { FractionPicker } from '../../../components/fraction-picker.tsx';
-import { FRACTIONS } from '../../../../shared/vocabulary/fractions.ts';
-import { Section } from './section.tsx';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { ConcentrationChart } from './concentration-chart';
+import { FractionPicker } from '@/components/fraction-picker';
+import { FRACTIONS } from '../../../../shared/vocabulary/fractions';
+import { Section } from './section';
 
 export function ConcentrationSection({ view }: { view: RunResult }) {
   const [fraction, setFraction] = useState<Fraction>('respirable');

@@ -1,7 +1,7 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
-import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { Section } from './section.tsx';
+import { readableNumber } from '../../../../shared/format/index';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { Section } from './section';
 
 type Row = { key: string; model: string; value: number; assumes: string };
 

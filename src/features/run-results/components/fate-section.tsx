@@ -1,7 +1,7 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
-import { FATE_LABEL, FATES, type Fate } from '../../../../shared/vocabulary/index.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { Section } from './section.tsx';
+import { readableNumber } from '../../../../shared/format/index';
+import { FATE_LABEL, FATES, type Fate } from '../../../../shared/vocabulary/index';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { Section } from './section';
 
 // Fate colours are our own; each segment also carries its word in the list, never colour alone.
 const FATE_COLOUR: Record<Fate, string> = { captured: '#1f6f6a', settled: '#a07a3c', exhausted: '#7d8796', airborne: '#c9b98f' };

@@ -1,13 +1,13 @@
-import { percentText, readableNumber } from '../../../../shared/format/index.ts';
-import { Button } from '../../../components/ui/button.tsx';
-import { type Column, DataTable } from '../../../components/ui/data-table.tsx';
-import { FRACTIONS, type Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import { fractionTableCsv, seriesCsv } from '../lib/csv.ts';
-import { downloadText } from '../../../lib/download.ts';
-import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { ciText } from '../lib/format.ts';
-import type { FractionSummary, RunResult } from '../../../../shared/schemas/run-result.ts';
-import { Section } from './section.tsx';
+import { percentText, readableNumber } from '../../../../shared/format/index';
+import { Button } from '@/components/ui/button';
+import { type Column, DataTable } from '@/components/ui/data-table';
+import { FRACTIONS, type Fraction } from '../../../../shared/vocabulary/fractions';
+import { fractionTableCsv, seriesCsv } from '@/features/run-results/lib/csv';
+import { downloadText } from '@/lib/download';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
+import { ciText } from '@/features/run-results/lib/format';
+import type { FractionSummary, RunResult } from '../../../../shared/schemas/run-result';
+import { Section } from './section';
 
 type Row = FractionSummary & { fraction: Fraction; percent?: number; percentUpper?: number };
 

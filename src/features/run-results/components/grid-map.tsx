@@ -1,8 +1,8 @@
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import type { SequentialScale } from '../lib/colour-scale.ts';
-import type { Grid } from '../../../../shared/schemas/run-result.ts';
-import { projection } from '../lib/room-projection.ts';
-import { DRAWING_WIDTH, RoomView } from './room-view.tsx';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import type { SequentialScale } from '@/features/run-results/lib/colour-scale';
+import type { Grid } from '../../../../shared/schemas/run-result';
+import { projection } from '@/features/run-results/lib/room-projection';
+import { DRAWING_WIDTH, RoomView } from './room-view';
 
 /** A floor-plane grid ([ix][iy]) painted under the plan, with the source, hoods and breathing zone on top. */
 export function GridMap({ grid, scale, scenario, label, skipZero = false }: { grid: Grid; scale: SequentialScale; scenario: Scenario; label: string; skipZero?: boolean }) {

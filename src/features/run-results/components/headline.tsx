@@ -1,10 +1,10 @@
-import { countText, percentText, readableNumber } from '../../../../shared/format/index.ts';
+import { countText, percentText, readableNumber } from '../../../../shared/format/index';
 import type { ReactNode } from 'react';
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { BANNER_CLASSES, BannerBadge } from '../../../components/banner-badge.tsx';
-import { ciText, relativeError } from '../lib/format.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/vocabulary/index';
+import { BANNER_CLASSES, BannerBadge } from '@/components/banner-badge';
+import { ciText, relativeError } from '@/features/run-results/lib/format';
+import type { RunResult } from '../../../../shared/schemas/run-result';
 
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (

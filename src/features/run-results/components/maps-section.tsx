@@ -1,11 +1,11 @@
-import { readableNumber, trimSig } from '../../../../shared/format/index.ts';
-import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { sequentialScale } from '../lib/colour-scale.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { ColourLegend } from './colour-legend.tsx';
-import { GridMap } from './grid-map.tsx';
-import { Section } from './section.tsx';
+import { readableNumber, trimSig } from '../../../../shared/format/index';
+import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import { sequentialScale } from '@/features/run-results/lib/colour-scale';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { ColourLegend } from './colour-legend';
+import { GridMap } from './grid-map';
+import { Section } from './section';
 
 function releaseType(scenario: Scenario): ReleaseCondition | undefined {
   return scenario.hoods.find((h) => h.releaseType)?.releaseType;

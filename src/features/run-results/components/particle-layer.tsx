@@ -1,8 +1,8 @@
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import type { Projection } from '../lib/room-projection.ts';
-import type { SizeClasses } from '../lib/size-classes.ts';
-import { type Dot, splitAtWrap, trail } from '../lib/trajectory-frames.ts';
-import type { Trajectories } from '../../../../shared/schemas/run-result.ts';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import type { Projection } from '@/features/run-results/lib/room-projection';
+import type { SizeClasses } from '@/features/run-results/lib/size-classes';
+import { type Dot, splitAtWrap, trail } from '@/features/run-results/lib/trajectory-frames';
+import type { Trajectories } from '../../../../shared/schemas/run-result';
 
 export const TAIL_FRAMES = 8;
 

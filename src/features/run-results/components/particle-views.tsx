@@ -1,14 +1,14 @@
 import { useMemo } from 'react';
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { usePlayback } from '../hooks/use-playback.ts';
-import type { RunResult, Trajectories } from '../../../../shared/schemas/run-result.ts';
-import { projection } from '../lib/room-projection.ts';
-import { sizeClasses } from '../lib/size-classes.ts';
-import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '../lib/trajectory-frames.ts';
-import { ParticleLayer, TAIL_FRAMES } from './particle-layer.tsx';
-import { PlaybackControls } from './playback-controls.tsx';
-import { DRAWING_WIDTH, RoomView } from './room-view.tsx';
-import { Section } from './section.tsx';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import { usePlayback } from '@/features/run-results/hooks/use-playback';
+import type { RunResult, Trajectories } from '../../../../shared/schemas/run-result';
+import { projection } from '@/features/run-results/lib/room-projection';
+import { sizeClasses } from '@/features/run-results/lib/size-classes';
+import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '@/features/run-results/lib/trajectory-frames';
+import { ParticleLayer, TAIL_FRAMES } from './particle-layer';
+import { PlaybackControls } from './playback-controls';
+import { DRAWING_WIDTH, RoomView } from './room-view';
+import { Section } from './section';
 
 export function SizeLegend({ sizes }: { sizes: ReturnType<typeof sizeClasses> }) {
   return (

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { Button } from '../../../components/ui/button.tsx';
+import { Button } from '@/components/ui/button';
 
 export const SPEEDS = [0.5, 1, 2, 4] as const;
 

@@ -1,7 +1,7 @@
 import { useId, type ReactNode } from 'react';
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { gridStep_m, hoodOutlines, type Projection } from '../lib/room-projection.ts';
-import { ACT, INK, LINE, MUTED } from '../../../components/chart-style.ts';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import { gridStep_m, hoodOutlines, type Projection } from '@/features/run-results/lib/room-projection';
+import { ACT, INK, LINE, MUTED } from '@/components/chart-style';
 
 // Type is sized in drawing units; views shown narrower (side by side) pass a larger textScale so
 // labels still come out near 11–13 px on screen.

@@ -1,17 +1,17 @@
 import { useMemo } from 'react';
-import { Cautions } from '../../../components/cautions.tsx';
-import { ErrorMessage } from '../../../components/ui/status.tsx';
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { parseRunResult } from '../../../../shared/schemas/run-result-stored.ts';
-import { ConcentrationSection } from './concentration-section.tsx';
-import { CrossChecks } from './cross-checks.tsx';
-import { FateSection } from './fate-section.tsx';
-import { FractionTable } from './fraction-table.tsx';
-import { Headline } from './headline.tsx';
-import { MapsSection } from './maps-section.tsx';
-import { ParticleViews } from './particle-views.tsx';
-import { Section } from './section.tsx';
+import { Cautions } from '@/components/cautions';
+import { ErrorMessage } from '@/components/ui/status';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { parseRunResult } from '../../../../shared/schemas/run-result-stored';
+import { ConcentrationSection } from './concentration-section';
+import { CrossChecks } from './cross-checks';
+import { FateSection } from './fate-section';
+import { FractionTable } from './fraction-table';
+import { Headline } from './headline';
+import { MapsSection } from './maps-section';
+import { ParticleViews } from './particle-views';
+import { Section } from './section';
 
 export interface RunResultsProps {
   /** The engine's Results, or its JSON as stored by the server. */

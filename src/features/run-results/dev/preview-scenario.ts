@@ -1,4 +1,4 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 
 // The workspace test fixture's scenario with enough particles for a readable picture.
 export const PREVIEW_SCENARIO: ScenarioInput = {

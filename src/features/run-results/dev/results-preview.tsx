@@ -1,11 +1,11 @@
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button.tsx';
-import { Spinner } from '../../../components/ui/status.tsx';
-import { toJsonFriendly } from '../../../../shared/schemas/runs.ts';
-import { parseScenario, type Scenario } from '../../../../shared/schemas/scenario.ts';
-import { combineBatches, prepareScenario, runBatch } from '../../../../workers/engine/index.ts';
-import { RunResults } from '../components/run-results.tsx';
-import { PREVIEW_SCENARIO as INPUT } from './preview-scenario.ts';
+import { Button } from '@/components/ui/button';
+import { Spinner } from '@/components/ui/status';
+import { toJsonFriendly } from '../../../../shared/schemas/runs';
+import { parseScenario, type Scenario } from '../../../../shared/schemas/scenario';
+import { combineBatches, prepareScenario, runBatch } from '../../../../workers/engine/index';
+import { RunResults } from '@/features/run-results/components/run-results';
+import { PREVIEW_SCENARIO as INPUT } from './preview-scenario';
 
 type Options = { json: boolean; diameters: boolean; limit: boolean; hood: boolean };
 

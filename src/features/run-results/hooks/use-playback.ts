@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { advanceFrames } from '../lib/trajectory-frames.ts';
+import { advanceFrames } from '@/features/run-results/lib/trajectory-frames';
 
 /** Frame clock on requestAnimationFrame; stops at the last frame and whenever the view unmounts. */
 export function usePlayback(frames: number, frameInterval_s: number) {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { scenarioInput } from '../../../../tests/fixtures/workspace';
 import { runEngine } from '../../../../tests/helpers/run-engine';
-import { toCsv } from '../../../lib/csv';
+import { toCsv } from '@/lib/csv';
 import { fractionTableCsv, seriesCsv } from './csv';
 import { parseRunResult } from '../../../../shared/schemas/run-result-stored';
 

@@ -1,8 +1,8 @@
-import { FRACTIONS } from '../../../../shared/vocabulary/fractions.ts';
-import { FRACTION_LABEL } from '../../../../shared/vocabulary/index.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
+import { FRACTIONS } from '../../../../shared/vocabulary/fractions';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
+import type { RunResult } from '../../../../shared/schemas/run-result';
 
-import { toCsv } from '../../../lib/csv.ts';
+import { toCsv } from '@/lib/csv';
 
 // Full precision in files: rounding is for the screen, the engineer's spreadsheet decides its own.
 

@@ -1,5 +1,5 @@
-import { readableNumber } from '../../../../shared/format/index.ts';
-import type { Ci } from '../../../../shared/schemas/run-result.ts';
+import { readableNumber } from '../../../../shared/format/index';
+import type { Ci } from '../../../../shared/schemas/run-result';
 
 export const ciText = ([lo, hi]: Ci, digits = 3): string => `${readableNumber(lo, digits)}–${readableNumber(hi, digits)}`;
 

@@ -1,6 +1,6 @@
-import type { Scenario } from '../../../../shared/schemas/scenario.ts';
-import { packHoods } from '../../../../workers/engine/hood-field.ts';
-import { HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_STRIDE, HOOD_X, HOOD_Y, HOOD_Z } from '../../../../workers/engine/hood-slots.ts';
+import type { Scenario } from '../../../../shared/schemas/scenario';
+import { packHoods } from '../../../../workers/engine/hood-field';
+import { HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_STRIDE, HOOD_X, HOOD_Y, HOOD_Z } from '../../../../workers/engine/hood-slots';
 
 export type ViewKind = 'plan' | 'elevation';
 

@@ -1,4 +1,4 @@
-import type { Trajectories } from '../../../../shared/schemas/run-result.ts';
+import type { Trajectories } from '../../../../shared/schemas/run-result';
 
 export interface Dot {
   slot: number;

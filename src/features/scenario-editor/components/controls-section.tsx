@@ -1,10 +1,10 @@
-import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { captureVelocityRange } from '../../../../shared/physics/index.ts';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { Button } from '../../../components/ui/button';
-import { SelectField } from '../../../components/ui/field';
-import { newHood } from '../lib/new-hood';
-import { withHood, withoutHood } from '../lib/update';
+import type { ReleaseCondition } from '../../../../shared/physics/index';
+import { captureVelocityRange } from '../../../../shared/physics/index';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
+import { newHood } from '@/features/scenario-editor/lib/new-hood';
+import { withHood, withoutHood } from '@/features/scenario-editor/lib/update';
 import { HoodFields } from './hood-fields';
 import { HoodHints } from './hood-hints';
 import { Section, type SectionProps } from './section';

@@ -1,6 +1,6 @@
 import type { ReactNode, RefObject } from 'react';
-import { useDrag } from '../hooks/use-drag';
-import type { ViewFrame } from '../lib/view-frame';
+import { useDrag } from '@/features/scenario-editor/hooks/use-drag';
+import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 
 type Props = {
   svgRef: RefObject<SVGSVGElement | null>;

@@ -1,8 +1,8 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { SelectField } from '../../../components/ui/field';
-import { applyAgent, type AgentOption } from '../lib/apply-agent';
-import { DEFAULTS } from '../lib/defaults';
-import { withDust } from '../lib/update';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { SelectField } from '@/components/ui/field';
+import { applyAgent, type AgentOption } from '@/features/scenario-editor/lib/apply-agent';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { withDust } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, Subheading, type SectionProps } from './section';
 import { SizeProfileFields, type SizeProfileOption } from './size-profile-fields';

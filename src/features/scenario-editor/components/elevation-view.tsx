@@ -1,4 +1,4 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { RoomView } from './room-view';
 
 type Props = { value: ScenarioInput; onChange: (next: ScenarioInput) => void; readOnly?: boolean };

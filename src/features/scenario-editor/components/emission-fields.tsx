@@ -1,7 +1,7 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { SelectField } from '../../../components/ui/field';
-import { DEFAULTS } from '../lib/defaults';
-import { withSource } from '../lib/update';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { SelectField } from '@/components/ui/field';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { withSource } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
 

@@ -1,7 +1,7 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { DEFAULTS } from '../lib/defaults';
-import { faceCorners, hoodAxis, type HoodInput, type Vec3 } from '../lib/hood-axis';
-import type { ViewFrame } from '../lib/view-frame';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { faceCorners, hoodAxis, type HoodInput, type Vec3 } from '@/features/scenario-editor/lib/hood-axis';
+import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 import { arrowPath } from './view-parts';
 
 export type ViewKind = 'plan' | 'elevation';

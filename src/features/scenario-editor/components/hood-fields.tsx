@@ -1,9 +1,9 @@
-import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour, metresToMillimetres, millimetresToMetres } from '../../../../shared/units.ts';
-import { HOOD_KIND_LABEL, HOOD_KINDS } from '../../../../shared/vocabulary/index.ts';
-import { Button } from '../../../components/ui/button';
-import { SelectField } from '../../../components/ui/field';
-import { hoodAngles, type HoodInput } from '../lib/hood-axis';
-import { isSlot } from '../lib/hood-hints';
+import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour, metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
+import { HOOD_KIND_LABEL, HOOD_KINDS } from '../../../../shared/vocabulary/index';
+import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
+import { hoodAngles, type HoodInput } from '@/features/scenario-editor/lib/hood-axis';
+import { isSlot } from '@/features/scenario-editor/lib/hood-hints';
 import { NumberField } from './number-field';
 import { FieldGrid } from './section';
 

@@ -1,9 +1,9 @@
-import { metres } from '../lib/format';
-import { formatSig } from '../../../../shared/format/index.ts';
-import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
-import type { HoodInput } from '../lib/hood-axis';
-import { hoodHint, type CaptureVerdict, type HoodHint } from '../lib/hood-hints';
+import { metres } from '@/features/scenario-editor/lib/format';
+import { formatSig } from '../../../../shared/format/index';
+import type { ReleaseCondition } from '../../../../shared/physics/index';
+import { cubicMetresPerSecondToPerHour } from '../../../../shared/units';
+import type { HoodInput } from '@/features/scenario-editor/lib/hood-axis';
+import { hoodHint, type CaptureVerdict, type HoodHint } from '@/features/scenario-editor/lib/hood-hints';
 
 type Point = { x_m: number; y_m: number; z_m: number };
 

@@ -1,7 +1,7 @@
-import { parseDecimal } from '../../../../shared/format/parse-decimal.ts';
+import { parseDecimal } from '../../../../shared/format/parse-decimal';
 import { useState, type ReactNode } from 'react';
-import { TextField } from '../../../components/ui/field';
-import { formatInput } from '../lib/format';
+import { TextField } from '@/components/ui/field';
+import { formatInput } from '@/features/scenario-editor/lib/format';
 
 type Common = {
   label: string;

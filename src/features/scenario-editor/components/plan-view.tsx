@@ -1,7 +1,7 @@
-import { formatSig } from '../../../../shared/format/index.ts';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { DEFAULTS } from '../lib/defaults';
-import type { ViewFrame } from '../lib/view-frame';
+import { formatSig } from '../../../../shared/format/index';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 import { RoomView } from './room-view';
 import { arrowPath } from './view-parts';
 

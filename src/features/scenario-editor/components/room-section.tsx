@@ -1,9 +1,9 @@
-import { formatSig } from '../../../../shared/format/index.ts';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index.ts';
-import { celsiusToKelvin, kelvinToCelsius } from '../../../../shared/units.ts';
-import { DEFAULTS } from '../lib/defaults';
-import { withRoom } from '../lib/update';
+import { formatSig } from '../../../../shared/format/index';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index';
+import { celsiusToKelvin, kelvinToCelsius } from '../../../../shared/units';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { withRoom } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 

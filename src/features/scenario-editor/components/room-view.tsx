@@ -1,8 +1,8 @@
-import { metres } from '../lib/format';
+import { metres } from '@/features/scenario-editor/lib/format';
 import { useRef, type ReactNode } from 'react';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { withHood, withSource, withWorker } from '../lib/update';
-import { viewFrame, type ViewFrame } from '../lib/view-frame';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { withHood, withSource, withWorker } from '@/features/scenario-editor/lib/update';
+import { viewFrame, type ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 import { Draggable } from './draggable';
 import { HoodGlyph, SourceGlyph, WorkerGlyph, type ViewKind } from './glyphs';
 import { RoomGrid, ScaleBar } from './view-parts';

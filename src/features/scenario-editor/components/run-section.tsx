@@ -1,7 +1,7 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { TextField } from '../../../components/ui/field';
-import { DEFAULTS } from '../lib/defaults';
-import { withRun } from '../lib/update';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { TextField } from '@/components/ui/field';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { withRun } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 

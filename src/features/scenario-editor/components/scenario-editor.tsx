@@ -1,8 +1,8 @@
 import { useMemo } from 'react';
-import type { ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { scenarioSchema, type ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import type { AgentOption } from '../lib/apply-agent';
-import { issuesByPath } from '../lib/field-errors';
+import type { ReleaseCondition } from '../../../../shared/physics/index';
+import { scenarioSchema, type ScenarioInput } from '../../../../shared/schemas/scenario';
+import type { AgentOption } from '@/features/scenario-editor/lib/apply-agent';
+import { issuesByPath } from '@/features/scenario-editor/lib/field-errors';
 import { ControlsSection } from './controls-section';
 import { DustSection } from './dust-section';
 import { ElevationView } from './elevation-view';

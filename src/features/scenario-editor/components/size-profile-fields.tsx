@@ -1,8 +1,8 @@
-import { formatSig } from '../../../../shared/format/index.ts';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { metresToMicrometres, micrometresToMetres } from '../../../../shared/units.ts';
-import { SelectField } from '../../../components/ui/field';
-import { withDust } from '../lib/update';
+import { formatSig } from '../../../../shared/format/index';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { metresToMicrometres, micrometresToMetres } from '../../../../shared/units';
+import { SelectField } from '@/components/ui/field';
+import { withDust } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
 

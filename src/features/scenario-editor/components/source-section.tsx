@@ -1,8 +1,8 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units.ts';
-import { SelectField } from '../../../components/ui/field';
-import { DEFAULTS } from '../lib/defaults';
-import { withSource } from '../lib/update';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
+import { SelectField } from '@/components/ui/field';
+import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { withSource } from '@/features/scenario-editor/lib/update';
 import { EmissionFields } from './emission-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, Subheading, type SectionProps } from './section';

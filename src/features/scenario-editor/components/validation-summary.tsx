@@ -1,4 +1,4 @@
-import { fieldLabel, isShownAtField } from '../lib/field-labels';
+import { fieldLabel, isShownAtField } from '@/features/scenario-editor/lib/field-labels';
 
 // Every issue is shown at its field; the ones with no field of their own are listed here so none is lost.
 export function ValidationSummary({ errors }: { errors: Record<string, string> }) {

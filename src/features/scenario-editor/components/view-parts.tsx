@@ -1,4 +1,4 @@
-import type { ViewFrame } from '../lib/view-frame';
+import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 
 const range = (n: number) => Array.from({ length: Math.floor(n + 1e-9) + 1 }, (_, i) => i);
 

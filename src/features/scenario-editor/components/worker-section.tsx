@@ -1,7 +1,7 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { SelectField } from '../../../components/ui/field';
-import { DEFAULTS, POSTURE_HEIGHT_m } from '../lib/defaults';
-import { withWorker } from '../lib/update';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { SelectField } from '@/components/ui/field';
+import { DEFAULTS, POSTURE_HEIGHT_m } from '@/features/scenario-editor/lib/defaults';
+import { withWorker } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 

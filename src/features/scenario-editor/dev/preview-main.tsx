@@ -3,7 +3,7 @@ import { createRoot } from 'react-dom/client';
 import '@fontsource/manrope/400.css';
 import '@fontsource/manrope/600.css';
 import '../../../styles.css';
-import { ScenarioEditor, type ScenarioEditorProps } from '../components/scenario-editor';
+import { ScenarioEditor, type ScenarioEditorProps } from '@/features/scenario-editor/components/scenario-editor';
 import { SAMPLE_AGENTS, SAMPLE_PROFILES, sampleScenario } from './sample-data';
 
 // Dev-only: holds the state a route module would hold, so the editor can be seen and driven by the browser test.

@@ -1,8 +1,8 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { cubicMetresPerHourToPerSecond, micrometresToMetres } from '../../../../shared/units.ts';
-import type { AgentOption } from '../lib/apply-agent';
-import type { SizeProfileOption } from '../components/size-profile-fields';
-import { defaultScenario } from '../lib/default-scenario';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { cubicMetresPerHourToPerSecond, micrometresToMetres } from '../../../../shared/units';
+import type { AgentOption } from '@/features/scenario-editor/lib/apply-agent';
+import type { SizeProfileOption } from '@/features/scenario-editor/components/size-profile-fields';
+import { defaultScenario } from '@/features/scenario-editor/lib/default-scenario';
 
 // Invented figures for looking at the editor; the real agents and profiles come from the server.
 export const SAMPLE_AGENTS: AgentOption[] = [

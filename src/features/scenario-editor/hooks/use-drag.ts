@@ -1,6 +1,6 @@
 import { useRef, type KeyboardEvent, type PointerEvent, type RefObject } from 'react';
-import { nudgeFor, nudgeInside, snapInside } from '../lib/snap';
-import type { ViewFrame } from '../lib/view-frame';
+import { nudgeFor, nudgeInside, snapInside } from '@/features/scenario-editor/lib/snap';
+import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 
 type Args = {
   svgRef: RefObject<SVGSVGElement | null>;

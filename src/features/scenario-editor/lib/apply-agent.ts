@@ -1,4 +1,4 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 
 export interface AgentData {
   density_kgPerM3: number;

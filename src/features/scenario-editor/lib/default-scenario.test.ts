@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { scenarioSchema } from '../../../../shared/schemas/scenario.ts';
-import { defaultScenario } from './default-scenario.ts';
-import { newHood } from './new-hood.ts';
+import { scenarioSchema } from '../../../../shared/schemas/scenario';
+import { defaultScenario } from './default-scenario';
+import { newHood } from './new-hood';
 
 const args = {
   room: { length_m: 6, width_m: 4, height_m: 3, airChanges_perH: 4, draftSpeed_mPerS: 0.2, draftDirection_deg: 90, temperature_K: 293.15 },

@@ -1,5 +1,5 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { micrometresToMetres } from '../../../../shared/units.ts';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { micrometresToMetres } from '../../../../shared/units';
 
 type Point = { x_m: number; y_m: number; z_m: number };
 

@@ -1,4 +1,4 @@
-import { scenarioSchema } from '../../../../shared/schemas/scenario.ts';
+import { scenarioSchema } from '../../../../shared/schemas/scenario';
 
 const shape = scenarioSchema.shape;
 const run = shape.run.unwrap().shape;

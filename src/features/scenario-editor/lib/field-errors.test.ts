@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { scenarioSchema } from '../../../../shared/schemas/scenario.ts';
-import { applyAgent } from './apply-agent.ts';
-import { defaultScenario } from './default-scenario.ts';
-import { issuesByPath } from './field-errors.ts';
+import { scenarioSchema } from '../../../../shared/schemas/scenario';
+import { applyAgent } from './apply-agent';
+import { defaultScenario } from './default-scenario';
+import { issuesByPath } from './field-errors';
 
 const base = defaultScenario({
   room: { length_m: 5, width_m: 4, height_m: 3, airChanges_perH: 4, draftSpeed_mPerS: 0, draftDirection_deg: 0, temperature_K: 293.15 },

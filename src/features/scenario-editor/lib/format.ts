@@ -1,4 +1,4 @@
-import { formatSig, trimSig } from '../../../../shared/format/index.ts';
+import { formatSig, trimSig } from '../../../../shared/format/index';
 
 // Six significant digits hide binary noise such as 19.999999999999977 °C without losing typed precision.
 export function formatInput(value: number | undefined): string {

@@ -1,5 +1,5 @@
-import { hoodAxis as axis } from '../../../../shared/schemas/hood-axis.ts';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
+import { hoodAxis as axis } from '../../../../shared/schemas/hood-axis';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 
 export type HoodInput = NonNullable<ScenarioInput['hoods']>[number];
 export type Direction = HoodInput['direction'];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { HoodInput } from './hood-axis.ts';
-import { hoodHint, SLOT_REACH_m } from './hood-hints.ts';
+import type { HoodInput } from './hood-axis';
+import { hoodHint, SLOT_REACH_m } from './hood-hints';
 
 // A = 0.4 m × 0.25 m = 0.1 m², Q = 0.5 m³/s, facing +x from (1, 1, 1).
 const plain: HoodInput = {

@@ -1,6 +1,6 @@
-import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { isSlotKind } from '../../../../shared/vocabulary/index.ts';
-import { hoodAxis, type HoodInput } from './hood-axis.ts';
+import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index';
+import { isSlotKind } from '../../../../shared/vocabulary/index';
+import { hoodAxis, type HoodInput } from './hood-axis';
 
 // [M] the centre-line equations hold out to about 1.5 equivalent hood diameters.
 const VALID_DIAMETERS = 1.5;

@@ -1,7 +1,7 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario.ts';
-import { cubicMetresPerHourToPerSecond } from '../../../../shared/units.ts';
-import { azimuthToward, type HoodInput } from './hood-axis.ts';
-import { snapInside } from './snap.ts';
+import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { cubicMetresPerHourToPerSecond } from '../../../../shared/units';
+import { azimuthToward, type HoodInput } from './hood-axis';
+import { snapInside } from './snap';
 
 const STANDOFF_m = 0.3;
 

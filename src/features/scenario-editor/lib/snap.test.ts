@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { nudgeFor, nudgeInside, snapInside } from './snap.ts';
+import { nudgeFor, nudgeInside, snapInside } from './snap';
 
 describe('snapping and nudging', () => {
   it('snaps to whole 5 cm steps without binary noise', () => {

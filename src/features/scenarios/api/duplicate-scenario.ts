@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ScenarioDetail } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { scenarioKeys } from './get-scenarios';
 
 export const duplicateScenario = ({ id, name }: { id: number; name?: string }) => apiFetch<ScenarioDetail>(api.duplicateScenario(id), { method: 'POST', body: name ? { name } : {} });

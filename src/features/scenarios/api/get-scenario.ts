@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ScenarioDetail } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { scenarioKeys } from './get-scenarios';
 
 export const getScenario = (id: number) => apiFetch<ScenarioDetail>(api.scenario(id));

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { Page, ScenarioSummary } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 
 export type ScenarioFilters = { sort?: string; order?: 'asc' | 'desc'; siteId?: number; workstationId?: number; agentId?: number; status?: 'draft' | 'approved'; q?: string; pageSize?: number };
 

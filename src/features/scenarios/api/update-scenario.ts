@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ScenarioUpdate } from '../../../../shared/schemas/workspace';
 import type { ScenarioDetail } from '../../../../shared/schemas/workspace-views';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { scenarioKeys } from './get-scenarios';
 
 export const updateScenario = ({ id, patch }: { id: number; patch: ScenarioUpdate }) => apiFetch<ScenarioDetail>(api.scenario(id), { method: 'PATCH', body: patch });

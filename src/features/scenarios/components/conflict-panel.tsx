@@ -1,4 +1,4 @@
-import { Button } from '../../../components/ui/button';
+import { Button } from '@/components/ui/button';
 
 type Side = { version: number; name: string; input: unknown };
 

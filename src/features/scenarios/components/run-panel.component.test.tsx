@@ -6,11 +6,11 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { type Scenario, parseScenario } from '../../../../shared/schemas/scenario';
 import type { Results } from '../../../../workers/engine/index';
 import { referenceScenario } from '../../../../workers/engine/reference-scenario';
-import { RunCancelledError, type RunOptions, type RunProgress, runSimulation } from '../../../lib/simulation-bridge';
+import { RunCancelledError, type RunOptions, type RunProgress, runSimulation } from '@/lib/simulation-bridge';
 import { RunPanel } from './run-panel';
 
-vi.mock('../../../lib/simulation-bridge', async (importOriginal) => ({
-  ...(await importOriginal<typeof import('../../../lib/simulation-bridge')>()),
+vi.mock('@/lib/simulation-bridge', async (importOriginal) => ({
+  ...(await importOriginal<typeof import('@/lib/simulation-bridge')>()),
   runSimulation: vi.fn(),
   warmUpWorkers: vi.fn(),
 }));

@@ -1,9 +1,9 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
-import { Button } from '../../../components/ui/button';
-import { ErrorMessage } from '../../../components/ui/status';
-import { RUN_START, useEngineRun } from '../../../hooks/use-engine-run';
-import { runSimulation } from '../../../lib/simulation-bridge';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { Button } from '@/components/ui/button';
+import { ErrorMessage } from '@/components/ui/status';
+import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
+import { runSimulation } from '@/lib/simulation-bridge';
 
 const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` : `${Math.ceil(s / 60)} min`) : '…');
 

@@ -1,11 +1,11 @@
-import { countText, percentText } from '../../../../shared/format/index.ts';
+import { countText, percentText } from '../../../../shared/format/index';
 import { Link } from 'react-router-dom';
 import type { RunListItem } from '../../../../shared/schemas/workspace-views';
-import { BannerBadge } from '../../../components/banner-badge';
-import { DataTable, type Column } from '../../../components/ui/data-table';
-import { EmptyState } from '../../../components/ui/status';
-import { paths } from '../../../config/paths';
-import { dateTime, sig } from '../../../lib/format';
+import { BannerBadge } from '@/components/banner-badge';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { dateTime, sig } from '@/lib/format';
 
 const COLUMNS: Column<RunListItem>[] = [
   { key: 'when', header: 'Saved', sortValue: (r) => r.created_at, render: (r) => <Link className="font-semibold text-accent underline" to={paths.run(r.id)}>{dateTime(r.created_at)}</Link> },

@@ -1,4 +1,4 @@
-import { SelectField, TextField } from '../../../components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 
 export type FilterOption = { id: number; name: string };
 export type FilterValue = { siteId?: number; workstationId?: number; agentId?: number; status?: 'draft' | 'approved'; q?: string };

@@ -1,14 +1,14 @@
-import { percentText } from '../../../../shared/format/index.ts';
+import { percentText } from '../../../../shared/format/index';
 import { Link } from 'react-router-dom';
 import type { ScenarioSummary } from '../../../../shared/schemas/workspace-views';
-import { BannerBadge } from '../../../components/banner-badge';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type Column, type TableSort } from '../../../components/ui/data-table';
-import { EmptyState, ErrorMessage, Spinner } from '../../../components/ui/status';
-import { paths } from '../../../config/paths';
-import { downloadCsv, toCsv } from '../../../lib/csv';
-import { dateTime, sig } from '../../../lib/format';
-import { useScenarios, type ScenarioFilters } from '../api/get-scenarios';
+import { BannerBadge } from '@/components/banner-badge';
+import { Button } from '@/components/ui/button';
+import { DataTable, type Column, type TableSort } from '@/components/ui/data-table';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { paths } from '@/config/paths';
+import { downloadCsv, toCsv } from '@/lib/csv';
+import { dateTime, sig } from '@/lib/format';
+import { useScenarios, type ScenarioFilters } from '@/features/scenarios/api/get-scenarios';
 
 const COLUMNS: Column<ScenarioSummary>[] = [
   { key: 'name', header: 'Scenario', sortValue: () => 0, render: (s) => <Link className="font-semibold text-accent underline" to={paths.scenario(s.id)}>{s.name}</Link> },

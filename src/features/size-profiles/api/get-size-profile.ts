@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { SizeProfileDetail } from '../../../../shared/schemas/size-profiles';
-import { api } from '../../../config/paths';
-import { apiFetch } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { apiFetch } from '@/lib/api-client';
 import { sizeProfilesQueryOptions } from './get-size-profiles';
 
 export const getSizeProfile = (id: number) => apiFetch<SizeProfileDetail>(api.sizeProfile(id));

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SizeProfileDetail } from '../../../../shared/schemas/size-profiles';
 import type { UploadFormat } from '../../../../shared/size-profiles/index';
-import { api } from '../../../config/paths';
-import { ApiError } from '../../../lib/api-client';
+import { api } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
 import { sizeProfilesQueryOptions } from './get-size-profiles';
 
 export type UploadInput = { file: File; format: UploadFormat; name: string; density_kgPerM3?: number; densityConfirmed?: boolean };

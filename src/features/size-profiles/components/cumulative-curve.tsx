@@ -4,7 +4,7 @@ import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { LinePath } from '@visx/shape';
 import type { MassBins } from '../../../../shared/size-profiles/index';
-import { cumulativePoints, decadeTicks_um } from '../lib/chart-data';
+import { cumulativePoints, decadeTicks_um } from '@/features/size-profiles/lib/chart-data';
 import { ACCENT, CHART, LINE, MUTED, axisLabel, tickLabel } from './chart-style';
 
 export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: number | null }) {

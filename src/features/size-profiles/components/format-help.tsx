@@ -1,5 +1,5 @@
 import { FORMATS, MAX_DATA_ROWS, UPLOAD_FORMATS, type UploadFormat } from '../../../../shared/size-profiles/index';
-import { api } from '../../../config/paths';
+import { api } from '@/config/paths';
 
 export function FormatHelp({ format }: { format: UploadFormat }) {
   const info = FORMATS[format];

@@ -1,5 +1,5 @@
 import type { SizeProfileSummary } from '../../../../shared/schemas/size-profiles';
-import { micrometres, percent, plain } from '../lib/chart-data';
+import { micrometres, percent, plain } from '@/features/size-profiles/lib/chart-data';
 
 export function FractionsList({ profile }: { profile: SizeProfileSummary }) {
   const items: [string, string][] = [

@@ -1,12 +1,12 @@
-import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
 import { useState, type FormEvent } from 'react';
 import { createSizeProfileSchema } from '../../../../shared/schemas/size-profiles';
 import { micrometresToMetres } from '../../../../shared/units';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { fieldErrors } from '../../../lib/form-errors';
-import { useCreateSizeProfile } from '../api/create-size-profile';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { fieldErrors } from '@/lib/form-errors';
+import { useCreateSizeProfile } from '@/features/size-profiles/api/create-size-profile';
 
 type Mode = 'mmad' | 'cmd' | 'respirable';
 const number = (text: string) => (text.trim() === '' ? undefined : decimalOrNaN(text));

@@ -3,8 +3,8 @@ import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import type { MassBins } from '../../../../shared/size-profiles/index';
-import { formatSig } from '../../../../shared/format/index.ts';
-import { decadeTicks_um, histogramBars } from '../lib/chart-data';
+import { formatSig } from '../../../../shared/format/index';
+import { decadeTicks_um, histogramBars } from '@/features/size-profiles/lib/chart-data';
 import { ACCENT, ACCENT_SOFT, CHART, LINE, MUTED, axisLabel, tickLabel } from './chart-style';
 
 export function SizeHistogram({ bins }: { bins: MassBins }) {

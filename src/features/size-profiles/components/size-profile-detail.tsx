@@ -1,8 +1,8 @@
 import { useParams } from 'react-router-dom';
 import type { SizeProfileDetail as Detail } from '../../../../shared/schemas/size-profiles';
-import { Page } from '../../../components/ui/page';
-import { ErrorMessage, Spinner } from '../../../components/ui/status';
-import { useSizeProfile } from '../api/get-size-profile';
+import { Page } from '@/components/ui/page';
+import { ErrorMessage, Spinner } from '@/components/ui/status';
+import { useSizeProfile } from '@/features/size-profiles/api/get-size-profile';
 import { CumulativeCurve } from './cumulative-curve';
 import { FractionsList } from './fractions-list';
 import { KIND_LABELS } from './kind-labels';

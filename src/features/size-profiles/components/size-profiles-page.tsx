@@ -1,7 +1,7 @@
-import { Can } from '../../../components/can';
-import { Page } from '../../../components/ui/page';
-import { EmptyState, ErrorMessage, Spinner } from '../../../components/ui/status';
-import { useSizeProfiles } from '../api/get-size-profiles';
+import { Can } from '@/components/can';
+import { Page } from '@/components/ui/page';
+import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
+import { useSizeProfiles } from '@/features/size-profiles/api/get-size-profiles';
 import { LognormalForm } from './lognormal-form';
 import { SizeProfilesTable } from './size-profiles-table';
 import { UploadForm } from './upload-form';

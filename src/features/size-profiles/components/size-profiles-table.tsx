@@ -1,12 +1,12 @@
 import { Link } from 'react-router-dom';
 import type { SizeProfileSummary } from '../../../../shared/schemas/size-profiles';
 import { metresToMicrometres } from '../../../../shared/units';
-import { Can } from '../../../components/can';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type Column } from '../../../components/ui/data-table';
-import { paths } from '../../../config/paths';
-import { useDeleteSizeProfile } from '../api/delete-size-profile';
-import { percent, plain } from '../lib/chart-data';
+import { Can } from '@/components/can';
+import { Button } from '@/components/ui/button';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { paths } from '@/config/paths';
+import { useDeleteSizeProfile } from '@/features/size-profiles/api/delete-size-profile';
+import { percent, plain } from '@/features/size-profiles/lib/chart-data';
 import { KIND_LABELS } from './kind-labels';
 
 export function SizeProfilesTable({ rows }: { rows: SizeProfileSummary[] }) {

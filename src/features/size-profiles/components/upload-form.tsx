@@ -1,10 +1,10 @@
 import { useState, type FormEvent } from 'react';
 import { FORMATS, UPLOAD_FORMATS, type UploadFormat } from '../../../../shared/size-profiles/index';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { ErrorMessage, Notice } from '../../../components/ui/status';
-import { ApiError } from '../../../lib/api-client';
-import { useUploadSizeProfile } from '../api/upload-size-profile';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { ErrorMessage, Notice } from '@/components/ui/status';
+import { ApiError } from '@/lib/api-client';
+import { useUploadSizeProfile } from '@/features/size-profiles/api/upload-size-profile';
 import { FormatHelp, TemplateLinks } from './format-help';
 
 type FileIssue = { path: string; message: string; row?: number | null; column?: string | null };

@@ -1,4 +1,4 @@
-import { formatSig, percentText } from '../../../../shared/format/index.ts';
+import { formatSig, percentText } from '../../../../shared/format/index';
 import type { MassBins } from '../../../../shared/size-profiles/index';
 import { metresToMicrometres } from '../../../../shared/units';
 

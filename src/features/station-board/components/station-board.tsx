@@ -1,7 +1,7 @@
 import type { StationBoard as Board } from '../../../../shared/schemas/workspace-views';
-import { BANNER_LABEL, type Banner } from '../../../../shared/vocabulary/index.ts';
-import { BANNER_CLASSES } from '../../../components/banner-badge';
-import { Cautions } from '../../../components/cautions';
+import { BANNER_LABEL, type Banner } from '../../../../shared/vocabulary/index';
+import { BANNER_CLASSES } from '@/components/banner-badge';
+import { Cautions } from '@/components/cautions';
 
 // The operator's board says what the state means at the bench, not how it was computed.
 const FOR_OPERATOR: Record<Banner, string> = {

@@ -1,10 +1,10 @@
 import type { ReleaseCondition } from '../../../../shared/physics/index';
 import type { Hood } from '../../../../shared/schemas/scenario';
-import { handCalcAnswer, HOOD_EQUATION } from '../lib/hand-calc';
-import { PARAMETER } from '../lib/parameter-format';
-import { crossingSentence, disagreementSentence, handCalcSentence } from '../lib/sweep-summary';
-import type { SweepParameter } from '../lib/sweep-points';
-import { targetCrossing, type CrossingPoint } from '../lib/target-crossing';
+import { handCalcAnswer, HOOD_EQUATION } from '@/features/sweep/lib/hand-calc';
+import { PARAMETER } from '@/features/sweep/lib/parameter-format';
+import { crossingSentence, disagreementSentence, handCalcSentence } from '@/features/sweep/lib/sweep-summary';
+import type { SweepParameter } from '@/features/sweep/lib/sweep-points';
+import { targetCrossing, type CrossingPoint } from '@/features/sweep/lib/target-crossing';
 
 type Props = { points: CrossingPoint[]; parameter: SweepParameter; targetPercent: number; hood: Hood; distance_m: number; release: ReleaseCondition };
 

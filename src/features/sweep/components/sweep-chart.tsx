@@ -3,9 +3,9 @@ import { GridRows } from '@visx/grid';
 import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
-import { sig } from '../../../lib/format';
-import { PARAMETER } from '../lib/parameter-format';
-import type { SweepParameter } from '../lib/sweep-points';
+import { sig } from '@/lib/format';
+import { PARAMETER } from '@/features/sweep/lib/parameter-format';
+import type { SweepParameter } from '@/features/sweep/lib/sweep-points';
 
 export interface ChartPoint {
   value: number;

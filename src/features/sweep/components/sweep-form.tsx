@@ -1,12 +1,12 @@
-import { countText, trimSig } from '../../../../shared/format/index.ts';
-import { decimalOrNaN } from '../../../../shared/format/parse-decimal.ts';
+import { countText, trimSig } from '../../../../shared/format/index';
+import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
 import { useMemo, useState, type FormEvent } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { faceText, PARAMETER } from '../lib/parameter-format';
-import { buildSweepPoints, distanceRange_m, MAX_POINTS, MIN_POINTS, sourceDistance_m, type SweepParameter, type SweepPoint, type SweepSpec } from '../lib/sweep-points';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index';
+import { faceText, PARAMETER } from '@/features/sweep/lib/parameter-format';
+import { buildSweepPoints, distanceRange_m, MAX_POINTS, MIN_POINTS, sourceDistance_m, type SweepParameter, type SweepPoint, type SweepSpec } from '@/features/sweep/lib/sweep-points';
 
 export interface SweepRequest {
   spec: SweepSpec;

@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import type { ReleaseCondition } from '../../../../shared/physics/index';
 import type { Scenario } from '../../../../shared/schemas/scenario';
-import { Cautions } from '../../../components/cautions';
-import { ErrorMessage } from '../../../components/ui/status';
-import { useSweepRun } from '../hooks/use-sweep-run';
-import { pointScenarioName } from '../lib/parameter-format';
-import { sourceDistance_m } from '../lib/sweep-points';
+import { Cautions } from '@/components/cautions';
+import { ErrorMessage } from '@/components/ui/status';
+import { useSweepRun } from '@/features/sweep/hooks/use-sweep-run';
+import { pointScenarioName } from '@/features/sweep/lib/parameter-format';
+import { sourceDistance_m } from '@/features/sweep/lib/sweep-points';
 import { SweepAnswer } from './sweep-answer';
 import { SweepChart } from './sweep-chart';
 import { SweepForm, type SweepRequest } from './sweep-form';

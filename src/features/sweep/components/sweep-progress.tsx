@@ -1,5 +1,5 @@
-import { Button } from '../../../components/ui/button';
-import type { SweepProgress as Progress } from '../hooks/use-sweep-run';
+import { Button } from '@/components/ui/button';
+import type { SweepProgress as Progress } from '@/features/sweep/hooks/use-sweep-run';
 
 const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` : `${Math.ceil(s / 60)} min`) : '…');
 

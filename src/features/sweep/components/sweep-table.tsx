@@ -1,14 +1,14 @@
-import { percentText } from '../../../../shared/format/index.ts';
+import { percentText } from '../../../../shared/format/index';
 import { Link } from 'react-router-dom';
-import { BannerBadge } from '../../../components/banner-badge';
-import { Button } from '../../../components/ui/button';
-import { type Column, DataTable } from '../../../components/ui/data-table';
-import { paths } from '../../../config/paths';
-import { downloadCsv, toCsv } from '../../../lib/csv';
-import { sig } from '../../../lib/format';
-import type { PointResult } from '../lib/point-result';
-import { formatValue, PARAMETER } from '../lib/parameter-format';
-import type { SweepParameter } from '../lib/sweep-points';
+import { BannerBadge } from '@/components/banner-badge';
+import { Button } from '@/components/ui/button';
+import { type Column, DataTable } from '@/components/ui/data-table';
+import { paths } from '@/config/paths';
+import { downloadCsv, toCsv } from '@/lib/csv';
+import { sig } from '@/lib/format';
+import type { PointResult } from '@/features/sweep/lib/point-result';
+import { formatValue, PARAMETER } from '@/features/sweep/lib/parameter-format';
+import type { SweepParameter } from '@/features/sweep/lib/sweep-points';
 
 export type TableRow = { index: number; value: number; result: PointResult; saved?: { id: number; name: string }; saving?: boolean };
 

@@ -1,8 +1,8 @@
 import { useCallback } from 'react';
-import { type EngineRunState, useEngineRun } from '../../../hooks/use-engine-run';
-import { runSimulation } from '../../../lib/simulation-bridge';
-import { pointResult, type PointResult } from '../lib/point-result';
-import type { SweepPoint } from '../lib/sweep-points';
+import { type EngineRunState, useEngineRun } from '@/hooks/use-engine-run';
+import { runSimulation } from '@/lib/simulation-bridge';
+import { pointResult, type PointResult } from '@/features/sweep/lib/point-result';
+import type { SweepPoint } from '@/features/sweep/lib/sweep-points';
 
 export interface SweepProgress {
   fraction: number;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { Hood } from '../../../../shared/schemas/scenario.ts';
-import { handCalcAnswer, HOOD_EQUATION } from './hand-calc.ts';
+import type { Hood } from '../../../../shared/schemas/scenario';
+import { handCalcAnswer, HOOD_EQUATION } from './hand-calc';
 
 // [C] physics.md §8 check values: a plain opening of A = 0.1 m² drawing Q = 0.5 m³/s gives
 // V(0.1, 0.2, 0.3, 0.5 m) = 2.50, 1.00, 0.50, 0.192 m/s on its centre line.

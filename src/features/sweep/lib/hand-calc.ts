@@ -1,6 +1,6 @@
-import { captureVelocityRange, HOOD_FIT_COEFFICIENT as C, hoodCenterlineVelocity, hoodRequiredAirflow, type HoodGeometry, OPENING_DISTANCE_FACTOR, type ReleaseCondition } from '../../../../shared/physics/index.ts';
-import type { Hood } from '../../../../shared/schemas/scenario.ts';
-import type { SweepParameter } from './sweep-points.ts';
+import { captureVelocityRange, HOOD_FIT_COEFFICIENT as C, hoodCenterlineVelocity, hoodRequiredAirflow, type HoodGeometry, OPENING_DISTANCE_FACTOR, type ReleaseCondition } from '../../../../shared/physics/index';
+import type { Hood } from '../../../../shared/schemas/scenario';
+import type { SweepParameter } from './sweep-points';
 
 export type HandCalc =
   | { kind: 'airflow'; captureVelocity_mPerS: number; airflow_m3PerS: number; distance_m: number }

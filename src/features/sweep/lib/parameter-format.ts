@@ -1,10 +1,10 @@
-import { countText } from '../../../../shared/format/index.ts';
-import type { Hood } from '../../../../shared/schemas/scenario.ts';
-import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour } from '../../../../shared/units.ts';
-import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { sig } from '../../../lib/format.ts';
-import type { Preferred } from './target-crossing.ts';
-import type { SweepParameter } from './sweep-points.ts';
+import { countText } from '../../../../shared/format/index';
+import type { Hood } from '../../../../shared/schemas/scenario';
+import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour } from '../../../../shared/units';
+import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index';
+import { sig } from '@/lib/format';
+import type { Preferred } from './target-crossing';
+import type { SweepParameter } from './sweep-points';
 
 /** The form's unit for each parameter; SI stays inside, the conversion happens here only. */
 export const PARAMETER: Record<SweepParameter, { label: string; unit: string; axis: string; preferred: Preferred; toSi: (v: number) => number; fromSi: (v: number) => number }> = {

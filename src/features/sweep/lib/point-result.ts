@@ -1,6 +1,6 @@
-import type { Banner } from '../../../../shared/physics/index.ts';
-import type { Fraction } from '../../../../shared/vocabulary/fractions.ts';
-import type { RunResult } from '../../../../shared/schemas/run-result.ts';
+import type { Banner } from '../../../../shared/physics/index';
+import type { Fraction } from '../../../../shared/vocabulary/fractions';
+import type { RunResult } from '../../../../shared/schemas/run-result';
 
 /** What the sweep keeps of one run: the limit fraction's 8-h TWA with its interval and the verdict. */
 export interface PointResult {

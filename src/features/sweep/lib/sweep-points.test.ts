@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { buildSweepPoints, distanceRange_m, sourceDistance_m, sweepValues } from './sweep-points.ts';
-import { stoneBench } from './test-scenario.test-helper.ts';
+import { buildSweepPoints, distanceRange_m, sourceDistance_m, sweepValues } from './sweep-points';
+import { stoneBench } from './test-scenario.test-helper';
 
 const scenario = stoneBench();
 const inside = (v: number, size: number) => v >= 0 && v <= size;

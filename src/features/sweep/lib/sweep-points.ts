@@ -1,4 +1,4 @@
-import type { Hood, Scenario } from '../../../../shared/schemas/scenario.ts';
+import type { Hood, Scenario } from '../../../../shared/schemas/scenario';
 import { hoodAxis } from '../../../../shared/schemas/hood-axis';
 
 export type SweepParameter = 'distance' | 'airflow' | 'faceScale';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { handCalcAnswer } from './hand-calc.ts';
-import { crossingSentence, disagreementSentence, handCalcSentence } from './sweep-summary.ts';
-import { stoneBench } from './test-scenario.test-helper.ts';
+import { handCalcAnswer } from './hand-calc';
+import { crossingSentence, disagreementSentence, handCalcSentence } from './sweep-summary';
+import { stoneBench } from './test-scenario.test-helper';
 
 const hood = stoneBench().hoods[0];
 

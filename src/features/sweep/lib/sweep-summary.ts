@@ -1,10 +1,10 @@
-import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index.ts';
-import { RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index.ts';
-import { sig } from '../../../lib/format.ts';
-import type { HandCalc } from './hand-calc.ts';
-import { formatValue } from './parameter-format.ts';
-import type { SweepParameter } from './sweep-points.ts';
-import type { Crossing } from './target-crossing.ts';
+import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index';
+import { RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index';
+import { sig } from '@/lib/format';
+import type { HandCalc } from './hand-calc';
+import { formatValue } from './parameter-format';
+import type { SweepParameter } from './sweep-points';
+import type { Crossing } from './target-crossing';
 
 const QUANTITY: Record<SweepParameter, string> = { distance: 'distance', airflow: 'airflow', faceScale: 'face size' };
 // Differences smaller than this are within what a swept grid and an interpolation can resolve.

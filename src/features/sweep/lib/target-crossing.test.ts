@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { targetCrossing } from './target-crossing.ts';
+import { targetCrossing } from './target-crossing';
 
 const airflow = [
   { value: 0.2, upperPercent: 140 },

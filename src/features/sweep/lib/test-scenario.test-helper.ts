@@ -1,4 +1,4 @@
-import { parseScenario } from '../../../../shared/schemas/scenario.ts';
+import { parseScenario } from '../../../../shared/schemas/scenario';
 
 // The stone-bench demo with its flanged hood 0.3 m from the source, facing −y.
 export const stoneBench = () =>
