@@ -7,7 +7,10 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
 const noMathRandom = {
-  'no-restricted-properties': ['error', { object: 'Math', property: 'random', message: 'Randomness is a parameter: pass a seeded generator.' }],
+  'no-restricted-properties': [
+    'error',
+    { object: 'Math', property: 'random', message: 'Randomness is a parameter: pass a seeded generator.' },
+  ],
 };
 
 // Route modules compose features; a feature that imported another would hide a dependency the routes should own.
@@ -28,24 +31,62 @@ export default tseslint.config(
   {
     plugins: { import: importPlugin },
     settings: {
-      'import/resolver': { typescript: { noWarnOnMultipleProjects: true, project: ['./src/tsconfig.json', './shared/tsconfig.json', './workers/tsconfig.json', './server/tsconfig.json', './tests/tsconfig.json'] }, node: true },
+      'import/resolver': {
+        typescript: {
+          noWarnOnMultipleProjects: true,
+          project: [
+            './src/tsconfig.json',
+            './shared/tsconfig.json',
+            './workers/tsconfig.json',
+            './server/tsconfig.json',
+            './tests/tsconfig.json',
+          ],
+        },
+        node: true,
+      },
       'import/internal-regex': '^@/',
     },
     languageOptions: { globals: { ...globals.es2022 } },
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       'import/no-cycle': ['error', { ignoreExternal: true }],
-      'import/no-extraneous-dependencies': ['error', { devDependencies: ['**/*.test.ts', '**/*.test.tsx', '**/*.test-helper.ts', 'tests/**', 'vite.config.ts', 'eslint.config.js', 'workers/node/bench.ts', 'workers/node/memory-figure.ts'] }],
+      'import/no-extraneous-dependencies': [
+        'error',
+        {
+          devDependencies: [
+            '**/*.test.ts',
+            '**/*.test.tsx',
+            '**/*.test-helper.ts',
+            'tests/**',
+            'vite.config.ts',
+            'eslint.config.js',
+            'workers/node/bench.ts',
+            'workers/node/memory-figure.ts',
+          ],
+        },
+      ],
       'import/extensions': ['error', 'never', { json: 'always', css: 'always' }],
       'import/no-restricted-paths': [
         'error',
         {
           zones: [
-            { target: './shared', from: ['./src', './server', './workers', './tests'], message: 'shared/ is pure and imports nothing above it.' },
+            {
+              target: './shared',
+              from: ['./src', './server', './workers', './tests'],
+              message: 'shared/ is pure and imports nothing above it.',
+            },
             { target: './workers', from: ['./src', './server'], message: 'workers/ may import shared/ only.' },
-            { target: './server', from: ['./src', './workers/simulation.worker.ts'], message: 'server/ may import shared/ (and the pure engine) only.' },
+            {
+              target: './server',
+              from: ['./src', './workers/simulation.worker.ts'],
+              message: 'server/ may import shared/ (and the pure engine) only.',
+            },
             { target: './src', from: ['./server'], message: 'The client talks to the server over HTTP only.' },
-            { target: ['./src/components', './src/lib', './src/hooks', './src/config'], from: ['./src/features', './src/app'], message: 'Shared client code never imports a feature or a route.' },
+            {
+              target: ['./src/components', './src/lib', './src/hooks', './src/config'],
+              from: ['./src/features', './src/app'],
+              message: 'Shared client code never imports a feature or a route.',
+            },
             { target: './src/features', from: './src/app', message: 'Features are composed by routes, never the other way round.' },
             ...featureZones,
           ],
@@ -64,7 +105,13 @@ export default tseslint.config(
     files: ['src/**/*.tsx'],
     ...jsxA11y.flatConfigs.recommended,
     // A scrolling region must take focus so keyboard users can scroll it (WCAG 2.1.1).
-    rules: { ...jsxA11y.flatConfigs.recommended.rules, 'jsx-a11y/no-noninteractive-tabindex': ['error', { roles: ['tabpanel', 'region'] }] },
+    rules: {
+      ...jsxA11y.flatConfigs.recommended.rules,
+      'jsx-a11y/no-noninteractive-tabindex': ['error', { roles: ['tabpanel', 'region'] }],
+    },
   },
-  { files: ['server/**/*.ts', 'tests/**/*.ts', 'workers/node/**/*.ts', '*.config.*', 'migrations/**/*.ts'], languageOptions: { globals: globals.node } },
+  {
+    files: ['server/**/*.ts', 'tests/**/*.ts', 'workers/node/**/*.ts', '*.config.*', 'migrations/**/*.ts'],
+    languageOptions: { globals: globals.node },
+  },
 );

@@ -22,18 +22,35 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
-          include: ['shared/**/*.test.ts', 'workers/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/helpers/**/*.test.ts'],
+          include: [
+            'shared/**/*.test.ts',
+            'workers/**/*.test.ts',
+            'server/**/*.test.ts',
+            'src/**/*.test.{ts,tsx}',
+            'tests/helpers/**/*.test.ts',
+          ],
           exclude: ['**/*.property.test.ts', '**/*.component.test.tsx', '**/node_modules/**'],
           environment: 'node',
         },
       },
       {
         extends: true,
-        test: { name: 'component', include: ['src/**/*.component.test.tsx'], environment: 'jsdom', setupFiles: ['tests/helpers/component-setup.ts'] },
+        test: {
+          name: 'component',
+          include: ['src/**/*.component.test.tsx'],
+          environment: 'jsdom',
+          setupFiles: ['tests/helpers/component-setup.ts'],
+        },
       },
       {
         extends: true,
-        test: { name: 'property', include: ['**/*.property.test.ts'], exclude: ['**/node_modules/**'], environment: 'node', testTimeout: 60_000 },
+        test: {
+          name: 'property',
+          include: ['**/*.property.test.ts'],
+          exclude: ['**/node_modules/**'],
+          environment: 'node',
+          testTimeout: 60_000,
+        },
       },
       {
         extends: true,

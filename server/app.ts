@@ -39,7 +39,9 @@ export function createApp(opts: AppOptions): Express {
   app.disable('x-powered-by');
   // In production TLS ends at a proxy; trusting its X-Forwarded-Proto lets Secure cookies be set.
   if (opts.production) app.set('trust proxy', 1);
-  app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'worker-src': ["'self'", 'blob:'] } } }));
+  app.use(
+    helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'worker-src': ["'self'", 'blob:'] } } }),
+  );
   const json = express.json({ limit: '1mb' });
   // Saved runs carry large result arrays; their route parses its own body with a larger limit.
   app.use((req, res, next) => (RUN_UPLOAD.test(req.path) ? next() : json(req, res, next)));

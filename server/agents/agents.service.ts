@@ -29,7 +29,13 @@ export const agentsService = {
     return withTransaction(db, async (trx) => {
       await agents.update(trx, id, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
-      await writeAudit(trx, { actor, action: overridden ? 'agent.limit_overridden' : 'agent.changed', targetType: 'agent', targetId: id, detail: overridden ? { override: input.data.override } : undefined });
+      await writeAudit(trx, {
+        actor,
+        action: overridden ? 'agent.limit_overridden' : 'agent.changed',
+        targetType: 'agent',
+        targetId: id,
+        detail: overridden ? { override: input.data.override } : undefined,
+      });
       return (await agents.get(trx, id))!;
     });
   },

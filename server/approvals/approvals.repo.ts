@@ -25,7 +25,16 @@ export async function currentApproval(db: Conn, workstationId: number): Promise<
     .where('ap.workstation_id', workstationId)
     .whereNull('ap.superseded_at')
     .orderBy('ap.id', 'desc')
-    .select('ap.*', 's.name as scenario_name', 's.input_hash as scenario_hash', 's.deleted_at as scenario_deleted', 'r.input_hash as run_hash', 'r.banner', 'r.percent_of_limit', 'p.name as approver')
+    .select(
+      'ap.*',
+      's.name as scenario_name',
+      's.input_hash as scenario_hash',
+      's.deleted_at as scenario_deleted',
+      'r.input_hash as run_hash',
+      'r.banner',
+      'r.percent_of_limit',
+      'p.name as approver',
+    )
     .first();
   if (!a) return null;
   const expired = a.review_date < today();
@@ -47,13 +56,29 @@ export async function currentApproval(db: Conn, workstationId: number): Promise<
   };
 }
 
-export type NewApproval = { workstationId: number; scenarioId: number; runId: number; note: string; reviewDate: string; approvedBy: number; approvedAt: string };
+export type NewApproval = {
+  workstationId: number;
+  scenarioId: number;
+  runId: number;
+  note: string;
+  reviewDate: string;
+  approvedBy: number;
+  approvedAt: string;
+};
 
 // The workstation's earlier approval stays on record, marked superseded at the new one's time.
 export async function replaceApproval(db: Conn, a: NewApproval): Promise<number> {
   await db('approvals').where({ workstation_id: a.workstationId }).whereNull('superseded_at').update({ superseded_at: a.approvedAt });
   const [row] = await db('approvals')
-    .insert({ workstation_id: a.workstationId, scenario_id: a.scenarioId, run_id: a.runId, note: a.note, review_date: a.reviewDate, approved_by: a.approvedBy, approved_at: a.approvedAt })
+    .insert({
+      workstation_id: a.workstationId,
+      scenario_id: a.scenarioId,
+      run_id: a.runId,
+      note: a.note,
+      review_date: a.reviewDate,
+      approved_by: a.approvedBy,
+      approved_at: a.approvedAt,
+    })
     .returning('id');
   return typeof row === 'object' ? row.id : row;
 }

@@ -10,21 +10,46 @@ import { currentApproval, replaceApproval } from './approvals.repo';
 
 type Actor = { id: number; email: string };
 
-
 export async function approveScenario(db: Db, actor: Actor, scenarioId: number, input: ApproveInput): Promise<Approval | null> {
   const workstationId = await withTransaction(db, async (trx) => {
     const scenario = await findScenario(trx, scenarioId);
     if (!scenario) throw notFound('Scenario');
     const run = await findRunOfScenario(trx, input.runId, scenarioId);
-    if (!run) throw new AppError(400, 'invalid_input', 'Choose a saved run of this scenario', [{ path: 'body.runId', message: `Run ${input.runId} is not a saved run of this scenario` }]);
-    if (run.inputHash !== scenario.inputHash) throw new AppError(409, 'run_out_of_date', 'The scenario changed after this run. Run it again and save the run before approving.');
-    if (run.banner === 'act') throw new AppError(409, 'above_limit', 'This run is above the limit (Act). An option that fails its limit cannot be approved as the current control.');
+    if (!run)
+      throw new AppError(400, 'invalid_input', 'Choose a saved run of this scenario', [
+        { path: 'body.runId', message: `Run ${input.runId} is not a saved run of this scenario` },
+      ]);
+    if (run.inputHash !== scenario.inputHash)
+      throw new AppError(409, 'run_out_of_date', 'The scenario changed after this run. Run it again and save the run before approving.');
+    if (run.banner === 'act')
+      throw new AppError(
+        409,
+        'above_limit',
+        'This run is above the limit (Act). An option that fails its limit cannot be approved as the current control.',
+      );
     const reviewDate = input.reviewDate ?? reviewDueDate(run.banner, new Date());
-    if (reviewDate <= new Date().toISOString().slice(0, 10)) throw new AppError(400, 'invalid_input', 'The review date must be in the future', [{ path: 'body.reviewDate', message: 'Pick a later date' }]);
+    if (reviewDate <= new Date().toISOString().slice(0, 10))
+      throw new AppError(400, 'invalid_input', 'The review date must be in the future', [
+        { path: 'body.reviewDate', message: 'Pick a later date' },
+      ]);
     const now = new Date().toISOString();
     await markApproved(trx, scenarioId, scenario.workstationId);
-    const approvalId = await replaceApproval(trx, { workstationId: scenario.workstationId, scenarioId, runId: run.id, note: input.note, reviewDate, approvedBy: actor.id, approvedAt: now });
-    await writeAudit(trx, { actor, action: 'scenario.approved', targetType: 'scenario', targetId: scenarioId, detail: { approvalId, runId: run.id, reviewDate, note: input.note, workstationId: scenario.workstationId } });
+    const approvalId = await replaceApproval(trx, {
+      workstationId: scenario.workstationId,
+      scenarioId,
+      runId: run.id,
+      note: input.note,
+      reviewDate,
+      approvedBy: actor.id,
+      approvedAt: now,
+    });
+    await writeAudit(trx, {
+      actor,
+      action: 'scenario.approved',
+      targetType: 'scenario',
+      targetId: scenarioId,
+      detail: { approvalId, runId: run.id, reviewDate, note: input.note, workstationId: scenario.workstationId },
+    });
     return scenario.workstationId;
   });
   return currentApproval(db, workstationId);

@@ -10,8 +10,18 @@ import { decisionsController } from './decisions.controller';
 export function decisionsRoutes(db: Db, mailer: Mailer, publicUrl?: string): Router {
   const c = decisionsController(db, mailer, publicUrl);
   const r = Router();
-  r.post('/scenarios/:id/approve', requirePermission('scenarios:approve'), validate({ params: idParamSchema, body: approveSchema }), c.approve);
+  r.post(
+    '/scenarios/:id/approve',
+    requirePermission('scenarios:approve'),
+    validate({ params: idParamSchema, body: approveSchema }),
+    c.approve,
+  );
   r.post('/scenarios/:id/share', requirePermission('reports:share'), validate({ params: idParamSchema, body: shareSchema }), c.share);
-  r.put('/workstations/:id/operators', requirePermission('boards:assign'), validate({ params: idParamSchema, body: assignOperatorsSchema }), c.assignOperators);
+  r.put(
+    '/workstations/:id/operators',
+    requirePermission('boards:assign'),
+    validate({ params: idParamSchema, body: assignOperatorsSchema }),
+    c.assignOperators,
+  );
   return r;
 }

@@ -45,11 +45,19 @@ export async function listAudit(db: Conn, q: AuditQuery): Promise<Page<AuditView
       b.where((w) =>
         w
           .where({ target_type: 'workstation', target_id: String(id) })
-          .orWhere((s) => s.where('target_type', 'scenario').whereIn('target_id', db('scenarios').where('workstation_id', id).select(db.raw('cast(id as text)')))),
+          .orWhere((s) =>
+            s
+              .where('target_type', 'scenario')
+              .whereIn('target_id', db('scenarios').where('workstation_id', id).select(db.raw('cast(id as text)'))),
+          ),
       );
     }
   });
   const [{ count }] = await base.clone().count<{ count: number }[]>({ count: '*' });
-  const rows = await base.clone().orderBy('id', 'desc').limit(q.pageSize).offset((q.page - 1) * q.pageSize);
+  const rows = await base
+    .clone()
+    .orderBy('id', 'desc')
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
   return { items: rows.map(toView), total: Number(count), page: q.page, pageSize: q.pageSize };
 }

@@ -12,7 +12,13 @@ export function configurePassport(db: Db): passport.Authenticator {
         const found = await findCredentials(db, email);
         const ok = await verifyPassword(password, found?.passwordHash ?? DUMMY_HASH);
         if (!found || !ok || found.person.status !== 'active') return done(null, false);
-        return done(null, { id: found.person.id, email: found.person.email, name: found.person.name, role: found.person.role, status: found.person.status });
+        return done(null, {
+          id: found.person.id,
+          email: found.person.email,
+          name: found.person.name,
+          role: found.person.role,
+          status: found.person.status,
+        });
       } catch (err) {
         return done(err);
       }

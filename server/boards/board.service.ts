@@ -12,13 +12,18 @@ function boardBanner(a: Awaited<ReturnType<typeof currentApproval>>): Banner {
   return a.banner;
 }
 
-function hoodDistance_m(input: { source: { x_m: number; y_m: number; z_m: number }; hoods: { x_m: number; y_m: number; z_m: number }[] }): number | null {
+function hoodDistance_m(input: {
+  source: { x_m: number; y_m: number; z_m: number };
+  hoods: { x_m: number; y_m: number; z_m: number }[];
+}): number | null {
   const d = input.hoods.map((h) => Math.hypot(h.x_m - input.source.x_m, h.y_m - input.source.y_m, h.z_m - input.source.z_m));
   return d.length ? Math.min(...d) : null;
 }
 
 function advice(banner: Banner, distance_cm: number | null, reason: string | null): string[] {
-  const distance = distance_cm ? `Keep the work within ${distance_cm} cm of the hood face (the marked zone).` : 'Keep the work where the assessment assumed it.';
+  const distance = distance_cm
+    ? `Keep the work within ${distance_cm} cm of the hood face (the marked zone).`
+    : 'Keep the work where the assessment assumed it.';
   if (banner === 'act') {
     return [
       reason ?? 'The dust controls here are not confirmed to work.',
@@ -27,8 +32,17 @@ function advice(banner: Banner, distance_cm: number | null, reason: string | nul
       'Report it to your supervisor now.',
     ];
   }
-  const base = ['Switch the hood on before you start, and leave it on until the dust has cleared.', distance, 'If the airflow indicator shows low or no flow, stop and report it.'];
-  return banner === 'watch' ? [...base, 'Exposure here is close to the limit: follow these rules exactly and report any change in the job, the material or the layout.'] : base;
+  const base = [
+    'Switch the hood on before you start, and leave it on until the dust has cleared.',
+    distance,
+    'If the airflow indicator shows low or no flow, stop and report it.',
+  ];
+  return banner === 'watch'
+    ? [
+        ...base,
+        'Exposure here is close to the limit: follow these rules exactly and report any change in the job, the material or the layout.',
+      ]
+    : base;
 }
 
 export async function stationBoard(db: Db, workstationId: number): Promise<StationBoard> {
@@ -40,9 +54,13 @@ export async function stationBoard(db: Db, workstationId: number): Promise<Stati
   if (approval) {
     const s = await findScenario(db, approval.scenarioId, { includeDeleted: true });
     const d = s ? hoodDistance_m(s.input) : null;
-    distance_cm = d === null ? null : Math.round(d * 100 / 5) * 5;
+    distance_cm = d === null ? null : Math.round((d * 100) / 5) * 5;
   }
-  const reason = !approval ? 'There is no approved assessment for this station.' : approval.expired ? `The assessment was due for review on ${approval.reviewDate}.` : null;
+  const reason = !approval
+    ? 'There is no approved assessment for this station.'
+    : approval.expired
+      ? `The assessment was due for review on ${approval.reviewDate}.`
+      : null;
   return {
     workstationId,
     workstationName: ws.name,

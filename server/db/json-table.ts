@@ -9,8 +9,12 @@ export type JsonRow<T, K extends string = never> = JsonRecord<T> & Record<K, num
 // Rooms, workstations and dust agents keep their fields as one validated JSON column.
 export function jsonTable<T, K extends string = never>(table: JsonTableName, parents: Record<K, string> = {} as Record<K, string>) {
   const map = (r: AnyJsonRow): JsonRow<T, K> => {
-    const out = { id: r.id, name: r.name, data: JSON.parse(r.data) as T, createdAt: r.created_at, updatedAt: r.updated_at } as JsonRow<T, K>;
-    for (const [key, column] of Object.entries(parents) as [K, string][]) (out as Record<K, number>)[key] = (r as unknown as Record<string, number>)[column];
+    const out = { id: r.id, name: r.name, data: JSON.parse(r.data) as T, createdAt: r.created_at, updatedAt: r.updated_at } as JsonRow<
+      T,
+      K
+    >;
+    for (const [key, column] of Object.entries(parents) as [K, string][])
+      (out as Record<K, number>)[key] = (r as unknown as Record<string, number>)[column];
     return out;
   };
   return {
@@ -26,8 +30,11 @@ export function jsonTable<T, K extends string = never>(table: JsonTableName, par
       const now = new Date().toISOString();
       const { name, data, createdBy, ...rest } = values;
       const cols: Record<string, unknown> = { name, data: JSON.stringify(data), created_by: createdBy, created_at: now, updated_at: now };
-      for (const [key, column] of Object.entries(parents) as [K, string][]) if (key in rest) cols[column] = (rest as unknown as Record<K, number>)[key];
-      const [row] = await db(table).insert(cols as never).returning('id');
+      for (const [key, column] of Object.entries(parents) as [K, string][])
+        if (key in rest) cols[column] = (rest as unknown as Record<K, number>)[key];
+      const [row] = await db(table)
+        .insert(cols as never)
+        .returning('id');
       return (typeof row === 'object' ? row.id : row) as number;
     },
     async update(db: Conn, id: number, patch: { name?: string; data?: T }): Promise<void> {

@@ -11,7 +11,9 @@ try {
     console.log(`Rolled back every migration in ${env.DATABASE_FILE}`);
   } else {
     const [, applied] = await db.migrate.latest({ migrationSource });
-    console.log(applied.length ? `Applied ${applied.length} migration(s) to ${env.DATABASE_FILE}` : `Database ${env.DATABASE_FILE} is up to date`);
+    console.log(
+      applied.length ? `Applied ${applied.length} migration(s) to ${env.DATABASE_FILE}` : `Database ${env.DATABASE_FILE} is up to date`,
+    );
   }
 } finally {
   await db.destroy();

@@ -12,7 +12,10 @@ export const DEMO_PEOPLE: { email: string; name: string; role: Role; password: s
   { email: 'operator@motewalk.local', name: 'Ravi Lindqvist', role: 'operator', password: 'demo-operator-pass' },
 ];
 
-export async function seedDemo(db: Db, opts: { workspace?: boolean; particles?: number; log?: (s: string) => void } = {}): Promise<boolean> {
+export async function seedDemo(
+  db: Db,
+  opts: { workspace?: boolean; particles?: number; log?: (s: string) => void } = {},
+): Promise<boolean> {
   if ((await countPeople(db)) > 0) return false;
   const hashes = await Promise.all(DEMO_PEOPLE.map((p) => hashPassword(p.password)));
   await withTransaction(db, async (trx) => {

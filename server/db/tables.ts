@@ -16,7 +16,15 @@ export type PersonRow = {
   last_sign_in_at: string | null;
 };
 
-export type PasswordTokenRow = { id: number; person_id: number; token_hash: string; purpose: string; expires_at: string; used_at: string | null; created_at: string };
+export type PasswordTokenRow = {
+  id: number;
+  person_id: number;
+  token_hash: string;
+  purpose: string;
+  expires_at: string;
+  used_at: string | null;
+  created_at: string;
+};
 
 export type AuditLogRow = {
   id: number;
@@ -29,7 +37,14 @@ export type AuditLogRow = {
   created_at: string;
 };
 
-export type OutboxRow = { id: number; to_address: string; subject: string; text_body: string; html_body: string | null; created_at: string };
+export type OutboxRow = {
+  id: number;
+  to_address: string;
+  subject: string;
+  text_body: string;
+  html_body: string | null;
+  created_at: string;
+};
 
 export type SiteRow = { id: number; name: string; data: string } & Stamps;
 export type RoomRow = { id: number; site_id: number; name: string; data: string } & Stamps;
@@ -125,7 +140,10 @@ declare module 'knex/types/tables' {
     dust_agents: Table<DustAgentRow, 'deleted_at' | 'created_by'>;
     workstation_operators: WorkstationOperatorRow;
     size_profiles: Table<SizeProfileRow, 'deleted_at'>;
-    scenarios: Table<ScenarioRow, 'control_description' | 'control_tier' | 'status' | 'version' | 'deleted_at' | 'agent_id' | 'size_profile_id'>;
+    scenarios: Table<
+      ScenarioRow,
+      'control_description' | 'control_tier' | 'status' | 'version' | 'deleted_at' | 'agent_id' | 'size_profile_id'
+    >;
     runs: Table<RunRow, 'deleted_at'>;
     approvals: Table<ApprovalRow, 'note' | 'superseded_at'>;
   }

@@ -3,7 +3,14 @@ import type { Conn } from '../db/knex';
 import type { OutboxRow } from '../db/tables';
 import type { Mail } from './mailer';
 
-const toMessage = (m: OutboxRow): OutboxMessage => ({ id: m.id, to: m.to_address, subject: m.subject, text: m.text_body, html: m.html_body, createdAt: m.created_at });
+const toMessage = (m: OutboxRow): OutboxMessage => ({
+  id: m.id,
+  to: m.to_address,
+  subject: m.subject,
+  text: m.text_body,
+  html: m.html_body,
+  createdAt: m.created_at,
+});
 
 export async function insertOutboxMail(db: Conn, mail: Mail): Promise<void> {
   await db('outbox').insert({
@@ -17,6 +24,9 @@ export async function insertOutboxMail(db: Conn, mail: Mail): Promise<void> {
 
 export async function listOutbox(db: Conn, q: { page: number; pageSize: number }): Promise<Page<OutboxMessage>> {
   const [{ count }] = await db('outbox').count<{ count: number }[]>({ count: '*' });
-  const rows = await db('outbox').orderBy('id', 'desc').limit(q.pageSize).offset((q.page - 1) * q.pageSize);
+  const rows = await db('outbox')
+    .orderBy('id', 'desc')
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
   return { items: rows.map(toMessage), total: Number(count), page: q.page, pageSize: q.pageSize };
 }

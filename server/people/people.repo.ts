@@ -48,7 +48,15 @@ export async function insertPerson(
 ): Promise<number> {
   const now = new Date().toISOString();
   const [row] = await db('people')
-    .insert({ email: p.email, name: p.name, role: p.role, status: p.status, password_hash: p.passwordHash ?? null, created_at: now, updated_at: now })
+    .insert({
+      email: p.email,
+      name: p.name,
+      role: p.role,
+      status: p.status,
+      password_hash: p.passwordHash ?? null,
+      created_at: now,
+      updated_at: now,
+    })
     .returning('id');
   return typeof row === 'object' ? row.id : row;
 }

@@ -15,14 +15,27 @@ export const listPeoplePage = (db: Db, q: PeopleQuery): Promise<Page<Person>> =>
 
 export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: InviteInput, baseUrl: string): Promise<Person> {
   const taken = await findByEmail(db, input.email);
-  if (taken) throw new AppError(409, 'email_taken', `Someone with the e-mail ${input.email} already has an account`, [{ path: 'body.email', message: 'Already in use' }]);
+  if (taken)
+    throw new AppError(409, 'email_taken', `Someone with the e-mail ${input.email} already has an account`, [
+      { path: 'body.email', message: 'Already in use' },
+    ]);
   const { id, token } = await withTransaction(db, async (trx) => {
     const newId = await insertPerson(trx, { ...input, status: 'invited' });
     const t = await issueToken(trx, newId, 'invite');
-    await writeAudit(trx, { actor, action: 'person.invited', targetType: 'person', targetId: newId, detail: { email: input.email, role: input.role } });
+    await writeAudit(trx, {
+      actor,
+      action: 'person.invited',
+      targetType: 'person',
+      targetId: newId,
+      detail: { email: input.email, role: input.role },
+    });
     return { id: newId, token: t };
   });
-  await sendOrExplain(mailer, passwordLinkMail('invite', input.email, input.name, `${baseUrl}/set-password?token=${token}`), 'The account was created but the invitation e-mail could not be sent. Use "Resend invitation" once mail works.');
+  await sendOrExplain(
+    mailer,
+    passwordLinkMail('invite', input.email, input.name, `${baseUrl}/set-password?token=${token}`),
+    'The account was created but the invitation e-mail could not be sent. Use "Resend invitation" once mail works.',
+  );
   return (await findPerson(db, id))!;
 }
 
@@ -33,12 +46,27 @@ export async function changePerson(db: Db, actor: Actor, id: number, patch: Upda
     throw new AppError(400, 'self_lockout', 'You cannot remove your own admin access', [{ path: 'body', message: 'Ask another admin' }]);
   }
   if (patch.status === 'active' && person.status === 'invited') {
-    throw new AppError(400, 'invalid_input', 'An invited person becomes active by setting a password', [{ path: 'body.status', message: 'Send a new link instead' }]);
+    throw new AppError(400, 'invalid_input', 'An invited person becomes active by setting a password', [
+      { path: 'body.status', message: 'Send a new link instead' },
+    ]);
   }
   await withTransaction(db, async (trx) => {
     await updatePerson(trx, id, patch);
-    if (patch.role && patch.role !== person.role) await writeAudit(trx, { actor, action: 'person.role_changed', targetType: 'person', targetId: id, detail: { from: person.role, to: patch.role } });
-    if (patch.status && patch.status !== person.status) await writeAudit(trx, { actor, action: patch.status === 'deactivated' ? 'person.deactivated' : 'person.reactivated', targetType: 'person', targetId: id });
+    if (patch.role && patch.role !== person.role)
+      await writeAudit(trx, {
+        actor,
+        action: 'person.role_changed',
+        targetType: 'person',
+        targetId: id,
+        detail: { from: person.role, to: patch.role },
+      });
+    if (patch.status && patch.status !== person.status)
+      await writeAudit(trx, {
+        actor,
+        action: patch.status === 'deactivated' ? 'person.deactivated' : 'person.reactivated',
+        targetType: 'person',
+        targetId: id,
+      });
   });
   return (await findPerson(db, id))!;
 }
@@ -53,7 +81,11 @@ export async function sendResetLink(db: Db, mailer: Mailer, actor: Actor, id: nu
     await writeAudit(trx, { actor, action: 'person.password_link_sent', targetType: 'person', targetId: id });
     return t;
   });
-  await sendOrExplain(mailer, passwordLinkMail(purpose, person.email, person.name, `${baseUrl}/set-password?token=${token}`), 'The link could not be e-mailed. Try again once mail works.');
+  await sendOrExplain(
+    mailer,
+    passwordLinkMail(purpose, person.email, person.name, `${baseUrl}/set-password?token=${token}`),
+    'The link could not be e-mailed. Try again once mail works.',
+  );
 }
 
 // Mail goes out after the database commit, so a mail failure must say what did and did not happen.
@@ -70,12 +102,21 @@ export async function setPasswordWithToken(db: Db, token: string, password: stri
   const passwordHash = await hashPassword(password);
   return withTransaction(db, async (trx) => {
     const found = await findUsableToken(trx, token);
-    if (!found) throw new AppError(400, 'invalid_token', 'This link has expired or was already used. Ask an admin for a new one.', [{ path: 'body.token', message: 'Expired or used' }]);
+    if (!found)
+      throw new AppError(400, 'invalid_token', 'This link has expired or was already used. Ask an admin for a new one.', [
+        { path: 'body.token', message: 'Expired or used' },
+      ]);
     const person = await findPerson(trx, found.personId);
-    if (!person || person.status === 'deactivated') throw new AppError(400, 'invalid_token', 'This account is not active', [{ path: 'body.token', message: 'Account not active' }]);
+    if (!person || person.status === 'deactivated')
+      throw new AppError(400, 'invalid_token', 'This account is not active', [{ path: 'body.token', message: 'Account not active' }]);
     await updatePerson(trx, person.id, { passwordHash, status: 'active' });
     await markTokenUsed(trx, found.id);
-    await writeAudit(trx, { actor: { id: person.id, email: person.email }, action: 'person.password_set', targetType: 'person', targetId: person.id });
+    await writeAudit(trx, {
+      actor: { id: person.id, email: person.email },
+      action: 'person.password_set',
+      targetType: 'person',
+      targetId: person.id,
+    });
     return person.email;
   });
 }

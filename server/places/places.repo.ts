@@ -44,8 +44,6 @@ export async function placesTree(db: Conn): Promise<SiteTree[]> {
   const [s, r, w] = await Promise.all([sites.list(db), rooms.list(db), workstations.list(db)]);
   return s.map((site) => ({
     ...site,
-    rooms: r
-      .filter((room) => room.siteId === site.id)
-      .map((room) => ({ ...room, workstations: w.filter((ws) => ws.roomId === room.id) })),
+    rooms: r.filter((room) => room.siteId === site.id).map((room) => ({ ...room, workstations: w.filter((ws) => ws.roomId === room.id) })),
   }));
 }

@@ -14,6 +14,11 @@ export function placesRoutes(db: Db): Router {
   r.post('/rooms', requirePermission('scenarios:write'), validate({ body: roomInputSchema }), c.createRoom);
   r.get('/workstations/:id', requirePermission('scenarios:read'), validate({ params: idParamSchema }), c.getWorkstation);
   r.post('/workstations', requirePermission('scenarios:write'), validate({ body: workstationInputSchema }), c.createWorkstation);
-  r.put('/workstations/:id', requirePermission('scenarios:write'), validate({ params: idParamSchema, body: workstationInputSchema.omit({ roomId: true }) }), c.updateWorkstation);
+  r.put(
+    '/workstations/:id',
+    requirePermission('scenarios:write'),
+    validate({ params: idParamSchema, body: workstationInputSchema.omit({ roomId: true }) }),
+    c.updateWorkstation,
+  );
   return r;
 }

@@ -12,10 +12,16 @@ async function insideRoom(db: Db, roomId: number, data: WorkstationInput['data']
   const room = await rooms.get(db, roomId);
   if (!room) throw new AppError(400, 'invalid_input', 'That room does not exist', [{ path: 'body.roomId', message: `No room ${roomId}` }]);
   const issues = [];
-  for (const [part, point] of [['source', data.source], ['worker', data.worker]] as const) {
-    if (point.x_m > room.data.length_m) issues.push({ path: `body.data.${part}.x_m`, message: `Must be within the room length (${room.data.length_m} m), got ${point.x_m}` });
-    if (point.y_m > room.data.width_m) issues.push({ path: `body.data.${part}.y_m`, message: `Must be within the room width (${room.data.width_m} m), got ${point.y_m}` });
-    if (point.z_m > room.data.height_m) issues.push({ path: `body.data.${part}.z_m`, message: `Must be below the ceiling (${room.data.height_m} m), got ${point.z_m}` });
+  for (const [part, point] of [
+    ['source', data.source],
+    ['worker', data.worker],
+  ] as const) {
+    if (point.x_m > room.data.length_m)
+      issues.push({ path: `body.data.${part}.x_m`, message: `Must be within the room length (${room.data.length_m} m), got ${point.x_m}` });
+    if (point.y_m > room.data.width_m)
+      issues.push({ path: `body.data.${part}.y_m`, message: `Must be within the room width (${room.data.width_m} m), got ${point.y_m}` });
+    if (point.z_m > room.data.height_m)
+      issues.push({ path: `body.data.${part}.z_m`, message: `Must be below the ceiling (${room.data.height_m} m), got ${point.z_m}` });
   }
   if (issues.length) throw new AppError(400, 'invalid_input', 'The workstation does not fit in its room', issues);
 }
@@ -38,7 +44,8 @@ export const placesService = {
     });
   },
   async createRoom(db: Db, actor: Actor, input: RoomInput): Promise<RoomRecord> {
-    if (!(await sites.get(db, input.siteId))) throw new AppError(400, 'invalid_input', 'That site does not exist', [{ path: 'body.siteId', message: `No site ${input.siteId}` }]);
+    if (!(await sites.get(db, input.siteId)))
+      throw new AppError(400, 'invalid_input', 'That site does not exist', [{ path: 'body.siteId', message: `No site ${input.siteId}` }]);
     return withTransaction(db, async (trx) => {
       const id = await rooms.insert(trx, { ...input, createdBy: actor.id });
       await writeAudit(trx, { actor, action: 'room.created', targetType: 'room', targetId: id, detail: { name: input.name } });
@@ -49,7 +56,13 @@ export const placesService = {
     await insideRoom(db, input.roomId, input.data);
     return withTransaction(db, async (trx) => {
       const id = await workstations.insert(trx, { ...input, createdBy: actor.id });
-      await writeAudit(trx, { actor, action: 'workstation.created', targetType: 'workstation', targetId: id, detail: { name: input.name } });
+      await writeAudit(trx, {
+        actor,
+        action: 'workstation.created',
+        targetType: 'workstation',
+        targetId: id,
+        detail: { name: input.name },
+      });
       return (await workstations.get(trx, id))!;
     });
   },

@@ -22,7 +22,16 @@ export type NewRun = {
   createdBy: number;
 };
 
-export type StoredRun = { id: number; scenarioId: number; seed: string; engineVersion: string; inputHash: string; particles: number; banner: Banner | null; createdAt: string };
+export type StoredRun = {
+  id: number;
+  scenarioId: number;
+  seed: string;
+  engineVersion: string;
+  inputHash: string;
+  particles: number;
+  banner: Banner | null;
+  createdAt: string;
+};
 export type StoredRunWithData = StoredRun & { input: Scenario; result: unknown };
 
 const toStored = (r: RunRow): StoredRun => ({
@@ -68,7 +77,12 @@ export async function findRun(db: Conn, id: number): Promise<StoredRunWithData |
 }
 
 // Sharing names any run the scenario ever had; approving needs one that is still live.
-export async function findRunOfScenario(db: Conn, id: number, scenarioId: number, opts: { includeDeleted?: boolean } = {}): Promise<StoredRun | undefined> {
+export async function findRunOfScenario(
+  db: Conn,
+  id: number,
+  scenarioId: number,
+  opts: { includeDeleted?: boolean } = {},
+): Promise<StoredRun | undefined> {
   const row = await db('runs')
     .where({ id, scenario_id: scenarioId })
     .modify((b) => {
@@ -85,6 +99,22 @@ export async function listRuns(db: Conn, scenarioId: number): Promise<RunListRow
     .where({ scenario_id: scenarioId })
     .whereNull('deleted_at')
     .orderBy('id', 'desc')
-    .select('id', 'seed', 'engine_version', 'input_hash', 'particles', 'limit_fraction', 'twa8h_mgPerM3', 'twa8h_lo_mgPerM3', 'twa8h_hi_mgPerM3', 'respirable_twa8h_mgPerM3', 'percent_of_limit', 'rating_category', 'banner', 'created_by', 'created_at');
+    .select(
+      'id',
+      'seed',
+      'engine_version',
+      'input_hash',
+      'particles',
+      'limit_fraction',
+      'twa8h_mgPerM3',
+      'twa8h_lo_mgPerM3',
+      'twa8h_hi_mgPerM3',
+      'respirable_twa8h_mgPerM3',
+      'percent_of_limit',
+      'rating_category',
+      'banner',
+      'created_by',
+      'created_at',
+    );
   return rows.map((r) => ({ ...r, banner: r.banner as Banner | null }));
 }

@@ -29,10 +29,35 @@ function baseQuery(db: Conn) {
 }
 
 const COLUMNS = [
-  's.id', 's.name', 's.workstation_id', 's.agent_id', 's.size_profile_id', 's.control_description', 's.control_tier', 's.status', 's.version',
-  's.input_hash', 's.created_at', 's.updated_at', 'w.name as workstation_name', 'r.id as room_id', 'r.name as room_name', 'si.id as site_id',
-  'si.name as site_name', 'a.name as agent_name', 'lr.id as run_id', 'lr.input_hash as run_input_hash', 'lr.respirable_twa8h_mgPerM3',
-  'lr.twa8h_mgPerM3', 'lr.twa8h_lo_mgPerM3', 'lr.twa8h_hi_mgPerM3', 'lr.limit_fraction', 'lr.percent_of_limit', 'lr.rating_category', 'lr.banner', 'lr.created_at as run_created_at',
+  's.id',
+  's.name',
+  's.workstation_id',
+  's.agent_id',
+  's.size_profile_id',
+  's.control_description',
+  's.control_tier',
+  's.status',
+  's.version',
+  's.input_hash',
+  's.created_at',
+  's.updated_at',
+  'w.name as workstation_name',
+  'r.id as room_id',
+  'r.name as room_name',
+  'si.id as site_id',
+  'si.name as site_name',
+  'a.name as agent_name',
+  'lr.id as run_id',
+  'lr.input_hash as run_input_hash',
+  'lr.respirable_twa8h_mgPerM3',
+  'lr.twa8h_mgPerM3',
+  'lr.twa8h_lo_mgPerM3',
+  'lr.twa8h_hi_mgPerM3',
+  'lr.limit_fraction',
+  'lr.percent_of_limit',
+  'lr.rating_category',
+  'lr.banner',
+  'lr.created_at as run_created_at',
 ];
 
 type JoinedRow = ScenarioRow & {
@@ -45,7 +70,17 @@ type JoinedRow = ScenarioRow & {
   run_id: number | null;
   run_input_hash: string | null;
   run_created_at: string | null;
-} & Pick<RunRow, 'respirable_twa8h_mgPerM3' | 'twa8h_mgPerM3' | 'twa8h_lo_mgPerM3' | 'twa8h_hi_mgPerM3' | 'limit_fraction' | 'percent_of_limit' | 'rating_category' | 'banner'>;
+} & Pick<
+    RunRow,
+    | 'respirable_twa8h_mgPerM3'
+    | 'twa8h_mgPerM3'
+    | 'twa8h_lo_mgPerM3'
+    | 'twa8h_hi_mgPerM3'
+    | 'limit_fraction'
+    | 'percent_of_limit'
+    | 'rating_category'
+    | 'banner'
+  >;
 
 function toSummary(r: JoinedRow): ScenarioSummary {
   return {
@@ -102,8 +137,14 @@ export async function listScenarios(db: Conn, q: ScenarioListQuery): Promise<Pag
   return { items: (rows as JoinedRow[]).map(toSummary), total: Number(count), page: q.page, pageSize: q.pageSize };
 }
 
-export async function findScenarioSummary(db: Conn, id: number): Promise<{ summary: ScenarioSummary; input: Scenario; inputHash: string } | undefined> {
-  const row = (await baseQuery(db).where('s.id', id).select([...COLUMNS, 's.input']).first()) as JoinedRow | undefined;
+export async function findScenarioSummary(
+  db: Conn,
+  id: number,
+): Promise<{ summary: ScenarioSummary; input: Scenario; inputHash: string } | undefined> {
+  const row = (await baseQuery(db)
+    .where('s.id', id)
+    .select([...COLUMNS, 's.input'])
+    .first()) as JoinedRow | undefined;
   return row ? { summary: toSummary(row), input: JSON.parse(row.input), inputHash: row.input_hash } : undefined;
 }
 
@@ -172,7 +213,12 @@ export async function insertScenario(db: Conn, values: ScenarioFields, actorId: 
   return typeof row === 'object' ? row.id : row;
 }
 
-export async function updateScenario(db: Conn, id: number, patch: Partial<ScenarioFields> & { version: number }, actorId: number): Promise<void> {
+export async function updateScenario(
+  db: Conn,
+  id: number,
+  patch: Partial<ScenarioFields> & { version: number },
+  actorId: number,
+): Promise<void> {
   const cols: Partial<ScenarioRow> = { version: patch.version, updated_by: actorId, updated_at: new Date().toISOString() };
   if (patch.name !== undefined) cols.name = patch.name;
   if (patch.workstationId !== undefined) cols.workstation_id = patch.workstationId;

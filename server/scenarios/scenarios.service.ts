@@ -14,14 +14,25 @@ import { findRun, insertRun, listRuns } from './runs.repo';
 type Actor = { id: number; email: string };
 
 async function checkRefs(db: Db, v: { workstationId?: number; agentId?: number | null }) {
-  if (v.workstationId && !(await workstations.get(db, v.workstationId))) throw new AppError(400, 'invalid_input', 'That workstation does not exist', [{ path: 'body.workstationId', message: `No workstation ${v.workstationId}` }]);
-  if (v.agentId && !(await agents.get(db, v.agentId))) throw new AppError(400, 'invalid_input', 'That dust agent does not exist', [{ path: 'body.agentId', message: `No dust agent ${v.agentId}` }]);
+  if (v.workstationId && !(await workstations.get(db, v.workstationId)))
+    throw new AppError(400, 'invalid_input', 'That workstation does not exist', [
+      { path: 'body.workstationId', message: `No workstation ${v.workstationId}` },
+    ]);
+  if (v.agentId && !(await agents.get(db, v.agentId)))
+    throw new AppError(400, 'invalid_input', 'That dust agent does not exist', [
+      { path: 'body.agentId', message: `No dust agent ${v.agentId}` },
+    ]);
 }
 
 // An approved option needs review once its approval expired or its scenario changed after the approved run.
 export async function listScenariosForReview(db: Db, q: ScenarioListQuery): Promise<Page<ScenarioSummary>> {
   const page = await listScenarios(db, q);
-  const items = await Promise.all(page.items.map(async (s) => ({ ...s, needsReview: s.status === 'approved' ? ((await currentApproval(db, s.workstationId))?.needsReview ?? true) : false })));
+  const items = await Promise.all(
+    page.items.map(async (s) => ({
+      ...s,
+      needsReview: s.status === 'approved' ? ((await currentApproval(db, s.workstationId))?.needsReview ?? true) : false,
+    })),
+  );
   return { ...page, items };
 }
 
@@ -43,7 +54,13 @@ export const scenariosService = {
     await checkRefs(db, input);
     const id = await withTransaction(db, async (trx) => {
       const newId = await insertScenario(trx, { ...input, inputHash: inputHash(input.input) }, actor.id);
-      await writeAudit(trx, { actor, action: 'scenario.created', targetType: 'scenario', targetId: newId, detail: { name: input.name, workstationId: input.workstationId } });
+      await writeAudit(trx, {
+        actor,
+        action: 'scenario.created',
+        targetType: 'scenario',
+        targetId: newId,
+        detail: { name: input.name, workstationId: input.workstationId },
+      });
       return newId;
     });
     return getScenario(db, id);
@@ -56,13 +73,30 @@ export const scenariosService = {
       const current = await findScenario(trx, id);
       if (!current) throw notFound('Scenario');
       if (current.version !== patch.version) {
-        throw new AppError(409, 'version_conflict', `Someone saved this scenario after you opened it (your version ${patch.version}, current ${current.version}). Review both before saving again.`, undefined, {
-          current: { version: current.version, input: current.input, name: current.name, controlDescription: current.controlDescription },
-        });
+        throw new AppError(
+          409,
+          'version_conflict',
+          `Someone saved this scenario after you opened it (your version ${patch.version}, current ${current.version}). Review both before saving again.`,
+          undefined,
+          {
+            current: { version: current.version, input: current.input, name: current.name, controlDescription: current.controlDescription },
+          },
+        );
       }
       const { version: _edited, ...fields } = patch;
-      await updateScenario(trx, id, { ...fields, version: current.version + 1, inputHash: patch.input === undefined ? undefined : inputHash(patch.input) }, actor.id);
-      await writeAudit(trx, { actor, action: 'scenario.changed', targetType: 'scenario', targetId: id, detail: { version: current.version + 1 } });
+      await updateScenario(
+        trx,
+        id,
+        { ...fields, version: current.version + 1, inputHash: patch.input === undefined ? undefined : inputHash(patch.input) },
+        actor.id,
+      );
+      await writeAudit(trx, {
+        actor,
+        action: 'scenario.changed',
+        targetType: 'scenario',
+        targetId: id,
+        detail: { version: current.version + 1 },
+      });
     });
     return getScenario(db, id);
   },
@@ -84,7 +118,8 @@ export const scenariosService = {
     await withTransaction(db, async (trx) => {
       const current = await findScenario(trx, id);
       if (!current) throw notFound('Scenario');
-      if (current.status === 'approved') throw new AppError(409, 'approved', 'An approved scenario cannot be deleted; approve another option first.');
+      if (current.status === 'approved')
+        throw new AppError(409, 'approved', 'An approved scenario cannot be deleted; approve another option first.');
       await softDeleteScenario(trx, id);
       await writeAudit(trx, { actor, action: 'scenario.deleted', targetType: 'scenario', targetId: id });
     });
@@ -113,7 +148,13 @@ export const scenariosService = {
         result: run.result,
         createdBy: actor.id,
       });
-      await writeAudit(trx, { actor, action: 'run.saved', targetType: 'scenario', targetId: id, detail: { runId: newId, particles: run.result.engine.particles, seed: String(run.result.engine.seed) } });
+      await writeAudit(trx, {
+        actor,
+        action: 'run.saved',
+        targetType: 'scenario',
+        targetId: id,
+        detail: { runId: newId, particles: run.result.engine.particles, seed: String(run.result.engine.seed) },
+      });
       return newId;
     });
     return getRun(db, runId);

@@ -23,7 +23,10 @@ export function readCsvRecords(file: { originalname: string; buffer: Buffer }): 
   if (file.buffer.length === 0) throw refuse('The file is empty');
   const text = decodeText(file.buffer);
   try {
-    const parsed = parse(text, { bom: true, info: true, skip_empty_lines: true, relax_column_count: true, trim: true }) as unknown as { record: string[]; info: { lines: number } }[];
+    const parsed = parse(text, { bom: true, info: true, skip_empty_lines: true, relax_column_count: true, trim: true }) as unknown as {
+      record: string[];
+      info: { lines: number };
+    }[];
     return parsed.map(({ record, info }) => ({ line: info.lines, cells: record }));
   } catch (err) {
     const line = (err as { lines?: number }).lines ?? null;

@@ -5,7 +5,19 @@ import type { SizeProfileRow } from '../db/tables';
 
 type Row = SizeProfileRow & { kind: ProfileKind; created_by_name: string | null };
 
-const SUMMARY_COLUMNS = ['sp.id', 'sp.name', 'sp.kind', 'sp.fitted_mmad_m', 'sp.fitted_gsd', 'sp.respirable_fraction', 'sp.thoracic_fraction', 'sp.inhalable_fraction', 'sp.created_by', 'sp.created_at', 'p.name as created_by_name'];
+const SUMMARY_COLUMNS = [
+  'sp.id',
+  'sp.name',
+  'sp.kind',
+  'sp.fitted_mmad_m',
+  'sp.fitted_gsd',
+  'sp.respirable_fraction',
+  'sp.thoracic_fraction',
+  'sp.inhalable_fraction',
+  'sp.created_by',
+  'sp.created_at',
+  'p.name as created_by_name',
+];
 
 const SORT_COLUMNS: Record<SizeProfileListQuery['sort'], string> = {
   name: 'sp.name',
@@ -43,11 +55,18 @@ export async function listSizeProfiles(db: Db, q: SizeProfileListQuery) {
 }
 
 export async function findSizeProfile(db: Conn, id: number): Promise<SizeProfileDetail | undefined> {
-  const row = await live(db).where('sp.id', id).first<Row | undefined>([...SUMMARY_COLUMNS, 'sp.input', 'sp.bins']);
+  const row = await live(db)
+    .where('sp.id', id)
+    .first<Row | undefined>([...SUMMARY_COLUMNS, 'sp.input', 'sp.bins']);
   if (!row) return undefined;
   const summary = toSummary(row);
   const bins = JSON.parse(row.bins);
-  return { ...summary, input: JSON.parse(row.input), bins, sizeProfile: toScenarioSizeProfile({ kind: row.kind, bins, fittedMmad_m: row.fitted_mmad_m, fittedGsd: row.fitted_gsd }) };
+  return {
+    ...summary,
+    input: JSON.parse(row.input),
+    bins,
+    sizeProfile: toScenarioSizeProfile({ kind: row.kind, bins, fittedMmad_m: row.fitted_mmad_m, fittedGsd: row.fitted_gsd }),
+  };
 }
 
 export async function insertSizeProfile(db: Conn, name: string, data: ProfileData, createdBy: number): Promise<number> {

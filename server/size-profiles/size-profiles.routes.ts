@@ -1,6 +1,11 @@
 import { Router } from 'express';
 import { idParamSchema } from '../../shared/schemas/auth';
-import { createSizeProfileSchema, sizeProfileListQuerySchema, templateParamSchema, uploadFieldsSchema } from '../../shared/schemas/size-profiles';
+import {
+  createSizeProfileSchema,
+  sizeProfileListQuerySchema,
+  templateParamSchema,
+  uploadFieldsSchema,
+} from '../../shared/schemas/size-profiles';
 import type { Db } from '../db/knex';
 import { requirePermission } from '../middleware/require-permission';
 import { validate } from '../middleware/validate';

@@ -1,4 +1,10 @@
-import type { CreateSizeProfileInput, SizeProfileDetail, SizeProfileList, SizeProfileListQuery, UploadFields } from '../../shared/schemas/size-profiles';
+import type {
+  CreateSizeProfileInput,
+  SizeProfileDetail,
+  SizeProfileList,
+  SizeProfileListQuery,
+  UploadFields,
+} from '../../shared/schemas/size-profiles';
 import { buildFromForm, buildFromUpload, type FormInput, type ProfileData } from '../../shared/size-profiles/index';
 import { writeAudit } from '../audit/audit.repo';
 import { withTransaction, type Db } from '../db/knex';
@@ -20,7 +26,13 @@ export async function getSizeProfile(db: Db, id: number): Promise<SizeProfileDet
 async function store(db: Db, actor: Actor, name: string, data: ProfileData, detail: Record<string, unknown>): Promise<SizeProfileDetail> {
   const id = await withTransaction(db, async (trx) => {
     const newId = await insertSizeProfile(trx, name, data, actor.id);
-    await writeAudit(trx, { actor, action: 'size_profile.created', targetType: 'size_profile', targetId: newId, detail: { name, kind: data.kind, ...detail } });
+    await writeAudit(trx, {
+      actor,
+      action: 'size_profile.created',
+      targetType: 'size_profile',
+      targetId: newId,
+      detail: { name, kind: data.kind, ...detail },
+    });
     return newId;
   });
   return (await findSizeProfile(db, id))!;
@@ -32,7 +44,12 @@ export async function createSizeProfile(db: Db, actor: Actor, input: CreateSizeP
 }
 
 // Nothing is written unless every row passes; one 422 carries every problem found.
-export async function uploadSizeProfile(db: Db, actor: Actor, fields: UploadFields, file: UploadedFile | undefined): Promise<SizeProfileDetail> {
+export async function uploadSizeProfile(
+  db: Db,
+  actor: Actor,
+  fields: UploadFields,
+  file: UploadedFile | undefined,
+): Promise<SizeProfileDetail> {
   if (!file) throw new AppError(400, 'invalid_input', 'Choose a CSV file to upload', [{ path: 'file', message: 'No file was sent' }]);
   const records = readCsvRecords(file);
   const built = buildFromUpload(fields.format, records, { fileName: file.originalname, density_kgPerM3: fields.density_kgPerM3 });
@@ -48,6 +65,12 @@ export async function deleteSizeProfile(db: Db, actor: Actor, id: number) {
   await withTransaction(db, async (trx) => {
     const found = await findSizeProfile(trx, id);
     if (!found || !(await softDeleteSizeProfile(trx, id))) throw notFound('Size profile');
-    await writeAudit(trx, { actor, action: 'size_profile.deleted', targetType: 'size_profile', targetId: id, detail: { name: found.name } });
+    await writeAudit(trx, {
+      actor,
+      action: 'size_profile.deleted',
+      targetType: 'size_profile',
+      targetId: id,
+      detail: { name: found.name },
+    });
   });
 }

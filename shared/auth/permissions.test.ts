@@ -9,7 +9,8 @@ describe('role permissions', () => {
   it('lets viewers read and share but never write, approve or manage people', () => {
     expect(can('viewer', 'scenarios:read')).toBe(true);
     expect(can('viewer', 'reports:share')).toBe(true);
-    for (const p of ['scenarios:write', 'runs:write', 'scenarios:approve', 'people:manage', 'outbox:read'] as const) expect(can('viewer', p)).toBe(false);
+    for (const p of ['scenarios:write', 'runs:write', 'scenarios:approve', 'people:manage', 'outbox:read'] as const)
+      expect(can('viewer', p)).toBe(false);
   });
 
   it('gives engineers everything a viewer has, plus writing and approving', () => {

@@ -10,7 +10,10 @@ const AMBIGUOUS_COMMA = /^[-+]?[1-9]\d{0,2},\d{3}$/;
  * Accepts "0,5", "0.5", "1 000,5", "−2", "2.5e-6"; refuses "1,2,3", "1.000,5", "1,250" (ambiguous), "0x10", "Infinity".
  */
 export function parseDecimal(text: string): number | null {
-  const trimmed = text.trim().replace(/\u2212/g, '-').replace(GROUP_SPACE, '');
+  const trimmed = text
+    .trim()
+    .replace(/\u2212/g, '-')
+    .replace(GROUP_SPACE, '');
   if (trimmed === '' || AMBIGUOUS_COMMA.test(trimmed)) return null;
   const commas = trimmed.split(',').length - 1;
   if (commas > 1 || (commas === 1 && trimmed.includes('.'))) return null;

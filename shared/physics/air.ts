@@ -31,10 +31,7 @@ export function scaleMeanFreePath(
 ): number {
   const viscosityRatio = sutherlandViscosity(temperature_K) / sutherlandViscosity(reference.temperature_K);
   return (
-    referenceMeanFreePath_m *
-    viscosityRatio *
-    (reference.pressure_Pa / pressure_Pa) *
-    Math.sqrt(temperature_K / reference.temperature_K)
+    referenceMeanFreePath_m * viscosityRatio * (reference.pressure_Pa / pressure_Pa) * Math.sqrt(temperature_K / reference.temperature_K)
   );
 }
 

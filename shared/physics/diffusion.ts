@@ -6,10 +6,7 @@ import { requireNonNegative, requirePositive } from './validate';
 // Stokes–Einstein with slip, D = k·T·Cc/(3π·μ·d) (Hinds Eq. 7.7).
 export function diffusionCoefficient(diameter_m: number, air: AirProperties = STANDARD_AIR): number {
   requirePositive('diameter_m', diameter_m);
-  return (
-    (BOLTZMANN_J_PER_K * air.temperature_K * slipCorrection(diameter_m, air)) /
-    (3 * Math.PI * air.viscosity_PaS * diameter_m)
-  );
+  return (BOLTZMANN_J_PER_K * air.temperature_K * slipCorrection(diameter_m, air)) / (3 * Math.PI * air.viscosity_PaS * diameter_m);
 }
 
 // One-axis rms displacement x_rms = √(2Dt) (Hinds Eq. 7.18).

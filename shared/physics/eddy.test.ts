@@ -12,7 +12,10 @@ function integratePuffs(k: number, r: number, t: number): number {
     const s = i * h;
     const weight = i === 0 || i === steps ? 1 : i % 2 === 1 ? 4 : 2;
     const tau = s * s;
-    const puff = tau === 0 ? 0 : eddyPuff({ mass_mg: source.generation_mgPerS, diffusivity_m2PerS: source.diffusivity_m2PerS, lossRate_perS: k }, r, tau);
+    const puff =
+      tau === 0
+        ? 0
+        : eddyPuff({ mass_mg: source.generation_mgPerS, diffusivity_m2PerS: source.diffusivity_m2PerS, lossRate_perS: k }, r, tau);
     sum += weight * puff * 2 * s;
   }
   return (sum * h) / 3;
@@ -34,7 +37,11 @@ describe('eddyContinuousSource', () => {
   });
 
   it.each([0, 1e-3])('equals the time integral of puffs with loss rate %s per second', (k) => {
-    for (const [r, t] of [[0.5, 60], [2, 600], [1, 5000]]) {
+    for (const [r, t] of [
+      [0.5, 60],
+      [2, 600],
+      [1, 5000],
+    ]) {
       const analytic = eddyContinuousSource({ ...source, lossRate_perS: k }, r, t);
       expect(Math.abs(analytic / integratePuffs(k, r, t) - 1)).toBeLessThan(1e-6);
     }
@@ -86,7 +93,11 @@ describe('eddyDiffusivityFromVentilation', () => {
   });
 
   it('lands in the measured indoor range 0.001–0.013 m²/s for ordinary rooms ([S] Cheng et al. 2011)', () => {
-    for (const [ach, volume] of [[0.5, 30], [2, 100], [1, 300]]) {
+    for (const [ach, volume] of [
+      [0.5, 30],
+      [2, 100],
+      [1, 300],
+    ]) {
       const d = eddyDiffusivityFromVentilation(ach, volume);
       expect(d).toBeGreaterThan(0.001);
       expect(d).toBeLessThan(0.013);

@@ -37,9 +37,12 @@ describe('exposureRatingCategory', () => {
     [0.5, 3],
     [1, 3],
     [1.01, 4],
-  ])('puts a 95th percentile at %s of the limit in category %s ([S] AIHA Strategy 4th ed.; band edges from memory)', (fraction, category) => {
-    expect(exposureRatingCategory(fraction)).toBe(category);
-  });
+  ])(
+    'puts a 95th percentile at %s of the limit in category %s ([S] AIHA Strategy 4th ed.; band edges from memory)',
+    (fraction, category) => {
+      expect(exposureRatingCategory(fraction)).toBe(category);
+    },
+  );
 
   it('rejects NaN, quoting it', () => {
     expect(() => exposureRatingCategory(NaN)).toThrow(/fractionOfLimit.*NaN/);

@@ -20,7 +20,13 @@ export { wellMixedConcentration, settlingLossRate, airChangesPerHour } from './w
 export type { WellMixedRoom } from './well-mixed';
 export { nearFieldFarField } from './near-far-field';
 export type { NearFarFieldModel, NearFarFieldConcentration } from './near-far-field';
-export { eddyContinuousSource, eddyPuff, eddyDiffusivityFromVentilation, roomEddyDiffusivity, MEASURED_ROOM_DIFFUSIVITY_m2PerS } from './eddy';
+export {
+  eddyContinuousSource,
+  eddyPuff,
+  eddyDiffusivityFromVentilation,
+  roomEddyDiffusivity,
+  MEASURED_ROOM_DIFFUSIVITY_m2PerS,
+} from './eddy';
 export type { ContinuousSource, Puff, ReflectingBoundary, RoomDiffusivity } from './eddy';
 export { timeWeightedAverage, exposureRatingCategory, bannerFor } from './exposure';
 export type { ExposureRating, ExposureSegment } from './exposure';

@@ -1,11 +1,4 @@
-import {
-  JET_DECAY_CONSTANT,
-  JET_SPREADING_RATE,
-  LN2,
-  NOZZLE_HALF_WIDTH_PER_DIAMETER,
-  jetCentrelineSpeed,
-  jetHalfWidth,
-} from './round-jet';
+import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, NOZZLE_HALF_WIDTH_PER_DIAMETER, jetCentrelineSpeed, jetHalfWidth } from './round-jet';
 
 // ν_T ≈ 0.028·u_c·r½ across the self-similar round jet (Pope, Turbulent Flows, ch. 5, from memory).
 export const JET_EDDY_VISCOSITY_RATIO = 0.028;
@@ -22,9 +15,15 @@ export function jetEddyDiffusivity(axial_m: number, radial_m: number, speed_mPer
 // Writes the jet's eddy diffusivity into out[0] and its gradient ∇D into out[1..3] (the walk's drift
 // term); the same geometry and fade as jetEddyDiffusivity. Allocation-free, for the step loop.
 export function jetDiffusivityAndGradient(
-  px_m: number, py_m: number, pz_m: number,
-  ox_m: number, oy_m: number, oz_m: number,
-  ex: number, ey: number, ez: number,
+  px_m: number,
+  py_m: number,
+  pz_m: number,
+  ox_m: number,
+  oy_m: number,
+  oz_m: number,
+  ex: number,
+  ey: number,
+  ez: number,
   speed_mPerS: number,
   diameter_m: number,
   out: Float64Array,

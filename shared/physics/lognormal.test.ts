@@ -4,8 +4,7 @@ import { conventionMassFraction, hatchChoate, respirableFraction, thoracicFracti
 // Independent check: trapezoid over d itself (not ln d) of E(d)·(mass lognormal density in d).
 function trapezoidOverDiameter(mmad_m: number, gsd: number, fraction: (d_m: number) => number): number {
   const lnGsd = Math.log(gsd);
-  const density = (d: number) =>
-    Math.exp(-0.5 * (Math.log(d / mmad_m) / lnGsd) ** 2) / (d * lnGsd * Math.sqrt(2 * Math.PI));
+  const density = (d: number) => Math.exp(-0.5 * (Math.log(d / mmad_m) / lnGsd) ** 2) / (d * lnGsd * Math.sqrt(2 * Math.PI));
   const upper_m = Math.min(mmad_m * gsd ** 8, 2e-4);
   const steps = 200000;
   const h = upper_m / steps;

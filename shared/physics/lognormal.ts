@@ -27,11 +27,7 @@ const Z_LIMIT = 9;
 const PANELS = 4096;
 
 // Composite Simpson over z = ln(d/MMAD)/ln σg of E(d)·φ(z); ±9σ leaves under 1e-18 of the mass out.
-export function conventionMassFraction(
-  massMedianAerodynamic_m: number,
-  gsd: number,
-  convention: SamplingConvention,
-): number {
+export function conventionMassFraction(massMedianAerodynamic_m: number, gsd: number, convention: SamplingConvention): number {
   requirePositive('massMedianAerodynamic_m', massMedianAerodynamic_m);
   requireAtLeast('gsd', gsd, 1);
   const fraction = conventionFraction(convention);

@@ -21,7 +21,7 @@ describe('the physics core from 1 nm', () => {
   });
 
   it('scales the aerodynamic diameter with ρ, not √ρ, in the free-molecular limit: d_a → d·ρ_p/ρ₀ ([M] Hinds ch. 3, from memory)', () => {
-    expect(Math.abs(aerodynamicDiameter(1e-9, 2650) / (2.65e-9) - 1)).toBeLessThan(0.01);
+    expect(Math.abs(aerodynamicDiameter(1e-9, 2650) / 2.65e-9 - 1)).toBeLessThan(0.01);
     const at20 = aerodynamicDiameter(20e-9, 2650) / 20e-9;
     expect(at20).toBeGreaterThan(Math.sqrt(2.65));
     expect(at20).toBeLessThan(2.65);

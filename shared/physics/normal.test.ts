@@ -3,8 +3,7 @@ import stdlibNormalCdf from '@stdlib/stats-base-dists-normal-cdf';
 import stdlibErfc from '@stdlib/math-base-special-erfc';
 import { erfc, erfcx, normalCdf, normalQuantile } from './index';
 
-const grid = (from: number, to: number, steps: number) =>
-  Array.from({ length: steps + 1 }, (_, i) => from + ((to - from) * i) / steps);
+const grid = (from: number, to: number, steps: number) => Array.from({ length: steps + 1 }, (_, i) => from + ((to - from) * i) / steps);
 
 describe('erfc', () => {
   it('agrees with @stdlib/math-base-special-erfc to 1e-13 relative from −6 to 26', () => {

@@ -69,7 +69,10 @@ function acklamGuess(p: number): number {
   }
   const q = p - 0.5;
   const r = q * q;
-  return ((((((A[0] * r + A[1]) * r + A[2]) * r + A[3]) * r + A[4]) * r + A[5]) * q) / (((((B[0] * r + B[1]) * r + B[2]) * r + B[3]) * r + B[4]) * r + 1);
+  return (
+    ((((((A[0] * r + A[1]) * r + A[2]) * r + A[3]) * r + A[4]) * r + A[5]) * q) /
+    (((((B[0] * r + B[1]) * r + B[2]) * r + B[3]) * r + B[4]) * r + 1)
+  );
 }
 
 // Inverse standard normal CDF: Acklam's start, two Halley steps on Φ(x) − p (P. J. Acklam's published algorithm).
@@ -79,7 +82,7 @@ export function normalQuantile(p: number): number {
   if (p === 1) return Infinity;
   let x = acklamGuess(p);
   for (let i = 0; i < 2; i++) {
-    const error = p < 0.5 ? normalCdf(x) - p : (1 - p) - 0.5 * erfc(x / Math.SQRT2);
+    const error = p < 0.5 ? normalCdf(x) - p : 1 - p - 0.5 * erfc(x / Math.SQRT2);
     const step = error * Math.sqrt(2 * Math.PI) * Math.exp((x * x) / 2);
     x -= step / (1 + (x * step) / 2);
   }

@@ -1,12 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import {
-  aerodynamicDiameter,
-  physicalDiameter,
-  settlingVelocity,
-  slipCorrection,
-  stokesSettlingVelocity,
-} from './index';
+import { aerodynamicDiameter, physicalDiameter, settlingVelocity, slipCorrection, stokesSettlingVelocity } from './index';
 
 const diameter_m = fc.double({ min: -8, max: Math.log10(300e-6), noNaN: true }).map((e) => 10 ** e);
 const density_kgPerM3 = fc.double({ min: 100, max: 20000, noNaN: true });

@@ -1,10 +1,5 @@
 // Classical fourth-order Runge–Kutta, used by tests as an independent check on closed-form solutions.
-export function integrateRk4(
-  derivative: (state: number[]) => number[],
-  initial: number[],
-  time_s: number,
-  steps: number,
-): number[] {
+export function integrateRk4(derivative: (state: number[]) => number[], initial: number[], time_s: number, steps: number): number[] {
   const h = time_s / steps;
   let y = [...initial];
   const add = (a: number[], b: number[], scale: number) => a.map((value, i) => value + scale * b[i]);

@@ -25,7 +25,7 @@ describe('roomEddyDiffusivity', () => {
     expect(d.basis).toMatch(/inside the 0\.001–0\.013/);
   });
 
-  it('takes an engineer\'s range, and rejects one that runs backwards, quoting it', () => {
+  it("takes an engineer's range, and rejects one that runs backwards, quoting it", () => {
     expect(roomEddyDiffusivity(3, 2e5, [0.005, 0.05]).value_m2PerS).toBe(0.05);
     expect(() => roomEddyDiffusivity(1, 100, [0.02, 0.01])).toThrow(/\[0\.02, 0\.01\]/);
   });

@@ -1,13 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { bisect } from './root';
-import {
-  jetCentrelineSpeed,
-  jetDiffusivityAndGradient,
-  jetEddyDiffusivity,
-  jetHalfWidth,
-  jetVelocity,
-  jetVolumeFlux,
-} from './index';
+import { jetCentrelineSpeed, jetDiffusivityAndGradient, jetEddyDiffusivity, jetHalfWidth, jetVelocity, jetVolumeFlux } from './index';
 
 const out = new Float64Array(3);
 const U0 = 50;
@@ -75,7 +68,11 @@ describe('round free jet', () => {
 
   it('is divergence-free off the axis, in the core and in the far field ([C] continuity by central differences)', () => {
     const h = 1e-6;
-    for (const [x, y, z] of [[3 * D0, 0.005, 0.002], [30 * D0, 0.03, -0.04], [80 * D0, 0.3, 0.2]]) {
+    for (const [x, y, z] of [
+      [3 * D0, 0.005, 0.002],
+      [30 * D0, 0.03, -0.04],
+      [80 * D0, 0.3, 0.2],
+    ]) {
       const terms = [0, 1, 2].map((axis) => {
         const step = [0, 0, 0];
         step[axis] = h;
@@ -122,7 +119,11 @@ describe('round free jet', () => {
       return field[0];
     };
     const h = 1e-6;
-    for (const [x, y, z] of [[0.13, 0.21, 0.34], [0.5, 0.25, 0.85], [1.3, 0.1, 1.9]]) {
+    for (const [x, y, z] of [
+      [0.13, 0.21, 0.34],
+      [0.5, 0.25, 0.85],
+      [1.3, 0.1, 1.9],
+    ]) {
       const numeric = [
         (d(x + h, y, z) - d(x - h, y, z)) / (2 * h),
         (d(x, y + h, z) - d(x, y - h, z)) / (2 * h),

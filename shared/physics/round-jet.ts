@@ -32,9 +32,15 @@ export function jetVolumeFlux(axial_m: number, speed_mPerS: number, diameter_m: 
 // Writes the jet's air velocity (m/s) at point p into out[0..2] for a jet from origin o along the
 // unit vector e; zero behind the nozzle plane. Allocation-free, for the step loop.
 export function jetVelocity(
-  px_m: number, py_m: number, pz_m: number,
-  ox_m: number, oy_m: number, oz_m: number,
-  ex: number, ey: number, ez: number,
+  px_m: number,
+  py_m: number,
+  pz_m: number,
+  ox_m: number,
+  oy_m: number,
+  oz_m: number,
+  ex: number,
+  ey: number,
+  ez: number,
   speed_mPerS: number,
   diameter_m: number,
   out: Float64Array,
@@ -62,7 +68,7 @@ export function jetVelocity(
     uc = (speed_mPerS * core_m) / x;
     halfWidth = JET_SPREADING_RATE * x;
     halfWidthSlope = JET_SPREADING_RATE;
-    fluxSlope = uc * halfWidth * halfWidth / x;
+    fluxSlope = (uc * halfWidth * halfWidth) / x;
   } else {
     const nozzle_m = NOZZLE_HALF_WIDTH_PER_DIAMETER * diameter_m;
     uc = speed_mPerS;

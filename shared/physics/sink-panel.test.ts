@@ -78,7 +78,11 @@ describe('sinkPanelVelocity: a uniformly drawing face carries its airflow', () =
 
   it('meets the face at the face velocity Q/A everywhere on a flanged face (a uniform sheet: normal jump = σ)', () => {
     const face = hoodFace({ kind: 'flanged', faceArea_m2: 0.1 });
-    for (const [x, y] of [[0, 0], [0.1, -0.05], [-0.15, 0.15]]) {
+    for (const [x, y] of [
+      [0, 0],
+      [0.1, -0.05],
+      [-0.15, 0.15],
+    ]) {
       expect(-velocity(face, 0.5, x, y, 1e-9)[2]).toBeCloseTo(0.5 / 0.1, 6);
     }
     expect(Math.abs(velocity(face, 0.5, 0, 0, -0.01)[2])).toBe(0);
@@ -96,7 +100,11 @@ describe('sinkPanelVelocity: a uniformly drawing face carries its airflow', () =
   it('is divergence-free off the face (central differences, [C] Laplace)', () => {
     const face = hoodFace({ kind: 'flanged-slot', faceArea_m2: 0.05, slotLength_m: 1 });
     const h = 1e-4;
-    for (const [x, y, z] of [[0.3, 0.02, 0.05], [0.6, -0.2, 0.3], [-1.3, 0.5, 0.1]]) {
+    for (const [x, y, z] of [
+      [0.3, 0.02, 0.05],
+      [0.6, -0.2, 0.3],
+      [-1.3, 0.5, 0.1],
+    ]) {
       const terms = [0, 1, 2].map((axis) => {
         const step = [0, 0, 0];
         step[axis] = h;

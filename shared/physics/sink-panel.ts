@@ -45,8 +45,7 @@ export function sinkPanelVelocity(
   const p11 = s1 * t1;
   const p12 = s1 * t2;
   const p21 = s2 * t1;
-  const solid =
-    Math.atan2(p22 * q11 + p11 * q22, q22 * q11 - p22 * p11) - Math.atan2(p12 * q21 + p21 * q12, q12 * q21 - p12 * p21);
+  const solid = Math.atan2(p22 * q11 + p11 * q22, q22 * q11 - p22 * p11) - Math.atan2(p12 * q21 + p21 * q12, q12 * q21 - p12 * p21);
   const uz = z_m >= 0 ? solid : -solid;
   out[0] = c * ux;
   out[1] = c * uy;

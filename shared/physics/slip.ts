@@ -29,11 +29,7 @@ export const ALLEN_RAABE_SLIP: SlipCoefficients = {
 };
 
 // Cunningham correction Cc = 1 + Kn·(A + B·exp(−C/Kn)), Kn = 2λ/d (Hinds Eq. 3.20).
-export function slipCorrection(
-  diameter_m: number,
-  air: AirProperties = STANDARD_AIR,
-  coefficients: SlipCoefficients = HINDS_SLIP,
-): number {
+export function slipCorrection(diameter_m: number, air: AirProperties = STANDARD_AIR, coefficients: SlipCoefficients = HINDS_SLIP): number {
   requirePositive('diameter_m', diameter_m);
   const meanFreePath_m = scaleMeanFreePath(
     coefficients.referenceMeanFreePath_m,

@@ -21,7 +21,7 @@ function paperIntegral(schmidt: number, rPlus: number): number {
 }
 
 describe('depositionIntegral', () => {
-  it('gives the paper\'s constant 39 for the buffer region when Brownian diffusion vanishes there ([S] Lai & Nazaroff 2000)', () => {
+  it("gives the paper's constant 39 for the buffer region when Brownian diffusion vanishes there ([S] Lai & Nazaroff 2000)", () => {
     expect(depositionIntegral(1e12, 4.3)).toBeCloseTo(39, 0);
   });
 
@@ -39,7 +39,7 @@ describe('depositionIntegral', () => {
     expect(inner / ((sum * h) / 3)).toBeCloseTo(1, 3);
   });
 
-  it('agrees with the paper\'s closed form within 1 % from 20 nm up, where its 39 is sound ([S] Lai & Nazaroff 2000)', () => {
+  it("agrees with the paper's closed form within 1 % from 20 nm up, where its 39 is sound ([S] Lai & Nazaroff 2000)", () => {
     for (const d_m of [2e-8, 1e-7, 1e-6, 1e-5]) {
       const v = depositionVelocities(d_m, 1000, U_STAR);
       const nu = STANDARD_AIR.viscosity_PaS / STANDARD_AIR.density_kgPerM3;

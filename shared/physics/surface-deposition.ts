@@ -40,8 +40,7 @@ function innerIntegral(schmidt: number, rPlus: number): number {
   if (rPlus >= 4.3) return 0;
   const c = 10.92 * schmidt ** (-1 / 3);
   const part = (y: number) =>
-    0.5 * Math.log((c + y) ** 3 / (1 / schmidt + 7.669e-4 * y ** 3)) +
-    Math.sqrt(3) * Math.atan((2 * y - c) / (Math.sqrt(3) * c));
+    0.5 * Math.log((c + y) ** 3 / (1 / schmidt + 7.669e-4 * y ** 3)) + Math.sqrt(3) * Math.atan((2 * y - c) / (Math.sqrt(3) * c));
   return 3.64 * schmidt ** (2 / 3) * (part(4.3) - part(rPlus));
 }
 

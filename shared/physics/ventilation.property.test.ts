@@ -1,12 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import {
-  eddyContinuousSource,
-  hoodCenterlineVelocity,
-  nearFieldFarField,
-  timeWeightedAverage,
-  wellMixedConcentration,
-} from './index';
+import { eddyContinuousSource, hoodCenterlineVelocity, nearFieldFarField, timeWeightedAverage, wellMixedConcentration } from './index';
 
 const positive = (min: number, max: number) => fc.double({ min, max, noNaN: true });
 const hoodKind = fc.constantFrom('plain', 'flanged', 'slot', 'flanged-slot');
@@ -66,9 +60,15 @@ describe('transient solutions approach their steady states', () => {
   it('the near-field/far-field pair rises to its steady state', () => {
     fc.assert(
       fc.property(positive(0.01, 5), positive(0.01, 5), positive(1, 20), positive(20, 1000), positive(0.1, 10), (g, q, vN, vF, beta) => {
-        const model = { generation_mgPerS: g, airflow_m3PerS: q, nearFieldVolume_m3: vN, farFieldVolume_m3: vF, interzonalAirflow_m3PerS: beta };
+        const model = {
+          generation_mgPerS: g,
+          airflow_m3PerS: q,
+          nearFieldVolume_m3: vN,
+          farFieldVolume_m3: vF,
+          interzonalAirflow_m3PerS: beta,
+        };
         const steady = nearFieldFarField(model, Infinity);
-        const early = nearFieldFarField(model, 0.5 * vF / q);
+        const early = nearFieldFarField(model, (0.5 * vF) / q);
         const late = nearFieldFarField(model, 100 * (vN + vF) * (1 / q + 1 / beta));
         expect(early.near_mgPerM3).toBeLessThan(steady.near_mgPerM3);
         expect(early.far_mgPerM3).toBeLessThan(steady.far_mgPerM3);

@@ -14,7 +14,9 @@ describe('wellMixedConcentration', () => {
   });
 
   it('matches RK4 integration of V·dC/dt = G − (Q + kV)·C at 5, 20 and 60 minutes', () => {
-    const derivative = ([c]: number[]) => [(room.generation_mgPerS - (room.airflow_m3PerS + room.lossRate_perS * room.volume_m3) * c) / room.volume_m3];
+    const derivative = ([c]: number[]) => [
+      (room.generation_mgPerS - (room.airflow_m3PerS + room.lossRate_perS * room.volume_m3) * c) / room.volume_m3,
+    ];
     for (const time_s of [300, 1200, 3600]) {
       const [numeric] = integrateRk4(derivative, [room.initial_mgPerM3], time_s, 2000);
       expect(Math.abs(wellMixedConcentration(room, time_s) / numeric - 1)).toBeLessThan(1e-9);

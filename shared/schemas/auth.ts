@@ -1,7 +1,12 @@
 import { z } from 'zod';
 import { ROLES } from '../auth/permissions';
 
-export const emailSchema = z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'Enter a valid e-mail address' }));
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254)
+  .pipe(z.email({ message: 'Enter a valid e-mail address' }));
 
 export const loginSchema = z.object({
   email: emailSchema,
@@ -9,10 +14,7 @@ export const loginSchema = z.object({
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
-export const passwordSchema = z
-  .string()
-  .min(10, 'Use at least 10 characters')
-  .max(200, 'Use at most 200 characters');
+export const passwordSchema = z.string().min(10, 'Use at least 10 characters').max(200, 'Use at most 200 characters');
 
 export const setPasswordSchema = z.object({
   token: z.string().min(20).max(200),

@@ -1,14 +1,25 @@
 import { z } from 'zod';
 import { airProperties } from '../physics/index';
 import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index';
-import { celsiusToKelvin, cubicMetresPerHourToPerSecond, kilopascalsToPascals, micrometresToMetres, millimetresToMetres, nanometresToMetres } from '../units';
+import {
+  celsiusToKelvin,
+  cubicMetresPerHourToPerSecond,
+  kilopascalsToPascals,
+  micrometresToMetres,
+  millimetresToMetres,
+  nanometresToMetres,
+} from '../units';
 
 // NaN arrives from an empty or half-typed field; z.number() refuses it, and the message says what to do.
 const number = () => z.number({ error: 'Enter a number' });
 
 export const DIAMETER_UNITS = ['nm', 'um', 'mm'] as const;
 export type DiameterUnit = (typeof DIAMETER_UNITS)[number];
-const TO_METRES: Record<DiameterUnit, (value: number) => number> = { nm: nanometresToMetres, um: micrometresToMetres, mm: millimetresToMetres };
+const TO_METRES: Record<DiameterUnit, (value: number) => number> = {
+  nm: nanometresToMetres,
+  um: micrometresToMetres,
+  mm: millimetresToMetres,
+};
 
 // Below 1 nm a "particle" is a molecule cluster; above 1 mm it falls out of the air before anyone breathes it.
 const MIN_DIAMETER_m = 1e-9;
@@ -19,7 +30,9 @@ export const particleCalculatorSchema = z
     diameter: number().gt(0, 'A diameter must be larger than zero'),
     diameterUnit: z.enum(DIAMETER_UNITS),
     density_kgPerM3: number().gt(0, 'Density must be larger than zero').max(23000, 'No solid is denser than about 22 600 kg/m³ (osmium)'),
-    shapeFactor: number().gte(1, 'The shape factor is 1 for a sphere and larger for any other shape').max(10, 'Shape factors above 10 are outside the drag data'),
+    shapeFactor: number()
+      .gte(1, 'The shape factor is 1 for a sphere and larger for any other shape')
+      .max(10, 'Shape factors above 10 are outside the drag data'),
     temperature_C: number().gte(-50, 'Use a temperature from −50 °C').lte(300, 'Use a temperature up to 300 °C'),
     pressure_kPa: number().gte(50, 'Use a pressure from 50 kPa').lte(150, 'Use a pressure up to 150 kPa'),
     window_s: number().gt(0, 'The time window must be longer than zero').lte(86400, 'Use a window of at most one day (86 400 s)'),
@@ -32,7 +45,11 @@ export const particleCalculatorSchema = z
     // A particle lighter than the surrounding air would rise, and the settling formulas would not apply.
     const air = airProperties({ temperature_K: celsiusToKelvin(v.temperature_C), pressure_Pa: kilopascalsToPascals(v.pressure_kPa) });
     if (v.density_kgPerM3 <= air.density_kgPerM3) {
-      ctx.addIssue({ code: 'custom', path: ['density_kgPerM3'], message: `A particle must be denser than the air (${air.density_kgPerM3.toFixed(2)} kg/m³)` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['density_kgPerM3'],
+        message: `A particle must be denser than the air (${air.density_kgPerM3.toFixed(2)} kg/m³)`,
+      });
     }
   })
   .transform((v) => ({
@@ -49,12 +66,14 @@ export type ParticleCalculatorValues = z.output<typeof particleCalculatorSchema>
 export { HOOD_KINDS, RELEASE_TYPES as RELEASE_CONDITIONS };
 export const AIRFLOW_UNITS = ['m3PerH', 'm3PerS'] as const;
 export type AirflowUnit = (typeof AIRFLOW_UNITS)[number];
-export const airflowToPerSecond = (value: number, unit: AirflowUnit): number => (unit === 'm3PerH' ? cubicMetresPerHourToPerSecond(value) : value);
+export const airflowToPerSecond = (value: number, unit: AirflowUnit): number =>
+  unit === 'm3PerH' ? cubicMetresPerHourToPerSecond(value) : value;
 
 // Larger than any single capturing hood or booth fan; beyond it a typo is more likely than a design.
 const MAX_AIRFLOW_m3PerS = 100;
 
-const face = (side: string) => number().gt(0, `The face ${side} must be larger than zero`).lte(20, `A face ${side} above 20 m is not a hood`);
+const face = (side: string) =>
+  number().gt(0, `The face ${side} must be larger than zero`).lte(20, `A face ${side} above 20 m is not a hood`);
 const distance = number().gt(0, 'The distance must be larger than zero').lte(10, 'Use a distance up to 10 m');
 
 const hoodCommon = {
@@ -66,21 +85,23 @@ const hoodCommon = {
 };
 
 // The engineer knows either the fan's airflow or the capture velocity they need; the other one is computed.
-export const hoodCalculatorSchema = z.discriminatedUnion('basis', [
-  z.object({
-    ...hoodCommon,
-    basis: z.literal('airflow'),
-    airflow: number().gt(0, 'The airflow must be larger than zero'),
-    airflowUnit: z.enum(AIRFLOW_UNITS),
-  }),
-  z.object({
-    ...hoodCommon,
-    basis: z.literal('capture'),
-    captureVelocity_mPerS: number().gt(0, 'The capture velocity must be larger than zero').lte(50, 'Use a capture velocity up to 50 m/s'),
-  }),
-]).superRefine((v, ctx) => {
-  if (v.basis === 'airflow' && airflowToPerSecond(v.airflow, v.airflowUnit) > MAX_AIRFLOW_m3PerS) {
-    ctx.addIssue({ code: 'custom', path: ['airflow'], message: 'Use an airflow up to 100 m³/s (360 000 m³/h)' });
-  }
-});
+export const hoodCalculatorSchema = z
+  .discriminatedUnion('basis', [
+    z.object({
+      ...hoodCommon,
+      basis: z.literal('airflow'),
+      airflow: number().gt(0, 'The airflow must be larger than zero'),
+      airflowUnit: z.enum(AIRFLOW_UNITS),
+    }),
+    z.object({
+      ...hoodCommon,
+      basis: z.literal('capture'),
+      captureVelocity_mPerS: number().gt(0, 'The capture velocity must be larger than zero').lte(50, 'Use a capture velocity up to 50 m/s'),
+    }),
+  ])
+  .superRefine((v, ctx) => {
+    if (v.basis === 'airflow' && airflowToPerSecond(v.airflow, v.airflowUnit) > MAX_AIRFLOW_m3PerS) {
+      ctx.addIssue({ code: 'custom', path: ['airflow'], message: 'Use an airflow up to 100 m³/s (360 000 m³/h)' });
+    }
+  });
 export type HoodCalculatorInput = z.infer<typeof hoodCalculatorSchema>;

@@ -5,7 +5,11 @@ import { float32List, int32List, measured, numberList, pair } from './run-result
 const conc = z.number().finite().gte(0);
 const ci = z.tuple([z.number().finite(), z.number().finite()]);
 // Shares are mass ratios summed in floating point: allow the last bit of rounding either side of [0, 1].
-const share = z.number().finite().gte(-1e-9).lte(1 + 1e-9);
+const share = z
+  .number()
+  .finite()
+  .gte(-1e-9)
+  .lte(1 + 1e-9);
 const count = z.number().int().gte(0);
 
 function perFraction<T extends z.ZodType>(schema: T) {
@@ -15,14 +19,26 @@ function perFate<T extends z.ZodType>(schema: T) {
   return Object.fromEntries(FATES.map((f) => [f, schema])) as Record<Fate, T>;
 }
 
-export const fractionSummarySchema = z.object({ taskMean_mgPerM3: conc, taskMeanCi95_mgPerM3: ci, twa8h_mgPerM3: conc, twa8hCi95_mgPerM3: ci, peak15min_mgPerM3: conc });
+export const fractionSummarySchema = z.object({
+  taskMean_mgPerM3: conc,
+  taskMeanCi95_mgPerM3: ci,
+  twa8h_mgPerM3: conc,
+  twa8hCi95_mgPerM3: ci,
+  peak15min_mgPerM3: conc,
+});
 
 export const seriesBandSchema = z.object({ mean: numberList, lo: numberList, hi: numberList });
 
 const gridShape = { nx: count, ny: count, cell_m: pair, origin_m: pair, values: float32List };
 type GridOut = { nx: number; ny: number; values: Float32Array };
 function cellsMatch(grid: GridOut, ctx: z.RefinementCtx) {
-  if (grid.values.length !== grid.nx * grid.ny) ctx.addIssue({ code: 'custom', path: ['values'], message: `must hold nx·ny = ${grid.nx * grid.ny} numbers, got ${grid.values.length}`, input: grid.values });
+  if (grid.values.length !== grid.nx * grid.ny)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['values'],
+      message: `must hold nx·ny = ${grid.nx * grid.ny} numbers, got ${grid.values.length}`,
+      input: grid.values,
+    });
 }
 /** A plan-view map, values [ix][iy] as the engine writes them. */
 export const gridSchema = z.object(gridShape).superRefine(cellsMatch);
@@ -40,7 +56,13 @@ export const trajectoriesSchema = z
   })
   .superRefine((t, ctx) => {
     const expected = t.particles * t.frames * 3;
-    if (t.positions_m.length !== expected) ctx.addIssue({ code: 'custom', path: ['positions_m'], message: `must hold particles·frames·3 = ${expected} numbers, got ${t.positions_m.length}`, input: t.positions_m });
+    if (t.positions_m.length !== expected)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['positions_m'],
+        message: `must hold particles·frames·3 = ${expected} numbers, got ${t.positions_m.length}`,
+        input: t.positions_m,
+      });
   });
 
 export const resultLimitSchema = z.object({
@@ -70,7 +92,13 @@ export const runResultSchema = z.object({
   }),
   fate: z.object({ emitted_mg: conc, ...perFate(share) }),
   limit: resultLimitSchema.optional(),
-  crossChecks: z.object({ fraction: z.enum(FRACTIONS), wellMixed_mgPerM3: measured, nearField_mgPerM3: measured, farField_mgPerM3: measured, eddySteady_mgPerM3: measured }),
+  crossChecks: z.object({
+    fraction: z.enum(FRACTIONS),
+    wellMixed_mgPerM3: measured,
+    nearField_mgPerM3: measured,
+    farField_mgPerM3: measured,
+    eddySteady_mgPerM3: measured,
+  }),
   maps: z.object({ deposition_mgPerM2: gridSchema, captureVelocity_mPerS: captureGridSchema }),
   trajectories: trajectoriesSchema,
   /** Diameter per size bin (index = trajectories.bins value); empty lists when the result predates them. */

@@ -6,7 +6,18 @@ const valid = () => ({
   room: { length_m: 6, width_m: 5, height_m: 3 },
   source: { x_m: 2, y_m: 2, z_m: 0.9, emission: { kind: 'continuous', rate_mgPerMin: 5, taskDuration_min: 30 } },
   dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 8e-6, gsd: 2 } },
-  hoods: [{ kind: 'flanged', x_m: 2, y_m: 2.4, z_m: 0.9, direction: { azimuth_deg: -90 }, faceWidth_m: 0.3, faceHeight_m: 0.2, airflow_m3PerS: 0.2 }],
+  hoods: [
+    {
+      kind: 'flanged',
+      x_m: 2,
+      y_m: 2.4,
+      z_m: 0.9,
+      direction: { azimuth_deg: -90 },
+      faceWidth_m: 0.3,
+      faceHeight_m: 0.2,
+      airflow_m3PerS: 0.2,
+    },
+  ],
   worker: { x_m: 2, y_m: 1.4, z_m: 1.5 },
 });
 
@@ -31,7 +42,9 @@ describe('scenario schema', () => {
   it('refuses a negative size, naming the field and the value', () => {
     const input = valid();
     input.dust.sizeProfile.median_m = -1e-6;
-    expect(issuesOf(input)).toEqual([expect.objectContaining({ path: 'dust.sizeProfile.median_m', message: expect.stringContaining('-0.000001') })]);
+    expect(issuesOf(input)).toEqual([
+      expect.objectContaining({ path: 'dust.sizeProfile.median_m', message: expect.stringContaining('-0.000001') }),
+    ]);
   });
 
   it('refuses a hood outside the room, naming the field and the value', () => {
@@ -41,7 +54,9 @@ describe('scenario schema', () => {
   });
 
   it('refuses zero particles', () => {
-    expect(issuesOf({ ...valid(), run: { particles: 0 } })).toEqual([expect.objectContaining({ path: 'run.particles', message: expect.stringContaining('got 0') })]);
+    expect(issuesOf({ ...valid(), run: { particles: 0 } })).toEqual([
+      expect.objectContaining({ path: 'run.particles', message: expect.stringContaining('got 0') }),
+    ]);
   });
 
   it('refuses NaN and infinities', () => {
@@ -55,7 +70,10 @@ describe('scenario schema', () => {
   });
 
   it('refuses size bins whose counts do not match their edges', () => {
-    const input = { ...valid(), dust: { density_kgPerM3: 1000, sizeProfile: { kind: 'bins', basis: 'mass', edges_m: [1e-6, 2e-6, 1.5e-6], amounts: [1] } } };
+    const input = {
+      ...valid(),
+      dust: { density_kgPerM3: 1000, sizeProfile: { kind: 'bins', basis: 'mass', edges_m: [1e-6, 2e-6, 1.5e-6], amounts: [1] } },
+    };
     expect(issuesOf(input).map((i) => i.path)).toEqual(['dust.sizeProfile.amounts', 'dust.sizeProfile.edges_m.2']);
   });
 

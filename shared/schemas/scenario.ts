@@ -126,7 +126,12 @@ function checkGeometry(s: z.output<typeof baseSchema>, ctx: z.RefinementCtx) {
     for (const axis of Object.keys(bounds) as (keyof typeof bounds)[]) {
       const v = point[axis];
       if (v < 0 || v > bounds[axis]) {
-        ctx.addIssue({ code: 'custom', path: [...path, axis], input: v, message: `${what} must lie inside the room (0 to ${bounds[axis]} m), got ${v}` });
+        ctx.addIssue({
+          code: 'custom',
+          path: [...path, axis],
+          input: v,
+          message: `${what} must lie inside the room (0 to ${bounds[axis]} m), got ${v}`,
+        });
       }
     }
   };
@@ -137,21 +142,41 @@ function checkGeometry(s: z.output<typeof baseSchema>, ctx: z.RefinementCtx) {
     const d = hood.direction;
     const length = 'x' in d ? Math.hypot(d.x, d.y, d.z) : 1;
     if (!(length > 1e-9)) {
-      ctx.addIssue({ code: 'custom', path: ['hoods', i, 'direction'], input: d, message: `direction must be a non-zero vector, got ${JSON.stringify(d)}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['hoods', i, 'direction'],
+        input: d,
+        message: `direction must be a non-zero vector, got ${JSON.stringify(d)}`,
+      });
     }
   });
   const profile = s.dust.sizeProfile;
   if (profile.kind === 'bins') {
     if (profile.amounts.length !== profile.edges_m.length - 1) {
-      ctx.addIssue({ code: 'custom', path: ['dust', 'sizeProfile', 'amounts'], input: profile.amounts.length, message: `amounts needs one value per bin (${profile.edges_m.length - 1}), got ${profile.amounts.length}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['dust', 'sizeProfile', 'amounts'],
+        input: profile.amounts.length,
+        message: `amounts needs one value per bin (${profile.edges_m.length - 1}), got ${profile.amounts.length}`,
+      });
     }
     profile.edges_m.forEach((edge, i) => {
       if (i > 0 && !(edge > profile.edges_m[i - 1])) {
-        ctx.addIssue({ code: 'custom', path: ['dust', 'sizeProfile', 'edges_m', i], input: edge, message: `edges_m must increase, got ${edge} after ${profile.edges_m[i - 1]}` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['dust', 'sizeProfile', 'edges_m', i],
+          input: edge,
+          message: `edges_m must increase, got ${edge} after ${profile.edges_m[i - 1]}`,
+        });
       }
     });
     if (!profile.amounts.some((a) => a > 0)) {
-      ctx.addIssue({ code: 'custom', path: ['dust', 'sizeProfile', 'amounts'], input: profile.amounts, message: 'amounts must hold at least one positive value' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['dust', 'sizeProfile', 'amounts'],
+        input: profile.amounts,
+        message: 'amounts must hold at least one positive value',
+      });
     }
   }
 }

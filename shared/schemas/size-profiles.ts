@@ -6,7 +6,10 @@ import type { ProfileInput, ProfileKind } from '../size-profiles/profile';
 import type { ScenarioSizeProfile } from '../size-profiles/to-scenario';
 
 const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
-const density_kgPerM3 = z.number().min(MIN_DENSITY_kgPerM3, `Density must be at least ${MIN_DENSITY_kgPerM3} kg/m³`).max(MAX_DENSITY_kgPerM3, `Density must be at most ${MAX_DENSITY_kgPerM3} kg/m³`);
+const density_kgPerM3 = z
+  .number()
+  .min(MIN_DENSITY_kgPerM3, `Density must be at least ${MIN_DENSITY_kgPerM3} kg/m³`)
+  .max(MAX_DENSITY_kgPerM3, `Density must be at most ${MAX_DENSITY_kgPerM3} kg/m³`);
 // Below 1.05 the dust is a test aerosol, above 6 it is rarely one population; both are beyond this form.
 const gsd = z.number().min(1.05, 'GSD must be at least 1.05').max(6, 'GSD must be at most 6');
 
@@ -20,12 +23,18 @@ export const lognormalProfileSchema = z
     density_kgPerM3: density_kgPerM3.optional(),
     shapeFactor: z.number().min(1).max(5).optional(),
   })
-  .refine((v) => v.basis === 'mmad' || v.density_kgPerM3 !== undefined, { path: ['density_kgPerM3'], message: 'A CMD needs the particle density to find the MMAD' });
+  .refine((v) => v.basis === 'mmad' || v.density_kgPerM3 !== undefined, {
+    path: ['density_kgPerM3'],
+    message: 'A CMD needs the particle density to find the MMAD',
+  });
 
 export const respirableProfileSchema = z.object({
   kind: z.literal('respirable'),
   name,
-  respirableFraction: z.number().min(0.001, 'The respirable fraction must be at least 0.001').max(0.99, 'The respirable fraction must be at most 0.99'),
+  respirableFraction: z
+    .number()
+    .min(0.001, 'The respirable fraction must be at least 0.001')
+    .max(0.99, 'The respirable fraction must be at most 0.99'),
   gsd: gsd.default(2),
 });
 
@@ -44,8 +53,14 @@ export const uploadFieldsSchema = z
   })
   .superRefine((v, ctx) => {
     if (v.format !== 'counter') return;
-    if (v.density_kgPerM3 === undefined) ctx.addIssue({ code: 'custom', path: ['density_kgPerM3'], message: 'Counter data needs the particle density to turn counts into mass' });
-    if (v.density_confirmed !== 'true') ctx.addIssue({ code: 'custom', path: ['density_confirmed'], message: 'Confirm the density used to turn counts into mass' });
+    if (v.density_kgPerM3 === undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['density_kgPerM3'],
+        message: 'Counter data needs the particle density to turn counts into mass',
+      });
+    if (v.density_confirmed !== 'true')
+      ctx.addIssue({ code: 'custom', path: ['density_confirmed'], message: 'Confirm the density used to turn counts into mass' });
   });
 export type UploadFields = z.output<typeof uploadFieldsSchema>;
 

@@ -105,8 +105,21 @@ export type Page<T> = { items: T[]; total: number; page: number; pageSize: numbe
 
 export type JsonRecord<T> = { id: number; name: string; data: T; createdAt: string; updatedAt: string };
 export type AgentRecord = JsonRecord<AgentData>;
-export type RoomData = { length_m: number; width_m: number; height_m: number; airChanges_perH: number; draftSpeed_mPerS: number; draftDirection_deg: number; temperature_K: number };
-export type WorkstationData = { description: string; source: { x_m: number; y_m: number; z_m: number }; worker: { x_m: number; y_m: number; z_m: number; posture: 'standing' | 'seated' }; releaseType: 'quiet' | 'low' | 'active' | 'high' };
+export type RoomData = {
+  length_m: number;
+  width_m: number;
+  height_m: number;
+  airChanges_perH: number;
+  draftSpeed_mPerS: number;
+  draftDirection_deg: number;
+  temperature_K: number;
+};
+export type WorkstationData = {
+  description: string;
+  source: { x_m: number; y_m: number; z_m: number };
+  worker: { x_m: number; y_m: number; z_m: number; posture: 'standing' | 'seated' };
+  releaseType: 'quiet' | 'low' | 'active' | 'high';
+};
 export type SiteRecord = JsonRecord<{ address: string; notes: string }>;
 export type RoomRecord = JsonRecord<RoomData> & { siteId: number };
 export type WorkstationRecord = JsonRecord<WorkstationData> & { roomId: number };
@@ -114,5 +127,13 @@ export type SiteTree = SiteRecord & { rooms: (RoomRecord & { workstations: Works
 export type WorkstationDetail = WorkstationRecord & { room: RoomRecord; approval: Approval | null; operatorIds: number[] };
 export type OperatorAssignment = { workstationId: number; personIds: number[] };
 
-export type AuditEntry = { id: number; actorEmail: string | null; action: string; targetType: string | null; targetId: string | null; detail: Record<string, unknown> | null; createdAt: string };
+export type AuditEntry = {
+  id: number;
+  actorEmail: string | null;
+  action: string;
+  targetType: string | null;
+  targetId: string | null;
+  detail: Record<string, unknown> | null;
+  createdAt: string;
+};
 export type OutboxMessage = { id: number; to: string; subject: string; text: string; html: string | null; createdAt: string };

@@ -3,10 +3,20 @@ import { CONTROL_TIERS, LIMIT_FRACTIONS, RELEASE_TYPES } from '../vocabulary/ind
 import { scenarioSchema } from './scenario';
 
 const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
-const positive = (what: string) => z.number({ message: `${what} must be a number` }).gt(0, `${what} must be above zero`).finite();
-const nonNegative = (what: string) => z.number({ message: `${what} must be a number` }).gte(0, `${what} cannot be negative`).finite();
+const positive = (what: string) =>
+  z
+    .number({ message: `${what} must be a number` })
+    .gt(0, `${what} must be above zero`)
+    .finite();
+const nonNegative = (what: string) =>
+  z
+    .number({ message: `${what} must be a number` })
+    .gte(0, `${what} cannot be negative`)
+    .finite();
 
-export const siteDataSchema = z.object({ address: z.string().trim().max(300).default(''), notes: z.string().trim().max(1000).default('') }).strict();
+export const siteDataSchema = z
+  .object({ address: z.string().trim().max(300).default(''), notes: z.string().trim().max(1000).default('') })
+  .strict();
 export const siteInputSchema = z.object({ name, data: siteDataSchema.prefault({}) }).strict();
 export type SiteInput = z.infer<typeof siteInputSchema>;
 
@@ -28,7 +38,14 @@ export const workstationDataSchema = z
   .object({
     description: z.string().trim().max(500).default(''),
     source: z.object({ x_m: nonNegative('Source x'), y_m: nonNegative('Source y'), z_m: nonNegative('Source height') }).strict(),
-    worker: z.object({ x_m: nonNegative('Worker x'), y_m: nonNegative('Worker y'), z_m: nonNegative('Breathing-zone height'), posture: z.enum(['standing', 'seated']) }).strict(),
+    worker: z
+      .object({
+        x_m: nonNegative('Worker x'),
+        y_m: nonNegative('Worker y'),
+        z_m: nonNegative('Breathing-zone height'),
+        posture: z.enum(['standing', 'seated']),
+      })
+      .strict(),
     releaseType: z.enum(RELEASE_TYPES),
   })
   .strict();
@@ -46,7 +63,10 @@ export const agentDataSchema = z
     limitSource: z.string().trim().min(1, 'Name the source of the limit').max(300),
     limitDate: z.string().trim().max(40).default(''),
     override: z
-      .object({ limit8h_mgPerM3: positive('Override limit').max(1000), reason: z.string().trim().min(3, 'Give a reason for the override').max(300) })
+      .object({
+        limit8h_mgPerM3: positive('Override limit').max(1000),
+        reason: z.string().trim().min(3, 'Give a reason for the override').max(300),
+      })
       .strict()
       .nullable()
       .default(null),
@@ -73,13 +93,18 @@ export const scenarioMetaSchema = z
 export const scenarioCreateSchema = scenarioMetaSchema.extend({ input: scenarioSchema }).strict();
 export type ScenarioCreate = z.infer<typeof scenarioCreateSchema>;
 
-export const scenarioUpdateSchema = scenarioMetaSchema.partial().extend({ input: scenarioSchema.optional(), version: z.number().int().positive() }).strict();
+export const scenarioUpdateSchema = scenarioMetaSchema
+  .partial()
+  .extend({ input: scenarioSchema.optional(), version: z.number().int().positive() })
+  .strict();
 export type ScenarioUpdate = z.infer<typeof scenarioUpdateSchema>;
 
 export const scenarioListQuerySchema = z.object({
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
-  sort: z.enum(['name', 'workstation', 'site', 'agent', 'status', 'updatedAt', 'respirableTwa', 'percentOfLimit', 'banner']).default('updatedAt'),
+  sort: z
+    .enum(['name', 'workstation', 'site', 'agent', 'status', 'updatedAt', 'respirableTwa', 'percentOfLimit', 'banner'])
+    .default('updatedAt'),
   order: z.enum(['asc', 'desc']).default('desc'),
   siteId: z.coerce.number().int().positive().optional(),
   workstationId: z.coerce.number().int().positive().optional(),
@@ -104,7 +129,12 @@ export const assignOperatorsSchema = z.object({ personIds: z.array(z.number().in
 
 export const shareSchema = z
   .object({
-    email: z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'Enter a valid e-mail address' })),
+    email: z
+      .string()
+      .trim()
+      .toLowerCase()
+      .max(254)
+      .pipe(z.email({ message: 'Enter a valid e-mail address' })),
     runId: z.number().int().positive().optional(),
   })
   .strict();

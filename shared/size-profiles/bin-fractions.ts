@@ -24,11 +24,17 @@ export function binConventionMean(f: (d_m: number) => number, lo_m: number, hi_m
   if (lo_m >= INHALABLE_END_m || hi_m <= INHALABLE_END_m) return meanOverLogRange(f, lo_m, hi_m);
   const below = Math.log(INHALABLE_END_m / lo_m);
   const above = Math.log(hi_m / INHALABLE_END_m);
-  return (below * meanOverLogRange(f, lo_m, INHALABLE_END_m * (1 - 1e-12)) + above * meanOverLogRange(f, INHALABLE_END_m * (1 + 1e-12), hi_m)) / (below + above);
+  return (
+    (below * meanOverLogRange(f, lo_m, INHALABLE_END_m * (1 - 1e-12)) + above * meanOverLogRange(f, INHALABLE_END_m * (1 + 1e-12), hi_m)) /
+    (below + above)
+  );
 }
 
 export function binFractions(bins: MassBins): ConventionFractions {
   const total = (f: (d_m: number) => number) =>
-    Math.min(1, bins.massFraction.reduce((a, m, i) => (m > 0 ? a + m * binConventionMean(f, bins.edges_m[i], bins.edges_m[i + 1]) : a), 0));
+    Math.min(
+      1,
+      bins.massFraction.reduce((a, m, i) => (m > 0 ? a + m * binConventionMean(f, bins.edges_m[i], bins.edges_m[i + 1]) : a), 0),
+    );
   return { respirable: total(respirableFraction), thoracic: total(thoracicFraction), inhalable: total(inhalableFraction) };
 }

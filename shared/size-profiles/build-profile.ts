@@ -33,17 +33,23 @@ function buildChecked(format: UploadFormat, records: CsvRecord[], options: Uploa
   const { fileName } = options;
   if (format === 'impactor') {
     const stages = parseImpactor(records);
-    return stages.ok ? passed(fromBins({ kind: 'impactor', fileName, stages: stages.value }, impactorToBins(stages.value))) : failed(stages.issues);
+    return stages.ok
+      ? passed(fromBins({ kind: 'impactor', fileName, stages: stages.value }, impactorToBins(stages.value)))
+      : failed(stages.issues);
   }
   if (format === 'counter') {
     const ranges = parseCounter(records);
     const density = densityIssue(options.density_kgPerM3);
     if (!ranges.ok || density.length) return failed([...density, ...(ranges.ok ? [] : ranges.issues)]);
     const density_kgPerM3 = options.density_kgPerM3!;
-    return passed(fromBins({ kind: 'counter', fileName, density_kgPerM3, ranges: ranges.value }, counterToBins(ranges.value, density_kgPerM3)));
+    return passed(
+      fromBins({ kind: 'counter', fileName, density_kgPerM3, ranges: ranges.value }, counterToBins(ranges.value, density_kgPerM3)),
+    );
   }
   const ranges = parsePlainBins(records);
-  return ranges.ok ? passed(fromBins({ kind: 'bins', fileName, ranges: ranges.value }, plainBinsToBins(ranges.value))) : failed(ranges.issues);
+  return ranges.ok
+    ? passed(fromBins({ kind: 'bins', fileName, ranges: ranges.value }, plainBinsToBins(ranges.value)))
+    : failed(ranges.issues);
 }
 
 export type FormInput = ({ kind: 'lognormal' } & LognormalInput) | { kind: 'respirable'; respirableFraction: number; gsd?: number };

@@ -18,14 +18,24 @@ export function parseCounter(records: CsvRecord[]): Checked<SizeRange[]> {
   checkRanges(rows, LOWER, UPPER, issues);
   rows.forEach(({ row, values }) => checkAmount(values[COUNT], row, COUNT, issues));
   if (issues.length) return failed(issues);
-  const zero = totalIssue(rows.map((r) => r.values[COUNT]!), COUNT);
+  const zero = totalIssue(
+    rows.map((r) => r.values[COUNT]!),
+    COUNT,
+  );
   return zero.length ? failed(zero) : passed(toRanges(rows, LOWER, UPPER, COUNT));
 }
 
 export function densityIssue(density_kgPerM3: number | undefined): RowIssue[] {
-  if (density_kgPerM3 === undefined) return [{ row: null, column: 'density_kgPerM3', message: 'Counter data needs the particle density to turn counts into mass' }];
+  if (density_kgPerM3 === undefined)
+    return [{ row: null, column: 'density_kgPerM3', message: 'Counter data needs the particle density to turn counts into mass' }];
   if (!(density_kgPerM3 >= MIN_DENSITY_kgPerM3 && density_kgPerM3 <= MAX_DENSITY_kgPerM3)) {
-    return [{ row: null, column: 'density_kgPerM3', message: `Density must lie between ${MIN_DENSITY_kgPerM3} and ${MAX_DENSITY_kgPerM3} kg/m³, got ${density_kgPerM3}` }];
+    return [
+      {
+        row: null,
+        column: 'density_kgPerM3',
+        message: `Density must lie between ${MIN_DENSITY_kgPerM3} and ${MAX_DENSITY_kgPerM3} kg/m³, got ${density_kgPerM3}`,
+      },
+    ];
   }
   return [];
 }

@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { impactorToBins, parseImpactor } from './impactor';
 import { recordsFromRows } from './issues';
 
-const csv = (text: string) => recordsFromRows(text.trim().split('\n').map((l) => l.split(',')));
+const csv = (text: string) =>
+  recordsFromRows(
+    text
+      .trim()
+      .split('\n')
+      .map((l) => l.split(',')),
+  );
 
 describe('impactor stages to mass bins', () => {
   it('puts each stage between its cut-point and the one above, top at 2× and backup down to 0.1× (stated assumption)', () => {
@@ -16,7 +22,10 @@ describe('impactor stages to mass bins', () => {
 
   it('takes 0 as the backup filter cut-point, columns in any order and any case', () => {
     const stages = parseImpactor(csv('MASS_MG,Cut_Point_um\n1,8\n1,0'));
-    expect(stages.ok && stages.value).toEqual([{ cutPoint_m: 8e-6, mass_mg: 1 }, { cutPoint_m: null, mass_mg: 1 }]);
+    expect(stages.ok && stages.value).toEqual([
+      { cutPoint_m: 8e-6, mass_mg: 1 },
+      { cutPoint_m: null, mass_mg: 1 },
+    ]);
   });
 
   it('refuses a last row with a cut-point and a backup filter above the last row, naming row and column', () => {
@@ -39,6 +48,8 @@ describe('impactor stages to mass bins', () => {
 
   it('refuses stages that hold no mass at all', () => {
     const result = parseImpactor(csv('cut_point_um,mass_mg\n5,0\n,0'));
-    expect(!result.ok && result.issues).toEqual([{ row: null, column: 'mass_mg', message: 'Every mass_mg is zero; at least one must be positive' }]);
+    expect(!result.ok && result.issues).toEqual([
+      { row: null, column: 'mass_mg', message: 'Every mass_mg is zero; at least one must be positive' },
+    ]);
   });
 });

@@ -23,16 +23,22 @@ export function parseImpactor(records: CsvRecord[]): Checked<ImpactorStage[]> {
   rows.forEach(({ row, values }, i) => {
     const cut = values[CUT];
     const isBackup = (cut === null && !bad(row)) || cut === 0;
-    if (i === last && !isBackup && !bad(row)) issues.push({ row, column: CUT, message: 'The last row must be the backup filter: leave cut_point_um empty or write 0' });
-    if (i < last && isBackup) issues.push({ row, column: CUT, message: 'Only the last row may be the backup filter; every stage above it needs a cut-point' });
+    if (i === last && !isBackup && !bad(row))
+      issues.push({ row, column: CUT, message: 'The last row must be the backup filter: leave cut_point_um empty or write 0' });
+    if (i < last && isBackup)
+      issues.push({ row, column: CUT, message: 'Only the last row may be the backup filter; every stage above it needs a cut-point' });
     if (i < last && !isBackup && checkSize(cut, row, CUT, issues)) {
-      if (above !== null && !(cut! < above)) issues.push({ row, column: CUT, message: `Cut-points must decrease from the top stage down: ${cut} follows ${above}` });
+      if (above !== null && !(cut! < above))
+        issues.push({ row, column: CUT, message: `Cut-points must decrease from the top stage down: ${cut} follows ${above}` });
       above = cut;
     }
     checkAmount(values[MASS], row, MASS, issues);
   });
   if (issues.length) return failed(issues);
-  const zero = totalIssue(rows.map((r) => r.values[MASS]!), MASS);
+  const zero = totalIssue(
+    rows.map((r) => r.values[MASS]!),
+    MASS,
+  );
   if (zero.length) return failed(zero);
   return passed(rows.map(({ values }, i) => ({ cutPoint_m: i === last ? null : micrometres(values[CUT]!), mass_mg: values[MASS]! })));
 }

@@ -34,7 +34,11 @@ describe('lognormal and respirable-only inputs', () => {
   it('sends uploaded profiles to the engine as aerodynamic mass bins', () => {
     const bins = { edges_m: [1e-6, 2e-6, 4e-6], massFraction: [0.25, 0.75] };
     expect(toScenarioSizeProfile({ kind: 'impactor', bins, fittedMmad_m: 2e-6, fittedGsd: 2 })).toEqual({
-      kind: 'bins', basis: 'mass', diameter: 'aerodynamic', edges_m: bins.edges_m, amounts: bins.massFraction,
+      kind: 'bins',
+      basis: 'mass',
+      diameter: 'aerodynamic',
+      edges_m: bins.edges_m,
+      amounts: bins.massFraction,
     });
   });
 });

@@ -8,7 +8,8 @@ export type MassBins = { edges_m: number[]; massFraction: number[] };
 export function checkSize(value: number | null, row: number, column: string, issues: RowIssue[]): boolean {
   if (value === null) return false;
   if (value <= 0) issues.push({ row, column, message: `Must be a positive size in µm, got ${value}` });
-  else if (value < MIN_SIZE_um || value > MAX_SIZE_um) issues.push({ row, column, message: `Must lie between ${MIN_SIZE_um} and ${MAX_SIZE_um} µm, got ${value}` });
+  else if (value < MIN_SIZE_um || value > MAX_SIZE_um)
+    issues.push({ row, column, message: `Must lie between ${MIN_SIZE_um} and ${MAX_SIZE_um} µm, got ${value}` });
   else return true;
   return false;
 }

@@ -17,12 +17,19 @@ export function parsePlainBins(records: CsvRecord[]): Checked<SizeRange[]> {
   checkRanges(rows, LOWER, UPPER, issues);
   rows.forEach(({ row, values }) => {
     const share = values[FRACTION];
-    if (checkAmount(share, row, FRACTION, issues) && share! > 1) issues.push({ row, column: FRACTION, message: `A share of the mass cannot exceed 1, got ${share}` });
+    if (checkAmount(share, row, FRACTION, issues) && share! > 1)
+      issues.push({ row, column: FRACTION, message: `A share of the mass cannot exceed 1, got ${share}` });
   });
   if (issues.length) return failed(issues);
   const sum = rows.reduce((a, r) => a + r.values[FRACTION]!, 0);
   if (Math.abs(sum - 1) > SUM_TOLERANCE) {
-    return failed([{ row: null, column: FRACTION, message: `The mass fractions add up to ${Number(sum.toPrecision(4))}; they must add up to 1 (within ${SUM_TOLERANCE})` }]);
+    return failed([
+      {
+        row: null,
+        column: FRACTION,
+        message: `The mass fractions add up to ${Number(sum.toPrecision(4))}; they must add up to 1 (within ${SUM_TOLERANCE})`,
+      },
+    ]);
   }
   return passed(toRanges(rows, LOWER, UPPER, FRACTION));
 }

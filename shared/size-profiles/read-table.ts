@@ -16,11 +16,17 @@ function readHeader(header: CsvRecord, columns: readonly string[]): Checked<numb
   const issues: RowIssue[] = [];
   const expected = columns.join(',');
   names.forEach((name, i) => {
-    if (!columns.includes(name)) issues.push({ row: header.line, column: name || `column ${i + 1}`, message: `Unexpected column "${name}"; this format has the columns ${expected}` });
+    if (!columns.includes(name))
+      issues.push({
+        row: header.line,
+        column: name || `column ${i + 1}`,
+        message: `Unexpected column "${name}"; this format has the columns ${expected}`,
+      });
     else if (names.indexOf(name) !== i) issues.push({ row: header.line, column: name, message: `Column ${name} appears twice` });
   });
   for (const column of columns) {
-    if (!names.includes(column)) issues.push({ row: header.line, column, message: `Missing column ${column}; the header must read ${expected}` });
+    if (!names.includes(column))
+      issues.push({ row: header.line, column, message: `Missing column ${column}; the header must read ${expected}` });
   }
   return issues.length ? failed(issues) : passed(columns.map((c) => names.indexOf(c)));
 }
@@ -39,12 +45,23 @@ function readCell(raw: string, row: number, column: string, allowEmpty: boolean,
 // Fails only when the file's shape is wrong (header, row count); bad cells are collected and left null.
 export function readTable(records: CsvRecord[], columns: readonly string[], allowEmpty: readonly string[] = []): Checked<Table> {
   const nonBlank = records.filter((r) => Array.isArray(r.cells) && !isBlank(r.cells));
-  if (nonBlank.length === 0) return failed([{ row: null, column: null, message: `The file is empty; it needs a header row (${columns.join(',')}) and at least ${MIN_DATA_ROWS} data rows` }]);
+  if (nonBlank.length === 0)
+    return failed([
+      {
+        row: null,
+        column: null,
+        message: `The file is empty; it needs a header row (${columns.join(',')}) and at least ${MIN_DATA_ROWS} data rows`,
+      },
+    ]);
   const [header, ...data] = nonBlank;
   const order = readHeader(header, columns);
   if (!order.ok) return failed(order.issues);
-  if (data.length < MIN_DATA_ROWS) return failed([{ row: null, column: null, message: `At least ${MIN_DATA_ROWS} data rows are needed, found ${data.length}` }]);
-  if (data.length > MAX_DATA_ROWS) return failed([{ row: data[MAX_DATA_ROWS].line, column: null, message: `At most ${MAX_DATA_ROWS} data rows are allowed, found ${data.length}` }]);
+  if (data.length < MIN_DATA_ROWS)
+    return failed([{ row: null, column: null, message: `At least ${MIN_DATA_ROWS} data rows are needed, found ${data.length}` }]);
+  if (data.length > MAX_DATA_ROWS)
+    return failed([
+      { row: data[MAX_DATA_ROWS].line, column: null, message: `At most ${MAX_DATA_ROWS} data rows are allowed, found ${data.length}` },
+    ]);
   const issues: RowIssue[] = [];
   const rows = data.map((record) => {
     // Spreadsheets often export trailing empty cells; only real extra values are a problem.

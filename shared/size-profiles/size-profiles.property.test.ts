@@ -57,7 +57,11 @@ describe('size-profile properties', () => {
   });
 
   it('random garbage never throws: it gives a profile or a list of row issues', () => {
-    const cell = fc.oneof(fc.string({ maxLength: 8 }), fc.double().map(String), fc.constantFrom('', '0', '-1', 'NaN', '1e400', 'cut_point_um', 'mass_mg', 'lower_um', 'upper_um', 'count'));
+    const cell = fc.oneof(
+      fc.string({ maxLength: 8 }),
+      fc.double().map(String),
+      fc.constantFrom('', '0', '-1', 'NaN', '1e400', 'cut_point_um', 'mass_mg', 'lower_um', 'upper_um', 'count'),
+    );
     const rows = fc.array(fc.array(cell, { maxLength: 5 }), { maxLength: 12 });
     fc.assert(
       fc.property(fc.constantFrom(...UPLOAD_FORMATS), rows, fc.option(fc.double(), { nil: undefined }), (format, table, density) => {
@@ -78,7 +82,11 @@ describe('size-profile properties', () => {
     const body = fc.array(fc.tuple(number, number, number), { minLength: 0, maxLength: 20 });
     fc.assert(
       fc.property(body, fc.double({ min: 50, max: 30000, noNaN: true }), (data, density) => {
-        for (const [format, header] of [['impactor', ['cut_point_um', 'mass_mg']], ['counter', ['lower_um', 'upper_um', 'count']], ['bins', ['lower_um', 'upper_um', 'mass_fraction']]] as const) {
+        for (const [format, header] of [
+          ['impactor', ['cut_point_um', 'mass_mg']],
+          ['counter', ['lower_um', 'upper_um', 'count']],
+          ['bins', ['lower_um', 'upper_um', 'mass_fraction']],
+        ] as const) {
           const rows = [[...header], ...data.map((r) => r.slice(0, header.length))];
           const result = buildFromUpload(format, recordsFromRows(rows), { fileName: 'g.csv', density_kgPerM3: density });
           expect(typeof result.ok).toBe('boolean');

@@ -16,14 +16,22 @@ export function checkRanges(rows: TableRow[], lower: string, upper: string, issu
     const hiOk = checkSize(hi, row, upper, issues);
     if (loOk && hiOk && !(hi! > lo!)) issues.push({ row, column: upper, message: `Must be larger than ${lower} (${lo}), got ${hi}` });
     if (loOk && previousUpper !== null && lo! < previousUpper * (1 - SAME_EDGE)) {
-      issues.push({ row, column: lower, message: `Overlaps the row above, or rows are not in increasing size: starts at ${lo}, the row above ends at ${previousUpper}` });
+      issues.push({
+        row,
+        column: lower,
+        message: `Overlaps the row above, or rows are not in increasing size: starts at ${lo}, the row above ends at ${previousUpper}`,
+      });
     }
     if (hiOk) previousUpper = hi;
   }
 }
 
 export function toRanges(rows: TableRow[], lower: string, upper: string, amount: string): SizeRange[] {
-  return rows.map(({ values }) => ({ lower_m: micrometres(values[lower]!), upper_m: micrometres(values[upper]!), amount: values[amount]! }));
+  return rows.map(({ values }) => ({
+    lower_m: micrometres(values[lower]!),
+    upper_m: micrometres(values[upper]!),
+    amount: values[amount]!,
+  }));
 }
 
 // Gaps between rows become empty bins so the edges stay contiguous.

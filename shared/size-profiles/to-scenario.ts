@@ -9,5 +9,11 @@ export function toScenarioSizeProfile(stored: Pick<ProfileData, 'kind' | 'bins' 
   if ((stored.kind === 'lognormal' || stored.kind === 'respirable') && stored.fittedMmad_m !== null && stored.fittedGsd !== null) {
     return { kind: 'lognormal', basis: 'mmad', median_m: stored.fittedMmad_m, gsd: stored.fittedGsd };
   }
-  return { kind: 'bins', basis: 'mass', diameter: 'aerodynamic', edges_m: [...stored.bins.edges_m], amounts: [...stored.bins.massFraction] };
+  return {
+    kind: 'bins',
+    basis: 'mass',
+    diameter: 'aerodynamic',
+    edges_m: [...stored.bins.edges_m],
+    amounts: [...stored.bins.massFraction],
+  };
 }

@@ -23,7 +23,11 @@ describe('size-profile file validation reports row and column', () => {
   });
 
   it('reports a column given twice', () => {
-    expect(issuesOf('impactor', 'mass_mg,mass_mg\n1,2\n3,4')).toContainEqual({ row: 1, column: 'mass_mg', message: 'Column mass_mg appears twice' });
+    expect(issuesOf('impactor', 'mass_mg,mass_mg\n1,2\n3,4')).toContainEqual({
+      row: 1,
+      column: 'mass_mg',
+      message: 'Column mass_mg appears twice',
+    });
   });
 
   it('reports fewer than 2 and more than 200 data rows', () => {
@@ -64,17 +68,25 @@ describe('size-profile file validation reports row and column', () => {
 
   it('reports mass fractions above 1 or not adding up to 1', () => {
     expect(issuesOf('bins', 'lower_um,upper_um,mass_fraction\n1,2,40\n2,3,60')[0]).toMatchObject({ row: 2, column: 'mass_fraction' });
-    expect(issuesOf('bins', 'lower_um,upper_um,mass_fraction\n1,2,0.4\n2,3,0.4')).toEqual([{ row: null, column: 'mass_fraction', message: expect.stringMatching(/add up to 0.8/) }]);
+    expect(issuesOf('bins', 'lower_um,upper_um,mass_fraction\n1,2,0.4\n2,3,0.4')).toEqual([
+      { row: null, column: 'mass_fraction', message: expect.stringMatching(/add up to 0.8/) },
+    ]);
   });
 
   it('reports a missing or implausible density for counter data', () => {
     const text = 'lower_um,upper_um,count\n1,2,5\n2,3,5';
-    expect(issuesOf('counter', text)).toEqual([{ row: null, column: 'density_kgPerM3', message: expect.stringMatching(/needs the particle density/) }]);
+    expect(issuesOf('counter', text)).toEqual([
+      { row: null, column: 'density_kgPerM3', message: expect.stringMatching(/needs the particle density/) },
+    ]);
     expect(issuesOf('counter', text, 5)[0].column).toBe('density_kgPerM3');
   });
 
   it('keeps file line numbers when blank lines were skipped', () => {
-    const records = [{ line: 1, cells: ['lower_um', 'upper_um', 'mass_fraction'] }, { line: 3, cells: ['1', '2', '0.5'] }, { line: 7, cells: ['2', '3', '-0.5'] }];
+    const records = [
+      { line: 1, cells: ['lower_um', 'upper_um', 'mass_fraction'] },
+      { line: 3, cells: ['1', '2', '0.5'] },
+      { line: 7, cells: ['2', '3', '-0.5'] },
+    ];
     const result = buildFromUpload('bins', records, { fileName: 'x.csv' });
     expect(!result.ok && result.issues[0]).toMatchObject({ row: 7, column: 'mass_fraction' });
   });

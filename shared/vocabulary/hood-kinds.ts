@@ -1,9 +1,16 @@
 export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
 export type HoodKind = (typeof HOOD_KINDS)[number];
 
-export const HOOD_KIND_LABEL: Record<HoodKind, string> = { plain: 'Plain opening', flanged: 'Flanged opening', slot: 'Slot', 'flanged-slot': 'Flanged slot', booth: 'Booth' };
+export const HOOD_KIND_LABEL: Record<HoodKind, string> = {
+  plain: 'Plain opening',
+  flanged: 'Flanged opening',
+  slot: 'Slot',
+  'flanged-slot': 'Flanged slot',
+  booth: 'Booth',
+};
 
 export const isSlotKind = (kind: HoodKind): boolean => kind === 'slot' || kind === 'flanged-slot';
 
 // Records written before a kind was renamed keep their stored word rather than a blank.
-export const hoodKindLabel = (kind: string): string => (HOOD_KINDS as readonly string[]).includes(kind) ? HOOD_KIND_LABEL[kind as HoodKind] : kind;
+export const hoodKindLabel = (kind: string): string =>
+  (HOOD_KINDS as readonly string[]).includes(kind) ? HOOD_KIND_LABEL[kind as HoodKind] : kind;

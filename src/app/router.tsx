@@ -19,15 +19,25 @@ const WorkstationRoute = lazy(() => import('./routes/workstation').then((m) => (
 const ScenariosRoute = lazy(() => import('./routes/scenarios').then((m) => ({ default: m.ScenariosRoute })));
 const StationRoute = lazy(() => import('./routes/station').then((m) => ({ default: m.StationRoute })));
 const PeoplePage = lazy(() => import('@/features/people/components/people-page').then((m) => ({ default: m.PeoplePage })));
-const ParticleCalculatorPage = lazy(() => import('@/features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })));
-const HoodCalculatorPage = lazy(() => import('@/features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })));
+const ParticleCalculatorPage = lazy(() =>
+  import('@/features/calculators/components/particle-calculator-page').then((m) => ({ default: m.ParticleCalculatorPage })),
+);
+const HoodCalculatorPage = lazy(() =>
+  import('@/features/calculators/components/hood-calculator-page').then((m) => ({ default: m.HoodCalculatorPage })),
+);
 const AgentsPage = lazy(() => import('@/features/agents/components/agents-page').then((m) => ({ default: m.AgentsPage })));
-const SizeProfilesPage = lazy(() => import('@/features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })));
-const SizeProfileDetailPage = lazy(() => import('@/features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })));
+const SizeProfilesPage = lazy(() =>
+  import('@/features/size-profiles/components/size-profiles-page').then((m) => ({ default: m.SizeProfilesPage })),
+);
+const SizeProfileDetailPage = lazy(() =>
+  import('@/features/size-profiles/components/size-profile-detail').then((m) => ({ default: m.SizeProfileDetailPage })),
+);
 const SweepRoute = lazy(() => import('./routes/sweep').then((m) => ({ default: m.SweepRoute })));
 const ReportRoute = lazy(() => import('./routes/report').then((m) => ({ default: m.ReportRoute })));
 const CompareRoute = lazy(() => import('./routes/compare').then((m) => ({ default: m.CompareRoute })));
-const EngineCheckPage = lazy(() => import('@/features/engine-check/components/engine-check-page').then((m) => ({ default: m.EngineCheckPage })));
+const EngineCheckPage = lazy(() =>
+  import('@/features/engine-check/components/engine-check-page').then((m) => ({ default: m.EngineCheckPage })),
+);
 const OutboxPage = lazy(() => import('@/features/outbox/components/outbox-page').then((m) => ({ default: m.OutboxPage })));
 
 const guarded = (permission: Permission | undefined, node: ReactNode) => (

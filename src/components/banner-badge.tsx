@@ -20,7 +20,12 @@ export function BannerBadge({ banner, size = 'md' }: { banner: Banner | null | u
   const c = BANNER_CLASSES[b.colour];
   const s = SIZE[size];
   return (
-    <span data-testid="banner" data-banner={banner} title={b.meaning} className={`inline-flex items-center rounded-full border-2 font-bold ${c.border} ${c.soft} ${c.text} ${s.box}`}>
+    <span
+      data-testid="banner"
+      data-banner={banner}
+      title={b.meaning}
+      className={`inline-flex items-center rounded-full border-2 font-bold ${c.border} ${c.soft} ${c.text} ${s.box}`}
+    >
       <span aria-hidden="true" className={`inline-flex shrink-0 items-center justify-center rounded-full bg-current ${s.icon}`}>
         <span className="text-white">{b.icon}</span>
       </span>

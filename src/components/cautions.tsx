@@ -8,7 +8,10 @@ const CAUTIONS = [
 
 export function Cautions({ compact = false }: { compact?: boolean }) {
   return (
-    <aside aria-label="Cautions" className="mt-8 rounded-lg border border-line bg-paper-deep p-4 text-sm text-muted print:break-inside-avoid">
+    <aside
+      aria-label="Cautions"
+      className="mt-8 rounded-lg border border-line bg-paper-deep p-4 text-sm text-muted print:break-inside-avoid"
+    >
       <h2 className="mb-2 font-semibold text-ink">
         <span aria-hidden="true">⚠ </span>Cautions
       </h2>

@@ -14,7 +14,10 @@ export function FractionPicker({ fractions, legend, value, onChange, limitFracti
         Fraction
       </span>
       {fractions.map((f) => (
-        <label key={f} className={`cursor-pointer rounded-full border px-3 py-1 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${value === f ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line bg-white'}`}>
+        <label
+          key={f}
+          className={`cursor-pointer rounded-full border px-3 py-1 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${value === f ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line bg-white'}`}
+        >
           <input type="radio" name={name} value={f} checked={value === f} onChange={() => onChange(f)} className="sr-only" />
           {FRACTION_LABEL[f]}
           {f === limitFraction && <span className="text-muted"> (limit)</span>}

@@ -21,7 +21,10 @@ export function useEngineRun<R, P = RunProgress>(initialProgress: P) {
     warmUpWorkers();
     return controller.dispose;
   }, [controller]);
-  const start = useCallback((task: EngineTask<R, P>, initial: P = initialProgress) => controller.start(task, initial), [controller, initialProgress]);
+  const start = useCallback(
+    (task: EngineTask<R, P>, initial: P = initialProgress) => controller.start(task, initial),
+    [controller, initialProgress],
+  );
   const reset = useCallback(() => {
     controller.dispose();
     setState({ phase: 'idle' });

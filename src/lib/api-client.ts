@@ -30,7 +30,13 @@ export async function apiFetch<T>(url: string, { method = 'GET', body, signal, q
   if (csrfToken && method !== 'GET') headers['X-CSRF-Token'] = csrfToken;
   let res: Response;
   try {
-    res = await fetch(url, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), credentials: 'same-origin', signal });
+    res = await fetch(url, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+      credentials: 'same-origin',
+      signal,
+    });
   } catch (err) {
     if ((err as Error).name === 'AbortError') throw err;
     throw new ApiError(0, 'network', 'The server could not be reached. Check your connection and try again.');

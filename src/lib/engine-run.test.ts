@@ -46,7 +46,11 @@ describe('engineRunController', () => {
     h.flush();
     t.finish('result');
     expect(await done).toBe('result');
-    expect(h.states).toEqual([{ phase: 'running', progress: 0 }, { phase: 'running', progress: 0.4 }, { phase: 'done', result: 'result' }]);
+    expect(h.states).toEqual([
+      { phase: 'running', progress: 0 },
+      { phase: 'running', progress: 0.4 },
+      { phase: 'done', result: 'result' },
+    ]);
   });
 
   it('after cancel ignores late progress and the late rejection, and a new run starts cleanly', async () => {
@@ -70,7 +74,11 @@ describe('engineRunController', () => {
     h.flush();
     second.finish('again');
     expect(await done).toBe('again');
-    expect(h.states.slice(-3)).toEqual([{ phase: 'running', progress: 0 }, { phase: 'running', progress: 0.6 }, { phase: 'done', result: 'again' }]);
+    expect(h.states.slice(-3)).toEqual([
+      { phase: 'running', progress: 0 },
+      { phase: 'running', progress: 0.6 },
+      { phase: 'done', result: 'again' },
+    ]);
   });
 
   it('reports a failure with the error and the last progress', async () => {

@@ -8,4 +8,5 @@ export function sig(value: number | null | undefined, digits = 3): string {
   return value.toExponential(digits - 1);
 }
 
-export const dateTime = (iso: string | null | undefined) => (iso ? new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' }) : '—');
+export const dateTime = (iso: string | null | undefined) =>
+  iso ? new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' }) : '—';

@@ -45,9 +45,7 @@ function startWorker(warm: boolean): PooledWorker {
 
 let warmUpPrepared: ReturnType<typeof prepareScenario> | undefined;
 function warmUpScenario() {
-  warmUpPrepared ??= prepareScenario(
-    parseScenario({ ...referenceScenario, run: { particles: 3000, batches: 2, seed: 1 } }),
-  );
+  warmUpPrepared ??= prepareScenario(parseScenario({ ...referenceScenario, run: { particles: 3000, batches: 2, seed: 1 } }));
   return warmUpPrepared;
 }
 
@@ -72,7 +70,11 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
   const particles = prepared.particlesPerBatch * prepared.batches;
   const report = (fraction: number) => {
     const elapsed_s = (performance.now() - started) / 1000;
-    onProgress?.({ fraction, particlesPerS: elapsed_s > 0 ? (fraction * particles) / elapsed_s : 0, secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity });
+    onProgress?.({
+      fraction,
+      particlesPerS: elapsed_s > 0 ? (fraction * particles) / elapsed_s : 0,
+      secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity,
+    });
   };
   let done: BatchResult[];
   try {

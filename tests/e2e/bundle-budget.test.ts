@@ -9,7 +9,10 @@ const BUDGET_BYTES = 250 * 1024;
 // Initial JS = the entry script plus every chunk index.html preloads; lazy pages are not counted.
 function initialScripts(): string[] {
   const html = fs.readFileSync(path.join(DIST, 'index.html'), 'utf8');
-  const refs = [...html.matchAll(/<script[^>]+src="([^"]+\.js)"/g), ...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+\.js)"/g)].map((m) => m[1]);
+  const refs = [
+    ...html.matchAll(/<script[^>]+src="([^"]+\.js)"/g),
+    ...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+\.js)"/g),
+  ].map((m) => m[1]);
   return [...new Set(refs)].map((r) => path.join(DIST, r.replace(/^\//, '')));
 }
 

@@ -21,7 +21,11 @@ const BENCH = 'Edge-grinding bench 2';
 const viewer = DEMO_PEOPLE.find((p) => p.role === 'viewer')!;
 
 // Quoted fields may hold commas; split only on commas outside quotes.
-const csvRows = (text: string) => text.trim().split('\r\n').map((line) => line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/).map((c) => c.replace(/^"|"$/g, '')));
+const csvRows = (text: string) =>
+  text
+    .trim()
+    .split('\r\n')
+    .map((line) => line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/).map((c) => c.replace(/^"|"$/g, '')));
 
 describe('side by side', () => {
   it('lets a viewer compare three options at the stone bench, share the link and download the CSV', async () => {
@@ -32,7 +36,8 @@ describe('side by side', () => {
     await page.getByText('Choose scenarios to compare').waitFor();
 
     await page.getByLabel('Search scenarios').fill('edge-grinding');
-    for (const name of ['No control', 'Slot hood', 'Flanged hood']) await page.getByRole('checkbox', { name: `${name} at ${BENCH}` }).check();
+    for (const name of ['No control', 'Slot hood', 'Flanged hood'])
+      await page.getByRole('checkbox', { name: `${name} at ${BENCH}` }).check();
 
     const list = await page.evaluate(() => fetch('/api/scenarios?pageSize=200').then((r) => r.json()));
     const benchIds = (list.items as { id: number; workstationName: string }[]).filter((s) => s.workstationName === BENCH).map((s) => s.id);
@@ -42,7 +47,11 @@ describe('side by side', () => {
     await expect.poll(() => headers.count(), { timeout: 30_000 }).toBe(3);
     // Engineering controls come before no control; the two hoods tie on tier and go by name.
     // Polled: a column's header text settles once its run has loaded.
-    await expect.poll(async () => (await headers.allTextContents()).map((t) => t.replace(/^✓ Meets the target with the least airflow/, '').replace(/run of.*$/, ''))).toEqual(['Flanged hood', 'Slot hood', 'No control']);
+    await expect
+      .poll(async () =>
+        (await headers.allTextContents()).map((t) => t.replace(/^✓ Meets the target with the least airflow/, '').replace(/run of.*$/, '')),
+      )
+      .toEqual(['Flanged hood', 'Slot hood', 'No control']);
 
     const banners = page.getByRole('row', { name: /^Banner/ }).getByRole('cell');
     await expect.poll(() => banners.count()).toBe(3);

@@ -7,9 +7,51 @@ import { useServerAndBrowser } from '../helpers/e2e-setup';
 const env = useServerAndBrowser();
 
 const EXPECTED_NAV: Record<string, { home: RegExp; heading: string; nav: string[] }> = {
-  admin: { home: /\/people$/, heading: 'People', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Your station', 'Audit trail', 'People', 'Outbox'] },
-  engineer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Audit trail'] },
-  viewer: { home: /\/scenarios$/, heading: 'Scenarios', nav: ['Scenarios', 'Side by side', 'Workstations', 'Dust agents', 'Size profiles', 'Particle calculator', 'Hood calculator', 'Audit trail'] },
+  admin: {
+    home: /\/people$/,
+    heading: 'People',
+    nav: [
+      'Scenarios',
+      'Side by side',
+      'Workstations',
+      'Dust agents',
+      'Size profiles',
+      'Particle calculator',
+      'Hood calculator',
+      'Your station',
+      'Audit trail',
+      'People',
+      'Outbox',
+    ],
+  },
+  engineer: {
+    home: /\/scenarios$/,
+    heading: 'Scenarios',
+    nav: [
+      'Scenarios',
+      'Side by side',
+      'Workstations',
+      'Dust agents',
+      'Size profiles',
+      'Particle calculator',
+      'Hood calculator',
+      'Audit trail',
+    ],
+  },
+  viewer: {
+    home: /\/scenarios$/,
+    heading: 'Scenarios',
+    nav: [
+      'Scenarios',
+      'Side by side',
+      'Workstations',
+      'Dust agents',
+      'Size profiles',
+      'Particle calculator',
+      'Hood calculator',
+      'Audit trail',
+    ],
+  },
   operator: { home: /\/station$/, heading: 'Edge-grinding bench 2', nav: ['Your station'] },
 };
 
@@ -57,7 +99,9 @@ describe('inviting a colleague', () => {
     await form.getByLabel('E-mail').fill('noor.castellan@motewalk.local');
     await form.getByLabel('Role').selectOption('viewer');
     await form.getByRole('button', { name: 'Send invitation' }).click();
-    await expect.poll(() => page.getByRole('status').allTextContents()).toContainEqual(expect.stringMatching(/Invitation sent to noor.castellan@motewalk.local/));
+    await expect
+      .poll(() => page.getByRole('status').allTextContents())
+      .toContainEqual(expect.stringMatching(/Invitation sent to noor.castellan@motewalk.local/));
     await expect.poll(() => page.getByRole('cell', { name: 'noor.castellan@motewalk.local' }).count()).toBe(1);
     await shot(page, 'foundation-people');
 

@@ -16,7 +16,11 @@ let url: string;
 
 beforeAll(async () => {
   // The project's own Vite config (root src/, React, Tailwind) on a free port; no build, no API server.
-  vite = await createServer({ configFile: path.resolve('vite.config.ts'), server: { port: 0, strictPort: false, hmr: false }, logLevel: 'warn' });
+  vite = await createServer({
+    configFile: path.resolve('vite.config.ts'),
+    server: { port: 0, strictPort: false, hmr: false },
+    logLevel: 'warn',
+  });
   await vite.listen();
   url = `http://localhost:${(vite.httpServer!.address() as AddressInfo).port}/features/run-results/dev/preview.html`;
   browser = await launchBrowser();
@@ -28,7 +32,10 @@ afterAll(async () => {
 });
 
 const dotPositions = (view: 'plan' | 'elevation') =>
-  page.getByTestId(`dots-${view}`).locator('circle').evaluateAll((cs) => cs.map((c) => `${c.getAttribute('data-slot')}:${c.getAttribute('cx')},${c.getAttribute('cy')}`));
+  page
+    .getByTestId(`dots-${view}`)
+    .locator('circle')
+    .evaluateAll((cs) => cs.map((c) => `${c.getAttribute('data-slot')}:${c.getAttribute('cx')},${c.getAttribute('cy')}`));
 
 describe('the run results preview', () => {
   it('runs the engine in the page and shows the banner and the 8-h TWA the engine computes', async () => {
@@ -36,10 +43,21 @@ describe('the run results preview', () => {
     await page.getByRole('button', { name: 'Compute' }).click();
     await page.getByTestId('banner').first().waitFor();
     const { result } = runEngine(PREVIEW_SCENARIO);
-    const expected = (result as { breathingZone: { fractions: { respirable: { twa8h_mgPerM3: number } } }; limit: { banner: string } });
+    const expected = result as { breathingZone: { fractions: { respirable: { twa8h_mgPerM3: number } } }; limit: { banner: string } };
     expect(await page.getByTestId('banner').first().getAttribute('data-banner')).toBe(expected.limit.banner);
-    expect(await page.getByTestId('twa').textContent()).toContain(`${readableNumber(expected.breathingZone.fractions.respirable.twa8h_mgPerM3)} mg/m³`);
-    for (const heading of ['Headline', 'Breathing-zone concentration over time', 'Concentrations by size fraction', 'Where the dust went', 'Particle paths, plan and elevation', 'Floor deposition and capture velocity', 'Analytic cross-checks', 'Cautions']) {
+    expect(await page.getByTestId('twa').textContent()).toContain(
+      `${readableNumber(expected.breathingZone.fractions.respirable.twa8h_mgPerM3)} mg/m³`,
+    );
+    for (const heading of [
+      'Headline',
+      'Breathing-zone concentration over time',
+      'Concentrations by size fraction',
+      'Where the dust went',
+      'Particle paths, plan and elevation',
+      'Floor deposition and capture velocity',
+      'Analytic cross-checks',
+      'Cautions',
+    ]) {
       await expect.poll(() => page.getByRole('heading', { name: heading }).count()).toBe(1);
     }
     expect(await page.getByTestId('hood-face').count()).toBeGreaterThan(0);
@@ -70,8 +88,10 @@ describe('the run results preview', () => {
     // Sampled particles are airborne for seconds to minutes, so which frames show dots depends on
     // the run: take the engine's own count at the first frame from 10 on that has any.
     const { result } = runEngine(PREVIEW_SCENARIO);
-    const t = (result as { trajectories: { particles: number; frames: number; frameInterval_s: number; positions_m: (number | null)[] } }).trajectories;
-    const airborne = (f: number) => Array.from({ length: t.particles }, (_, slot) => t.positions_m[(slot * t.frames + f) * 3]).filter((x) => x !== null).length;
+    const t = (result as { trajectories: { particles: number; frames: number; frameInterval_s: number; positions_m: (number | null)[] } })
+      .trajectories;
+    const airborne = (f: number) =>
+      Array.from({ length: t.particles }, (_, slot) => t.positions_m[(slot * t.frames + f) * 3]).filter((x) => x !== null).length;
     let target = 10;
     while (target < t.frames - 1 && airborne(target) === 0) target++;
     expect(airborne(target)).toBeGreaterThan(0);

@@ -46,7 +46,9 @@ describe('the scenario editor preview', () => {
     expect(await page.getByTestId('hood-verdict-0').textContent()).toMatch(/≈ .* m\/s at the source/);
     await shot(page, 'scenario-editor-1280');
     await closeUp('scenario-editor-1280-drawings');
-    await page.getByRole('group', { name: 'Controls', exact: true }).screenshot({ path: path.join(SCREENSHOTS, 'scenario-editor-1280-controls.png') });
+    await page
+      .getByRole('group', { name: 'Controls', exact: true })
+      .screenshot({ path: path.join(SCREENSHOTS, 'scenario-editor-1280-controls.png') });
   });
 
   it('moves the hood by whole 5 cm steps when it is dragged in the plan', async () => {

@@ -19,19 +19,34 @@ async function open(): Promise<Page> {
 }
 
 const post = (page: Page, url: string, body: unknown, method = 'POST') =>
-  page.evaluate(async ([u, b, m]) => {
-    const res = await fetch(u as string, { method: m as string, headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(b) });
-    return { status: res.status, body: await res.json() };
-  }, [url, body, method] as const);
+  page.evaluate(
+    async ([u, b, m]) => {
+      const res = await fetch(u as string, {
+        method: m as string,
+        headers: { 'Content-Type': 'application/json' },
+        body: JSON.stringify(b),
+      });
+      return { status: res.status, body: await res.json() };
+    },
+    [url, body, method] as const,
+  );
 
 describe('stored markup is shown as text, never run', () => {
   it('renders script and image-handler names inertly in lists and pages', async () => {
     const page = await open();
-    const site = await post(page, '/api/sites', { name: '<img src=x onerror="window.__pwned=1">', data: { address: '<script>window.__pwned=2</script>' } });
+    const site = await post(page, '/api/sites', {
+      name: '<img src=x onerror="window.__pwned=1">',
+      data: { address: '<script>window.__pwned=2</script>' },
+    });
     expect(site.status).toBe(201);
     const list = await page.evaluate(async () => (await (await fetch('/api/scenarios?pageSize=1')).json()).items[0].id as number);
     const detail = await page.evaluate(async (id) => (await (await fetch(`/api/scenarios/${id}`)).json()) as { version: number }, list);
-    const renamed = await post(page, `/api/scenarios/${list}`, { version: detail.version, name: '<script>window.__pwned=3</script>' }, 'PATCH');
+    const renamed = await post(
+      page,
+      `/api/scenarios/${list}`,
+      { version: detail.version, name: '<script>window.__pwned=3</script>' },
+      'PATCH',
+    );
     expect(renamed.status).toBe(200);
     await page.goto(`${env.server.url}/places`);
     await page.getByText('<img src=x onerror="window.__pwned=1">').first().waitFor();
@@ -50,7 +65,9 @@ describe('two people editing one scenario', () => {
   it('answers the second save with the conflict, shows both versions and loses nothing typed', async () => {
     const a = await open();
     const b = await open();
-    const id = await a.evaluate(async () => (await (await fetch('/api/scenarios?sort=name&order=asc&pageSize=1')).json()).items[0].id as number);
+    const id = await a.evaluate(
+      async () => (await (await fetch('/api/scenarios?sort=name&order=asc&pageSize=1')).json()).items[0].id as number,
+    );
     await a.goto(`${env.server.url}/scenarios/${id}`);
     await b.goto(`${env.server.url}/scenarios/${id}`);
     await a.getByLabel('Scenario name').fill('Renamed in tab A');

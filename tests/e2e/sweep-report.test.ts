@@ -72,7 +72,8 @@ describe('an engineer sweeps the hood airflow, keeps the best point and prints i
     await page.goto(`${server.url}/reports/${savedId}`);
     const report = page.getByRole('article', { name: `Report: ${savedName}` });
     await report.waitFor();
-    for (const heading of ['1. Inputs', '2. Assumptions, the model and its limits', '3. Results', '4. Approval and sign-off']) await report.getByRole('heading', { name: heading }).waitFor();
+    for (const heading of ['1. Inputs', '2. Assumptions, the model and its limits', '3. Results', '4. Approval and sign-off'])
+      await report.getByRole('heading', { name: heading }).waitFor();
     expect(await report.getByRole('cell', { name: savedName.replace('Flanged opening at ', '') }).count()).toBe(1);
     expect(await report.getByText('Respirable crystalline silica').count()).toBeGreaterThan(0);
     expect(await report.getByText(/no saved run yet/).count()).toBe(1);

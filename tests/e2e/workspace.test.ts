@@ -93,7 +93,11 @@ describe('an engineer builds, runs and saves a scenario; a viewer reads it', () 
     expect(await page.getByLabel('Face centre x').isDisabled()).toBe(true);
     const status = await page.evaluate(async (url) => {
       const id = Number(url.split('/').pop());
-      const res = await fetch(`/api/scenarios/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version: 2, name: 'viewer edit' }) });
+      const res = await fetch(`/api/scenarios/${id}`, {
+        method: 'PATCH',
+        headers: { 'Content-Type': 'application/json' },
+        body: JSON.stringify({ version: 2, name: 'viewer edit' }),
+      });
       return res.status;
     }, scenarioUrl);
     expect(status).toBe(403);

@@ -11,7 +11,10 @@ describe('route inventory', () => {
     people.get('/', (_req, res) => res.end());
     people.patch('/:id', (_req, res) => res.end());
     const places = express.Router();
-    places.route('/sites').get((_req, res) => res.end()).post((_req, res) => res.end());
+    places
+      .route('/sites')
+      .get((_req, res) => res.end())
+      .post((_req, res) => res.end());
     api.use('/people', people);
     api.use('/', places);
     api.get('/health', (_req, res) => res.end());
@@ -19,6 +22,12 @@ describe('route inventory', () => {
     app.use(express.json());
     app.use('/api', api);
     app.get('/{*splat}', (_req, res) => res.end());
-    expect(routeInventory(app).sort()).toEqual(['GET /api/health', 'GET /api/people', 'GET /api/sites', 'PATCH /api/people/:id', 'POST /api/sites']);
+    expect(routeInventory(app).sort()).toEqual([
+      'GET /api/health',
+      'GET /api/people',
+      'GET /api/sites',
+      'PATCH /api/people/:id',
+      'POST /api/sites',
+    ]);
   });
 });

@@ -14,9 +14,11 @@ export function routeInventory(app: Express): RouteKey[] {
     for (const layer of stack) {
       if (layer.route) {
         if (typeof layer.route.path !== 'string') throw new Error(`route under ${prefix || '/'} has a non-string path; list it by hand`);
-        for (const method of Object.keys(layer.route.methods)) if (METHODS.has(method)) keys.push(`${method.toUpperCase()} ${join(prefix, layer.route.path) || '/'}`);
+        for (const method of Object.keys(layer.route.methods))
+          if (METHODS.has(method)) keys.push(`${method.toUpperCase()} ${join(prefix, layer.route.path) || '/'}`);
       } else if (Array.isArray(layer.handle?.stack)) {
-        if (typeof layer.rawPath !== 'string') throw new Error(`router mounted under ${prefix || '/'} has no string path (Express's layers changed?)`);
+        if (typeof layer.rawPath !== 'string')
+          throw new Error(`router mounted under ${prefix || '/'} has no string path (Express's layers changed?)`);
         walk(layer.handle.stack, join(prefix, layer.rawPath));
       }
     }

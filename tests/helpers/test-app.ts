@@ -25,7 +25,12 @@ export async function createTestApp(opts: { demoWorkspace?: boolean; particles?:
     return agent;
   }
 
-  const personId = async (role: Role) => (await db('people').where({ email: DEMO_PEOPLE.find((p) => p.role === role)!.email }).first()).id as number;
+  const personId = async (role: Role) =>
+    (
+      await db('people')
+        .where({ email: DEMO_PEOPLE.find((p) => p.role === role)!.email })
+        .first()
+    ).id as number;
 
   return { app, db, anonymous, signIn, personId, close: () => db.destroy() };
 }

@@ -61,7 +61,8 @@ const allowed = (rule: Rule, role: Role | 'anonymous') =>
   rule === 'public' || (role !== 'anonymous' && (rule === 'signed-in' || ROLE_PERMISSIONS[role].includes(rule)));
 
 // Ids that do not exist: an allowed caller then gets 400/404, never a change to the demo data.
-const concrete = (key: string) => key.replace(':workstationId', String(boardId)).replace(':format', 'impactor').replace(/:id/g, '999999').split(' ')[1];
+const concrete = (key: string) =>
+  key.replace(':workstationId', String(boardId)).replace(':format', 'impactor').replace(/:id/g, '999999').split(' ')[1];
 
 describe('access to every API route', () => {
   it('has a permission rule for every route the server defines', () => {
@@ -82,7 +83,8 @@ describe('access to every API route', () => {
         const refused = res.status === 401 || res.status === 403;
         if (allowed(rule, role) === refused) mismatches.push(`${key} → ${res.status}`);
         if (res.status >= 500) mismatches.push(`${key} → ${res.status} (server error)`);
-        if (res.headers['content-type']?.includes('json') && res.status >= 400) expect(Object.keys(res.body)).toEqual(expect.arrayContaining(['code', 'message']));
+        if (res.headers['content-type']?.includes('json') && res.status >= 400)
+          expect(Object.keys(res.body)).toEqual(expect.arrayContaining(['code', 'message']));
       }
       expect(mismatches).toEqual([]);
     });

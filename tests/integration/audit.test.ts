@@ -50,7 +50,10 @@ describe('errors keep one shape', () => {
   });
 
   it('answers an oversized body with 413', async () => {
-    const res = await t.anonymous().post('/api/auth/login').send({ email: 'a@b.co', password: 'x'.repeat(2_000_000) });
+    const res = await t
+      .anonymous()
+      .post('/api/auth/login')
+      .send({ email: 'a@b.co', password: 'x'.repeat(2_000_000) });
     expect(res.status).toBe(413);
     expect(res.body.code).toBe('payload_too_large');
   });

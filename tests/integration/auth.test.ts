@@ -39,7 +39,11 @@ describe('POST /api/auth/login', () => {
   });
 
   it('refuses a sign-in posted from another site', async () => {
-    const res = await request(t.app).post('/api/auth/login').set('Host', HOST).set('Origin', 'http://evil.example').send({ email: 'viewer@motewalk.local', password: 'demo-viewer-pass' });
+    const res = await request(t.app)
+      .post('/api/auth/login')
+      .set('Host', HOST)
+      .set('Origin', 'http://evil.example')
+      .send({ email: 'viewer@motewalk.local', password: 'demo-viewer-pass' });
     expect(res.status).toBe(403);
     expect(res.body.code).toBe('cross_origin');
   });
@@ -47,7 +51,10 @@ describe('POST /api/auth/login', () => {
   it('locks an account out with 429 after repeated wrong passwords, well before 20', async () => {
     const statuses: number[] = [];
     for (let i = 0; i < 20; i += 1) {
-      const res = await t.anonymous().post('/api/auth/login').send({ email: 'operator@motewalk.local', password: `wrong-${i}-password` });
+      const res = await t
+        .anonymous()
+        .post('/api/auth/login')
+        .send({ email: 'operator@motewalk.local', password: `wrong-${i}-password` });
       statuses.push(res.status);
     }
     expect(statuses.slice(0, 8).every((s) => s === 401)).toBe(true);
@@ -92,8 +99,18 @@ describe('session cookie in production', () => {
   it('marks the cookie Secure, HttpOnly and SameSite=Lax behind a TLS proxy', async () => {
     const { createApp } = await import('../../server/app');
     const { createOutboxMailer } = await import('../../server/mail/mailer');
-    const app = createApp({ db: t.db, mailer: createOutboxMailer(t.db, 'x@y.z'), sessionSecret: 'production-secret-123', production: true });
-    const res = await request(app).post('/api/auth/login').set('Host', HOST).set('Origin', `https://${HOST}`).set('X-Forwarded-Proto', 'https').send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });
+    const app = createApp({
+      db: t.db,
+      mailer: createOutboxMailer(t.db, 'x@y.z'),
+      sessionSecret: 'production-secret-123',
+      production: true,
+    });
+    const res = await request(app)
+      .post('/api/auth/login')
+      .set('Host', HOST)
+      .set('Origin', `https://${HOST}`)
+      .set('X-Forwarded-Proto', 'https')
+      .send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });
     expect(res.status).toBe(200);
     const cookie = String(res.headers['set-cookie']);
     expect(cookie).toMatch(/; Secure/i);

@@ -15,7 +15,8 @@ describe('online backup', () => {
     await migrateLatest(db);
     await seedDemo(db, { workspace: false });
     const writes = (async () => {
-      for (let i = 0; i < 50; i += 1) await db('outbox').insert({ to_address: `a${i}@b.org`, subject: 's', text_body: 't', created_at: new Date().toISOString() });
+      for (let i = 0; i < 50; i += 1)
+        await db('outbox').insert({ to_address: `a${i}@b.org`, subject: 's', text_body: 't', created_at: new Date().toISOString() });
     })();
     const target = defaultBackupPath(file);
     const { pages } = await backupDatabase(file, target);

@@ -36,7 +36,15 @@ describe('station boards', () => {
     expect((await (await t.signIn('engineer')).get(`/api/boards/${benchId}`)).status).toBe(403);
     expect((await (await t.signIn('viewer')).get('/api/boards')).status).toBe(403);
     const op = await t.signIn('operator');
-    for (const url of ['/api/scenarios', '/api/sites', '/api/agents', `/api/workstations/${benchId}`, '/api/audit', '/api/people', '/api/outbox']) {
+    for (const url of [
+      '/api/scenarios',
+      '/api/sites',
+      '/api/agents',
+      `/api/workstations/${benchId}`,
+      '/api/audit',
+      '/api/people',
+      '/api/outbox',
+    ]) {
       expect([url, (await op.get(url)).status]).toEqual([url, 403]);
     }
   });
@@ -86,7 +94,12 @@ describe('approving a scenario as the current control', () => {
     expected.setUTCMonth(expected.getUTCMonth() + 12);
     expect(res.body.reviewDate).toBe(expected.toISOString().slice(0, 10));
     expect((await scenarioAt(benchId, 'Flanged hood')).status).toBe('approved');
-    expect(await t.db('audit_log').where({ action: 'scenario.approved', target_id: String(s.id) }).first()).toBeTruthy();
+    expect(
+      await t
+        .db('audit_log')
+        .where({ action: 'scenario.approved', target_id: String(s.id) })
+        .first(),
+    ).toBeTruthy();
     const board = await (await t.signIn('operator')).get(`/api/boards/${benchId}`);
     expect(board.body).toMatchObject({ banner: 'clear', needsReview: false, control: 'Flanged hood' });
     expect(board.body.advice.join(' ')).toMatch(/within \d+ cm of the hood face/);
@@ -146,7 +159,9 @@ describe('assigning operators to a station', () => {
   it('lets only admins assign, and only operators be assigned', async () => {
     const opId = await t.personId('operator');
     const viewerId = await t.personId('viewer');
-    expect((await (await t.signIn('engineer')).put(`/api/workstations/${otherBenchId}/operators`).send({ personIds: [opId] })).status).toBe(403);
+    expect((await (await t.signIn('engineer')).put(`/api/workstations/${otherBenchId}/operators`).send({ personIds: [opId] })).status).toBe(
+      403,
+    );
     const admin = await t.signIn('admin');
     const bad = await admin.put(`/api/workstations/${otherBenchId}/operators`).send({ personIds: [viewerId] });
     expect(bad.status).toBe(400);

@@ -12,7 +12,11 @@ import { startServer } from '../helpers/server';
 import { createTestApp, HOST, ORIGIN } from '../helpers/test-app';
 
 async function signInCookie(url: string): Promise<string> {
-  const res = await fetch(`${url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json', Origin: url }, body: JSON.stringify({ email: 'engineer@motewalk.local', password: 'demo-engineer-pass' }) });
+  const res = await fetch(`${url}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', Origin: url },
+    body: JSON.stringify({ email: 'engineer@motewalk.local', password: 'demo-engineer-pass' }),
+  });
   expect(res.status).toBe(200);
   return res.headers.get('set-cookie')!.split(';')[0];
 }
@@ -27,7 +31,11 @@ describe('a server killed in the middle of a stream of writes', () => {
       for (let i = 0; !stop; i += 1) {
         const name = `Kill test ${lane}-${i}`;
         try {
-          const res = await fetch(`${first.url}/api/sites`, { method: 'POST', headers: { 'Content-Type': 'application/json', Origin: first.url, Cookie: cookie }, body: JSON.stringify({ name, data: { address: `${'x'.repeat(200)} ${i}` } }) });
+          const res = await fetch(`${first.url}/api/sites`, {
+            method: 'POST',
+            headers: { 'Content-Type': 'application/json', Origin: first.url, Cookie: cookie },
+            body: JSON.stringify({ name, data: { address: `${'x'.repeat(200)} ${i}` } }),
+          });
           if (res.status === 201) acknowledged.push({ id: (await res.json()).id, name });
         } catch {
           return;
@@ -49,7 +57,11 @@ describe('a server killed in the middle of a stream of writes', () => {
       for (const a of acknowledged) expect(db.prepare('select name from sites where id = ?').get(a.id)).toEqual({ name: a.name });
       // Each site and its audit row are written in one transaction: never one without the other.
       const sites = db.prepare("select id, data from sites where name like 'Kill test %'").all() as { id: number; data: string }[];
-      const audited = new Set((db.prepare("select target_id from audit_log where action = 'site.created'").all() as { target_id: string }[]).map((r) => Number(r.target_id)));
+      const audited = new Set(
+        (db.prepare("select target_id from audit_log where action = 'site.created'").all() as { target_id: string }[]).map((r) =>
+          Number(r.target_id),
+        ),
+      );
       for (const s of sites) {
         expect(() => JSON.parse(s.data)).not.toThrow();
         expect(audited.has(s.id)).toBe(true);
@@ -74,7 +86,11 @@ describe('storage that cannot be written', () => {
     await rw.destroy();
     const db = createDb(file, { readonly: true });
     const app = createApp({ db, mailer: createOutboxMailer(db, 'x@y.z'), sessionSecret: 'read-only-test-secret' });
-    const res = await request(app).post('/api/auth/login').set('Host', HOST).set('Origin', ORIGIN).send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });
+    const res = await request(app)
+      .post('/api/auth/login')
+      .set('Host', HOST)
+      .set('Origin', ORIGIN)
+      .send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });
     expect(res.status).toBe(503);
     expect(res.body).toEqual({ code: 'storage_unavailable', message: 'Storage is unavailable (full or read-only); nothing was saved' });
     expect((await request(app).get('/api/health')).status).toBe(200);
@@ -88,7 +104,9 @@ describe('storage that cannot be written', () => {
     await t.db.raw(`PRAGMA max_page_count = ${page_count + 2}`);
     const statuses = new Set<number>();
     for (let i = 0; i < 200 && !statuses.has(503); i += 1) {
-      statuses.add((await engineer.post('/api/sites').send({ name: `Full ${i}`, data: { address: 'y'.repeat(300), notes: 'z'.repeat(900) } })).status);
+      statuses.add(
+        (await engineer.post('/api/sites').send({ name: `Full ${i}`, data: { address: 'y'.repeat(300), notes: 'z'.repeat(900) } })).status,
+      );
     }
     expect(statuses.has(503)).toBe(true);
     expect(statuses.has(500)).toBe(false);
@@ -110,7 +128,11 @@ describe('an error inside one request', () => {
 
   it('reports a failed invitation e-mail clearly instead of pretending it went', async () => {
     const t = await createTestApp();
-    const app = createApp({ db: t.db, mailer: { send: async () => Promise.reject(new Error('SMTP down')) }, sessionSecret: 'mail-failure-secret-1' });
+    const app = createApp({
+      db: t.db,
+      mailer: { send: async () => Promise.reject(new Error('SMTP down')) },
+      sessionSecret: 'mail-failure-secret-1',
+    });
     const agent = request.agent(app).set('Host', HOST).set('Origin', ORIGIN);
     await agent.post('/api/auth/login').send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });
     const res = await agent.post('/api/people').send({ email: 'new@motewalk.local', name: 'New', role: 'viewer' });

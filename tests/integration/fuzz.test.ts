@@ -17,9 +17,13 @@ beforeAll(async () => {
   ids.workstation = (await admin.post('/api/workstations').send({ roomId: room.body.id, name: 'Bench', data: WORKSTATION_DATA })).body.id;
   ids.agent = (await admin.post('/api/agents').send(AGENT)).body.id;
   const input = scenarioInput({ run: { particles: 200, seed: 1, batches: 2 } });
-  ids.scenario = (await admin.post('/api/scenarios').send({ workstationId: ids.workstation, agentId: ids.agent, name: 'Fuzz target', input })).body.id;
+  ids.scenario = (
+    await admin.post('/api/scenarios').send({ workstationId: ids.workstation, agentId: ids.agent, name: 'Fuzz target', input })
+  ).body.id;
   const run = runEngine(input);
-  ids.run = (await admin.post(`/api/scenarios/${ids.scenario}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: run.result })).body.id;
+  ids.run = (
+    await admin.post(`/api/scenarios/${ids.scenario}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: run.result })
+  ).body.id;
   ids.person = await t.personId('viewer');
 });
 afterAll(async () => {
@@ -29,13 +33,25 @@ afterAll(async () => {
 
 // Every table but sessions (rolling cookies touch it on each request): what a refused write must not change.
 async function snapshot(): Promise<string> {
-  const tables = (await t.db.raw("select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not in ('sessions', 'knex_migrations_lock') order by name")) as { name: string }[];
+  const tables = (await t.db.raw(
+    "select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not in ('sessions', 'knex_migrations_lock') order by name",
+  )) as { name: string }[];
   const parts: string[] = [];
   for (const { name } of tables) parts.push(name, JSON.stringify(await t.db(name).select('*').orderByRaw('rowid')));
   return parts.join('\n');
 }
 
-const HOSTILE_STRINGS = ["'; DROP TABLE people; --", '<script>alert(1)</script>', '<img src=x onerror=alert(1)>', '\u0000\u0001', '\u202e\uFEFF𝔘𝔫𝔦☃', '../../etc/passwd', '{{7*7}}', '%s%n', 'x'.repeat(20_000)];
+const HOSTILE_STRINGS = [
+  "'; DROP TABLE people; --",
+  '<script>alert(1)</script>',
+  '<img src=x onerror=alert(1)>',
+  '\u0000\u0001',
+  '\u202e\uFEFF𝔘𝔫𝔦☃',
+  '../../etc/passwd',
+  '{{7*7}}',
+  '%s%n',
+  'x'.repeat(20_000),
+];
 const hostileLeaf = fc.oneof(
   fc.constantFrom(...HOSTILE_STRINGS),
   fc.string({ unit: 'grapheme', maxLength: 40 }),
@@ -45,12 +61,26 @@ const hostileLeaf = fc.oneof(
   fc.constant(null),
 );
 const hostileValue = fc.letrec((tie) => ({
-  value: fc.oneof({ depthSize: 'small' }, hostileLeaf, fc.array(tie('value'), { maxLength: 4 }), fc.dictionary(fc.string({ maxLength: 12 }), tie('value'), { maxKeys: 4 })),
+  value: fc.oneof(
+    { depthSize: 'small' },
+    hostileLeaf,
+    fc.array(tie('value'), { maxLength: 4 }),
+    fc.dictionary(fc.string({ maxLength: 12 }), tie('value'), { maxKeys: 4 }),
+  ),
 })).value;
 const nested = (depth: number) => JSON.parse('['.repeat(depth) + ']'.repeat(depth));
 
 // Raw bodies that are not JSON a browser would send: NaN, Infinity, prototype keys, deep nesting.
-const RAW = ['{"name": NaN}', '{"x": Infinity}', '{"__proto__": {"role": "admin"}}', '{"constructor": {"prototype": {"role": "admin"}}}', '{"a":', '[]', '"text"', '{"input": ' + '['.repeat(5000) + ']'.repeat(5000) + '}'];
+const RAW = [
+  '{"name": NaN}',
+  '{"x": Infinity}',
+  '{"__proto__": {"role": "admin"}}',
+  '{"constructor": {"prototype": {"role": "admin"}}}',
+  '{"a":',
+  '[]',
+  '"text"',
+  '{"input": ' + '['.repeat(5000) + ']'.repeat(5000) + '}',
+];
 
 function bodyFor(validShape: Record<string, unknown>) {
   const keys = Object.keys(validShape);
@@ -101,11 +131,16 @@ describe('hostile payloads to every write endpoint', () => {
     it(`refuses bad bodies to ${target.method.toUpperCase()} ${target.url().replace(/\d+/g, ':id')} with a 4xx and no change`, async () => {
       await fc.assert(
         fc.asyncProperty(bodyFor(target.valid), async (body) => {
-          await expectRefusedCleanly(() => admin[target.method](target.url()).set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null'));
+          await expectRefusedCleanly(() =>
+            admin[target.method](target.url())
+              .set('Content-Type', 'application/json')
+              .send(JSON.stringify(body) ?? 'null'),
+          );
         }),
         { numRuns: 60 },
       );
-      for (const raw of RAW) await expectRefusedCleanly(() => admin[target.method](target.url()).set('Content-Type', 'application/json').send(raw));
+      for (const raw of RAW)
+        await expectRefusedCleanly(() => admin[target.method](target.url()).set('Content-Type', 'application/json').send(raw));
     });
   }
 
@@ -122,13 +157,17 @@ describe('hostile payloads to every write endpoint', () => {
     const file = fc.oneof(
       fc.uint8Array({ minLength: 1, maxLength: 2000 }).map((b) => ({ bytes: Buffer.from(b), name: 'stages.csv' })),
       fc.string({ maxLength: 300 }).map((s) => ({ bytes: Buffer.from(`cut_point_um,mass_mg\n${s}`), name: 'stages.csv' })),
-      fc.constantFrom('a,b\n"unclosed', 'cut_point_um,mass_mg\n-5,1\n', ',,,\n,,,', '').map((s) => ({ bytes: Buffer.from(s), name: 'stages.csv' })),
+      fc
+        .constantFrom('a,b\n"unclosed', 'cut_point_um,mass_mg\n-5,1\n', ',,,\n,,,', '')
+        .map((s) => ({ bytes: Buffer.from(s), name: 'stages.csv' })),
       fc.constant({ bytes: Buffer.from('cut_point_um,mass_mg\n10,1\n,1\n'), name: 'stages.exe' }),
       fc.constant({ bytes: Buffer.alloc(300 * 1024, 0x31), name: 'big.csv' }),
     );
     await fc.assert(
       fc.asyncProperty(file, fc.constantFrom('impactor', 'counter', 'bins', 'bogus'), async (f, format) => {
-        await expectRefusedCleanly(() => admin.post('/api/size-profiles/upload').field('format', format).field('name', 'fuzz').attach('file', f.bytes, f.name));
+        await expectRefusedCleanly(() =>
+          admin.post('/api/size-profiles/upload').field('format', format).field('name', 'fuzz').attach('file', f.bytes, f.name),
+        );
       }),
       { numRuns: 80 },
     );

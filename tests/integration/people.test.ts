@@ -80,7 +80,10 @@ describe('inviting a person', () => {
     const again = await t.anonymous().post('/api/auth/set-password').send({ token, password: 'another-long-password' });
     expect(again.status).toBe(400);
     expect(again.body.code).toBe('invalid_token');
-    const login = await t.anonymous().post('/api/auth/login').send({ email: 'new.hygienist@motewalk.local', password: 'a-good-long-password' });
+    const login = await t
+      .anonymous()
+      .post('/api/auth/login')
+      .send({ email: 'new.hygienist@motewalk.local', password: 'a-good-long-password' });
     expect(login.status).toBe(200);
     expect(await t.db('audit_log').where({ action: 'person.invited' }).count({ n: '*' })).toEqual([{ n: 1 }]);
   });
@@ -99,7 +102,12 @@ describe('changing a person', () => {
     const res = await admin.patch(`/api/people/${id}`).send({ role: 'engineer' });
     expect(res.status).toBe(200);
     expect((await t.db('people').where({ id }).first()).role).toBe('engineer');
-    expect(await t.db('audit_log').where({ action: 'person.role_changed', target_id: String(id) }).first()).toBeTruthy();
+    expect(
+      await t
+        .db('audit_log')
+        .where({ action: 'person.role_changed', target_id: String(id) })
+        .first(),
+    ).toBeTruthy();
     await admin.patch(`/api/people/${id}`).send({ role: 'viewer' });
   });
 

@@ -15,7 +15,9 @@ beforeAll(async () => {
   const room = await eng.post('/api/rooms').send({ siteId: site.body.id, name: 'Hall', data: ROOM_DATA });
   const ws = await eng.post('/api/workstations').send({ roomId: room.body.id, name: 'Bench', data: WORKSTATION_DATA });
   const agent = await eng.post('/api/agents').send(AGENT);
-  const sc = await eng.post('/api/scenarios').send({ workstationId: ws.body.id, agentId: agent.body.id, name: 'Hood A', input: scenarioInput() });
+  const sc = await eng
+    .post('/api/scenarios')
+    .send({ workstationId: ws.body.id, agentId: agent.body.id, name: 'Hood A', input: scenarioInput() });
   scenarioId = sc.body.id;
   run = runEngine(scenarioInput());
 });
@@ -30,7 +32,9 @@ describe('POST /api/scenarios/:id/runs', () => {
 
   it('answers 400 when the result lacks its summary, storing nothing', async () => {
     const eng = await t.signIn('engineer');
-    const res = await eng.post(`/api/scenarios/${scenarioId}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: { engine: { version: 'x' } } });
+    const res = await eng
+      .post(`/api/scenarios/${scenarioId}/runs`)
+      .send({ scenarioVersion: 1, input: run.scenario, result: { engine: { version: 'x' } } });
     expect(res.status).toBe(400);
     expect(res.body.issues.some((i: { path: string }) => i.path.startsWith('body.result.breathingZone'))).toBe(true);
     expect(await t.db('runs').count({ n: '*' })).toEqual([{ n: 0 }]);
@@ -39,7 +43,9 @@ describe('POST /api/scenarios/:id/runs', () => {
   it('answers 400 naming the field when a list in the result is malformed', async () => {
     const eng = await t.signIn('engineer');
     const trajectories = { ...(run.result.trajectories as object), positions_m: [0, 'north', 1] };
-    const res = await eng.post(`/api/scenarios/${scenarioId}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: { ...run.result, trajectories } });
+    const res = await eng
+      .post(`/api/scenarios/${scenarioId}/runs`)
+      .send({ scenarioVersion: 1, input: run.scenario, result: { ...run.result, trajectories } });
     expect(res.status).toBe(400);
     expect(res.body.issues).toContainEqual({ path: 'body.result.trajectories.positions_m.1', message: 'must hold numbers, got "north"' });
     expect(await t.db('runs').count({ n: '*' })).toEqual([{ n: 0 }]);

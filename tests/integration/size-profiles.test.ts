@@ -24,8 +24,16 @@ async function upload(role: 'engineer' | 'admin', csv: string | Buffer, fileName
 }
 
 describe('size-profile endpoints refuse the wrong people', () => {
-  const reads = [['get', '/api/size-profiles'], ['get', '/api/size-profiles/1'], ['get', '/api/size-profiles/templates/impactor.csv']] as const;
-  const writes = [['post', '/api/size-profiles'], ['post', '/api/size-profiles/upload'], ['delete', '/api/size-profiles/1']] as const;
+  const reads = [
+    ['get', '/api/size-profiles'],
+    ['get', '/api/size-profiles/1'],
+    ['get', '/api/size-profiles/templates/impactor.csv'],
+  ] as const;
+  const writes = [
+    ['post', '/api/size-profiles'],
+    ['post', '/api/size-profiles/upload'],
+    ['delete', '/api/size-profiles/1'],
+  ] as const;
 
   it.each([...reads, ...writes])('answers 401 to anonymous %s %s', async (method, url) => {
     const res = await t.anonymous()[method](url);
@@ -50,9 +58,20 @@ describe('POST /api/size-profiles (lognormal and respirable-only forms)', () => 
     const before = await count('audit_log');
     const res = await (await t.signIn('engineer')).post('/api/size-profiles').send(LOGNORMAL);
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ kind: 'lognormal', fittedMmad_m: 5e-6, fittedGsd: 2, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 5e-6, gsd: 2 } });
+    expect(res.body).toMatchObject({
+      kind: 'lognormal',
+      fittedMmad_m: 5e-6,
+      fittedGsd: 2,
+      sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 5e-6, gsd: 2 },
+    });
     const row = await t.db('size_profiles').where({ id: res.body.id }).first();
-    expect(row).toMatchObject({ name: 'Grinding dust', kind: 'lognormal', fitted_gsd: 2, deleted_at: null, created_by: await t.personId('engineer') });
+    expect(row).toMatchObject({
+      name: 'Grinding dust',
+      kind: 'lognormal',
+      fitted_gsd: 2,
+      deleted_at: null,
+      created_by: await t.personId('engineer'),
+    });
     expect(JSON.parse(row.input)).toMatchObject({ basis: 'mmad', median_m: 5e-6 });
     expect(row.respirable_fraction).toBeGreaterThan(0.2);
     expect(await count('audit_log')).toBe(before + 1);
@@ -61,16 +80,29 @@ describe('POST /api/size-profiles (lognormal and respirable-only forms)', () => 
   });
 
   it('stores a respirable fraction as given with the assumed GSD 2', async () => {
-    const res = await (await t.signIn('admin')).post('/api/size-profiles').send({ kind: 'respirable', name: 'Sanding (respirable only)', respirableFraction: 0.35 });
+    const res = await (
+      await t.signIn('admin')
+    )
+      .post('/api/size-profiles')
+      .send({ kind: 'respirable', name: 'Sanding (respirable only)', respirableFraction: 0.35 });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ kind: 'respirable', respirableFraction: 0.35, fittedGsd: 2 });
   });
 
   it('answers 400 with every field path, stores nothing', async () => {
     const before = await count('size_profiles');
-    const res = await (await t.signIn('engineer')).post('/api/size-profiles').send({ kind: 'lognormal', name: '', basis: 'cmd', median_m: -1, gsd: 0.5 });
+    const res = await (
+      await t.signIn('engineer')
+    )
+      .post('/api/size-profiles')
+      .send({ kind: 'lognormal', name: '', basis: 'cmd', median_m: -1, gsd: 0.5 });
     expect(res.status).toBe(400);
-    expect(res.body.issues.map((i: { path: string }) => i.path).sort()).toEqual(['body.density_kgPerM3', 'body.gsd', 'body.median_m', 'body.name']);
+    expect(res.body.issues.map((i: { path: string }) => i.path).sort()).toEqual([
+      'body.density_kgPerM3',
+      'body.gsd',
+      'body.median_m',
+      'body.name',
+    ]);
     const cmd = await (await t.signIn('engineer')).post('/api/size-profiles').send({ ...LOGNORMAL, basis: 'cmd' });
     expect(cmd.status).toBe(400);
     expect(cmd.body.issues[0].path).toBe('body.density_kgPerM3');
@@ -93,7 +125,12 @@ describe('POST /api/size-profiles/upload: good files', () => {
   });
 
   it('stores counter bins when the density is given and confirmed', async () => {
-    const res = await upload('engineer', COUNTER, 'counts.CSV', { format: 'counter', name: 'Counter', density_kgPerM3: '2650', density_confirmed: 'true' });
+    const res = await upload('engineer', COUNTER, 'counts.CSV', {
+      format: 'counter',
+      name: 'Counter',
+      density_kgPerM3: '2650',
+      density_confirmed: 'true',
+    });
     expect(res.status).toBe(201);
     expect(res.body.input).toMatchObject({ kind: 'counter', density_kgPerM3: 2650 });
     expect(res.body.bins.massFraction.every((m: number) => m > 0)).toBe(true);
@@ -163,7 +200,13 @@ describe('reading, listing, templates and deleting', () => {
   it('lists live profiles, paginated and sorted by the asked column', async () => {
     const res = await (await t.signIn('viewer')).get('/api/size-profiles?sort=name&order=asc&pageSize=2');
     expect(res.status).toBe(200);
-    expect(res.body.total).toBe(await t.db('size_profiles').whereNull('deleted_at').count({ n: '*' }).then((r) => Number(r[0].n)));
+    expect(res.body.total).toBe(
+      await t
+        .db('size_profiles')
+        .whereNull('deleted_at')
+        .count({ n: '*' })
+        .then((r) => Number(r[0].n)),
+    );
     expect(res.body.items).toHaveLength(2);
     const names = res.body.items.map((p: { name: string }) => p.name);
     expect(names).toEqual([...names].sort());
@@ -175,7 +218,12 @@ describe('reading, listing, templates and deleting', () => {
     const viewer = await t.signIn('viewer');
     const res = await viewer.get('/api/size-profiles/1');
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: 1, bins: { edges_m: expect.any(Array) }, thoracicFraction: expect.any(Number), inhalableFraction: expect.any(Number) });
+    expect(res.body).toMatchObject({
+      id: 1,
+      bins: { edges_m: expect.any(Array) },
+      thoracicFraction: expect.any(Number),
+      inhalableFraction: expect.any(Number),
+    });
     expect((await viewer.get('/api/size-profiles/9999')).status).toBe(404);
     expect((await viewer.get('/api/size-profiles/abc')).status).toBe(400);
   });
@@ -187,7 +235,12 @@ describe('reading, listing, templates and deleting', () => {
       expect(res.status).toBe(200);
       expect(res.headers['content-type']).toMatch(/text\/csv/);
       expect(res.headers['content-disposition']).toMatch(/attachment/);
-      const up = await upload('engineer', res.text, `${format}.csv`, { format, name: `Template ${format}`, density_kgPerM3: '1500', density_confirmed: 'true' });
+      const up = await upload('engineer', res.text, `${format}.csv`, {
+        format,
+        name: `Template ${format}`,
+        density_kgPerM3: '1500',
+        density_confirmed: 'true',
+      });
       expect(up.status).toBe(201);
     }
     expect((await viewer.get('/api/size-profiles/templates/excel.csv')).status).toBe(400);
@@ -200,7 +253,12 @@ describe('reading, listing, templates and deleting', () => {
     expect(res.status).toBe(204);
     expect((await t.db('size_profiles').where({ id: created.body.id }).first()).deleted_at).not.toBeNull();
     expect((await engineer.get(`/api/size-profiles/${created.body.id}`)).status).toBe(404);
-    expect(await t.db('audit_log').where({ action: 'size_profile.deleted', target_id: String(created.body.id) }).first()).toBeTruthy();
+    expect(
+      await t
+        .db('audit_log')
+        .where({ action: 'size_profile.deleted', target_id: String(created.body.id) })
+        .first(),
+    ).toBeTruthy();
     expect((await engineer.delete(`/api/size-profiles/${created.body.id}`)).status).toBe(404);
     expect((await engineer.delete('/api/size-profiles/zero')).status).toBe(400);
   });

@@ -40,7 +40,9 @@ describe('places and dust agents', () => {
     const eng = await t.signIn('engineer');
     const roomId = (await t.db('rooms').first()).id;
     const before = await count('workstations');
-    const res = await eng.post('/api/workstations').send({ roomId, name: 'Too far', data: { ...WORKSTATION_DATA, worker: { ...WORKSTATION_DATA.worker, x_m: 30 } } });
+    const res = await eng
+      .post('/api/workstations')
+      .send({ roomId, name: 'Too far', data: { ...WORKSTATION_DATA, worker: { ...WORKSTATION_DATA.worker, x_m: 30 } } });
     expect(res.status).toBe(400);
     expect(res.body.issues).toContainEqual({ path: 'body.data.worker.x_m', message: 'Must be within the room length (8 m), got 30' });
     expect(await count('workstations')).toBe(before);
@@ -50,12 +52,18 @@ describe('places and dust agents', () => {
     const eng = await t.signIn('engineer');
     const res = await eng.post('/api/agents').send({ name: '', data: { ...AGENT.data, density_kgPerM3: -1, shapeFactor: 0.5 } });
     expect(res.status).toBe(400);
-    expect(res.body.issues.map((i: { path: string }) => i.path).sort()).toEqual(['body.data.density_kgPerM3', 'body.data.shapeFactor', 'body.name']);
+    expect(res.body.issues.map((i: { path: string }) => i.path).sort()).toEqual([
+      'body.data.density_kgPerM3',
+      'body.data.shapeFactor',
+      'body.name',
+    ]);
   });
 
   it('records a limit override with its reason in the audit log', async () => {
     const eng = await t.signIn('engineer');
-    const res = await eng.put(`/api/agents/${agentId}`).send({ name: AGENT.name, data: { ...AGENT.data, override: { limit8h_mgPerM3: 0.05, reason: 'Site follows the OSHA PEL' } } });
+    const res = await eng
+      .put(`/api/agents/${agentId}`)
+      .send({ name: AGENT.name, data: { ...AGENT.data, override: { limit8h_mgPerM3: 0.05, reason: 'Site follows the OSHA PEL' } } });
     expect(res.status).toBe(200);
     expect(res.body.data.override.limit8h_mgPerM3).toBe(0.05);
     const audit = await t.db('audit_log').where({ action: 'agent.limit_overridden' }).first();
@@ -79,13 +87,27 @@ describe('scenarios', () => {
 
   it('creates a scenario, stores its input and writes the audit log', async () => {
     const eng = await t.signIn('engineer');
-    const res = await eng.post('/api/scenarios').send({ workstationId, agentId, name: 'Flanged hood 0.3 m³/s', controlTier: 'engineering', input: scenarioInput() });
+    const res = await eng
+      .post('/api/scenarios')
+      .send({ workstationId, agentId, name: 'Flanged hood 0.3 m³/s', controlTier: 'engineering', input: scenarioInput() });
     expect(res.status).toBe(201);
     scenarioId = res.body.id;
-    expect(res.body).toMatchObject({ name: 'Flanged hood 0.3 m³/s', version: 1, status: 'draft', workstationName: 'Bench 1', agentName: 'Test quartz', lastRun: null });
+    expect(res.body).toMatchObject({
+      name: 'Flanged hood 0.3 m³/s',
+      version: 1,
+      status: 'draft',
+      workstationName: 'Bench 1',
+      agentName: 'Test quartz',
+      lastRun: null,
+    });
     const row = await t.db('scenarios').where({ id: scenarioId }).first();
     expect(JSON.parse(row.input).hoods[0].airflow_m3PerS).toBe(0.3);
-    expect(await t.db('audit_log').where({ action: 'scenario.created', target_id: String(scenarioId) }).first()).toBeTruthy();
+    expect(
+      await t
+        .db('audit_log')
+        .where({ action: 'scenario.created', target_id: String(scenarioId) })
+        .first(),
+    ).toBeTruthy();
   });
 
   it('saves an edit with the right version and answers 409 with the current version to a stale one', async () => {

@@ -11,37 +11,46 @@ const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.lengt
 
 const server = await startServer({ DEMO_PARTICLES: '2000' });
 try {
-  const login = await fetch(`${server.url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json', Origin: server.url }, body: JSON.stringify({ email: 'engineer@motewalk.local', password: 'demo-engineer-pass' }) });
+  const login = await fetch(`${server.url}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', Origin: server.url },
+    body: JSON.stringify({ email: 'engineer@motewalk.local', password: 'demo-engineer-pass' }),
+  });
   const cookie = login.headers.get('set-cookie')!.split(';')[0];
   const scenarios = (await (await fetch(`${server.url}/api/scenarios`, { headers: { Cookie: cookie } })).json()).items as { id: number }[];
   const ws = (await (await fetch(`${server.url}/api/sites`, { headers: { Cookie: cookie } })).json()).items[0].rooms[0].workstations[0].id;
   const headers = { Cookie: cookie, Origin: server.url, 'Content-Type': 'application/json' };
   let n = 0;
-  console.log(`Load: ${RATE} requests/s offered over ${CONNECTIONS} connections for ${DURATION_S} s against ${server.url} (reads 80 %, writes 20 %)`);
+  console.log(
+    `Load: ${RATE} requests/s offered over ${CONNECTIONS} connections for ${DURATION_S} s against ${server.url} (reads 80 %, writes 20 %)`,
+  );
   const latencies: number[] = [];
   let finish: (r: autocannon.Result) => void = () => {};
   const done = new Promise<autocannon.Result>((resolve) => (finish = resolve));
-  const instance = autocannon({
-    url: server.url,
-    connections: CONNECTIONS,
-    overallRate: RATE,
-    duration: DURATION_S,
-    headers,
-    requests: [
-      { method: 'GET', path: '/api/scenarios?sort=name&order=asc' },
-      { method: 'GET', path: `/api/scenarios/${scenarios[0].id}` },
-      { method: 'GET', path: `/api/workstations/${ws}` },
-      { method: 'GET', path: '/api/agents' },
-      {
-        method: 'POST',
-        path: '/api/sites',
-        setupRequest: (req) => ({ ...req, body: JSON.stringify({ name: `Load site ${(n += 1)}`, data: { address: 'loopback' } }) }),
-      },
-    ],
-  }, (err, r) => {
-    if (err) throw err;
-    finish(r);
-  });
+  const instance = autocannon(
+    {
+      url: server.url,
+      connections: CONNECTIONS,
+      overallRate: RATE,
+      duration: DURATION_S,
+      headers,
+      requests: [
+        { method: 'GET', path: '/api/scenarios?sort=name&order=asc' },
+        { method: 'GET', path: `/api/scenarios/${scenarios[0].id}` },
+        { method: 'GET', path: `/api/workstations/${ws}` },
+        { method: 'GET', path: '/api/agents' },
+        {
+          method: 'POST',
+          path: '/api/sites',
+          setupRequest: (req) => ({ ...req, body: JSON.stringify({ name: `Load site ${(n += 1)}`, data: { address: 'loopback' } }) }),
+        },
+      ],
+    },
+    (err, r) => {
+      if (err) throw err;
+      finish(r);
+    },
+  );
   instance.on('response', (_client: unknown, _status: number, _bytes: number, ms: number) => latencies.push(ms));
   const result = await done;
   latencies.sort((a, b) => a - b);
@@ -58,7 +67,11 @@ try {
       `- ${ok ? 'target met' : 'target NOT met'}`,
     ]);
   }
-  console.log(ok ? 'Target met: >= 200 requests/s sustained, p95 < 50 ms, no errors' : 'Target NOT met: >= 200 requests/s with p95 < 50 ms and no errors');
+  console.log(
+    ok
+      ? 'Target met: >= 200 requests/s sustained, p95 < 50 ms, no errors'
+      : 'Target NOT met: >= 200 requests/s with p95 < 50 ms and no errors',
+  );
   process.exitCode = ok ? 0 : 1;
 } finally {
   await server.stop();

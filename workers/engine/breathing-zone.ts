@@ -5,9 +5,12 @@ type Room = PreparedScenario['room'];
 // The sphere may poke through a wall or the floor; only the part inside the room holds air.
 export function zoneVolume_m3(room: Room, x: number, y: number, z: number, radius_m: number): number {
   const inside =
-    x - radius_m >= 0 && x + radius_m <= room.length_m &&
-    y - radius_m >= 0 && y + radius_m <= room.width_m &&
-    z - radius_m >= 0 && z + radius_m <= room.height_m;
+    x - radius_m >= 0 &&
+    x + radius_m <= room.length_m &&
+    y - radius_m >= 0 &&
+    y + radius_m <= room.width_m &&
+    z - radius_m >= 0 &&
+    z + radius_m <= room.height_m;
   const sphere = (4 / 3) * Math.PI * radius_m ** 3;
   if (inside) return sphere;
   const n = 64;

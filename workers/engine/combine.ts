@@ -2,7 +2,17 @@ import { bannerFor, exposureRatingCategory } from '../../shared/physics/index';
 import { crossChecks } from './cross-checks';
 import { captureVelocityMap, depositionMap } from './maps';
 import { batchEstimate } from './statistics';
-import { type BatchResult, type Fate, FATES, type Fraction, type FractionSummary, FRACTIONS, type PreparedScenario, type Results, type SeriesBand } from './types';
+import {
+  type BatchResult,
+  type Fate,
+  FATES,
+  type Fraction,
+  type FractionSummary,
+  FRACTIONS,
+  type PreparedScenario,
+  type Results,
+  type SeriesBand,
+} from './types';
 import { ENGINE_VERSION } from './version';
 
 const SHIFT_min = 480;
@@ -16,7 +26,8 @@ export function batchSeries(p: PreparedScenario, batch: BatchResult, fraction: F
   const scale = 1 / (p.zone.volume_m3 * p.timeBin_s);
   for (let tb = 0; tb < p.timeBins; tb++) {
     let sum = 0;
-    for (let b = 0; b < nB; b++) sum += batch.zoneResidence_s[tb * nB + b] * p.bins.particleMass_mg[b] * p.bins.conventionWeight[f * nB + b];
+    for (let b = 0; b < nB; b++)
+      sum += batch.zoneResidence_s[tb * nB + b] * p.bins.particleMass_mg[b] * p.bins.conventionWeight[f * nB + b];
     series[tb] = sum * scale;
   }
   return series;
@@ -86,7 +97,15 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
   const wallTime_s = elapsed_s ?? batches.reduce((a, b) => a + b.wallTime_s, 0);
   const first = batches[0];
   const results: Results = {
-    engine: { version: ENGINE_VERSION, seed: p.seed, particles: p.particlesPerBatch * batches.length, batches: batches.length, timeStep_s: p.maxTimeStep_s, stepFraction: p.stepFraction, sizeBins: p.bins.count },
+    engine: {
+      version: ENGINE_VERSION,
+      seed: p.seed,
+      particles: p.particlesPerBatch * batches.length,
+      batches: batches.length,
+      timeStep_s: p.maxTimeStep_s,
+      stepFraction: p.stepFraction,
+      sizeBins: p.bins.count,
+    },
     breathingZone: { volume_m3: p.zone.volume_m3, fractions, series },
     fate,
     crossChecks: crossChecks(p, p.limit?.fraction ?? 'respirable'),

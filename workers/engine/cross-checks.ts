@@ -37,15 +37,42 @@ export function crossChecks(p: PreparedScenario, fraction: Fraction): Results['c
     const settle = bins.settling_mPerS[b] / room.height_m;
     // Linear models: switching the source off at T is the source minus itself delayed by T.
     const switched = (response: (t: number) => number) => (t: number) => response(t) - (t > release_s ? response(t - release_s) : 0);
-    wellMixed += timeAverage(duration_s, switched((t) => wellMixedConcentration({ generation_mgPerS: g, airflow_m3PerS: airflow, volume_m3: room.volume_m3, lossRate_perS: settle }, t)));
+    wellMixed += timeAverage(
+      duration_s,
+      switched((t) =>
+        wellMixedConcentration({ generation_mgPerS: g, airflow_m3PerS: airflow, volume_m3: room.volume_m3, lossRate_perS: settle }, t),
+      ),
+    );
     if (airflow > 0 || settle > 0) {
-      const model = { generation_mgPerS: g, airflow_m3PerS: airflow, nearFieldVolume_m3: nearVolume, farFieldVolume_m3: room.volume_m3 - nearVolume, interzonalAirflow_m3PerS: beta, lossRate_perS: settle };
-      near += timeAverage(duration_s, switched((t) => nearFieldFarField(model, t).near_mgPerM3));
-      far += timeAverage(duration_s, switched((t) => nearFieldFarField(model, t).far_mgPerM3));
+      const model = {
+        generation_mgPerS: g,
+        airflow_m3PerS: airflow,
+        nearFieldVolume_m3: nearVolume,
+        farFieldVolume_m3: room.volume_m3 - nearVolume,
+        interzonalAirflow_m3PerS: beta,
+        lossRate_perS: settle,
+      };
+      near += timeAverage(
+        duration_s,
+        switched((t) => nearFieldFarField(model, t).near_mgPerM3),
+      );
+      far += timeAverage(
+        duration_s,
+        switched((t) => nearFieldFarField(model, t).far_mgPerM3),
+      );
     }
     if (p.eddyDiffusivity_m2PerS > 0) {
       const loss = airflow / room.volume_m3 + settle;
-      eddy += eddyContinuousSource({ generation_mgPerS: g, diffusivity_m2PerS: p.eddyDiffusivity_m2PerS, lossRate_perS: loss, boundary: c.sourceOnFloor ? 'floor' : 'free' }, radius, Infinity);
+      eddy += eddyContinuousSource(
+        {
+          generation_mgPerS: g,
+          diffusivity_m2PerS: p.eddyDiffusivity_m2PerS,
+          lossRate_perS: loss,
+          boundary: c.sourceOnFloor ? 'floor' : 'free',
+        },
+        radius,
+        Infinity,
+      );
     }
   }
   return { fraction, wellMixed_mgPerM3: wellMixed, nearField_mgPerM3: near, farField_mgPerM3: far, eddySteady_mgPerM3: eddy };

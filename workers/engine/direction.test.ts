@@ -17,7 +17,12 @@ describe('direction checks with common random numbers', () => {
 
   it('bigger particles settle more', () => {
     const settled = (median_m: number) => {
-      const p = prepareTest({ ...workstation, hoods: [], dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m, gsd: 1.5 } }, run: { particles: 1600, batches: 4, seed: 4 } });
+      const p = prepareTest({
+        ...workstation,
+        hoods: [],
+        dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m, gsd: 1.5 } },
+        run: { particles: 1600, batches: 4, seed: 4 },
+      });
       return runAll(p).map((r) => r.fateMass_mg[1] / p.emission.emitted_mg);
     };
     const small = settled(3e-6);

@@ -19,7 +19,10 @@ export function testScenario(overrides: Overrides = {}) {
   const merged: Record<string, unknown> = { ...base };
   for (const [key, value] of Object.entries(overrides)) {
     const old = (base as Record<string, unknown>)[key];
-    merged[key] = old && typeof old === 'object' && !Array.isArray(old) && value && typeof value === 'object' && !Array.isArray(value) ? { ...old, ...value } : value;
+    merged[key] =
+      old && typeof old === 'object' && !Array.isArray(old) && value && typeof value === 'object' && !Array.isArray(value)
+        ? { ...old, ...value }
+        : value;
   }
   return parseScenario(merged);
 }
@@ -73,7 +76,16 @@ export function spherePoints(cx: number, cy: number, cz: number, radius: number,
 }
 
 /** Average of an analytic C(r, t) over a sphere and a time window (midpoint rule in time). */
-export function zoneAverage(points: [number, number, number][], sx: number, sy: number, sz: number, t0: number, t1: number, c: (r: number, t: number) => number, steps = 24): number {
+export function zoneAverage(
+  points: [number, number, number][],
+  sx: number,
+  sy: number,
+  sz: number,
+  t0: number,
+  t1: number,
+  c: (r: number, t: number) => number,
+  steps = 24,
+): number {
   let sum = 0;
   for (let j = 0; j < steps; j++) {
     const t = t0 + ((j + 0.5) / steps) * (t1 - t0);

@@ -8,9 +8,33 @@ import * as slots from './hood-slots';
 // of a literal offset in a small loop under tsx).
 const { OPENING_DISTANCE_FACTOR } = fit;
 const {
-  HOOD_AIRFLOW, HOOD_AREA, HOOD_BOOTH_DEPTH, HOOD_COEFFICIENT, HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z,
-  HOOD_FACE_VELOCITY, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_KIND, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_REACH, HOOD_STRIDE,
-  HOOD_WIDTH, HOOD_X, HOOD_Y, HOOD_Z, KIND_BOOTH, KIND_FLANGED, KIND_FLANGED_SLOT, KIND_SLOT,
+  HOOD_AIRFLOW,
+  HOOD_AREA,
+  HOOD_BOOTH_DEPTH,
+  HOOD_COEFFICIENT,
+  HOOD_E1X,
+  HOOD_E1Y,
+  HOOD_E1Z,
+  HOOD_E2X,
+  HOOD_E2Y,
+  HOOD_E2Z,
+  HOOD_FACE_VELOCITY,
+  HOOD_HALF_HEIGHT,
+  HOOD_HALF_WIDTH,
+  HOOD_KIND,
+  HOOD_NX,
+  HOOD_NY,
+  HOOD_NZ,
+  HOOD_REACH,
+  HOOD_STRIDE,
+  HOOD_WIDTH,
+  HOOD_X,
+  HOOD_Y,
+  HOOD_Z,
+  KIND_BOOTH,
+  KIND_FLANGED,
+  KIND_FLANGED_SLOT,
+  KIND_SLOT,
 } = slots;
 
 export { HOOD_STRIDE } from './hood-slots';
@@ -54,7 +78,8 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
     p[o + HOOD_COEFFICIENT] = COEFFICIENT[kind];
     p[o + HOOD_FACE_VELOCITY] = hood.airflow_m3PerS / area;
     p[o + HOOD_WIDTH] = hood.faceWidth_m;
-    p[o + HOOD_REACH] = kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? hood.faceHeight_m / 2 : Math.hypot(hood.faceWidth_m, hood.faceHeight_m) / 2;
+    p[o + HOOD_REACH] =
+      kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? hood.faceHeight_m / 2 : Math.hypot(hood.faceWidth_m, hood.faceHeight_m) / 2;
     p[o + HOOD_BOOTH_DEPTH] = Math.min(hood.faceWidth_m, hood.faceHeight_m) / 2;
   });
   return p;
@@ -122,7 +147,9 @@ export function evaluateHoods(p: Float64Array, count: number, x: number, y: numb
     const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH;
     if (flanged && a <= 0) continue;
     const area = p[o + HOOD_AREA];
-    let resistance = slot ? p[o + HOOD_COEFFICIENT] * p[o + HOOD_WIDTH] * r : p[o + HOOD_COEFFICIENT] * (OPENING_DISTANCE_FACTOR * s2 + area);
+    let resistance = slot
+      ? p[o + HOOD_COEFFICIENT] * p[o + HOOD_WIDTH] * r
+      : p[o + HOOD_COEFFICIENT] * (OPENING_DISTANCE_FACTOR * s2 + area);
     if (resistance < area) resistance = area;
     // q/(R·r), times (1 + cos θ)/2 = (r + a)/(2r) off a plain face, written as q·r/(R·r²) so the
     // division does not wait for the square root.

@@ -13,9 +13,26 @@ export const NORMAL_BLOCK = 3 * 2048;
  * scenario's integers stops and recompiles when the next scenario brings fractions.
  */
 export const SCALAR = {
-  draftX: 0, draftY: 1, zoneFloor: 2, hoodFloor: 3, cx: 4, cy: 5, cz: 6, maxStep: 7, minStep: 8,
-  stepFraction: 9, driftFraction: 10, midpointLimit: 11, invBin: 12, L: 13, W: 14, H: 15,
-  wrapX: 16, wrapY: 17, R: 18, duration: 19,
+  draftX: 0,
+  draftY: 1,
+  zoneFloor: 2,
+  hoodFloor: 3,
+  cx: 4,
+  cy: 5,
+  cz: 6,
+  maxStep: 7,
+  minStep: 8,
+  stepFraction: 9,
+  driftFraction: 10,
+  midpointLimit: 11,
+  invBin: 12,
+  L: 13,
+  W: 14,
+  H: 15,
+  wrapX: 16,
+  wrapY: 17,
+  R: 18,
+  duration: 19,
 } as const;
 const SCALAR_COUNT = 20;
 // Steps whose hood drift uses under a fifth of the drift limit keep Euler: their lag is negligible.
@@ -57,7 +74,11 @@ export class Kernel {
   steps = 0;
   live: number;
 
-  constructor(p: PreparedScenario, readonly a: ParticleArrays, readonly rng: Xoshiro128) {
+  constructor(
+    p: PreparedScenario,
+    readonly a: ParticleArrays,
+    readonly rng: Xoshiro128,
+  ) {
     const rule = stepRule(p);
     this.settling = p.bins.settling_mPerS;
     this.sqrt2D = p.bins.diffusivity_m2PerS.map((d) => Math.sqrt(2 * d));

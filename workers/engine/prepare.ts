@@ -54,9 +54,16 @@ export function prepareScenario(s: Scenario): PreparedScenario {
     // A step never spans more than a quarter of a time bin, so residence lands in the right bin.
     maxTimeStep_s: Math.min(s.run.maxTimeStep_s, timeBin_s / 4),
     stepFraction: s.run.stepFraction,
-    task: { minutesPerShift: s.source.taskMinutesPerShift ?? Math.min(480, s.source.emission.taskDuration_min), background_mgPerM3: s.source.background_mgPerM3 },
+    task: {
+      minutesPerShift: s.source.taskMinutesPerShift ?? Math.min(480, s.source.emission.taskDuration_min),
+      background_mgPerM3: s.source.background_mgPerM3,
+    },
     deposition: { nx: 40, ny: 40 },
-    trajectory: { particles: TRAJECTORY_PARTICLES, frames: TRAJECTORY_FRAMES, frameInterval_s: Math.min(duration_s, 300) / TRAJECTORY_FRAMES },
+    trajectory: {
+      particles: TRAJECTORY_PARTICLES,
+      frames: TRAJECTORY_FRAMES,
+      frameInterval_s: Math.min(duration_s, 300) / TRAJECTORY_FRAMES,
+    },
     limit: s.limit ? { fraction: s.limit.fraction, value_mgPerM3: s.limit.value_mgPerM3 } : undefined,
     crossCheck: {
       airflow_m3PerS: (s.room.airChanges_perH * volume_m3) / 3600,

@@ -40,7 +40,8 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
     const nb = p.bins.particlesPerBatch[b];
     const eventOffset = Math.floor(rng.nextUniform() * Math.max(1, events.length));
     for (let j = 0; j < nb; j++, i++) {
-      const t0 = emission.kind === 'continuous' ? ((j + rng.nextUniform()) / nb) * emission.release_s : events[(j + eventOffset) % events.length];
+      const t0 =
+        emission.kind === 'continuous' ? ((j + rng.nextUniform()) / nb) * emission.release_s : events[(j + eventOffset) % events.length];
       let x = s.x_m;
       let y = s.y_m;
       let z = s.z_m;

@@ -11,7 +11,14 @@ describe('xoshiro128**', () => {
   });
 
   it('gives each (seed, batch) its own stream and the same stream every time', () => {
-    const draw = (seed: number, batch: number) => Array.from({ length: 4 }, ((r) => () => r.nextInt32())(batchStream(seed, batch)));
+    const draw = (seed: number, batch: number) =>
+      Array.from(
+        { length: 4 },
+        (
+          (r) => () =>
+            r.nextInt32()
+        )(batchStream(seed, batch)),
+      );
     expect(draw(1, 0)).toEqual(draw(1, 0));
     expect(draw(1, 0)).not.toEqual(draw(1, 1));
     expect(draw(1, 0)).not.toEqual(draw(2, 0));

@@ -14,14 +14,23 @@ describe('size bins', () => {
   });
 
   it('give particle weights that sum to the emitted mass in every bin set-up', () => {
-    const p = prepareTest({ dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 12e-6, gsd: 2.4 } }, run: { particles: 3000, batches: 3 } });
+    const p = prepareTest({
+      dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 12e-6, gsd: 2.4 } },
+      run: { particles: 3000, batches: 3 },
+    });
     const sum = p.bins.particleMass_mg.reduce((a, m, b) => a + m * p.bins.particlesPerBatch[b], 0);
     expect(sum).toBeCloseTo(p.emission.emitted_mg, 12);
   });
 
   it('do not starve the respirable bins when coarse dust carries the mass', () => {
-    const p = prepareTest({ dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 30e-6, gsd: 2 } }, run: { particles: 3000, batches: 3 } });
-    const respirableParticles = Array.from(p.bins.particlesPerBatch).reduce((a, n, b) => a + n * respirableFraction(p.bins.aerodynamic_m[b]), 0);
+    const p = prepareTest({
+      dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 30e-6, gsd: 2 } },
+      run: { particles: 3000, batches: 3 },
+    });
+    const respirableParticles = Array.from(p.bins.particlesPerBatch).reduce(
+      (a, n, b) => a + n * respirableFraction(p.bins.aerodynamic_m[b]),
+      0,
+    );
     const respirableMass = Array.from(p.bins.massFraction).reduce((a, m, b) => a + m * respirableFraction(p.bins.aerodynamic_m[b]), 0);
     expect(respirableParticles / 1000).toBeGreaterThan(5 * respirableMass);
   });
@@ -39,7 +48,11 @@ describe('size bins', () => {
   });
 
   it('convert counts to mass with d³ for count-basis bins', () => {
-    const shares = massShares(dust({ kind: 'bins', basis: 'count', diameter: 'aerodynamic', edges_m: [1e-6, 1.2e-6, 10e-6, 12e-6], amounts: [1000, 0, 1] }), binEdges_m(), STANDARD_AIR);
+    const shares = massShares(
+      dust({ kind: 'bins', basis: 'count', diameter: 'aerodynamic', edges_m: [1e-6, 1.2e-6, 10e-6, 12e-6], amounts: [1000, 0, 1] }),
+      binEdges_m(),
+      STANDARD_AIR,
+    );
     const e = binEdges_m();
     const small = shares.reduce((a, m, b) => a + (e[b + 1] <= 2e-6 ? m : 0), 0);
     // 1000 particles near 1.1 µm against one near 11 µm: equal mass within the d³ of their mid-points.

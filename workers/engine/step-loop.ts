@@ -21,7 +21,7 @@ export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshi
   const k = new Kernel(p, a, rng);
   let nextReport = PROGRESS_EVERY;
   while (k.live > 0) {
-    for (let i = 0; i < k.live; ) {
+    for (let i = 0; i < k.live;) {
       const f = walk(k, i);
       if (f < 0) i++;
       else retire(k, i, f);
@@ -32,7 +32,14 @@ export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshi
     }
   }
   restoreOrder(a, k.ids);
-  return { zoneResidence_s: k.zoneResidence_s, fateMass_mg: k.fateMass_mg, deposition_mg: k.deposition_mg, trajectories: k.trajectories, fate: k.fate, particleSteps: k.steps };
+  return {
+    zoneResidence_s: k.zoneResidence_s,
+    fateMass_mg: k.fateMass_mg,
+    deposition_mg: k.deposition_mg,
+    trajectories: k.trajectories,
+    fate: k.fate,
+    particleSteps: k.steps,
+  };
 }
 
 function progressFraction(a: ParticleArrays, live: number, duration: number): number {

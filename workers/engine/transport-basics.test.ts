@@ -73,7 +73,12 @@ describe('diffusion carried by a draft', () => {
 });
 
 describe('pure settling', () => {
-  const settle = { room: { eddyDiffusivity_m2PerS: 0, length_m: 10, width_m: 10, height_m: 3 }, source: { x_m: 5, y_m: 5, z_m: 2 }, worker: { x_m: 1, y_m: 1, z_m: 1 }, dust: { density_kgPerM3: 1000, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 20e-6, gsd: 1 } } };
+  const settle = {
+    room: { eddyDiffusivity_m2PerS: 0, length_m: 10, width_m: 10, height_m: 3 },
+    source: { x_m: 5, y_m: 5, z_m: 2 },
+    worker: { x_m: 1, y_m: 1, z_m: 1 },
+    dust: { density_kgPerM3: 1000, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 20e-6, gsd: 1 } },
+  };
 
   it('falls V_TS·t in time t (Hinds Eq. 3.21 with drag correction, via settlingVelocity)', () => {
     const p = prepareTest({ ...settle, run: { particles: 400, batches: 2, duration_s: 20 } }, (q) => (q.keepParticles = true));

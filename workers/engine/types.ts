@@ -43,7 +43,13 @@ export interface PreparedScenario {
   trajectory: { particles: number; frames: number; frameInterval_s: number };
   limit?: { fraction: Fraction; value_mgPerM3: number };
   /** Inputs of the analytic cross-checks, derived from the scenario in prepareScenario. */
-  crossCheck: { airflow_m3PerS: number; hoodAirflow_m3PerS: number; sourceToZone_m: number; randomAirSpeed_mPerS: number; sourceOnFloor: boolean };
+  crossCheck: {
+    airflow_m3PerS: number;
+    hoodAirflow_m3PerS: number;
+    sourceToZone_m: number;
+    randomAirSpeed_mPerS: number;
+    sourceOnFloor: boolean;
+  };
   /** Tests ask for the final particle states; normal runs leave it off. */
   keepParticles: boolean;
 }

@@ -7,9 +7,32 @@ import { fillNormals } from './ziggurat';
 // Module-level copies of imported numbers, which V8 compiles as literals (see hood-field.ts).
 const { OPENING_DISTANCE_FACTOR } = fit;
 const {
-  HOOD_AIRFLOW, HOOD_AREA, HOOD_BOOTH_DEPTH, HOOD_COEFFICIENT, HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z,
-  HOOD_FACE_VELOCITY, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_KIND, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_REACH, HOOD_WIDTH,
-  HOOD_X, HOOD_Y, HOOD_Z, KIND_BOOTH, KIND_FLANGED, KIND_FLANGED_SLOT, KIND_SLOT,
+  HOOD_AIRFLOW,
+  HOOD_AREA,
+  HOOD_BOOTH_DEPTH,
+  HOOD_COEFFICIENT,
+  HOOD_E1X,
+  HOOD_E1Y,
+  HOOD_E1Z,
+  HOOD_E2X,
+  HOOD_E2Y,
+  HOOD_E2Z,
+  HOOD_FACE_VELOCITY,
+  HOOD_HALF_HEIGHT,
+  HOOD_HALF_WIDTH,
+  HOOD_KIND,
+  HOOD_NX,
+  HOOD_NY,
+  HOOD_NZ,
+  HOOD_REACH,
+  HOOD_WIDTH,
+  HOOD_X,
+  HOOD_Y,
+  HOOD_Z,
+  KIND_BOOTH,
+  KIND_FLANGED,
+  KIND_FLANGED_SLOT,
+  KIND_SLOT,
 } = slots;
 // The fit's 10·X² and the 20·X of its derivative, from shared/physics so the engine and the hand calculation cannot drift apart.
 const GROWTH_FACTOR = 2 * OPENING_DISTANCE_FACTOR;
@@ -60,23 +83,57 @@ export function walk(k: Kernel, i: number): number {
   const hoods = k.hoods;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
-  const draftX = sc[SCALAR.draftX], draftY = sc[SCALAR.draftY], zoneFloor_m = sc[SCALAR.zoneFloor], hoodFloor_m = sc[SCALAR.hoodFloor];
-  const cx = sc[SCALAR.cx], cy = sc[SCALAR.cy], cz = sc[SCALAR.cz], maxStep_s = sc[SCALAR.maxStep], minStep_s = sc[SCALAR.minStep];
-  const stepFraction = sc[SCALAR.stepFraction], driftFraction = sc[SCALAR.driftFraction], midpointLimit = sc[SCALAR.midpointLimit];
-  const invBin = sc[SCALAR.invBin], lastBin = k.lastBin | 0, nBins = k.nBins | 0;
+  const draftX = sc[SCALAR.draftX],
+    draftY = sc[SCALAR.draftY],
+    zoneFloor_m = sc[SCALAR.zoneFloor],
+    hoodFloor_m = sc[SCALAR.hoodFloor];
+  const cx = sc[SCALAR.cx],
+    cy = sc[SCALAR.cy],
+    cz = sc[SCALAR.cz],
+    maxStep_s = sc[SCALAR.maxStep],
+    minStep_s = sc[SCALAR.minStep];
+  const stepFraction = sc[SCALAR.stepFraction],
+    driftFraction = sc[SCALAR.driftFraction],
+    midpointLimit = sc[SCALAR.midpointLimit];
+  const invBin = sc[SCALAR.invBin],
+    lastBin = k.lastBin | 0,
+    nBins = k.nBins | 0;
   // Flags as 0/1 integers: a boolean read from an object is tested as an unknown value (several
   // compares per use); an integer is one test.
-  const L = sc[SCALAR.L], W = sc[SCALAR.W], H = sc[SCALAR.H], wrapX = sc[SCALAR.wrapX] > 0 ? 1 : 0, wrapY = sc[SCALAR.wrapY] > 0 ? 1 : 0;
+  const L = sc[SCALAR.L],
+    W = sc[SCALAR.W],
+    H = sc[SCALAR.H],
+    wrapX = sc[SCALAR.wrapX] > 0 ? 1 : 0,
+    wrapY = sc[SCALAR.wrapY] > 0 ? 1 : 0;
   // Hood 0 in packHoods' layout.
   const h0 = k.hood0;
   const kind = h0[HOOD_KIND];
-  const hx = h0[HOOD_X], hy = h0[HOOD_Y], hz = h0[HOOD_Z], nx = h0[HOOD_NX], ny = h0[HOOD_NY], nz = h0[HOOD_NZ];
-  const e1x = h0[HOOD_E1X], e1y = h0[HOOD_E1Y], e1z = h0[HOOD_E1Z], e2x = h0[HOOD_E2X], e2y = h0[HOOD_E2Y], e2z = h0[HOOD_E2Z];
-  const halfWidth = h0[HOOD_HALF_WIDTH], halfHeight = h0[HOOD_HALF_HEIGHT], airflow = h0[HOOD_AIRFLOW], area = h0[HOOD_AREA], coefficient = h0[HOOD_COEFFICIENT];
-  const faceVelocity = h0[HOOD_FACE_VELOCITY], slotCoefficient = coefficient * h0[HOOD_WIDTH], reach = h0[HOOD_REACH], boothDepth = h0[HOOD_BOOTH_DEPTH];
+  const hx = h0[HOOD_X],
+    hy = h0[HOOD_Y],
+    hz = h0[HOOD_Z],
+    nx = h0[HOOD_NX],
+    ny = h0[HOOD_NY],
+    nz = h0[HOOD_NZ];
+  const e1x = h0[HOOD_E1X],
+    e1y = h0[HOOD_E1Y],
+    e1z = h0[HOOD_E1Z],
+    e2x = h0[HOOD_E2X],
+    e2y = h0[HOOD_E2Y],
+    e2z = h0[HOOD_E2Z];
+  const halfWidth = h0[HOOD_HALF_WIDTH],
+    halfHeight = h0[HOOD_HALF_HEIGHT],
+    airflow = h0[HOOD_AIRFLOW],
+    area = h0[HOOD_AREA],
+    coefficient = h0[HOOD_COEFFICIENT];
+  const faceVelocity = h0[HOOD_FACE_VELOCITY],
+    slotCoefficient = coefficient * h0[HOOD_WIDTH],
+    reach = h0[HOOD_REACH],
+    boothDepth = h0[HOOD_BOOTH_DEPTH];
   const slot = kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? 1 : 0;
-  const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH ? 1 : 0, booth = kind === KIND_BOOTH ? 1 : 0;
-  const captureDepth_m = +CAPTURE_DEPTH_m, normalBlock = NORMAL_BLOCK | 0;
+  const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH ? 1 : 0,
+    booth = kind === KIND_BOOTH ? 1 : 0;
+  const captureDepth_m = +CAPTURE_DEPTH_m,
+    normalBlock = NORMAL_BLOCK | 0;
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
   const still = airflow === 0 ? 1 : 0;
@@ -84,7 +141,9 @@ export function walk(k: Kernel, i: number): number {
   let n = k.normalIndex;
   const diffusivity = 0.5 * s2D * s2D;
   // Loaded, not computed here: TurboFan would move a pure s2D·√maxStep into the loop.
-  const sigmaPerNear = k.sigmaPerNear[b], sigmaMax = k.sigmaMax[b], sigmaMin = k.sigmaMin[b];
+  const sigmaPerNear = k.sigmaPerNear[b],
+    sigmaMax = k.sigmaMax[b],
+    sigmaMin = k.sigmaMin[b];
   let fate = -1;
   let steps = 0;
   let lastHood = -1;
@@ -103,7 +162,12 @@ export function walk(k: Kernel, i: number): number {
       if (d < zoneFloor_m) d = zoneFloor_m;
     }
     let dh = Infinity;
-    let jPhi = 0, jB = 0, jC = 0, jSx = 0, jSy = 0, jSz = 0;
+    let jPhi = 0,
+      jB = 0,
+      jC = 0,
+      jSx = 0,
+      jSy = 0,
+      jSz = 0;
     let vx = draftX;
     let vy = draftY;
     let vz = 0;

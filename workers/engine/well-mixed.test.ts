@@ -14,12 +14,18 @@ describe('small, strongly mixed room with ventilation and settling', () => {
     const b = onlyBin(p);
     const loss = p.bins.settling_mPerS[b] / 3;
     const batches = runAll(p);
-    for (const [from, to] of [[12, 40], [40, 80], [80, 120]]) {
+    for (const [from, to] of [
+      [12, 40],
+      [40, 80],
+      [80, 120],
+    ]) {
       const { mean, se } = meanAndError(windowMeans(p, batches, from, to));
       let expected = 0;
       for (let tb = from; tb < to; tb++) {
         const t = (tb + 0.5) * p.timeBin_s;
-        expected += wellMixedConcentration({ generation_mgPerS: 1, airflow_m3PerS: (6 * 27) / 3600, volume_m3: 27, lossRate_perS: loss }, t) / (to - from);
+        expected +=
+          wellMixedConcentration({ generation_mgPerS: 1, airflow_m3PerS: (6 * 27) / 3600, volume_m3: 27, lossRate_perS: loss }, t) /
+          (to - from);
       }
       // 3.5 standard errors of the batch mean (common practice).
       expect(Math.abs(mean - expected), `${mean} vs ${expected} ± ${se}`).toBeLessThan(3.5 * se);

@@ -11,7 +11,10 @@ import { ThreadPool } from './thread-pool';
 const TIMED_PASSES = 3;
 
 // The best of a few passes: on a shared machine other load only ever slows a pass down.
-async function throughput(pool: ThreadPool, prepared: PreparedScenario): Promise<{ mps: number; steps: number; seconds: number; passes: number[] }> {
+async function throughput(
+  pool: ThreadPool,
+  prepared: PreparedScenario,
+): Promise<{ mps: number; steps: number; seconds: number; passes: number[] }> {
   await pool.run(prepared);
   let best = { mps: 0, steps: 0, seconds: 0 };
   const passes: number[] = [];
@@ -32,19 +35,27 @@ const list = (values: number[]) => values.map((v) => v.toFixed(1)).join(', ');
 async function main(): Promise<void> {
   const cores = availableParallelism();
   const reference = prepareScenario(parseScenario(referenceScenario));
-  const load = loadavg().map((v) => v.toFixed(2)).join(' ');
+  const load = loadavg()
+    .map((v) => v.toFixed(2))
+    .join(' ');
   console.log(`Load average ${load} on ${cores} cores (figures are only comparable at similar load)`);
   // First, while no worker thread exists, so resident memory is the batch's alone.
   const memory = describeMemory(measureBatchMemory());
   console.log(`Memory: ${memory}`);
-  console.log(`Reference scenario, seed ${reference.seed}: ${reference.particlesPerBatch * reference.batches} particles, ${reference.batches} batches (one pass warms the JIT, best of ${TIMED_PASSES} timed)`);
+  console.log(
+    `Reference scenario, seed ${reference.seed}: ${reference.particlesPerBatch * reference.batches} particles, ${reference.batches} batches (one pass warms the JIT, best of ${TIMED_PASSES} timed)`,
+  );
   const one = new ThreadPool(1);
   const single = await throughput(one, reference);
   await one.close();
-  console.log(`  1 worker:  ${single.mps.toFixed(1)} M particle-steps/s (${(single.steps / 1e6).toFixed(1)} M steps in ${single.seconds.toFixed(2)} s; passes ${list(single.passes)})`);
+  console.log(
+    `  1 worker:  ${single.mps.toFixed(1)} M particle-steps/s (${(single.steps / 1e6).toFixed(1)} M steps in ${single.seconds.toFixed(2)} s; passes ${list(single.passes)})`,
+  );
   const all = new ThreadPool(cores);
   const many = await throughput(all, reference);
-  console.log(`  ${cores} workers: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker (passes ${list(many.passes)})`);
+  console.log(
+    `  ${cores} workers: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker (passes ${list(many.passes)})`,
+  );
 
   const demoText = await readFile(new URL('../../shared/demo-scenarios/default.json', import.meta.url), 'utf8');
   const demo = prepareScenario(parseScenario(JSON.parse(demoText)));
@@ -55,7 +66,9 @@ async function main(): Promise<void> {
   const r = results.breathingZone.fractions.respirable;
   const half = (r.twa8hCi95_mgPerM3[1] - r.twa8hCi95_mgPerM3[0]) / 2;
   const halfWidth_pct = ((100 * half) / r.twa8h_mgPerM3).toFixed(1);
-  console.log(`Default demo on ${cores} warm workers: ${seconds.toFixed(2)} s to result; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³ ± ${halfWidth_pct} % (95 % CI half-width)`);
+  console.log(
+    `Default demo on ${cores} warm workers: ${seconds.toFixed(2)} s to result; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³ ± ${halfWidth_pct} % (95 % CI half-width)`,
+  );
   if (process.argv.includes('--readme')) {
     writeReadmeSection('bench', [
       `- One worker: ${single.mps.toFixed(1)} M particle-steps/s (reference scenario, best of ${TIMED_PASSES} passes after a warm-up pass)`,

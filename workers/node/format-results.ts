@@ -25,14 +25,24 @@ export function summary(name: string, r: RunResult): string {
   }
   if (r.limit) {
     const l = r.limit;
-    lines.push('', `Limit ${l.value_mgPerM3} mg/m³ (${l.fraction}): ${percentText(l.percentOfLimit)} of limit (upper CI ${percentText(l.percentOfLimitUpper)}), rating category ${l.ratingCategory}, banner ${l.banner.toUpperCase()}`);
+    lines.push(
+      '',
+      `Limit ${l.value_mgPerM3} mg/m³ (${l.fraction}): ${percentText(l.percentOfLimit)} of limit (upper CI ${percentText(l.percentOfLimitUpper)}), rating category ${l.ratingCategory}, banner ${l.banner.toUpperCase()}`,
+    );
   }
   const fate = r.fate;
-  lines.push('', `Fate of ${fate.emitted_mg.toFixed(1)} mg emitted: captured ${pct(fate.captured)}, settled ${pct(fate.settled)}, exhausted ${pct(fate.exhausted)}, airborne at end ${pct(fate.airborne)}`);
+  lines.push(
+    '',
+    `Fate of ${fate.emitted_mg.toFixed(1)} mg emitted: captured ${pct(fate.captured)}, settled ${pct(fate.settled)}, exhausted ${pct(fate.exhausted)}, airborne at end ${pct(fate.airborne)}`,
+  );
   const c = r.crossChecks;
-  lines.push(`Cross-checks (${c.fraction}, mg/m³): well-mixed ${mg(c.wellMixed_mgPerM3)}, near field ${mg(c.nearField_mgPerM3)}, far field ${mg(c.farField_mgPerM3)}, eddy steady ${mg(c.eddySteady_mgPerM3)}`);
+  lines.push(
+    `Cross-checks (${c.fraction}, mg/m³): well-mixed ${mg(c.wellMixed_mgPerM3)}, near field ${mg(c.nearField_mgPerM3)}, far field ${mg(c.farField_mgPerM3)}, eddy steady ${mg(c.eddySteady_mgPerM3)}`,
+  );
   const p = r.performance;
-  lines.push(`Performance: ${(p.particleSteps / 1e6).toFixed(1)} M particle-steps in ${p.wallTime_s.toFixed(2)} s (${(p.particleStepsPerS / 1e6).toFixed(1)} M/s)`);
+  lines.push(
+    `Performance: ${(p.particleSteps / 1e6).toFixed(1)} M particle-steps in ${p.wallTime_s.toFixed(2)} s (${(p.particleStepsPerS / 1e6).toFixed(1)} M/s)`,
+  );
   lines.push('', 'Model estimates, not measurements: they do not replace personal air sampling.');
   return lines.join('\n');
 }

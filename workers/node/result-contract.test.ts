@@ -12,7 +12,11 @@ import { parseRunResult } from '../../shared/schemas/run-result-stored';
 import { toJsonFriendly } from '../../shared/schemas/runs';
 
 // A small hooded bench with a limit, so every optional part of the result is present.
-const prepared = prepareTest({ ...workstation, limit: { fraction: 'respirable', value_mgPerM3: 0.1 }, run: { particles: 400, batches: 2, seed: 5 } });
+const prepared = prepareTest({
+  ...workstation,
+  limit: { fraction: 'respirable', value_mgPerM3: 0.1 },
+  run: { particles: 400, batches: 2, seed: 5 },
+});
 const fresh = combineBatches(prepared, runAll(prepared));
 const viaJson = (value: unknown) => JSON.parse(JSON.stringify(toJsonFriendly(value)));
 
@@ -38,7 +42,7 @@ describe('runResultSchema', () => {
     expect(viaJson(back)).toEqual(viaJson(fresh));
   });
 
-  it('reads the CLI\'s --json output back to the same result', () => {
+  it("reads the CLI's --json output back to the same result", () => {
     expect(parseRunResult(JSON.parse(resultsToJson(fresh)))).toEqual(fresh);
   });
 
@@ -77,11 +81,15 @@ describe('parseRunResult on stored results of older engines', () => {
 describe('parseRunResult on malformed results', () => {
   it('names the field and quotes the bad value', () => {
     expect(() => parseRunResult(null)).toThrow('result: Invalid input: expected object, received null, got null');
-    expect(() => parseRunResult({ ...v120, breathingZone: { ...v120.breathingZone, series: { ...v120.breathingZone.series, time_s: 'soon' } } })).toThrow(
-      'breathingZone.series.time_s must be a list of numbers, got "soon"',
-    );
+    expect(() =>
+      parseRunResult({ ...v120, breathingZone: { ...v120.breathingZone, series: { ...v120.breathingZone.series, time_s: 'soon' } } }),
+    ).toThrow('breathingZone.series.time_s must be a list of numbers, got "soon"');
     expect(() => parseRunResult({ ...v120, limit: { ...v120.limit, banner: 'green' } })).toThrow(/limit\.banner: .*"clear".*, got "green"/);
-    expect(() => parseRunResult({ ...v120, trajectories: { ...v120.trajectories, positions_m: [1, 2, 3] } })).toThrow('trajectories.positions_m must hold particles·frames·3 = 12 numbers, got 3');
-    expect(() => parseRunResult({ ...v120, maps: { ...v120.maps, deposition_mgPerM2: { ...v120.maps.deposition_mgPerM2, values: [0, 'x', 1, 2] } } })).toThrow('maps.deposition_mgPerM2.values.1 must hold numbers, got "x"');
+    expect(() => parseRunResult({ ...v120, trajectories: { ...v120.trajectories, positions_m: [1, 2, 3] } })).toThrow(
+      'trajectories.positions_m must hold particles·frames·3 = 12 numbers, got 3',
+    );
+    expect(() =>
+      parseRunResult({ ...v120, maps: { ...v120.maps, deposition_mgPerM2: { ...v120.maps.deposition_mgPerM2, values: [0, 'x', 1, 2] } } }),
+    ).toThrow('maps.deposition_mgPerM2.values.1 must hold numbers, got "x"');
   });
 });

@@ -21,7 +21,12 @@ export function parseSimArgs(argv: string[]): SimArgs {
   const { values, positionals } = parseArgs({
     args: argv,
     allowPositionals: true,
-    options: { particles: { type: 'string' }, seed: { type: 'string' }, workers: { type: 'string' }, json: { type: 'boolean', default: false } },
+    options: {
+      particles: { type: 'string' },
+      seed: { type: 'string' },
+      workers: { type: 'string' },
+      json: { type: 'boolean', default: false },
+    },
   });
   if (positionals.length !== 1) throw new Error(`expected one scenario file, got ${positionals.length}`);
   const seedText = values.seed;

@@ -10,7 +10,11 @@ describe('worker-thread pool', () => {
     const runs = [];
     for (const threads of [1, 2, 3]) {
       const r = combineBatches(p, await runOnThreads(p, threads), 1);
-      runs.push(JSON.stringify({ ...r, performance: r.performance.particleSteps }, (_k, v: unknown) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v)));
+      runs.push(
+        JSON.stringify({ ...r, performance: r.performance.particleSteps }, (_k, v: unknown) =>
+          ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v,
+        ),
+      );
     }
     expect(runs[1]).toBe(runs[0]);
     expect(runs[2]).toBe(runs[0]);

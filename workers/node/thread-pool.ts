@@ -3,8 +3,7 @@ import type { BatchResult, PreparedScenario } from '../engine/index';
 import { type BatchWorker, scheduleBatches } from '../schedule-batches';
 
 type ThreadMessage =
-  | { type: 'progress'; batchIndex: number; fraction: number; particleSteps: number }
-  | { type: 'done'; result: BatchResult };
+  { type: 'progress'; batchIndex: number; fraction: number; particleSteps: number } | { type: 'done'; result: BatchResult };
 
 export type PoolProgress = (fractionDone: number, particleSteps: number) => void;
 

@@ -14,7 +14,8 @@ import { DEMO_AGENTS, DEMO_SITES } from './places';
 
 const SCENARIO_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../shared/demo-scenarios');
 
-export const loadDemoScenario = (file: string): Scenario => parseScenario(JSON.parse(fs.readFileSync(path.join(SCENARIO_DIR, `${file}.json`), 'utf8')));
+export const loadDemoScenario = (file: string): Scenario =>
+  parseScenario(JSON.parse(fs.readFileSync(path.join(SCENARIO_DIR, `${file}.json`), 'utf8')));
 
 // The pure engine runs here in Node exactly as it runs in the browser's workers.
 function simulate(scenario: Scenario) {
@@ -23,7 +24,11 @@ function simulate(scenario: Scenario) {
   return runResultSchema.parse(toJsonFriendly(combineBatches(prepared, batches)));
 }
 
-export async function seedDemoWorkspace(db: Db, actor: { id: number; email: string }, opts: { particles?: number; log?: (s: string) => void } = {}) {
+export async function seedDemoWorkspace(
+  db: Db,
+  actor: { id: number; email: string },
+  opts: { particles?: number; log?: (s: string) => void } = {},
+) {
   if (await hasAnySite(db)) return false;
   const agentIds: Record<string, number> = {};
   for (const [key, agent] of Object.entries(DEMO_AGENTS)) agentIds[key] = (await agentsService.create(db, actor, agent)).id;
@@ -32,7 +37,11 @@ export async function seedDemoWorkspace(db: Db, actor: { id: number; email: stri
     const base = scenarios[0];
     const site = await placesService.createSite(db, actor, place.site);
     const { length_m, width_m, height_m, airChanges_perH, draftSpeed_mPerS, draftDirection_deg, temperature_K } = base.room;
-    const room = await placesService.createRoom(db, actor, { siteId: site.id, name: place.room, data: { length_m, width_m, height_m, airChanges_perH, draftSpeed_mPerS, draftDirection_deg, temperature_K } });
+    const room = await placesService.createRoom(db, actor, {
+      siteId: site.id,
+      name: place.room,
+      data: { length_m, width_m, height_m, airChanges_perH, draftSpeed_mPerS, draftDirection_deg, temperature_K },
+    });
     const ws = await placesService.createWorkstation(db, actor, {
       roomId: room.id,
       name: place.workstation.name,
@@ -50,14 +59,21 @@ export async function seedDemoWorkspace(db: Db, actor: { id: number; email: stri
         workstationId: ws.id,
         agentId: agentIds[place.agent],
         sizeProfileId: null,
-        name: (input.name ?? 'Option').split(': ').pop()!.replace(/^./, (c) => c.toUpperCase()),
-        controlDescription: hood ? `${hood.name ?? hood.kind}, ${Math.round(hood.airflow_m3PerS * 3600)} m³/h` : 'No local exhaust; general ventilation only',
+        name: (input.name ?? 'Option')
+          .split(': ')
+          .pop()!
+          .replace(/^./, (c) => c.toUpperCase()),
+        controlDescription: hood
+          ? `${hood.name ?? hood.kind}, ${Math.round(hood.airflow_m3PerS * 3600)} m³/h`
+          : 'No local exhaust; general ventilation only',
         controlTier: hood ? 'engineering' : 'none',
         input,
       });
       const t0 = Date.now();
       await scenariosService.saveRun(db, actor, created.id, { scenarioVersion: created.version, input, result: simulate(input) });
-      opts.log?.(`  ran "${created.name}" at ${place.workstation.name} (${input.run.particles} particles, ${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+      opts.log?.(
+        `  ran "${created.name}" at ${place.workstation.name} (${input.run.particles} particles, ${((Date.now() - t0) / 1000).toFixed(1)} s)`,
+      );
     }
   }
   const operator = await firstWithRole(db, 'operator');

@@ -40,7 +40,11 @@ export function AppShell() {
                 <span>
                   {user.name} <span className="text-muted">· {ROLE_LABELS[user.role]}</span>
                 </span>
-                <button type="button" className="rounded-md px-2 py-1 font-semibold text-accent hover:bg-accent-soft" onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}>
+                <button
+                  type="button"
+                  className="rounded-md px-2 py-1 font-semibold text-accent hover:bg-accent-soft"
+                  onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}
+                >
                   Sign out
                 </button>
               </div>
@@ -48,7 +52,13 @@ export function AppShell() {
           </div>
           <nav aria-label="Main" className="-mx-2 flex flex-wrap gap-x-0.5 py-2">
             {items.map((n) => (
-              <NavLink key={n.to} to={n.to} className={({ isActive }) => `rounded-md px-2 py-1.5 text-sm font-semibold ${isActive ? 'bg-accent-soft text-accent-strong' : 'text-muted hover:text-ink'}`}>
+              <NavLink
+                key={n.to}
+                to={n.to}
+                className={({ isActive }) =>
+                  `rounded-md px-2 py-1.5 text-sm font-semibold ${isActive ? 'bg-accent-soft text-accent-strong' : 'text-muted hover:text-ink'}`
+                }
+              >
                 {n.label}
               </NavLink>
             ))}

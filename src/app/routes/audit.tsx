@@ -3,6 +3,8 @@ import { useSites } from '@/features/places/api/get-sites';
 
 export function AuditRoute() {
   const sites = useSites().data?.items ?? [];
-  const workstations = sites.flatMap((s) => s.rooms.flatMap((r) => r.workstations.map((w) => ({ id: w.id, name: `${w.name} (${s.name})` }))));
+  const workstations = sites.flatMap((s) =>
+    s.rooms.flatMap((r) => r.workstations.map((w) => ({ id: w.id, name: `${w.name} (${s.name})` }))),
+  );
   return <AuditPage workstations={workstations} />;
 }

@@ -77,13 +77,30 @@ export function CompareRoute() {
   };
 
   return (
-    <Page title="Side by side" intro="Compare 2 to 4 scenarios from their latest saved runs, ordered by the hierarchy of controls. The link holds the selection, so it can be shared.">
-      <ScenarioPicker scenarios={list.data?.items} pending={list.isPending} error={list.error} selected={ticked ?? selection.ids} onToggle={toggle} />
-      {selection.ignored.length > 0 && <p role="status" className="mb-4 text-sm text-watch">The link held parts that are not scenario ids and were left out: {selection.ignored.map((s) => `“${s}”`).join(', ')}.</p>}
+    <Page
+      title="Side by side"
+      intro="Compare 2 to 4 scenarios from their latest saved runs, ordered by the hierarchy of controls. The link holds the selection, so it can be shared."
+    >
+      <ScenarioPicker
+        scenarios={list.data?.items}
+        pending={list.isPending}
+        error={list.error}
+        selected={ticked ?? selection.ids}
+        onToggle={toggle}
+      />
+      {selection.ignored.length > 0 && (
+        <p role="status" className="mb-4 text-sm text-watch">
+          The link held parts that are not scenario ids and were left out: {selection.ignored.map((s) => `“${s}”`).join(', ')}.
+        </p>
+      )}
       {selection.tooMany ? (
         <div role="alert" className="mb-4 rounded-md border-2 border-act bg-act-soft p-3 text-sm text-act">
-          <strong>✕ Too many scenarios:</strong> side by side compares at most {MAX_SELECTED}, and this link holds {selection.ids.length}. Untick some above, or{' '}
-          <Button variant="ghost" className="px-1 py-0 underline" onClick={() => setIds(selection.ids.slice(0, MAX_SELECTED))}>keep the first {MAX_SELECTED}</Button>.
+          <strong>✕ Too many scenarios:</strong> side by side compares at most {MAX_SELECTED}, and this link holds {selection.ids.length}.
+          Untick some above, or{' '}
+          <Button variant="ghost" className="px-1 py-0 underline" onClick={() => setIds(selection.ids.slice(0, MAX_SELECTED))}>
+            keep the first {MAX_SELECTED}
+          </Button>
+          .
         </div>
       ) : !enough ? (
         <EmptyState title={selection.ids.length === 0 ? 'Choose scenarios to compare' : 'Choose at least one more scenario'}>
@@ -94,15 +111,25 @@ export function CompareRoute() {
           {state.problems.map((p) => (
             <div key={p.id} className="mb-3 flex flex-wrap items-center gap-3">
               <ErrorMessage error={p.message} title={`Scenario ${p.name ? `“${p.name}”` : `#${p.id}`} left out`} />
-              <Button variant="secondary" onClick={() => setIds(selection.ids.filter((id) => id !== p.id))}>Remove it from the selection</Button>
+              <Button variant="secondary" onClick={() => setIds(selection.ids.filter((id) => id !== p.id))}>
+                Remove it from the selection
+              </Button>
             </div>
           ))}
           {state.pending ? (
             <Spinner label="Loading the scenarios and their latest runs…" />
           ) : state.columns.length < MIN_SELECTED ? (
-            <EmptyState title="Not enough scenarios to compare">Fewer than {MIN_SELECTED} of the chosen scenarios could be loaded.</EmptyState>
+            <EmptyState title="Not enough scenarios to compare">
+              Fewer than {MIN_SELECTED} of the chosen scenarios could be loaded.
+            </EmptyState>
           ) : (
-            <CompareResults columns={state.columns} target={target} onTargetChange={(id) => update({ target: id })} chartFraction={chartFraction} onChartFractionChange={(f) => update({ fraction: f })} />
+            <CompareResults
+              columns={state.columns}
+              target={target}
+              onTargetChange={(id) => update({ target: id })}
+              chartFraction={chartFraction}
+              onChartFractionChange={(f) => update({ fraction: f })}
+            />
           )}
         </>
       )}

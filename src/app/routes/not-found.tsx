@@ -15,7 +15,11 @@ export function NotFoundRoute() {
 
 export function RouteError() {
   const error = useRouteError();
-  const message = isRouteErrorResponse(error) ? `${error.status} ${error.statusText}` : error instanceof Error ? error.message : 'Unknown error';
+  const message = isRouteErrorResponse(error)
+    ? `${error.status} ${error.statusText}`
+    : error instanceof Error
+      ? error.message
+      : 'Unknown error';
   return (
     <Page title="This page failed to load">
       <p role="alert" className="rounded-md border border-act bg-act-soft p-3 text-sm text-act">

@@ -45,13 +45,23 @@ function Report({ detail }: { detail: ScenarioDetail }) {
   const picker = (
     <label className="flex flex-wrap items-center gap-2">
       <span className="font-semibold">Run reported</span>
-      <select className="rounded-md border border-line bg-white px-2 py-1" value={runId ?? ''} onChange={(e) => setParams({ run: e.target.value })} disabled={detail.runs.length === 0}>
+      <select
+        className="rounded-md border border-line bg-white px-2 py-1"
+        value={runId ?? ''}
+        onChange={(e) => setParams({ run: e.target.value })}
+        disabled={detail.runs.length === 0}
+      >
         {detail.runs.length === 0 && <option value="">no saved runs</option>}
         {detail.runs.map((x) => (
-          <option key={x.id} value={x.id}>{`${dateTime(x.created_at)} · ${countText(x.particles)} particles${x.outOfDate ? ' · out of date' : ''}`}</option>
+          <option
+            key={x.id}
+            value={x.id}
+          >{`${dateTime(x.created_at)} · ${countText(x.particles)} particles${x.outOfDate ? ' · out of date' : ''}`}</option>
         ))}
       </select>
-      <Link className="underline" to={paths.scenario(detail.id)}>open the scenario</Link>
+      <Link className="underline" to={paths.scenario(detail.id)}>
+        open the scenario
+      </Link>
     </label>
   );
 
@@ -62,7 +72,19 @@ function Report({ detail }: { detail: ScenarioDetail }) {
       place={{ workstation: detail.workstationName, room: detail.roomName, site: detail.siteName }}
       control={detail.controlDescription}
       input={input}
-      run={r ? { id: r.id, createdAt: r.createdAt, ranBy, seed: r.seed, engineVersion: r.engineVersion, particles: r.particles, outOfDate: r.outOfDate } : null}
+      run={
+        r
+          ? {
+              id: r.id,
+              createdAt: r.createdAt,
+              ranBy,
+              seed: r.seed,
+              engineVersion: r.engineVersion,
+              particles: r.particles,
+              outOfDate: r.outOfDate,
+            }
+          : null
+      }
       agent={agent ? { name: agent.name, data: agent.data } : undefined}
       sizeProfileName={profile.data?.name}
       releaseType={workstation.data?.data.releaseType}

@@ -20,7 +20,13 @@ export function RunRoute() {
       intro={
         <>
           Saved {dateTime(r.createdAt)} · engine {r.engineVersion} · seed <code>{r.seed}</code> · {countText(r.particles)} particles ·{' '}
-          <Link className="underline" to={paths.scenario(r.scenarioId)}>open the scenario</Link> · <Link className="underline" to={`${paths.report(r.scenarioId)}?run=${r.id}`}>report</Link>
+          <Link className="underline" to={paths.scenario(r.scenarioId)}>
+            open the scenario
+          </Link>{' '}
+          ·{' '}
+          <Link className="underline" to={`${paths.report(r.scenarioId)}?run=${r.id}`}>
+            report
+          </Link>
         </>
       }
     >

@@ -14,7 +14,14 @@ import { ConflictPanel } from '@/features/scenarios/components/conflict-panel';
 import type { Draft } from './scenario';
 
 type Theirs = { version: number; name: string; input: unknown };
-type Props = { scenario: ScenarioDetail; draft: Draft; dirty: boolean; valid: boolean; onSaved: (s: ScenarioDetail) => void; onReload: (s: ScenarioDetail) => void };
+type Props = {
+  scenario: ScenarioDetail;
+  draft: Draft;
+  dirty: boolean;
+  valid: boolean;
+  onSaved: (s: ScenarioDetail) => void;
+  onReload: (s: ScenarioDetail) => void;
+};
 
 export function ScenarioActions({ scenario, draft, dirty, valid, onSaved, onReload }: Props) {
   const navigate = useNavigate();
@@ -25,7 +32,16 @@ export function ScenarioActions({ scenario, draft, dirty, valid, onSaved, onRelo
 
   const save = (version: number) =>
     update.mutate(
-      { id: scenario.id, patch: { version, name: draft.name, agentId: draft.agentId, sizeProfileId: draft.sizeProfileId, input: scenarioSchema.parse(draft.input) } },
+      {
+        id: scenario.id,
+        patch: {
+          version,
+          name: draft.name,
+          agentId: draft.agentId,
+          sizeProfileId: draft.sizeProfileId,
+          input: scenarioSchema.parse(draft.input),
+        },
+      },
       {
         onSuccess: (s) => {
           setConflict(null);
@@ -41,15 +57,45 @@ export function ScenarioActions({ scenario, draft, dirty, valid, onSaved, onRelo
     <div className="flex max-w-xl flex-col items-end gap-2">
       <div className="flex flex-wrap justify-end gap-2">
         <Can permission="scenarios:write">
-          <Button onClick={() => save(scenario.version)} disabled={!dirty || !valid || update.isPending}>{update.isPending ? 'Saving…' : dirty ? 'Save changes' : 'Saved'}</Button>
-          <Button variant="secondary" onClick={() => duplicate.mutate({ id: scenario.id }, { onSuccess: (s) => navigate(paths.scenario(s.id)) })}>Duplicate as new option</Button>
-          <Link className="rounded-md border border-line bg-white px-4 py-2 text-sm font-semibold hover:bg-paper-deep" to={paths.sweep(scenario.id)}>Placement sweep</Link>
+          <Button onClick={() => save(scenario.version)} disabled={!dirty || !valid || update.isPending}>
+            {update.isPending ? 'Saving…' : dirty ? 'Save changes' : 'Saved'}
+          </Button>
+          <Button
+            variant="secondary"
+            onClick={() => duplicate.mutate({ id: scenario.id }, { onSuccess: (s) => navigate(paths.scenario(s.id)) })}
+          >
+            Duplicate as new option
+          </Button>
+          <Link
+            className="rounded-md border border-line bg-white px-4 py-2 text-sm font-semibold hover:bg-paper-deep"
+            to={paths.sweep(scenario.id)}
+          >
+            Placement sweep
+          </Link>
         </Can>
-        <Link className="rounded-md border border-line bg-white px-4 py-2 text-sm font-semibold hover:bg-paper-deep" to={`${paths.compare}?ids=${scenario.id}`}>Side by side</Link>
-        <Link className="rounded-md border border-line bg-white px-4 py-2 text-sm font-semibold hover:bg-paper-deep" to={paths.report(scenario.id)}>Report</Link>
+        <Link
+          className="rounded-md border border-line bg-white px-4 py-2 text-sm font-semibold hover:bg-paper-deep"
+          to={`${paths.compare}?ids=${scenario.id}`}
+        >
+          Side by side
+        </Link>
+        <Link
+          className="rounded-md border border-line bg-white px-4 py-2 text-sm font-semibold hover:bg-paper-deep"
+          to={paths.report(scenario.id)}
+        >
+          Report
+        </Link>
         <Can permission="scenarios:write">
           {scenario.status !== 'approved' && (
-            <Button variant="danger" onClick={() => window.confirm(`Delete “${scenario.name}”? Its saved runs stay in the records.`) && remove.mutate(scenario.id, { onSuccess: () => navigate(paths.workstation(scenario.workstationId)) })}>Delete</Button>
+            <Button
+              variant="danger"
+              onClick={() =>
+                window.confirm(`Delete “${scenario.name}”? Its saved runs stay in the records.`) &&
+                remove.mutate(scenario.id, { onSuccess: () => navigate(paths.workstation(scenario.workstationId)) })
+              }
+            >
+              Delete
+            </Button>
           )}
         </Can>
       </div>

@@ -18,9 +18,15 @@ export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
         <div className="rounded-lg border border-line bg-white p-4">
           <h2>Approve as the station's current control</h2>
           <p className="mb-3 text-sm text-muted">
-            Uses the latest saved run. {scenario.approval ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${scenario.approval.reviewDate}.` : 'Nothing is approved at this station yet.'}
+            Uses the latest saved run.{' '}
+            {scenario.approval
+              ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${scenario.approval.reviewDate}.`
+              : 'Nothing is approved at this station yet.'}
           </p>
-          <ApproveForm scenarioId={scenario.id} run={latest ? { id: latest.id, banner: latest.banner, outOfDate: latest.outOfDate } : null} />
+          <ApproveForm
+            scenarioId={scenario.id}
+            run={latest ? { id: latest.id, banner: latest.banner, outOfDate: latest.outOfDate } : null}
+          />
         </div>
       </Can>
       <Can permission="reports:share">

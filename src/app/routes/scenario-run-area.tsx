@@ -8,16 +8,41 @@ import { RunPanel } from '@/features/scenarios/components/run-panel';
 
 type Fresh = { result: RunResult; input: Scenario } | null;
 
-export function ScenarioRunArea({ scenario, input, dirty, fresh, onFresh }: { scenario: ScenarioDetail; input: Scenario | null; dirty: boolean; fresh: Fresh; onFresh: (f: Fresh) => void }) {
+export function ScenarioRunArea({
+  scenario,
+  input,
+  dirty,
+  fresh,
+  onFresh,
+}: {
+  scenario: ScenarioDetail;
+  input: Scenario | null;
+  dirty: boolean;
+  fresh: Fresh;
+  onFresh: (f: Fresh) => void;
+}) {
   const save = useSaveRun();
   return (
     <section aria-labelledby="run-heading" className="mt-8 space-y-3">
       <h2 id="run-heading">Run</h2>
-      <p className="text-sm text-muted">Runs in this browser's background workers; the same scenario and seed always give the same result.</p>
-      <RunPanel scenario={input} onResult={(result, used) => { save.reset(); onFresh({ result, input: used }); }} />
+      <p className="text-sm text-muted">
+        Runs in this browser's background workers; the same scenario and seed always give the same result.
+      </p>
+      <RunPanel
+        scenario={input}
+        onResult={(result, used) => {
+          save.reset();
+          onFresh({ result, input: used });
+        }}
+      />
       {fresh && (
         <div className="flex flex-wrap items-center gap-3">
-          <Button onClick={() => save.mutate({ scenarioId: scenario.id, scenarioVersion: scenario.version, input: fresh.input, result: fresh.result })} disabled={save.isPending || save.isSuccess || dirty}>
+          <Button
+            onClick={() =>
+              save.mutate({ scenarioId: scenario.id, scenarioVersion: scenario.version, input: fresh.input, result: fresh.result })
+            }
+            disabled={save.isPending || save.isSuccess || dirty}
+          >
             {save.isSuccess ? '✓ Run saved' : save.isPending ? 'Saving…' : 'Save this run'}
           </Button>
           {dirty && <span className="text-sm text-watch">Save the scenario first, so the run matches what is stored.</span>}

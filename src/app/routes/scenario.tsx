@@ -51,17 +51,49 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
       title={draft.name}
       intro={
         <>
-          <Link className="underline" to={paths.workstation(base.workstationId)}>{base.workstationName}</Link> · {base.siteName} · {base.status === 'approved' ? '★ approved as the current control' : 'draft'} · version {base.version}
-          {base.lastRun && <> · last run <BannerBadge banner={base.lastRun.banner} /></>}
+          <Link className="underline" to={paths.workstation(base.workstationId)}>
+            {base.workstationName}
+          </Link>{' '}
+          · {base.siteName} · {base.status === 'approved' ? '★ approved as the current control' : 'draft'} · version {base.version}
+          {base.lastRun && (
+            <>
+              {' '}
+              · last run <BannerBadge banner={base.lastRun.banner} />
+            </>
+          )}
         </>
       }
-      actions={<ScenarioActions scenario={base} draft={draft} dirty={dirty} valid={parsed.success} onSaved={(s) => { setBase(s); setDraft(fromDetail(s)); }} onReload={(s) => { setBase(s); setDraft(fromDetail(s)); }} />}
+      actions={
+        <ScenarioActions
+          scenario={base}
+          draft={draft}
+          dirty={dirty}
+          valid={parsed.success}
+          onSaved={(s) => {
+            setBase(s);
+            setDraft(fromDetail(s));
+          }}
+          onReload={(s) => {
+            setBase(s);
+            setDraft(fromDetail(s));
+          }}
+        />
+      }
     >
-      {base.approval?.needsReview && <p role="status" className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch">⟳ Needs review: the station's approval {base.approval.expired ? 'has expired' : 'rests on a run that no longer matches its scenario'}.</p>}
+      {base.approval?.needsReview && (
+        <p role="status" className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch">
+          ⟳ Needs review: the station's approval{' '}
+          {base.approval.expired ? 'has expired' : 'rests on a run that no longer matches its scenario'}.
+        </p>
+      )}
       {!readOnly && (
         <label className="mb-4 block max-w-md text-sm font-semibold">
           Scenario name
-          <input className="mt-1 w-full rounded-md border border-line bg-white px-3 py-2" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} />
+          <input
+            className="mt-1 w-full rounded-md border border-line bg-white px-3 py-2"
+            value={draft.name}
+            onChange={(e) => setDraft({ ...draft, name: e.target.value })}
+          />
         </label>
       )}
       {readOnly && <Notice>You can read this scenario and its saved runs; only engineers change or run it.</Notice>}
@@ -80,7 +112,14 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
       <Can permission="runs:write">
         <ScenarioRunArea scenario={base} input={parsed.success ? parsed.data : null} dirty={dirty} fresh={fresh} onFresh={setFresh} />
       </Can>
-      {fresh && <RunResults result={fresh.result} scenario={fresh.input} agentName={agents.find((a) => a.id === draft.agentId)?.name} limitSource={fresh.input.limit?.source} />}
+      {fresh && (
+        <RunResults
+          result={fresh.result}
+          scenario={fresh.input}
+          agentName={agents.find((a) => a.id === draft.agentId)?.name}
+          limitSource={fresh.input.limit?.source}
+        />
+      )}
       <ScenarioRecords scenario={base} />
     </Page>
   );

@@ -15,7 +15,9 @@ export function ScenariosRoute() {
   const [params, setParams] = useSearchParams();
   const sites = useSites().data?.items ?? [];
   const agents = useAgents().data?.items ?? [];
-  const workstations = sites.flatMap((s) => s.rooms.flatMap((r) => r.workstations.map((w) => ({ id: w.id, name: `${w.name} (${s.name})` }))));
+  const workstations = sites.flatMap((s) =>
+    s.rooms.flatMap((r) => r.workstations.map((w) => ({ id: w.id, name: `${w.name} (${s.name})` }))),
+  );
 
   const value: FilterValue = { q: params.get('q') ?? undefined, status: (params.get('status') as FilterValue['status']) ?? undefined };
   for (const k of NUMERIC) if (params.get(k)) value[k] = Number(params.get(k));
@@ -43,7 +45,13 @@ export function ScenariosRoute() {
         </Can>
       }
     >
-      <ScenarioFilters sites={sites} workstations={workstations} agents={agents} value={value} onChange={(v) => update({ q: v.q, status: v.status, siteId: v.siteId, workstationId: v.workstationId, agentId: v.agentId })} />
+      <ScenarioFilters
+        sites={sites}
+        workstations={workstations}
+        agents={agents}
+        value={value}
+        onChange={(v) => update({ q: v.q, status: v.status, siteId: v.siteId, workstationId: v.workstationId, agentId: v.agentId })}
+      />
       <ScenariosTable filters={{ ...value, sort, order }} onSortChange={(s) => update({ sort: s.key, order: s.dir })} />
       <Cautions />
     </Page>

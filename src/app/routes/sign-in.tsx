@@ -9,7 +9,11 @@ export function SignInRoute() {
   const next = params.get('next');
   return (
     <AuthCard title="Sign in to Motewalk" intro="Breathing-zone dust estimates for local exhaust design.">
-      <LoginForm onSignedIn={(user) => navigate(next && next.startsWith('/') && !next.startsWith('//') ? next : ROLE_HOME[user.role], { replace: true })} />
+      <LoginForm
+        onSignedIn={(user) =>
+          navigate(next && next.startsWith('/') && !next.startsWith('//') ? next : ROLE_HOME[user.role], { replace: true })
+        }
+      />
     </AuthCard>
   );
 }

@@ -39,13 +39,18 @@ export function StationRoute() {
     <Page title="Your station">
       {items.length === 0 ? (
         <EmptyState title={`No station assigned to ${user?.name ?? 'you'} yet`}>
-          <p className="text-base">Your admin assigns you to a workstation. Its board will show whether the dust controls there are working and what to do.</p>
+          <p className="text-base">
+            Your admin assigns you to a workstation. Its board will show whether the dust controls there are working and what to do.
+          </p>
         </EmptyState>
       ) : (
         <ul className="grid gap-3 sm:grid-cols-2">
           {items.map((b) => (
             <li key={b.workstationId}>
-              <Link to={paths.board(b.workstationId)} className="block rounded-lg border border-line bg-white p-4 text-lg font-semibold hover:border-accent">
+              <Link
+                to={paths.board(b.workstationId)}
+                className="block rounded-lg border border-line bg-white p-4 text-lg font-semibold hover:border-accent"
+              >
                 {b.workstationName} · <BannerBadge banner={b.banner} />
               </Link>
             </li>

@@ -11,7 +11,7 @@ import { useCreateScenario } from '@/features/scenarios/api/create-scenario';
 import { useScenario } from '@/features/scenarios/api/get-scenario';
 import { SweepPanel, type SavePoint } from '@/features/sweep/components/sweep-panel';
 
-const tierOf = (tier: string): ControlTier => (CONTROL_TIERS as readonly string[]).includes(tier) ? (tier as ControlTier) : 'engineering';
+const tierOf = (tier: string): ControlTier => ((CONTROL_TIERS as readonly string[]).includes(tier) ? (tier as ControlTier) : 'engineering');
 
 export function SweepRoute() {
   const id = Number(useParams().id);
@@ -34,7 +34,15 @@ function SweepWorkspace({ detail }: { detail: ScenarioDetail }) {
 
   // A saved point is a sibling option at the same station, with the same dust agent and size profile.
   const savePoint: SavePoint = async (name, input) => {
-    const created = await create.mutateAsync({ workstationId: detail.workstationId, agentId: detail.agentId, sizeProfileId: detail.sizeProfileId, name, controlDescription: `${name}, kept from the placement sweep of “${detail.name}”`, controlTier: tierOf(detail.controlTier), input });
+    const created = await create.mutateAsync({
+      workstationId: detail.workstationId,
+      agentId: detail.agentId,
+      sizeProfileId: detail.sizeProfileId,
+      name,
+      controlDescription: `${name}, kept from the placement sweep of “${detail.name}”`,
+      controlTier: tierOf(detail.controlTier),
+      input,
+    });
     return { id: created.id, name: created.name };
   };
 
@@ -43,11 +51,24 @@ function SweepWorkspace({ detail }: { detail: ScenarioDetail }) {
       title={`Placement sweep of “${detail.name}”`}
       intro={
         <>
-          <Link className="underline" to={paths.scenario(detail.id)}>back to the scenario</Link> · <Link className="underline" to={paths.workstation(detail.workstationId)}>{detail.workstationName}</Link> · {detail.siteName}
+          <Link className="underline" to={paths.scenario(detail.id)}>
+            back to the scenario
+          </Link>{' '}
+          ·{' '}
+          <Link className="underline" to={paths.workstation(detail.workstationId)}>
+            {detail.workstationName}
+          </Link>{' '}
+          · {detail.siteName}
         </>
       }
     >
-      {!parsed.ok ? <ErrorMessage title="The scenario cannot be swept" error={parsed.error} /> : workstation.isPending ? <Spinner label="Loading the workstation…" /> : <SweepPanel scenario={parsed.scenario} release={workstation.data?.data.releaseType ?? 'active'} onSavePoint={savePoint} />}
+      {!parsed.ok ? (
+        <ErrorMessage title="The scenario cannot be swept" error={parsed.error} />
+      ) : workstation.isPending ? (
+        <Spinner label="Loading the workstation…" />
+      ) : (
+        <SweepPanel scenario={parsed.scenario} release={workstation.data?.data.releaseType ?? 'active'} onSavePoint={savePoint} />
+      )}
     </Page>
   );
 }

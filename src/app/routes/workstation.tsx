@@ -32,27 +32,47 @@ export function WorkstationRoute() {
   const w = ws.data;
   const addOption = () => {
     const input = scenarioSchema.parse(defaultScenario(workstationGeometry(w)));
-    create.mutate({ workstationId: w.id, agentId: null, sizeProfileId: null, name: 'New option', controlDescription: '', controlTier: 'none', input }, { onSuccess: (s) => navigate(paths.scenario(s.id)) });
+    create.mutate(
+      { workstationId: w.id, agentId: null, sizeProfileId: null, name: 'New option', controlDescription: '', controlTier: 'none', input },
+      { onSuccess: (s) => navigate(paths.scenario(s.id)) },
+    );
   };
   const a = w.approval;
   return (
     <Page
       title={w.name}
       intro={`${w.data.description || 'No description'} · room ${w.room.name} (${w.room.data.length_m} × ${w.room.data.width_m} × ${w.room.data.height_m} m, ${w.room.data.airChanges_perH} ACH)`}
-      actions={<Can permission="scenarios:write"><Button onClick={addOption} disabled={create.isPending}>Add an option</Button></Can>}
+      actions={
+        <Can permission="scenarios:write">
+          <Button onClick={addOption} disabled={create.isPending}>
+            Add an option
+          </Button>
+        </Can>
+      }
     >
       <section className="mb-6 rounded-lg border border-line bg-white p-4" aria-label="Current control">
         <h2>Current control</h2>
         {a ? (
           <p className="mt-1 text-sm">
-            <strong>{a.scenarioName}</strong> approved by {a.approvedBy} on {a.approvedAt.slice(0, 10)}, review by {a.reviewDate} · <BannerBadge banner={a.banner} />
-            {a.needsReview && <span className="ml-2 font-semibold text-watch">⟳ needs review{a.expired ? ' (review date passed)' : ' (scenario changed since its run)'}</span>}
+            <strong>{a.scenarioName}</strong> approved by {a.approvedBy} on {a.approvedAt.slice(0, 10)}, review by {a.reviewDate} ·{' '}
+            <BannerBadge banner={a.banner} />
+            {a.needsReview && (
+              <span className="ml-2 font-semibold text-watch">
+                ⟳ needs review{a.expired ? ' (review date passed)' : ' (scenario changed since its run)'}
+              </span>
+            )}
           </p>
         ) : (
           <p className="mt-1 text-sm text-muted">Nothing approved yet: the operators' board shows Act until an option is approved.</p>
         )}
       </section>
-      {admin && people.data && <OperatorAssignment workstationId={w.id} operators={people.data.items.filter((p) => p.role === 'operator')} assigned={w.operatorIds} />}
+      {admin && people.data && (
+        <OperatorAssignment
+          workstationId={w.id}
+          operators={people.data.items.filter((p) => p.role === 'operator')}
+          assigned={w.operatorIds}
+        />
+      )}
       {create.error && <ErrorMessage error={create.error} />}
       <h2 className="mb-2">Options at this workstation</h2>
       <ScenariosTable filters={{ workstationId: w.id, sort: sort.key, order: sort.dir }} onSortChange={setSort} />

@@ -16,7 +16,11 @@ const columns: Column<Hood>[] = [
   { key: 'note', header: 'Note', render: () => 'ok' },
 ];
 
-const shownNames = () => screen.getAllByRole('row').slice(1).map((row) => within(row).getAllByRole('cell')[0].textContent);
+const shownNames = () =>
+  screen
+    .getAllByRole('row')
+    .slice(1)
+    .map((row) => within(row).getAllByRole('cell')[0].textContent);
 const header = (name: string) => screen.getByRole('columnheader', { name: new RegExp(name) });
 const table = () => render(<DataTable rows={rows} columns={columns} rowKey={(r) => r.name} caption="Hoods" />);
 

@@ -56,7 +56,12 @@ export function DataTable<T>({ rows, columns, rowKey, caption, initialSort, sort
             {columns.map((c) => {
               const active = sort?.key === c.key;
               return (
-                <th key={c.key} scope="col" aria-sort={active ? (sort.dir === 'asc' ? 'ascending' : 'descending') : undefined} className={`px-3 py-2 font-semibold ${c.align === 'right' ? 'text-right' : ''}`}>
+                <th
+                  key={c.key}
+                  scope="col"
+                  aria-sort={active ? (sort.dir === 'asc' ? 'ascending' : 'descending') : undefined}
+                  className={`px-3 py-2 font-semibold ${c.align === 'right' ? 'text-right' : ''}`}
+                >
                   {c.sortValue ? (
                     <button type="button" onClick={() => toggle(c.key)} className="inline-flex items-center gap-1 hover:text-accent">
                       {c.header}

@@ -40,7 +40,12 @@ export function SelectField({ label, error, children, className = '', ...select 
       <label htmlFor={id} className="text-sm font-semibold text-ink">
         {label}
       </label>
-      <select id={id} aria-invalid={error ? true : undefined} className="rounded-md border border-line bg-white px-3 py-2 text-sm" {...select}>
+      <select
+        id={id}
+        aria-invalid={error ? true : undefined}
+        className="rounded-md border border-line bg-white px-3 py-2 text-sm"
+        {...select}
+      >
         {children}
       </select>
       {error && (

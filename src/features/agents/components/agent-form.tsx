@@ -55,33 +55,100 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
   };
 
   return (
-    <form onSubmit={submit} noValidate aria-label={agent ? `Edit ${agent.name}` : 'New dust agent'} className="grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label={agent ? `Edit ${agent.name}` : 'New dust agent'}
+      className="grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3"
+    >
       <TextField label="Name" value={f.name} onChange={set('name')} error={e.name} />
-      <TextField label="Particle density" unit="kg/m³" inputMode="decimal" value={f.density} onChange={set('density')} error={e['data.density_kgPerM3']} />
-      <TextField label="Dynamic shape factor" unit="–" inputMode="decimal" value={f.shape} onChange={set('shape')} error={e['data.shapeFactor']} hint="1 for a sphere" />
+      <TextField
+        label="Particle density"
+        unit="kg/m³"
+        inputMode="decimal"
+        value={f.density}
+        onChange={set('density')}
+        error={e['data.density_kgPerM3']}
+      />
+      <TextField
+        label="Dynamic shape factor"
+        unit="–"
+        inputMode="decimal"
+        value={f.shape}
+        onChange={set('shape')}
+        error={e['data.shapeFactor']}
+        hint="1 for a sphere"
+      />
       <SelectField label="Limit applies to" value={f.fraction} onChange={set('fraction')}>
-        {LIMIT_FRACTIONS.map((x) => <option key={x} value={x}>{FRACTION_LABEL[x]} fraction</option>)}
+        {LIMIT_FRACTIONS.map((x) => (
+          <option key={x} value={x}>
+            {FRACTION_LABEL[x]} fraction
+          </option>
+        ))}
       </SelectField>
-      <TextField label="8-h limit (TWA)" unit="mg/m³" inputMode="decimal" value={f.limit8h} onChange={set('limit8h')} error={e['data.limit8h_mgPerM3']} />
-      <TextField label="15-min limit" unit="mg/m³" inputMode="decimal" value={f.limit15} onChange={set('limit15')} error={e['data.limit15min_mgPerM3']} hint="Leave empty if none" />
+      <TextField
+        label="8-h limit (TWA)"
+        unit="mg/m³"
+        inputMode="decimal"
+        value={f.limit8h}
+        onChange={set('limit8h')}
+        error={e['data.limit8h_mgPerM3']}
+      />
+      <TextField
+        label="15-min limit"
+        unit="mg/m³"
+        inputMode="decimal"
+        value={f.limit15}
+        onChange={set('limit15')}
+        error={e['data.limit15min_mgPerM3']}
+        hint="Leave empty if none"
+      />
       <TextField label="Jurisdiction" value={f.jurisdiction} onChange={set('jurisdiction')} error={e['data.jurisdiction']} />
       <TextField label="Source of the limit" value={f.source} onChange={set('source')} error={e['data.limitSource']} />
       <TextField label="Date of the limit" value={f.date} onChange={set('date')} />
       <label className="flex items-center gap-2 text-sm font-semibold sm:col-span-3">
-        <input type="checkbox" checked={f.overrideOn} onChange={(ev) => setF({ ...f, overrideOn: ev.target.checked })} /> Use a different limit here (override)
+        <input type="checkbox" checked={f.overrideOn} onChange={(ev) => setF({ ...f, overrideOn: ev.target.checked })} /> Use a different
+        limit here (override)
       </label>
       {f.overrideOn && (
         <>
-          <TextField label="Override 8-h limit" unit="mg/m³" inputMode="decimal" value={f.override} onChange={set('override')} error={e['data.override.limit8h_mgPerM3']} />
-          <TextField label="Reason for the override" className="sm:col-span-2" value={f.reason} onChange={set('reason')} error={e['data.override.reason']} />
+          <TextField
+            label="Override 8-h limit"
+            unit="mg/m³"
+            inputMode="decimal"
+            value={f.override}
+            onChange={set('override')}
+            error={e['data.override.limit8h_mgPerM3']}
+          />
+          <TextField
+            label="Reason for the override"
+            className="sm:col-span-2"
+            value={f.reason}
+            onChange={set('reason')}
+            error={e['data.override.reason']}
+          />
         </>
       )}
       <div className="flex gap-2 sm:col-span-3">
-        <Button type="submit" disabled={save.isPending}>{agent ? 'Save changes' : 'Add dust agent'}</Button>
-        {onDone && agent && <Button variant="secondary" onClick={onDone}>Cancel</Button>}
+        <Button type="submit" disabled={save.isPending}>
+          {agent ? 'Save changes' : 'Add dust agent'}
+        </Button>
+        {onDone && agent && (
+          <Button variant="secondary" onClick={onDone}>
+            Cancel
+          </Button>
+        )}
       </div>
-      {save.isSuccess && !agent && <div className="sm:col-span-3"><Notice>Saved “{save.data.name}”.</Notice></div>}
-      {save.error && <div className="sm:col-span-3"><ErrorMessage title="Not saved" error={save.error} /></div>}
+      {save.isSuccess && !agent && (
+        <div className="sm:col-span-3">
+          <Notice>Saved “{save.data.name}”.</Notice>
+        </div>
+      )}
+      {save.error && (
+        <div className="sm:col-span-3">
+          <ErrorMessage title="Not saved" error={save.error} />
+        </div>
+      )}
     </form>
   );
 }

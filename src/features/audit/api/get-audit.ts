@@ -12,6 +12,7 @@ export function getAudit(f: AuditFilters) {
   return apiFetch<Page<AuditEntry>>(`${api.audit}?${p}`);
 }
 
-export const auditQueryOptions = (f: AuditFilters) => queryOptions({ queryKey: ['audit', f], queryFn: () => getAudit(f), placeholderData: keepPreviousData });
+export const auditQueryOptions = (f: AuditFilters) =>
+  queryOptions({ queryKey: ['audit', f], queryFn: () => getAudit(f), placeholderData: keepPreviousData });
 
 export const useAudit = (f: AuditFilters) => useQuery(auditQueryOptions(f));

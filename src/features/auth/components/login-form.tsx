@@ -24,8 +24,23 @@ export function LoginForm({ onSignedIn }: { onSignedIn: (user: SignedInUser) => 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
       {/* eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field */}
-      <TextField label="E-mail" type="email" autoComplete="username" value={email} onChange={(e) => setEmail(e.target.value)} error={errors.email} autoFocus />
-      <TextField label="Password" type="password" autoComplete="current-password" value={password} onChange={(e) => setPassword(e.target.value)} error={errors.password} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        value={email}
+        onChange={(e) => setEmail(e.target.value)}
+        error={errors.email}
+        autoFocus
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        value={password}
+        onChange={(e) => setPassword(e.target.value)}
+        error={errors.password}
+      />
       {login.error && <ErrorMessage title="Not signed in" error={login.error} />}
       <Button type="submit" disabled={login.isPending}>
         {login.isPending ? 'Signing in…' : 'Sign in'}

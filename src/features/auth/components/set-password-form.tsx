@@ -24,9 +24,30 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
       {/* eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field */}
-      <TextField label="New password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={errors.password} hint="At least 10 characters." autoFocus />
-      <TextField label="Repeat the password" type="password" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} error={mismatch} />
-      {errors.token && <ErrorMessage title="Link not usable" error={errors.token === 'Expired or used' ? mutation.error : 'This link is incomplete. Open it again from the e-mail.'} />}
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        value={password}
+        onChange={(e) => setPassword(e.target.value)}
+        error={errors.password}
+        hint="At least 10 characters."
+        autoFocus
+      />
+      <TextField
+        label="Repeat the password"
+        type="password"
+        autoComplete="new-password"
+        value={repeat}
+        onChange={(e) => setRepeat(e.target.value)}
+        error={mismatch}
+      />
+      {errors.token && (
+        <ErrorMessage
+          title="Link not usable"
+          error={errors.token === 'Expired or used' ? mutation.error : 'This link is incomplete. Open it again from the e-mail.'}
+        />
+      )}
       {mutation.error && !errors.token && <ErrorMessage error={mutation.error} />}
       <Button type="submit" disabled={mutation.isPending}>
         {mutation.isPending ? 'Saving…' : 'Set password'}

@@ -15,7 +15,13 @@ import { InvalidInputs } from './result-item';
 const HoodChart = lazy(() => import('./hood-chart'));
 
 function toInput(form: HoodFormState) {
-  const common = { kind: form.kind, width_m: decimalOrNaN(form.width_m), height_m: decimalOrNaN(form.height_m), distance_m: decimalOrNaN(form.distance_m), release: form.release };
+  const common = {
+    kind: form.kind,
+    width_m: decimalOrNaN(form.width_m),
+    height_m: decimalOrNaN(form.height_m),
+    distance_m: decimalOrNaN(form.distance_m),
+    release: form.release,
+  };
   return form.basis === 'airflow'
     ? { ...common, basis: 'airflow' as const, airflow: decimalOrNaN(form.airflow), airflowUnit: form.airflowUnit }
     : { ...common, basis: 'capture' as const, captureVelocity_mPerS: decimalOrNaN(form.captureVelocity_mPerS) };
@@ -38,7 +44,10 @@ export function HoodCalculatorPage() {
   const figures = useMemo(() => (parsed.success ? hoodFigures(parsed.data) : null), [parsed]);
 
   return (
-    <Page title="Hood calculator" intro="Centre-line air velocity in front of a capturing hood, the airflow it needs for a capture velocity, and the duct to carry it. Results update as you type.">
+    <Page
+      title="Hood calculator"
+      intro="Centre-line air velocity in front of a capturing hood, the airflow it needs for a capture velocity, and the duct to carry it. Results update as you type."
+    >
       <div className="grid gap-6 lg:grid-cols-[20rem_minmax(0,1fr)] lg:items-start">
         <HoodForm form={form} errors={fieldErrors(parsed)} onChange={(patch) => setForm((f) => withUnitChange(f, patch))} />
         <div className="min-w-0 space-y-6">

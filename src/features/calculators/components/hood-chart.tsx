@@ -26,20 +26,48 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
   const innerH = HEIGHT - MARGIN.top - MARGIN.bottom;
   const x = scaleLinear({ domain: [0, xMax], range: [0, innerW], nice: false });
   const y = scaleLog({ domain: [yMin, yMax], range: [innerH, 0] });
-  const yTicks = decadeTicks(yMin, yMax).flatMap((t) => [t, 2 * t, 5 * t]).filter((t) => t >= yMin && t <= yMax);
+  const yTicks = decadeTicks(yMin, yMax)
+    .flatMap((t) => [t, 2 * t, 5 * t])
+    .filter((t) => t >= yMin && t <= yMax);
 
   return (
     <figure className="rounded-lg border border-line bg-white p-3">
       <figcaption className="mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
         <span className="font-semibold">Centre-line velocity against distance</span>
-        <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-0.5 w-5 bg-accent" />Centre-line velocity</span>
-        <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-3 w-5 bg-clear-soft outline outline-1 outline-clear" />Published capture range</span>
-        {!booth && <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-3 w-5 bg-paper-deep" />Beyond the equation&apos;s range</span>}
+        <span className="inline-flex items-center gap-1.5">
+          <span aria-hidden="true" className="inline-block h-0.5 w-5 bg-accent" />
+          Centre-line velocity
+        </span>
+        <span className="inline-flex items-center gap-1.5">
+          <span aria-hidden="true" className="inline-block h-3 w-5 bg-clear-soft outline outline-1 outline-clear" />
+          Published capture range
+        </span>
+        {!booth && (
+          <span className="inline-flex items-center gap-1.5">
+            <span aria-hidden="true" className="inline-block h-3 w-5 bg-paper-deep" />
+            Beyond the equation&apos;s range
+          </span>
+        )}
       </figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Centre-line velocity from the face to ${readableNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}>
+      <svg
+        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+        className="h-auto w-full"
+        role="img"
+        aria-label={`Centre-line velocity from the face to ${readableNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}
+      >
         <Group left={MARGIN.left} top={MARGIN.top}>
-          {!booth && f.validUpTo_m < xMax && <rect x={x(f.validUpTo_m)} width={innerW - x(f.validUpTo_m)} y={0} height={innerH} fill={PAPER_DEEP} />}
-          <rect x={0} width={innerW} y={y(f.range.max_mPerS)} height={y(f.range.min_mPerS) - y(f.range.max_mPerS)} fill={CLEAR_SOFT} fillOpacity={0.85} data-testid="capture-band" />
+          {!booth && f.validUpTo_m < xMax && (
+            <rect x={x(f.validUpTo_m)} width={innerW - x(f.validUpTo_m)} y={0} height={innerH} fill={PAPER_DEEP} />
+          )}
+          <rect
+            x={0}
+            width={innerW}
+            y={y(f.range.max_mPerS)}
+            height={y(f.range.min_mPerS) - y(f.range.max_mPerS)}
+            fill={CLEAR_SOFT}
+            fillOpacity={0.85}
+            data-testid="capture-band"
+          />
           <GridRows scale={y} width={innerW} tickValues={yTicks} stroke={LINE} strokeOpacity={0.7} />
           <LinePath data={points} x={(p) => x(p.x)} y={(p) => y(p.v)} stroke={ACCENT} strokeWidth={2.5} />
           {!booth && f.validUpTo_m < xMax && (
@@ -55,8 +83,29 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
           <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
             {readableNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
           </text>
-          <AxisLeft scale={y} tickValues={yTicks} tickFormat={(v) => plainTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label="Centre-line velocity (m/s, log scale)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={40} />
-          <AxisBottom top={innerH} scale={x} numTicks={8} tickFormat={(v) => plainTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Distance from the face along the centre line (m)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={18} />
+          <AxisLeft
+            scale={y}
+            tickValues={yTicks}
+            tickFormat={(v) => plainTick(Number(v))}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
+            label="Centre-line velocity (m/s, log scale)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={40}
+          />
+          <AxisBottom
+            top={innerH}
+            scale={x}
+            numTicks={8}
+            tickFormat={(v) => plainTick(Number(v))}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
+            label="Distance from the face along the centre line (m)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={18}
+          />
         </Group>
       </svg>
     </figure>

@@ -38,7 +38,10 @@ export function ParticleCalculatorPage() {
   }, [parsed]);
 
   return (
-    <Page title="Particle calculator" intro="How one particle size settles, diffuses and deposits in air, and which health-related fractions it counts towards. Results update as you type.">
+    <Page
+      title="Particle calculator"
+      intro="How one particle size settles, diffuses and deposits in air, and which health-related fractions it counts towards. Results update as you type."
+    >
       <div className="grid gap-6 lg:grid-cols-[18rem_minmax(0,1fr)] lg:items-start">
         <ParticleForm form={form} errors={fieldErrors(parsed)} onChange={(patch) => setForm((f) => ({ ...f, ...patch }))} />
         <div className="min-w-0 space-y-6">

@@ -14,8 +14,19 @@ const WIDTH = 760;
 const HEIGHT = 380;
 const MARGIN = { top: 24, right: 24, bottom: 56, left: 76 };
 
-export default function ParticleChart({ medium, crossover_m, diameter_m }: { medium: ParticleMedium; crossover_m: number | null; diameter_m: number }) {
-  const points = useMemo(() => logSpace(CHART_MIN_DIAMETER_m, CHART_MAX_DIAMETER_m, 121).map((d) => particleProperties(d, medium)), [medium]);
+export default function ParticleChart({
+  medium,
+  crossover_m,
+  diameter_m,
+}: {
+  medium: ParticleMedium;
+  crossover_m: number | null;
+  diameter_m: number;
+}) {
+  const points = useMemo(
+    () => logSpace(CHART_MIN_DIAMETER_m, CHART_MAX_DIAMETER_m, 121).map((d) => particleProperties(d, medium)),
+    [medium],
+  );
   const values = points.flatMap((p) => [p.settlingDistance_m, p.rmsDisplacement_m]);
   const yMin = 10 ** Math.floor(Math.log10(Math.min(...values)));
   const yMax = 10 ** Math.ceil(Math.log10(Math.max(...values)));
@@ -32,15 +43,39 @@ export default function ParticleChart({ medium, crossover_m, diameter_m }: { med
     <figure className="rounded-lg border border-line bg-white p-3">
       <figcaption className="mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
         <span className="font-semibold">Distance moved over {over}</span>
-        <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block h-0.5 w-5 bg-accent" />Settling distance</span>
-        <span className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block w-5 border-t-2 border-dashed border-watch" />RMS Brownian displacement</span>
+        <span className="inline-flex items-center gap-1.5">
+          <span aria-hidden="true" className="inline-block h-0.5 w-5 bg-accent" />
+          Settling distance
+        </span>
+        <span className="inline-flex items-center gap-1.5">
+          <span aria-hidden="true" className="inline-block w-5 border-t-2 border-dashed border-watch" />
+          RMS Brownian displacement
+        </span>
       </figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Log–log chart of settling distance and rms Brownian displacement over ${over} from 1 nm to 100 µm${crossover_m ? `; they cross at ${displayDiameter(crossover_m)}` : ''}`}>
+      <svg
+        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+        className="h-auto w-full"
+        role="img"
+        aria-label={`Log–log chart of settling distance and rms Brownian displacement over ${over} from 1 nm to 100 µm${crossover_m ? `; they cross at ${displayDiameter(crossover_m)}` : ''}`}
+      >
         <Group left={MARGIN.left} top={MARGIN.top}>
           <GridRows scale={y} width={innerW} tickValues={yTicks} stroke={LINE} strokeOpacity={0.6} />
-          <GridColumns scale={x} height={innerH} tickValues={decadeTicks(CHART_MIN_DIAMETER_m, CHART_MAX_DIAMETER_m)} stroke={LINE} strokeOpacity={0.6} />
+          <GridColumns
+            scale={x}
+            height={innerH}
+            tickValues={decadeTicks(CHART_MIN_DIAMETER_m, CHART_MAX_DIAMETER_m)}
+            stroke={LINE}
+            strokeOpacity={0.6}
+          />
           <LinePath data={points} x={(p) => x(p.diameter_m)} y={(p) => y(p.settlingDistance_m)} stroke={ACCENT} strokeWidth={2.5} />
-          <LinePath data={points} x={(p) => x(p.diameter_m)} y={(p) => y(p.rmsDisplacement_m)} stroke={WATCH} strokeWidth={2.5} strokeDasharray="7 4" />
+          <LinePath
+            data={points}
+            x={(p) => x(p.diameter_m)}
+            y={(p) => y(p.rmsDisplacement_m)}
+            stroke={WATCH}
+            strokeWidth={2.5}
+            strokeDasharray="7 4"
+          />
           {inRange && <line x1={x(diameter_m)} x2={x(diameter_m)} y1={0} y2={innerH} stroke={MUTED} strokeDasharray="2 3" />}
           {inRange && (
             <text x={x(diameter_m) + 4} y={12} fill={MUTED} fontSize={11} {...halo}>
@@ -56,8 +91,29 @@ export default function ParticleChart({ medium, crossover_m, diameter_m }: { med
               </text>
             </g>
           )}
-          <AxisLeft scale={y} tickValues={yTicks} tickFormat={(v) => powerTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label={`Distance over ${over} (m)`} labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={46} />
-          <AxisBottom top={innerH} scale={x} tickValues={decadeTicks(CHART_MIN_DIAMETER_m, CHART_MAX_DIAMETER_m)} tickFormat={(v) => diameterTick(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Physical particle diameter (nm, µm; log scale)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={18} />
+          <AxisLeft
+            scale={y}
+            tickValues={yTicks}
+            tickFormat={(v) => powerTick(Number(v))}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
+            label={`Distance over ${over} (m)`}
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={46}
+          />
+          <AxisBottom
+            top={innerH}
+            scale={x}
+            tickValues={decadeTicks(CHART_MIN_DIAMETER_m, CHART_MAX_DIAMETER_m)}
+            tickFormat={(v) => diameterTick(Number(v))}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
+            label="Physical particle diameter (nm, µm; log scale)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={18}
+          />
         </Group>
       </svg>
     </figure>

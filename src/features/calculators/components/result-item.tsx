@@ -1,7 +1,19 @@
 import type { ReactNode } from 'react';
 
 // The value sits in its own element so tests and screen readers get the number without the unit glued on.
-export function ResultItem({ label, value, unit, testId, note }: { label: string; value: string; unit: string; testId: string; note?: ReactNode }) {
+export function ResultItem({
+  label,
+  value,
+  unit,
+  testId,
+  note,
+}: {
+  label: string;
+  value: string;
+  unit: string;
+  testId: string;
+  note?: ReactNode;
+}) {
   return (
     <div className="rounded-lg border border-line bg-white p-3">
       <dt className="text-xs font-semibold uppercase tracking-wide text-muted">{label}</dt>

@@ -13,7 +13,15 @@ export function logSpace(min: number, max: number, count: number): number[] {
   return Array.from({ length: count }, (_, i) => 10 ** (a + i * step));
 }
 
-const DIAMETER_LABELS: Record<number, string> = { [-9]: '1 nm', [-8]: '10 nm', [-7]: '100 nm', [-6]: '1 µm', [-5]: '10 µm', [-4]: '100 µm', [-3]: '1 mm' };
+const DIAMETER_LABELS: Record<number, string> = {
+  [-9]: '1 nm',
+  [-8]: '10 nm',
+  [-7]: '100 nm',
+  [-6]: '1 µm',
+  [-5]: '10 µm',
+  [-4]: '100 µm',
+  [-3]: '1 mm',
+};
 
 export const diameterTick = (d_m: number): string => DIAMETER_LABELS[Math.round(Math.log10(d_m))] ?? readableNumber(d_m);
 

@@ -12,7 +12,8 @@ function parse(csv: string) {
   return { headers, rows, byDiameter };
 }
 
-const within = (actual: number, expected: number, relative: number) => expect(Math.abs(actual / expected - 1)).toBeLessThanOrEqual(relative);
+const within = (actual: number, expected: number, relative: number) =>
+  expect(Math.abs(actual / expected - 1)).toBeLessThanOrEqual(relative);
 
 describe('the decade table as CSV', () => {
   const table = parse(decadeTableCsv(unitDensity));

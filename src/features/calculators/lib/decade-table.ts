@@ -35,7 +35,10 @@ export function decadeRows(medium: ParticleMedium): ParticleProperties[] {
 // Six significant digits survive a spreadsheet round trip without pretending to more precision than the formulas have.
 function table(medium: ParticleMedium): { header: string[]; rows: number[][] } {
   const columns = decadeColumns(medium.window_s);
-  return { header: columns.map((c) => c.header), rows: decadeRows(medium).map((row) => columns.map((c) => Number(c.value(row).toPrecision(6)))) };
+  return {
+    header: columns.map((c) => c.header),
+    rows: decadeRows(medium).map((row) => columns.map((c) => Number(c.value(row).toPrecision(6)))),
+  };
 }
 
 export function decadeTableCsv(medium: ParticleMedium): string {

@@ -36,7 +36,15 @@ describe('hood figures for the calculator page', () => {
   });
 
   it('takes the long side as the slot length and warns when a square face is called a slot', () => {
-    const f = hoodFigures({ kind: 'slot', width_m: 1, height_m: 0.05, distance_m: 0.1, release: 'low', basis: 'capture', captureVelocity_mPerS: 1 });
+    const f = hoodFigures({
+      kind: 'slot',
+      width_m: 1,
+      height_m: 0.05,
+      distance_m: 0.1,
+      release: 'low',
+      basis: 'capture',
+      captureVelocity_mPerS: 1,
+    });
     expect(f.airflow_m3PerS).toBeCloseTo(3.7 * 1 * 0.1, 9);
     expect(f.aspectMismatch).toBe(false);
     expect(hoodFigures({ ...plain, kind: 'slot', distance_m: 0.1, basis: 'capture', captureVelocity_mPerS: 1 }).aspectMismatch).toBe(true);

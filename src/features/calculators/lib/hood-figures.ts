@@ -71,7 +71,10 @@ export function hoodFigures(input: HoodCalculatorInput): HoodFigures {
     beyondValidity: input.kind !== 'booth' && input.distance_m > validUpTo_m,
     aspectMismatch: input.kind !== 'booth' && (isSlot ? aspect > SLOT_ASPECT_LIMIT : aspect < SLOT_ASPECT_LIMIT),
     // The slower bound gives the wider duct: anything between keeps dust moving without wasting fan power.
-    ductDiameter_m: { min: ductDiameter(airflow_m3PerS, TRANSPORT_VELOCITY_mPerS.max), max: ductDiameter(airflow_m3PerS, TRANSPORT_VELOCITY_mPerS.min) },
+    ductDiameter_m: {
+      min: ductDiameter(airflow_m3PerS, TRANSPORT_VELOCITY_mPerS.max),
+      max: ductDiameter(airflow_m3PerS, TRANSPORT_VELOCITY_mPerS.min),
+    },
     velocityAt,
   };
 }

@@ -40,7 +40,13 @@ export interface ParticleProperties {
 // Stokes' law is taken to hold below this particle Reynolds number (Hinds §3.2).
 export const STOKES_REYNOLDS_LIMIT = 1;
 
-export function mediumFor(values: { density_kgPerM3: number; shapeFactor: number; temperature_K: number; pressure_Pa: number; window_s: number }): ParticleMedium {
+export function mediumFor(values: {
+  density_kgPerM3: number;
+  shapeFactor: number;
+  temperature_K: number;
+  pressure_Pa: number;
+  window_s: number;
+}): ParticleMedium {
   const air = airProperties({ temperature_K: values.temperature_K, pressure_Pa: values.pressure_Pa });
   return { density_kgPerM3: values.density_kgPerM3, shapeFactor: values.shapeFactor, air, window_s: values.window_s };
 }

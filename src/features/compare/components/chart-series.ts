@@ -27,7 +27,12 @@ export function chartSeries(columns: readonly CompareColumn[], fraction: Fractio
     if (!c.run) return [];
     const band = c.run.series.bands[fraction];
     const points = c.run.series.time_s
-      .map((t, i) => ({ t_min: t / 60, mean: band.mean[i], lo: Number.isFinite(band.lo[i]) ? band.lo[i] : band.mean[i], hi: Number.isFinite(band.hi[i]) ? band.hi[i] : band.mean[i] }))
+      .map((t, i) => ({
+        t_min: t / 60,
+        mean: band.mean[i],
+        lo: Number.isFinite(band.lo[i]) ? band.lo[i] : band.mean[i],
+        hi: Number.isFinite(band.hi[i]) ? band.hi[i] : band.mean[i],
+      }))
       .filter((p) => Number.isFinite(p.mean));
     return [{ id: c.id, name: c.name, points }];
   });

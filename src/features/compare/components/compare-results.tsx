@@ -39,7 +39,8 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
       <p role="status" className="mb-3 text-sm">
         {best ? (
           <>
-            <strong>{best.name}</strong> meets the target with the least total hood airflow, {Math.round(airflow_m3PerH(best.totalAirflow_m3PerS))} m³/h.
+            <strong>{best.name}</strong> meets the target with the least total hood airflow,{' '}
+            {Math.round(airflow_m3PerH(best.totalAirflow_m3PerS))} m³/h.
           </>
         ) : (
           <>None of these options meets the target on the upper 95 % bound of its 8-h TWA.</>
@@ -48,19 +49,29 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
       <ComparisonTable columns={columns} fraction={fraction} target={target} bestId={bestId} />
       <ul className="mt-3 list-disc space-y-1 pl-5 text-xs text-muted">
         <li>
-          Fan power is a rough, common-practice figure: P = Q·Δp/η with Δp = {FAN_ASSUMPTIONS.totalPressure_Pa} Pa total system pressure and η = {FAN_ASSUMPTIONS.efficiency} overall fan efficiency. Duct, filter and
-          hood losses of the real system decide the fan.
+          Fan power is a rough, common-practice figure: P = Q·Δp/η with Δp = {FAN_ASSUMPTIONS.totalPressure_Pa} Pa total system pressure and
+          η = {FAN_ASSUMPTIONS.efficiency} overall fan efficiency. Duct, filter and hood losses of the real system decide the fan.
         </li>
         <li>
-          Differences are against the first column on the {FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their statistical error when |z| &gt; {Z_CRITICAL}, the
-          standard normal 97.5 % quantile (two-sided 5 % test), with z = difference / √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own.
+          Differences are against the first column on the {FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their
+          statistical error when |z| &gt; {Z_CRITICAL}, the standard normal 97.5 % quantile (two-sided 5 % test), with z = difference /
+          √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own.
         </li>
-        <li>The target is judged on the upper 95 % bound of the 8-h TWA of the limit's fraction; among options that meet it, the one with the least total hood airflow is marked.</li>
+        <li>
+          The target is judged on the upper 95 % bound of the 8-h TWA of the limit's fraction; among options that meet it, the one with the
+          least total hood airflow is marked.
+        </li>
       </ul>
       <section aria-labelledby="chart-heading" className="mt-8">
         <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
           <h2 id="chart-heading">Breathing-zone concentration</h2>
-          <FractionPicker fractions={TABLE_FRACTIONS} legend="Size fraction in the chart" value={chartFraction ?? fraction} onChange={onChartFractionChange} limitFraction={fraction} />
+          <FractionPicker
+            fractions={TABLE_FRACTIONS}
+            legend="Size fraction in the chart"
+            value={chartFraction ?? fraction}
+            onChange={onChartFractionChange}
+            limitFraction={fraction}
+          />
         </div>
         <OverlayChart columns={columns} fraction={chartFraction ?? fraction} />
       </section>

@@ -20,7 +20,12 @@ export function ComparisonTable({ columns, fraction, target, bestId }: Props) {
           <tr>
             <td className="w-48 px-3 py-2 text-xs text-muted">Ordered by the hierarchy of controls</td>
             {columns.map((c) => (
-              <th key={c.id} scope="col" data-testid="compare-column" className={`px-3 py-2 font-semibold ${bestId === c.id ? 'border-x-2 border-t-2 border-accent bg-accent-soft' : ''}`}>
+              <th
+                key={c.id}
+                scope="col"
+                data-testid="compare-column"
+                className={`px-3 py-2 font-semibold ${bestId === c.id ? 'border-x-2 border-t-2 border-accent bg-accent-soft' : ''}`}
+              >
                 {bestId === c.id && (
                   <span className="mb-1 block text-xs font-bold text-accent-strong">
                     <span aria-hidden="true">✓ </span>Meets the target with the least airflow
@@ -30,7 +35,14 @@ export function ComparisonTable({ columns, fraction, target, bestId }: Props) {
                   {c.name}
                 </Link>
                 <span className="block text-xs font-normal text-muted">
-                  {c.run ? <>run of {dateTime(c.run.createdAt)}{c.run.outOfDate && <strong className="text-watch"> · ⟳ out of date</strong>}</> : 'not run'}
+                  {c.run ? (
+                    <>
+                      run of {dateTime(c.run.createdAt)}
+                      {c.run.outOfDate && <strong className="text-watch"> · ⟳ out of date</strong>}
+                    </>
+                  ) : (
+                    'not run'
+                  )}
                 </span>
               </th>
             ))}

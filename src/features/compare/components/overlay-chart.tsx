@@ -32,7 +32,9 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
   // Whole decades, so the log axis starts and ends on a labelled tick.
   const top = 10 ** Math.ceil(Math.log10(dataMax * 1.05));
   const floor = top / 10 ** LOG_DECADES;
-  const y = log ? scaleLog({ domain: [floor, top], range: [INNER_H, 0], clamp: true }) : scaleLinear({ domain: [0, dataMax * 1.08], range: [INNER_H, 0], nice: true });
+  const y = log
+    ? scaleLog({ domain: [floor, top], range: [INNER_H, 0], clamp: true })
+    : scaleLinear({ domain: [0, dataMax * 1.08], range: [INNER_H, 0], nice: true });
   const yOf = (v: number) => y(log ? Math.max(v, floor) : v) ?? 0;
   const tMax = Math.max(1, ...series.flatMap((s) => s.points.map((p) => p.t_min)));
   const x = scaleLinear({ domain: [0, tMax], range: [0, INNER_W] });
@@ -46,13 +48,19 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
           const look = SERIES_LOOK[columns.findIndex((c) => c.id === s.id) % SERIES_LOOK.length];
           return (
             <span key={s.id} className="inline-flex items-center gap-1.5">
-              <svg width="28" height="12" aria-hidden="true"><rect x="0" y="1" width="28" height="10" fill={look.stroke} opacity={0.15} /><line x1="0" x2="28" y1="6" y2="6" stroke={look.stroke} strokeWidth={2} strokeDasharray={look.dash} /></svg>
+              <svg width="28" height="12" aria-hidden="true">
+                <rect x="0" y="1" width="28" height="10" fill={look.stroke} opacity={0.15} />
+                <line x1="0" x2="28" y1="6" y2="6" stroke={look.stroke} strokeWidth={2} strokeDasharray={look.dash} />
+              </svg>
               {s.name}
             </span>
           );
         })}
         {limits.map((l) => (
-          <span key={l.value_mgPerM3} className="inline-flex items-center gap-1.5"><span aria-hidden="true" className="inline-block w-6 border-t-2 border-dashed border-act" />Limit {plain(l.value_mgPerM3)} mg/m³{limits.length > 1 ? ` (${l.names.join(', ')})` : ''}</span>
+          <span key={l.value_mgPerM3} className="inline-flex items-center gap-1.5">
+            <span aria-hidden="true" className="inline-block w-6 border-t-2 border-dashed border-act" />
+            Limit {plain(l.value_mgPerM3)} mg/m³{limits.length > 1 ? ` (${l.names.join(', ')})` : ''}
+          </span>
         ))}
         <span className="text-muted">Shaded: 95 % confidence band</span>
         <label className="ml-auto inline-flex items-center gap-1.5">
@@ -60,24 +68,79 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
           Logarithmic concentration axis
         </label>
       </figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`Breathing-zone ${word} concentration over time for ${series.map((s) => s.name).join(', ')}`}>
+      <svg
+        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+        className="h-auto w-full"
+        role="img"
+        aria-label={`Breathing-zone ${word} concentration over time for ${series.map((s) => s.name).join(', ')}`}
+      >
         <Group left={MARGIN.left} top={MARGIN.top}>
           <GridRows scale={y} width={INNER_W} numTicks={log ? LOG_DECADES : 6} stroke="var(--color-line)" strokeOpacity={0.7} />
           {series.map((s) => {
             const look = SERIES_LOOK[columns.findIndex((c) => c.id === s.id) % SERIES_LOOK.length];
             return (
               <g key={s.id} data-testid="compare-series">
-                <Area data={s.points} x={(p) => x(p.t_min)} y0={(p) => yOf(p.lo)} y1={(p) => yOf(p.hi)} fill={look.stroke} fillOpacity={0.13} />
-                <LinePath data={s.points} x={(p) => x(p.t_min)} y={(p) => yOf(p.mean)} stroke={look.stroke} strokeWidth={2} strokeDasharray={look.dash} />
+                <Area
+                  data={s.points}
+                  x={(p) => x(p.t_min)}
+                  y0={(p) => yOf(p.lo)}
+                  y1={(p) => yOf(p.hi)}
+                  fill={look.stroke}
+                  fillOpacity={0.13}
+                />
+                <LinePath
+                  data={s.points}
+                  x={(p) => x(p.t_min)}
+                  y={(p) => yOf(p.mean)}
+                  stroke={look.stroke}
+                  strokeWidth={2}
+                  strokeDasharray={look.dash}
+                />
               </g>
             );
           })}
-          {limits.map((l) => <line key={l.value_mgPerM3} x1={0} x2={INNER_W} y1={yOf(l.value_mgPerM3)} y2={yOf(l.value_mgPerM3)} stroke="var(--color-act)" strokeWidth={1.5} strokeDasharray="7 5" />)}
-          <AxisLeft scale={y} numTicks={log ? LOG_DECADES : 6} tickFormat={(v) => plain(Number(v), 2)} stroke="var(--color-muted)" tickStroke="var(--color-muted)" tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label={`${FRACTION_LABEL[fraction]} concentration (mg/m³)`} labelProps={axisLabel} labelOffset={56} />
-          <AxisBottom top={INNER_H} scale={x} numTicks={10} tickFormat={(v) => plain(Number(v))} stroke="var(--color-muted)" tickStroke="var(--color-muted)" tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Time since the task started (min)" labelProps={axisLabel} labelOffset={16} />
+          {limits.map((l) => (
+            <line
+              key={l.value_mgPerM3}
+              x1={0}
+              x2={INNER_W}
+              y1={yOf(l.value_mgPerM3)}
+              y2={yOf(l.value_mgPerM3)}
+              stroke="var(--color-act)"
+              strokeWidth={1.5}
+              strokeDasharray="7 5"
+            />
+          ))}
+          <AxisLeft
+            scale={y}
+            numTicks={log ? LOG_DECADES : 6}
+            tickFormat={(v) => plain(Number(v), 2)}
+            stroke="var(--color-muted)"
+            tickStroke="var(--color-muted)"
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
+            label={`${FRACTION_LABEL[fraction]} concentration (mg/m³)`}
+            labelProps={axisLabel}
+            labelOffset={56}
+          />
+          <AxisBottom
+            top={INNER_H}
+            scale={x}
+            numTicks={10}
+            tickFormat={(v) => plain(Number(v))}
+            stroke="var(--color-muted)"
+            tickStroke="var(--color-muted)"
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
+            label="Time since the task started (min)"
+            labelProps={axisLabel}
+            labelOffset={16}
+          />
         </Group>
       </svg>
-      {log && <p className="mt-1 text-xs text-muted">On the logarithmic axis, values below {plain(floor, 2)} mg/m³, zero included, are drawn on the bottom edge.</p>}
+      {log && (
+        <p className="mt-1 text-xs text-muted">
+          On the logarithmic axis, values below {plain(floor, 2)} mg/m³, zero included, are drawn on the bottom edge.
+        </p>
+      )}
     </figure>
   );
 }

@@ -13,7 +13,8 @@ type Props = {
   onToggle: (id: number) => void;
 };
 
-const matches = (s: ScenarioSummary, q: string) => [s.name, s.workstationName, s.siteName, s.controlDescription].some((t) => t.toLowerCase().includes(q));
+const matches = (s: ScenarioSummary, q: string) =>
+  [s.name, s.workstationName, s.siteName, s.controlDescription].some((t) => t.toLowerCase().includes(q));
 
 export function ScenarioPicker({ scenarios, pending, error, selected, onToggle }: Props) {
   const [query, setQuery] = useState('');
@@ -30,7 +31,14 @@ export function ScenarioPicker({ scenarios, pending, error, selected, onToggle }
             Tick 2 to {MAX_SELECTED}, from any workstation. {selected.length} chosen{full ? `; untick one to choose another` : ''}.
           </p>
         </div>
-        <TextField label="Search scenarios" type="search" value={query} onChange={(e) => setQuery(e.target.value)} placeholder="Name, workstation or site" className="w-72" />
+        <TextField
+          label="Search scenarios"
+          type="search"
+          value={query}
+          onChange={(e) => setQuery(e.target.value)}
+          placeholder="Name, workstation or site"
+          className="w-72"
+        />
       </div>
       {pending && <Spinner label="Loading the scenarios…" />}
       {error ? <ErrorMessage error={error} title="The scenarios could not be loaded" /> : null}
@@ -40,8 +48,17 @@ export function ScenarioPicker({ scenarios, pending, error, selected, onToggle }
           const checked = selected.includes(s.id);
           return (
             <li key={s.id}>
-              <label className={`flex cursor-pointer items-start gap-2 rounded-md border p-2 text-sm ${checked ? 'border-accent bg-accent-soft' : 'border-transparent hover:bg-paper-deep'} ${!checked && full ? 'cursor-not-allowed opacity-60' : ''}`}>
-                <input type="checkbox" className="mt-1 accent-accent" checked={checked} disabled={!checked && full} onChange={() => onToggle(s.id)} aria-label={`${s.name} at ${s.workstationName}`} />
+              <label
+                className={`flex cursor-pointer items-start gap-2 rounded-md border p-2 text-sm ${checked ? 'border-accent bg-accent-soft' : 'border-transparent hover:bg-paper-deep'} ${!checked && full ? 'cursor-not-allowed opacity-60' : ''}`}
+              >
+                <input
+                  type="checkbox"
+                  className="mt-1 accent-accent"
+                  checked={checked}
+                  disabled={!checked && full}
+                  onChange={() => onToggle(s.id)}
+                  aria-label={`${s.name} at ${s.workstationName}`}
+                />
                 <span className="min-w-0 flex-1">
                   <span className="block font-semibold">{s.name}</span>
                   <span className="block text-xs text-muted">

@@ -33,7 +33,8 @@ function differenceCell(columns: readonly CompareColumn[], c: CompareColumn, ind
   return (
     <>
       {sign}
-      {mg(Math.abs(d.difference))} ({Number.isFinite(d.differencePercent) ? `${sign}${plain(Math.abs(d.differencePercent))} %` : 'first is zero'})
+      {mg(Math.abs(d.difference))} (
+      {Number.isFinite(d.differencePercent) ? `${sign}${plain(Math.abs(d.differencePercent))} %` : 'first is zero'})
       <span className={`block font-semibold ${d.differs ? 'text-ink' : 'text-muted'}`}>
         <span aria-hidden="true">{d.differs ? '≠ ' : '≈ '}</span>
         {d.statement}
@@ -44,25 +45,154 @@ function differenceCell(columns: readonly CompareColumn[], c: CompareColumn, ind
 
 export function tableRows(columns: readonly CompareColumn[], fraction: Fraction, target: Target): RowSpec[] {
   return [
-    { key: 'workstation', label: 'Workstation', cell: (c) => <>{c.workstationName}<Sub>{c.siteName}</Sub></> },
-    { key: 'control', label: 'Control', cell: (c) => <><span className="font-semibold">{controlTierLabel(c.controlTier)}</span><Sub>{c.controlDescription || '—'}</Sub></> },
-    { key: 'hoods', label: 'Hoods', cell: (c) => (c.hoods.length ? <ul className="space-y-1">{c.hoods.map((h, i) => <li key={i}>{hoodText(h)}</li>)}</ul> : <span className="text-muted">None</span>) },
+    {
+      key: 'workstation',
+      label: 'Workstation',
+      cell: (c) => (
+        <>
+          {c.workstationName}
+          <Sub>{c.siteName}</Sub>
+        </>
+      ),
+    },
+    {
+      key: 'control',
+      label: 'Control',
+      cell: (c) => (
+        <>
+          <span className="font-semibold">{controlTierLabel(c.controlTier)}</span>
+          <Sub>{c.controlDescription || '—'}</Sub>
+        </>
+      ),
+    },
+    {
+      key: 'hoods',
+      label: 'Hoods',
+      cell: (c) =>
+        c.hoods.length ? (
+          <ul className="space-y-1">
+            {c.hoods.map((h, i) => (
+              <li key={i}>{hoodText(h)}</li>
+            ))}
+          </ul>
+        ) : (
+          <span className="text-muted">None</span>
+        ),
+    },
     { key: 'airflow', label: 'Total hood airflow', cell: (c) => `${Math.round(airflow_m3PerH(c.totalAirflow_m3PerS))} m³/h` },
-    { key: 'fan', label: <>Fan power<Sub>rough, common practice</Sub></>, cell: (c) => fanPowerText(roughFanPower_W(c.totalAirflow_m3PerS)) },
+    {
+      key: 'fan',
+      label: (
+        <>
+          Fan power<Sub>rough, common practice</Sub>
+        </>
+      ),
+      cell: (c) => fanPowerText(roughFanPower_W(c.totalAirflow_m3PerS)),
+    },
     ...TABLE_FRACTIONS.map<RowSpec>((f) => ({
       key: `twa-${f}`,
-      label: <>{FRACTION_LABEL[f]} 8-h TWA<Sub>95 % CI · peak 15-min average</Sub></>,
+      label: (
+        <>
+          {FRACTION_LABEL[f]} 8-h TWA<Sub>95 % CI · peak 15-min average</Sub>
+        </>
+      ),
       needsRun: true,
       cell: (c) => {
         const x = run(c).fractions[f];
-        return <>{mg(x.twa8h_mgPerM3)}<Sub>CI {plain(x.twa8hCi95_mgPerM3[0])}–{plain(x.twa8hCi95_mgPerM3[1])} · peak {mg(x.peak15min_mgPerM3)}</Sub></>;
+        return (
+          <>
+            {mg(x.twa8h_mgPerM3)}
+            <Sub>
+              CI {plain(x.twa8hCi95_mgPerM3[0])}–{plain(x.twa8hCi95_mgPerM3[1])} · peak {mg(x.peak15min_mgPerM3)}
+            </Sub>
+          </>
+        );
       },
     })),
-    { key: 'percent', label: <>% of limit<Sub>upper 95 % bound</Sub></>, needsRun: true, cell: (c) => { const l = run(c).limit; return l ? <>{share(l.percentOfLimit / 100)}<Sub>up to {share(l.percentOfLimitUpper / 100)} of {mg(l.value_mgPerM3)} {FRACTION_LABEL[l.fraction].toLowerCase()}</Sub></> : 'No limit set'; } },
-    { key: 'rating', label: 'Exposure rating category', needsRun: true, cell: (c) => { const r = run(c); return r.limit ? `${r.limit.ratingCategory}${r.ratingName ? ` · ${r.ratingName}` : ''}` : '—'; } },
-    { key: 'banner', label: 'Banner', cell: (c) => (c.run && !c.run.limit ? <span className="text-muted">No limit set</span> : <BannerBadge banner={c.run?.limit?.banner} />) },
-    { key: 'fate', label: <>Fate of the emitted mass<Sub>captured · settled · exhausted · airborne</Sub></>, needsRun: true, cell: (c) => { const s = run(c).fate.shares; return <ul className="tabular-nums"><li>Captured {share(s.captured)}</li><li>Settled {share(s.settled)}</li><li>Exhausted {share(s.exhausted)}</li><li>Airborne {share(s.airborne)}</li></ul>; } },
-    { key: 'difference', label: <>Difference from the first column<Sub>{FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA, absolute and %</Sub></>, cell: (c, i) => differenceCell(columns, c, i, fraction) },
-    { key: 'target', label: <>Meets the target<Sub>{target.label.toLowerCase()}</Sub></>, needsRun: true, cell: (c) => (meetsTarget(c, target) ? <span><span aria-hidden="true">✓ </span>Yes</span> : <span><span aria-hidden="true">✕ </span>No</span>) },
+    {
+      key: 'percent',
+      label: (
+        <>
+          % of limit<Sub>upper 95 % bound</Sub>
+        </>
+      ),
+      needsRun: true,
+      cell: (c) => {
+        const l = run(c).limit;
+        return l ? (
+          <>
+            {share(l.percentOfLimit / 100)}
+            <Sub>
+              up to {share(l.percentOfLimitUpper / 100)} of {mg(l.value_mgPerM3)} {FRACTION_LABEL[l.fraction].toLowerCase()}
+            </Sub>
+          </>
+        ) : (
+          'No limit set'
+        );
+      },
+    },
+    {
+      key: 'rating',
+      label: 'Exposure rating category',
+      needsRun: true,
+      cell: (c) => {
+        const r = run(c);
+        return r.limit ? `${r.limit.ratingCategory}${r.ratingName ? ` · ${r.ratingName}` : ''}` : '—';
+      },
+    },
+    {
+      key: 'banner',
+      label: 'Banner',
+      cell: (c) =>
+        c.run && !c.run.limit ? <span className="text-muted">No limit set</span> : <BannerBadge banner={c.run?.limit?.banner} />,
+    },
+    {
+      key: 'fate',
+      label: (
+        <>
+          Fate of the emitted mass<Sub>captured · settled · exhausted · airborne</Sub>
+        </>
+      ),
+      needsRun: true,
+      cell: (c) => {
+        const s = run(c).fate.shares;
+        return (
+          <ul className="tabular-nums">
+            <li>Captured {share(s.captured)}</li>
+            <li>Settled {share(s.settled)}</li>
+            <li>Exhausted {share(s.exhausted)}</li>
+            <li>Airborne {share(s.airborne)}</li>
+          </ul>
+        );
+      },
+    },
+    {
+      key: 'difference',
+      label: (
+        <>
+          Difference from the first column<Sub>{FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA, absolute and %</Sub>
+        </>
+      ),
+      cell: (c, i) => differenceCell(columns, c, i, fraction),
+    },
+    {
+      key: 'target',
+      label: (
+        <>
+          Meets the target<Sub>{target.label.toLowerCase()}</Sub>
+        </>
+      ),
+      needsRun: true,
+      cell: (c) =>
+        meetsTarget(c, target) ? (
+          <span>
+            <span aria-hidden="true">✓ </span>Yes
+          </span>
+        ) : (
+          <span>
+            <span aria-hidden="true">✕ </span>No
+          </span>
+        ),
+    },
   ];
 }

@@ -8,7 +8,10 @@ export function TargetPicker({ value, onChange }: { value: Target; onChange: (id
     <fieldset className="flex flex-wrap items-center gap-2 text-sm">
       <legend className="mb-1 font-semibold">Target for the upper 95 % bound of the 8-h TWA</legend>
       {TARGETS.map((t) => (
-        <label key={t.id} className={`cursor-pointer rounded-full border px-3 py-1 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${value.id === t.id ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line bg-white'}`}>
+        <label
+          key={t.id}
+          className={`cursor-pointer rounded-full border px-3 py-1 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${value.id === t.id ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line bg-white'}`}
+        >
           <input type="radio" name={name} value={t.id} checked={value.id === t.id} onChange={() => onChange(t.id)} className="sr-only" />
           {t.label}
         </label>

@@ -33,7 +33,10 @@ function figuresOf(run: SavedRun, read: (result: unknown) => RunFigures): RunFig
   return cached;
 }
 
-export function useCompareColumns<KS extends QueryKey, KR extends QueryKey>(ids: readonly number[], sources: CompareSources<KS, KR>): CompareState {
+export function useCompareColumns<KS extends QueryKey, KR extends QueryKey>(
+  ids: readonly number[],
+  sources: CompareSources<KS, KR>,
+): CompareState {
   const details = useQueries({ queries: ids.map((id) => sources.scenario(id)) });
   const runIds = details.map((d) => d.data?.lastRun?.id ?? null);
   const runs = useQueries({ queries: runIds.filter((id): id is number => id !== null).map((id) => sources.run(id)) });
@@ -48,11 +51,13 @@ export function useCompareColumns<KS extends QueryKey, KR extends QueryKey>(ids:
     if (!d.data) return;
     const runQuery = runFor[i];
     if (!runQuery) return columns.push(buildColumn(d.data, null, null));
-    if (runQuery.error) return problems.push({ id: ids[i], name: d.data.name, message: `its latest run could not be loaded: ${runQuery.error.message}` });
+    if (runQuery.error)
+      return problems.push({ id: ids[i], name: d.data.name, message: `its latest run could not be loaded: ${runQuery.error.message}` });
     const run = runQuery.data;
     if (!run) return (pending = true);
     const figures = figuresOf(run, sources.figures);
-    if (figures instanceof Error) return problems.push({ id: ids[i], name: d.data.name, message: `its latest run could not be read: ${figures.message}` });
+    if (figures instanceof Error)
+      return problems.push({ id: ids[i], name: d.data.name, message: `its latest run could not be read: ${figures.message}` });
     columns.push(buildColumn(d.data, run, figures));
   });
   return { pending, columns: orderByHierarchy(columns), problems };

@@ -28,7 +28,13 @@ export function buildColumn(scenario: ScenarioLike, run: RunLike | null, figures
     siteName: scenario.siteName,
     controlTier: scenario.controlTier as ControlTier,
     controlDescription: scenario.controlDescription,
-    hoods: hoods.map(({ name, kind, airflow_m3PerS, faceWidth_m, faceHeight_m }) => ({ name, kind, airflow_m3PerS, faceWidth_m, faceHeight_m })),
+    hoods: hoods.map(({ name, kind, airflow_m3PerS, faceWidth_m, faceHeight_m }) => ({
+      name,
+      kind,
+      airflow_m3PerS,
+      faceWidth_m,
+      faceHeight_m,
+    })),
     totalAirflow_m3PerS: hoods.reduce((sum, h) => sum + h.airflow_m3PerS, 0),
     run: run && figures ? { ...figures, id: run.id, createdAt: run.createdAt, outOfDate: run.outOfDate } : null,
   };

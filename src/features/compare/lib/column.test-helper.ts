@@ -3,7 +3,10 @@ import type { CompareColumn, Ci } from './types';
 const band = { mean: [0, 1], lo: [0, 0.5], hi: [0, 1.5] };
 
 /** A column whose every fraction has the given respirable 8-h TWA and 95 % interval; limit 0.025 mg/m³ respirable. */
-export function column(id: number, opts: { name?: string; tier?: CompareColumn['controlTier']; airflow_m3PerS?: number; twa?: number; ci?: Ci; run?: boolean } = {}): CompareColumn {
+export function column(
+  id: number,
+  opts: { name?: string; tier?: CompareColumn['controlTier']; airflow_m3PerS?: number; twa?: number; ci?: Ci; run?: boolean } = {},
+): CompareColumn {
   const twa = opts.twa ?? 0.01;
   const ci = opts.ci ?? [twa * 0.9, twa * 1.1];
   const fraction = { twa8h_mgPerM3: twa, twa8hCi95_mgPerM3: ci, peak15min_mgPerM3: 2 * twa };
@@ -27,7 +30,14 @@ export function column(id: number, opts: { name?: string; tier?: CompareColumn['
             fractions: { total: fraction, inhalable: fraction, thoracic: fraction, respirable: fraction },
             series: { time_s: [0, 60], bands: { total: band, inhalable: band, thoracic: band, respirable: band } },
             fate: { emitted_mg: 100, shares: { captured: 0.5, settled: 0.2, exhausted: 0.2, airborne: 0.1 } },
-            limit: { fraction: 'respirable', value_mgPerM3: 0.025, percentOfLimit: (100 * twa) / 0.025, percentOfLimitUpper: (100 * ci[1]) / 0.025, ratingCategory: 2, banner: 'clear' },
+            limit: {
+              fraction: 'respirable',
+              value_mgPerM3: 0.025,
+              percentOfLimit: (100 * twa) / 0.025,
+              percentOfLimitUpper: (100 * ci[1]) / 0.025,
+              ratingCategory: 2,
+              banner: 'clear',
+            },
             ratingName: 'Well controlled',
           },
   };

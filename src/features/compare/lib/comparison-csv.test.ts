@@ -3,10 +3,18 @@ import { column } from './column.test-helper';
 import { comparisonCsv } from './comparison-csv';
 import { targetFor } from './target';
 
-const parse = (csv: string) => csv.trim().split('\r\n').map((line) => line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/));
+const parse = (csv: string) =>
+  csv
+    .trim()
+    .split('\r\n')
+    .map((line) => line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/));
 
 describe('the side-by-side CSV', () => {
-  const columns = [column(1, { name: 'No control', twa: 0.15, ci: [0.14, 0.16] }), column(2, { name: 'Slot hood', airflow_m3PerS: 0.45, twa: 0.001, ci: [0.001, 0.0012] }), column(3, { name: 'Not yet', run: false })];
+  const columns = [
+    column(1, { name: 'No control', twa: 0.15, ci: [0.14, 0.16] }),
+    column(2, { name: 'Slot hood', airflow_m3PerS: 0.45, twa: 0.001, ci: [0.001, 0.0012] }),
+    column(3, { name: 'Not yet', run: false }),
+  ];
   const [header, ...rows] = parse(comparisonCsv(columns, targetFor('half')));
   const cell = (row: string[], name: string) => row[header.indexOf(name)];
 

@@ -12,12 +12,34 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
   const fraction = comparedFraction(columns);
   const best = leastAirflowMeeting(columns, target);
   const header = [
-    'Scenario', 'Workstation', 'Site', 'Control tier', 'Control', 'Hoods', 'Total hood airflow (m³/h)', 'Rough fan power (W)',
-    ...TABLE_FRACTIONS.flatMap((f) => [`${FRACTION_LABEL[f]} 8-h TWA (mg/m³)`, `${FRACTION_LABEL[f]} 8-h TWA lower 95 % (mg/m³)`, `${FRACTION_LABEL[f]} 8-h TWA upper 95 % (mg/m³)`, `${FRACTION_LABEL[f]} peak 15-min (mg/m³)`]),
-    'Limit fraction', 'Limit (mg/m³)', '% of limit', '% of limit upper 95 %', 'Exposure rating category', 'Rating', 'Banner',
+    'Scenario',
+    'Workstation',
+    'Site',
+    'Control tier',
+    'Control',
+    'Hoods',
+    'Total hood airflow (m³/h)',
+    'Rough fan power (W)',
+    ...TABLE_FRACTIONS.flatMap((f) => [
+      `${FRACTION_LABEL[f]} 8-h TWA (mg/m³)`,
+      `${FRACTION_LABEL[f]} 8-h TWA lower 95 % (mg/m³)`,
+      `${FRACTION_LABEL[f]} 8-h TWA upper 95 % (mg/m³)`,
+      `${FRACTION_LABEL[f]} peak 15-min (mg/m³)`,
+    ]),
+    'Limit fraction',
+    'Limit (mg/m³)',
+    '% of limit',
+    '% of limit upper 95 %',
+    'Exposure rating category',
+    'Rating',
+    'Banner',
     ...FATES.map((k) => `${k[0].toUpperCase()}${k.slice(1)} (% of emitted)`),
-    `${FRACTION_LABEL[fraction]} 8-h TWA difference from first (mg/m³)`, 'Difference from first (%)', 'z', 'Beyond statistical error',
-    `Meets target: ${target.label}`, 'Least airflow meeting target',
+    `${FRACTION_LABEL[fraction]} 8-h TWA difference from first (mg/m³)`,
+    'Difference from first (%)',
+    'z',
+    'Beyond statistical error',
+    `Meets target: ${target.label}`,
+    'Least airflow meeting target',
   ];
   const reference = columns[0] ? estimateOf(columns[0], fraction) : null;
   const rows = columns.map((c, i) => {
@@ -25,13 +47,38 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
     const own = estimateOf(c, fraction);
     const diff = i > 0 && reference && own ? compareMeans(reference, own) : null;
     return [
-      c.name, c.workstationName, c.siteName, controlTierLabel(c.controlTier), c.controlDescription, c.hoods.map(hoodText).join('; '),
-      airflow_m3PerH(c.totalAirflow_m3PerS), roughFanPower_W(c.totalAirflow_m3PerS),
-      ...TABLE_FRACTIONS.flatMap((f) => (r ? [r.fractions[f].twa8h_mgPerM3, r.fractions[f].twa8hCi95_mgPerM3[0], r.fractions[f].twa8hCi95_mgPerM3[1], r.fractions[f].peak15min_mgPerM3] : [null, null, null, null])),
-      r?.limit?.fraction, r?.limit?.value_mgPerM3, r?.limit?.percentOfLimit, r?.limit?.percentOfLimitUpper, r?.limit?.ratingCategory, r?.ratingName, r?.limit ? r.limit.banner : r ? 'No limit' : 'Not run',
+      c.name,
+      c.workstationName,
+      c.siteName,
+      controlTierLabel(c.controlTier),
+      c.controlDescription,
+      c.hoods.map(hoodText).join('; '),
+      airflow_m3PerH(c.totalAirflow_m3PerS),
+      roughFanPower_W(c.totalAirflow_m3PerS),
+      ...TABLE_FRACTIONS.flatMap((f) =>
+        r
+          ? [
+              r.fractions[f].twa8h_mgPerM3,
+              r.fractions[f].twa8hCi95_mgPerM3[0],
+              r.fractions[f].twa8hCi95_mgPerM3[1],
+              r.fractions[f].peak15min_mgPerM3,
+            ]
+          : [null, null, null, null],
+      ),
+      r?.limit?.fraction,
+      r?.limit?.value_mgPerM3,
+      r?.limit?.percentOfLimit,
+      r?.limit?.percentOfLimitUpper,
+      r?.limit?.ratingCategory,
+      r?.ratingName,
+      r?.limit ? r.limit.banner : r ? 'No limit' : 'Not run',
       ...FATES.map((k) => (r ? 100 * r.fate.shares[k] : '')),
-      diff?.difference, diff?.differencePercent, diff?.z, diff ? (diff.differs ? 'yes' : 'no') : '',
-      r ? (meetsTarget(c, target) ? 'yes' : 'no') : '', best === c.id ? 'yes' : 'no',
+      diff?.difference,
+      diff?.differencePercent,
+      diff?.z,
+      diff ? (diff.differs ? 'yes' : 'no') : '',
+      r ? (meetsTarget(c, target) ? 'yes' : 'no') : '',
+      best === c.id ? 'yes' : 'no',
     ];
   });
   return toCsv(header, rows);

@@ -16,7 +16,10 @@ describe('ordering options by the hierarchy of controls', () => {
   });
 
   it('keeps equal names in id order and leaves the input as it was', () => {
-    const items = [{ id: 9, name: 'Hood', controlTier: 'engineering' }, { id: 2, name: 'Hood', controlTier: 'engineering' }];
+    const items = [
+      { id: 9, name: 'Hood', controlTier: 'engineering' },
+      { id: 2, name: 'Hood', controlTier: 'engineering' },
+    ];
     expect(orderByHierarchy(items).map((i) => i.id)).toEqual([2, 9]);
     expect(items[0].id).toBe(9);
   });

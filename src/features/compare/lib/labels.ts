@@ -5,7 +5,8 @@ import type { HoodFigures } from './types';
 
 export const airflow_m3PerH = (airflow_m3PerS: number) => airflow_m3PerS * 3600;
 
-export const hoodText = (h: HoodFigures) => `${hoodKindLabel(h.kind)}, ${Math.round(airflow_m3PerH(h.airflow_m3PerS))} m³/h, face ${sig(h.faceWidth_m)} × ${sig(h.faceHeight_m)} m`;
+export const hoodText = (h: HoodFigures) =>
+  `${hoodKindLabel(h.kind)}, ${Math.round(airflow_m3PerH(h.airflow_m3PerS))} m³/h, face ${sig(h.faceWidth_m)} × ${sig(h.faceHeight_m)} m`;
 
 export const fanPowerText = (power_W: number) => (power_W >= 1000 ? `${sig(power_W / 1000, 2)} kW` : `${Math.round(power_W)} W`);
 

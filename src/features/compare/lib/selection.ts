@@ -12,7 +12,10 @@ export interface Selection {
 export function parseSelection(param: string | null): Selection {
   const ids: number[] = [];
   const ignored: string[] = [];
-  for (const part of (param ?? '').split(',').map((p) => p.trim()).filter(Boolean)) {
+  for (const part of (param ?? '')
+    .split(',')
+    .map((p) => p.trim())
+    .filter(Boolean)) {
     const id = Number(part);
     if (Number.isInteger(id) && id > 0 && /^\d+$/.test(part)) {
       if (!ids.includes(id)) ids.push(id);

@@ -22,13 +22,20 @@ describe('choosing the option that meets the target with the least airflow', () 
   });
 
   it('picks the least total airflow among the options that meet the target', () => {
-    const columns = [column(1, { twa: 0.1 }), column(2, { airflow_m3PerS: 0.6, twa: 0.002 }), column(3, { airflow_m3PerS: 0.35, twa: 0.004 }), column(4, { airflow_m3PerS: 0.2, twa: 0.02 })];
+    const columns = [
+      column(1, { twa: 0.1 }),
+      column(2, { airflow_m3PerS: 0.6, twa: 0.002 }),
+      column(3, { airflow_m3PerS: 0.35, twa: 0.004 }),
+      column(4, { airflow_m3PerS: 0.2, twa: 0.02 }),
+    ];
     expect(leastAirflowMeeting(columns, half)).toBe(3);
     expect(leastAirflowMeeting(columns, targetFor('limit'))).toBe(4);
   });
 
   it('gives the tie to the earlier column, which ranks higher in the hierarchy', () => {
-    expect(leastAirflowMeeting([column(7, { airflow_m3PerS: 0.3, twa: 0.001 }), column(8, { airflow_m3PerS: 0.3, twa: 0.001 })], half)).toBe(7);
+    expect(
+      leastAirflowMeeting([column(7, { airflow_m3PerS: 0.3, twa: 0.001 }), column(8, { airflow_m3PerS: 0.3, twa: 0.001 })], half),
+    ).toBe(7);
   });
 
   it('answers null when nothing meets the target', () => {

@@ -12,13 +12,19 @@ export interface Target {
 
 export const TARGETS: readonly Target[] = [
   { id: 'tenth', label: 'Below a tenth of the limit', shareOfLimit: 0.1 },
-  { id: 'half', label: 'Below half the limit (the action level)', shareOfLimit: 0.5, note: 'Action level = ½ OEL, US practice (29 CFR 1910.1053).' },
+  {
+    id: 'half',
+    label: 'Below half the limit (the action level)',
+    shareOfLimit: 0.5,
+    note: 'Action level = ½ OEL, US practice (29 CFR 1910.1053).',
+  },
   { id: 'limit', label: 'Below the limit', shareOfLimit: 1 },
 ];
 
 export const DEFAULT_TARGET: TargetId = 'half';
 
-export const targetFor = (id: string | null | undefined): Target => TARGETS.find((t) => t.id === id) ?? TARGETS.find((t) => t.id === DEFAULT_TARGET)!;
+export const targetFor = (id: string | null | undefined): Target =>
+  TARGETS.find((t) => t.id === id) ?? TARGETS.find((t) => t.id === DEFAULT_TARGET)!;
 
 // The upper bound, not the mean: an option only counts when its statistical error cannot hide an exceedance.
 export function meetsTarget(column: CompareColumn, target: Target): boolean {

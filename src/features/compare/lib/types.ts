@@ -9,7 +9,14 @@ export interface RunFigures {
   fractions: Record<Fraction, { twa8h_mgPerM3: number; twa8hCi95_mgPerM3: Ci; peak15min_mgPerM3: number }>;
   series: { time_s: number[]; bands: Record<Fraction, { mean: number[]; lo: number[]; hi: number[] }> };
   fate: { emitted_mg: number; shares: Record<Fate, number> };
-  limit?: { fraction: Fraction; value_mgPerM3: number; percentOfLimit: number; percentOfLimitUpper: number; ratingCategory: ExposureRating; banner: Banner };
+  limit?: {
+    fraction: Fraction;
+    value_mgPerM3: number;
+    percentOfLimit: number;
+    percentOfLimitUpper: number;
+    ratingCategory: ExposureRating;
+    banner: Banner;
+  };
   /** Words for the rating category, supplied by whoever computed the figures. */
   ratingName?: string;
 }

@@ -19,18 +19,22 @@ function ResultSummary({ results }: { results: RunResult }) {
   return (
     <section data-testid="engine-result" className="mt-6 space-y-3 rounded-lg border border-line bg-white p-4">
       <p>
-        Respirable 8-h TWA: <strong>{mg(r.twa8h_mgPerM3)} mg/m³</strong> (95 % CI {mg(r.twa8hCi95_mgPerM3[0])} to {mg(r.twa8hCi95_mgPerM3[1])} mg/m³)
+        Respirable 8-h TWA: <strong>{mg(r.twa8h_mgPerM3)} mg/m³</strong> (95 % CI {mg(r.twa8hCi95_mgPerM3[0])} to{' '}
+        {mg(r.twa8hCi95_mgPerM3[1])} mg/m³)
       </p>
       {results.limit && (
         <p>
-          {percentText(results.limit.percentOfLimit)} of the {results.limit.value_mgPerM3} mg/m³ limit; banner: <strong>{results.limit.banner}</strong>
+          {percentText(results.limit.percentOfLimit)} of the {results.limit.value_mgPerM3} mg/m³ limit; banner:{' '}
+          <strong>{results.limit.banner}</strong>
         </p>
       )}
       <p className="text-sm text-muted">
-        Fate of {fate.emitted_mg.toFixed(0)} mg emitted: captured {pct(fate.captured)}, settled {pct(fate.settled)}, exhausted {pct(fate.exhausted)}, airborne {pct(fate.airborne)}
+        Fate of {fate.emitted_mg.toFixed(0)} mg emitted: captured {pct(fate.captured)}, settled {pct(fate.settled)}, exhausted{' '}
+        {pct(fate.exhausted)}, airborne {pct(fate.airborne)}
       </p>
       <p className="text-sm text-muted">
-        {results.engine.particles.toLocaleString()} particles in {results.engine.batches} batches, {(results.performance.particleSteps / 1e6).toFixed(1)} M particle-steps in {results.performance.wallTime_s.toFixed(1)} s
+        {results.engine.particles.toLocaleString()} particles in {results.engine.batches} batches,{' '}
+        {(results.performance.particleSteps / 1e6).toFixed(1)} M particle-steps in {results.performance.wallTime_s.toFixed(1)} s
       </p>
     </section>
   );
@@ -47,12 +51,23 @@ export function EngineCheckPage() {
       <h1 className="text-2xl font-semibold">Engine check</h1>
       <p className="mt-1 text-muted">{scenario.name}</p>
       <div className="mt-4 flex gap-3">
-        <Button onClick={start} disabled={state.phase === 'running'}>Run</Button>
-        <Button variant="secondary" onClick={run.cancel} disabled={state.phase !== 'running'}>Cancel</Button>
+        <Button onClick={start} disabled={state.phase === 'running'}>
+          Run
+        </Button>
+        <Button variant="secondary" onClick={run.cancel} disabled={state.phase !== 'running'}>
+          Cancel
+        </Button>
       </div>
       {state.phase === 'running' && (
         <div className="mt-4">
-          <div role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} className="h-2 w-full overflow-hidden rounded bg-line">
+          <div
+            role="progressbar"
+            aria-label="Simulation progress"
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={percent}
+            className="h-2 w-full overflow-hidden rounded bg-line"
+          >
             <div className="h-full bg-accent" style={{ width: `${percent}%` }} />
           </div>
           <p className="mt-1 text-sm text-muted">
@@ -62,7 +77,11 @@ export function EngineCheckPage() {
         </div>
       )}
       {state.phase === 'cancelled' && <p className="mt-4 text-muted">Cancelled.</p>}
-      {state.phase === 'failed' && <p role="alert" className="mt-4 text-act">Run failed: {state.error instanceof Error ? state.error.message : String(state.error)}</p>}
+      {state.phase === 'failed' && (
+        <p role="alert" className="mt-4 text-act">
+          Run failed: {state.error instanceof Error ? state.error.message : String(state.error)}
+        </p>
+      )}
       {state.phase === 'done' && <ResultSummary results={state.result} />}
       <Cautions compact />
     </main>

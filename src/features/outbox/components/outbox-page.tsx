@@ -19,7 +19,9 @@ export function OutboxPage() {
     <Page title="Outbox" intro="Without an SMTP server configured, every e-mail Motewalk sends is kept here instead of being delivered.">
       {outbox.isPending && <Spinner label="Loading messages…" />}
       {outbox.error && <ErrorMessage error={outbox.error} />}
-      {outbox.data && outbox.data.items.length === 0 && <EmptyState title="No messages yet">Invitations, reset links and shared reports appear here.</EmptyState>}
+      {outbox.data && outbox.data.items.length === 0 && (
+        <EmptyState title="No messages yet">Invitations, reset links and shared reports appear here.</EmptyState>
+      )}
       <ul className="space-y-4">
         {outbox.data?.items.map((m) => (
           <li key={m.id} className="rounded-lg border border-line bg-white p-4">

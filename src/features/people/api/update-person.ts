@@ -4,7 +4,8 @@ import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 import { peopleQueryOptions } from './get-people';
 
-export const updatePerson = ({ id, patch }: { id: number; patch: UpdatePersonInput }) => apiFetch<Person>(api.person(id), { method: 'PATCH', body: patch });
+export const updatePerson = ({ id, patch }: { id: number; patch: UpdatePersonInput }) =>
+  apiFetch<Person>(api.person(id), { method: 'PATCH', body: patch });
 
 export function useUpdatePerson() {
   const qc = useQueryClient();

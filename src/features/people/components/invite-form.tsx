@@ -27,9 +27,20 @@ export function InviteForm() {
   }
 
   return (
-    <form onSubmit={submit} noValidate aria-label="Invite a person" className="grid gap-4 rounded-lg border border-line bg-white p-4 sm:grid-cols-[1fr_1fr_12rem_auto] sm:items-start">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label="Invite a person"
+      className="grid gap-4 rounded-lg border border-line bg-white p-4 sm:grid-cols-[1fr_1fr_12rem_auto] sm:items-start"
+    >
       <TextField label="Name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={errors.name} />
-      <TextField label="E-mail" type="email" value={form.email} onChange={(e) => setForm({ ...form, email: e.target.value })} error={errors.email} />
+      <TextField
+        label="E-mail"
+        type="email"
+        value={form.email}
+        onChange={(e) => setForm({ ...form, email: e.target.value })}
+        error={errors.email}
+      />
       <SelectField label="Role" value={form.role} onChange={(e) => setForm({ ...form, role: e.target.value as Role })} error={errors.role}>
         {ROLES.map((r) => (
           <option key={r} value={r}>

@@ -26,7 +26,13 @@ export function PeoplePage() {
       header: 'Role',
       sortValue: (p) => p.role,
       render: (p) => (
-        <select aria-label={`Role of ${p.name}`} value={p.role} disabled={p.id === me?.id || update.isPending} onChange={(e) => update.mutate({ id: p.id, patch: { role: e.target.value as Role } })} className="rounded border border-line bg-white px-2 py-1">
+        <select
+          aria-label={`Role of ${p.name}`}
+          value={p.role}
+          disabled={p.id === me?.id || update.isPending}
+          onChange={(e) => update.mutate({ id: p.id, patch: { role: e.target.value as Role } })}
+          className="rounded border border-line bg-white px-2 py-1"
+        >
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}
@@ -36,7 +42,12 @@ export function PeoplePage() {
       ),
     },
     { key: 'status', header: 'Status', render: (p) => STATUS_TEXT[p.status], sortValue: (p) => p.status },
-    { key: 'last', header: 'Last sign-in', render: (p) => (p.lastSignInAt ? new Date(p.lastSignInAt).toLocaleString() : '—'), sortValue: (p) => p.lastSignInAt ?? '' },
+    {
+      key: 'last',
+      header: 'Last sign-in',
+      render: (p) => (p.lastSignInAt ? new Date(p.lastSignInAt).toLocaleString() : '—'),
+      sortValue: (p) => p.lastSignInAt ?? '',
+    },
     {
       key: 'actions',
       header: 'Actions',
@@ -51,11 +62,22 @@ export function PeoplePage() {
               </Button>
             )}
             {p.status === 'deactivated' ? (
-              <Button variant="secondary" className="px-2 py-1 text-xs" onClick={() => update.mutate({ id: p.id, patch: { status: 'active' } })}>
+              <Button
+                variant="secondary"
+                className="px-2 py-1 text-xs"
+                onClick={() => update.mutate({ id: p.id, patch: { status: 'active' } })}
+              >
                 Reactivate
               </Button>
             ) : (
-              <Button variant="danger" className="px-2 py-1 text-xs" onClick={() => window.confirm(`Deactivate ${p.name}? Their sessions end at once.`) && update.mutate({ id: p.id, patch: { status: 'deactivated' } })}>
+              <Button
+                variant="danger"
+                className="px-2 py-1 text-xs"
+                onClick={() =>
+                  window.confirm(`Deactivate ${p.name}? Their sessions end at once.`) &&
+                  update.mutate({ id: p.id, patch: { status: 'deactivated' } })
+                }
+              >
                 Deactivate
               </Button>
             )}
@@ -72,7 +94,18 @@ export function PeoplePage() {
         {link.isSuccess && <Notice>Link sent. It is in the outbox.</Notice>}
         {people.isPending && <Spinner label="Loading people…" />}
         {people.error && <ErrorMessage error={people.error} />}
-        {people.data && (people.data.items.length ? <DataTable caption="People" rows={people.data.items} columns={columns} rowKey={(p) => p.id} initialSort={{ key: 'name', dir: 'asc' }} /> : <EmptyState title="Nobody here yet" />)}
+        {people.data &&
+          (people.data.items.length ? (
+            <DataTable
+              caption="People"
+              rows={people.data.items}
+              columns={columns}
+              rowKey={(p) => p.id}
+              initialSort={{ key: 'name', dir: 'asc' }}
+            />
+          ) : (
+            <EmptyState title="Nobody here yet" />
+          ))}
       </div>
     </Page>
   );

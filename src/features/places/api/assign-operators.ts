@@ -9,5 +9,8 @@ export const assignOperators = ({ workstationId, personIds }: { workstationId: n
 
 export function useAssignOperators() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: assignOperators, onSuccess: (_r, v) => qc.invalidateQueries({ queryKey: placeKeys.workstation(v.workstationId) }) });
+  return useMutation({
+    mutationFn: assignOperators,
+    onSuccess: (_r, v) => qc.invalidateQueries({ queryKey: placeKeys.workstation(v.workstationId) }),
+  });
 }

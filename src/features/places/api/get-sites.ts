@@ -10,5 +10,6 @@ export const sitesQueryOptions = () => queryOptions({ queryKey: placeKeys.all, q
 export const useSites = () => useQuery(sitesQueryOptions());
 
 export const getWorkstation = (id: number) => apiFetch<WorkstationDetail>(api.workstation(id));
-export const workstationQueryOptions = (id: number) => queryOptions({ queryKey: placeKeys.workstation(id), queryFn: () => getWorkstation(id) });
+export const workstationQueryOptions = (id: number) =>
+  queryOptions({ queryKey: placeKeys.workstation(id), queryFn: () => getWorkstation(id) });
 export const useWorkstation = (id: number) => useQuery(workstationQueryOptions(id));

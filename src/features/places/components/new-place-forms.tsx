@@ -24,9 +24,19 @@ export function NewSiteForm() {
     <form onSubmit={submit} noValidate aria-label="New site" className={box}>
       <TextField label="Site name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       <TextField label="Address" value={address} onChange={(e) => setAddress(e.target.value)} />
-      <Button type="submit" className="self-end" disabled={m.isPending}>Add site</Button>
-      {m.isSuccess && <div className="sm:col-span-3"><Notice>Site “{m.data.name}” added.</Notice></div>}
-      {m.error && <div className="sm:col-span-3"><ErrorMessage error={m.error} /></div>}
+      <Button type="submit" className="self-end" disabled={m.isPending}>
+        Add site
+      </Button>
+      {m.isSuccess && (
+        <div className="sm:col-span-3">
+          <Notice>Site “{m.data.name}” added.</Notice>
+        </div>
+      )}
+      {m.error && (
+        <div className="sm:col-span-3">
+          <ErrorMessage error={m.error} />
+        </div>
+      )}
     </form>
   );
 }
@@ -51,17 +61,44 @@ export function NewRoomForm({ sites }: { sites: SiteTree[] }) {
   const { errors, submit } = useSchemaSubmit(roomInputSchema, { siteId: siteId || undefined, name, data }, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New room" className={box}>
-      <SelectField label="Site" value={siteId} onChange={(e) => setSiteId(e.target.value ? Number(e.target.value) : '')} error={errors.siteId ? 'Choose a site' : undefined}>
+      <SelectField
+        label="Site"
+        value={siteId}
+        onChange={(e) => setSiteId(e.target.value ? Number(e.target.value) : '')}
+        error={errors.siteId ? 'Choose a site' : undefined}
+      >
         <option value="">Choose…</option>
-        {sites.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
+        {sites.map((s) => (
+          <option key={s.id} value={s.id}>
+            {s.name}
+          </option>
+        ))}
       </SelectField>
       <TextField label="Room name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       {ROOM_FIELDS.map(([k, label, unit]) => (
-        <TextField key={k} label={label} unit={unit} inputMode="decimal" value={vals[k]} onChange={(e) => setVals({ ...vals, [k]: e.target.value })} error={errors[`data.${k === 'temperature_C' ? 'temperature_K' : k}`]} />
+        <TextField
+          key={k}
+          label={label}
+          unit={unit}
+          inputMode="decimal"
+          value={vals[k]}
+          onChange={(e) => setVals({ ...vals, [k]: e.target.value })}
+          error={errors[`data.${k === 'temperature_C' ? 'temperature_K' : k}`]}
+        />
       ))}
-      <Button type="submit" className="self-end" disabled={m.isPending}>Add room</Button>
-      {m.isSuccess && <div className="sm:col-span-3"><Notice>Room “{m.data.name}” added.</Notice></div>}
-      {m.error && <div className="sm:col-span-3"><ErrorMessage error={m.error} /></div>}
+      <Button type="submit" className="self-end" disabled={m.isPending}>
+        Add room
+      </Button>
+      {m.isSuccess && (
+        <div className="sm:col-span-3">
+          <Notice>Room “{m.data.name}” added.</Notice>
+        </div>
+      )}
+      {m.error && (
+        <div className="sm:col-span-3">
+          <ErrorMessage error={m.error} />
+        </div>
+      )}
     </form>
   );
 }
@@ -84,25 +121,60 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
   const [vals, setVals] = useState<Record<string, string>>(Object.fromEntries(WS_FIELDS.map(([k, , d]) => [k, d])));
   const m = useCreateWorkstation();
   const point = (p: 'source' | 'worker') => ({ x_m: n(vals[`${p}.x_m`]), y_m: n(vals[`${p}.y_m`]), z_m: n(vals[`${p}.z_m`]) });
-  const value = { roomId: roomId || undefined, name, data: { description, source: point('source'), worker: { ...point('worker'), posture: 'standing' }, releaseType } };
+  const value = {
+    roomId: roomId || undefined,
+    name,
+    data: { description, source: point('source'), worker: { ...point('worker'), posture: 'standing' }, releaseType },
+  };
   const { errors, submit } = useSchemaSubmit(workstationInputSchema, value, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New workstation" className={box}>
-      <SelectField label="Room" value={roomId} onChange={(e) => setRoomId(e.target.value ? Number(e.target.value) : '')} error={errors.roomId ? 'Choose a room' : undefined}>
+      <SelectField
+        label="Room"
+        value={roomId}
+        onChange={(e) => setRoomId(e.target.value ? Number(e.target.value) : '')}
+        error={errors.roomId ? 'Choose a room' : undefined}
+      >
         <option value="">Choose…</option>
-        {rooms.map((r) => <option key={r.id} value={r.id}>{r.label}</option>)}
+        {rooms.map((r) => (
+          <option key={r.id} value={r.id}>
+            {r.label}
+          </option>
+        ))}
       </SelectField>
       <TextField label="Workstation name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       <TextField label="What happens here" value={description} onChange={(e) => setDescription(e.target.value)} />
       {WS_FIELDS.map(([k, label]) => (
-        <TextField key={k} label={label} unit="m" inputMode="decimal" value={vals[k]} onChange={(e) => setVals({ ...vals, [k]: e.target.value })} error={errors[`data.${k}`]} />
+        <TextField
+          key={k}
+          label={label}
+          unit="m"
+          inputMode="decimal"
+          value={vals[k]}
+          onChange={(e) => setVals({ ...vals, [k]: e.target.value })}
+          error={errors[`data.${k}`]}
+        />
       ))}
       <SelectField label="Release type" value={releaseType} onChange={(e) => setReleaseType(e.target.value)}>
-        {RELEASE_TYPES.map((r) => <option key={r} value={r}>{RELEASE_TYPE_LABEL[r].description}</option>)}
+        {RELEASE_TYPES.map((r) => (
+          <option key={r} value={r}>
+            {RELEASE_TYPE_LABEL[r].description}
+          </option>
+        ))}
       </SelectField>
-      <Button type="submit" className="self-end" disabled={m.isPending}>Add workstation</Button>
-      {m.isSuccess && <div className="sm:col-span-3"><Notice>Workstation “{m.data.name}” added.</Notice></div>}
-      {m.error && <div className="sm:col-span-3"><ErrorMessage error={m.error} /></div>}
+      <Button type="submit" className="self-end" disabled={m.isPending}>
+        Add workstation
+      </Button>
+      {m.isSuccess && (
+        <div className="sm:col-span-3">
+          <Notice>Workstation “{m.data.name}” added.</Notice>
+        </div>
+      )}
+      {m.error && (
+        <div className="sm:col-span-3">
+          <ErrorMessage error={m.error} />
+        </div>
+      )}
     </form>
   );
 }

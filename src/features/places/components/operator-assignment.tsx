@@ -5,7 +5,15 @@ import { useAssignOperators } from '@/features/places/api/assign-operators';
 
 type Operator = { id: number; name: string; email: string; status: string };
 
-export function OperatorAssignment({ workstationId, operators, assigned }: { workstationId: number; operators: Operator[]; assigned: number[] }) {
+export function OperatorAssignment({
+  workstationId,
+  operators,
+  assigned,
+}: {
+  workstationId: number;
+  operators: Operator[];
+  assigned: number[];
+}) {
   const [chosen, setChosen] = useState<number[]>(assigned);
   const assign = useAssignOperators();
   const toggle = (id: number) => setChosen((c) => (c.includes(id) ? c.filter((x) => x !== id) : [...c, id]));
@@ -26,7 +34,11 @@ export function OperatorAssignment({ workstationId, operators, assigned }: { wor
         </fieldset>
       )}
       <div className="mt-3 flex items-center gap-3">
-        <Button variant="secondary" onClick={() => assign.mutate({ workstationId, personIds: chosen })} disabled={assign.isPending || operators.length === 0}>
+        <Button
+          variant="secondary"
+          onClick={() => assign.mutate({ workstationId, personIds: chosen })}
+          disabled={assign.isPending || operators.length === 0}
+        >
           Save assignment
         </Button>
         {assign.isSuccess && <Notice>Saved.</Notice>}

@@ -2,7 +2,8 @@ import { Link } from 'react-router-dom';
 import type { SiteTree } from '../../../../shared/schemas/workspace-views';
 import { paths } from '@/config/paths';
 
-const room = (r: SiteTree['rooms'][number]) => `${r.data.length_m} × ${r.data.width_m} × ${r.data.height_m} m, ${r.data.airChanges_perH} ACH, draft ${r.data.draftSpeed_mPerS} m/s`;
+const room = (r: SiteTree['rooms'][number]) =>
+  `${r.data.length_m} × ${r.data.width_m} × ${r.data.height_m} m, ${r.data.airChanges_perH} ACH, draft ${r.data.draftSpeed_mPerS} m/s`;
 
 export function PlacesTree({ sites }: { sites: SiteTree[] }) {
   return (

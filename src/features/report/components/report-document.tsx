@@ -39,34 +39,81 @@ type Props = {
 };
 
 /** A document page: reads top to bottom on screen and prints to A4 without the app around it. */
-export function ReportDocument({ scenarioId, title, place, control, input, run, agent, sizeProfileName, releaseType, approval, runPicker, children }: Props) {
+export function ReportDocument({
+  scenarioId,
+  title,
+  place,
+  control,
+  input,
+  run,
+  agent,
+  sizeProfileName,
+  releaseType,
+  approval,
+  runPicker,
+  children,
+}: Props) {
   return (
-    <article data-report-document aria-label={`Report: ${title}`} className="mx-auto w-full max-w-5xl bg-white px-6 py-8 text-ink print:max-w-none print:p-0">
+    <article
+      data-report-document
+      aria-label={`Report: ${title}`}
+      className="mx-auto w-full max-w-5xl bg-white px-6 py-8 text-ink print:max-w-none print:p-0"
+    >
       <div className="no-print mb-6 flex flex-wrap items-center justify-between gap-3 rounded-md border border-line bg-paper p-3">
         <div className="text-sm">{runPicker}</div>
         <Button onClick={() => window.print()}>Print or save as PDF</Button>
       </div>
       {run?.outOfDate && (
-        <p role="status" data-testid="report-out-of-date" className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch print:border-black">
-          ⟳ Out of date: the scenario has changed since this run. The inputs and results below are those of the run, not of the scenario as it stands now.
+        <p
+          role="status"
+          data-testid="report-out-of-date"
+          className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch print:border-black"
+        >
+          ⟳ Out of date: the scenario has changed since this run. The inputs and results below are those of the run, not of the scenario as
+          it stands now.
         </p>
       )}
       <header className="border-b-2 border-ink pb-4">
         <p className="text-xs font-semibold uppercase tracking-wide text-muted">Motewalk exposure assessment</p>
         <h1 className="mt-1">{title}</h1>
         <dl className="mt-3 grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2 print:grid-cols-2">
-          <div><dt className="inline font-semibold">Workstation: </dt><dd className="inline">{place.workstation}, {place.room}, {place.site}</dd></div>
-          <div><dt className="inline font-semibold">Control: </dt><dd className="inline">{control || 'not described'}</dd></div>
-          <div><dt className="inline font-semibold">Run: </dt><dd className="inline">{run ? `${dateTime(run.createdAt)} · ${countText(run.particles)} particles · seed ${run.seed} · engine ${run.engineVersion}` : 'no saved run'}</dd></div>
-          <div><dt className="inline font-semibold">Run by: </dt><dd className="inline">{run ? (run.ranBy ?? 'not recorded') : '—'}</dd></div>
-          <div><dt className="inline font-semibold">Report printed: </dt><dd className="inline">{dateTime(new Date().toISOString())}</dd></div>
+          <div>
+            <dt className="inline font-semibold">Workstation: </dt>
+            <dd className="inline">
+              {place.workstation}, {place.room}, {place.site}
+            </dd>
+          </div>
+          <div>
+            <dt className="inline font-semibold">Control: </dt>
+            <dd className="inline">{control || 'not described'}</dd>
+          </div>
+          <div>
+            <dt className="inline font-semibold">Run: </dt>
+            <dd className="inline">
+              {run
+                ? `${dateTime(run.createdAt)} · ${countText(run.particles)} particles · seed ${run.seed} · engine ${run.engineVersion}`
+                : 'no saved run'}
+            </dd>
+          </div>
+          <div>
+            <dt className="inline font-semibold">Run by: </dt>
+            <dd className="inline">{run ? (run.ranBy ?? 'not recorded') : '—'}</dd>
+          </div>
+          <div>
+            <dt className="inline font-semibold">Report printed: </dt>
+            <dd className="inline">{dateTime(new Date().toISOString())}</dd>
+          </div>
         </dl>
       </header>
       <ReportInputs scenario={input} agent={agent} sizeProfileName={sizeProfileName} releaseType={releaseType} />
       <ReportModel />
       <section aria-labelledby="report-results" className="report-section mt-8">
         <h2 id="report-results">3. Results</h2>
-        {run ? <div className="mt-3">{children}</div> : <p className="mt-2 text-sm">This scenario has no saved run yet; run it and save the run to report results.</p>}
+        {run ? (
+          <div className="mt-3">{children}</div>
+        ) : (
+          <p className="mt-2 text-sm">This scenario has no saved run yet; run it and save the run to report results.</p>
+        )}
       </section>
       <ReportSignOff approval={approval} scenarioId={scenarioId} />
       {/* The run's results end with the cautions; a report without a run must still carry them. */}

@@ -32,7 +32,11 @@ export function ReportInputs({ scenario, agent, sizeProfileName, releaseType }: 
           <caption className="sr-only">Hoods</caption>
           <thead>
             <tr className="border-b border-line text-left">
-              {['Hood', 'Type', 'Face', 'Face centre', 'Facing', 'Airflow', 'Face velocity'].map((h) => <th key={h} scope="col" className="py-1 pr-3 font-semibold">{h}</th>)}
+              {['Hood', 'Type', 'Face', 'Face centre', 'Facing', 'Airflow', 'Face velocity'].map((h) => (
+                <th key={h} scope="col" className="py-1 pr-3 font-semibold">
+                  {h}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>

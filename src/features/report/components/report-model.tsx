@@ -20,11 +20,19 @@ export function ReportModel() {
       <div className="mt-3 grid gap-4 text-sm md:grid-cols-2 print:grid-cols-2">
         <div>
           <h3 className="mb-1 font-semibold">How the estimate is made</h3>
-          <ul className="list-disc space-y-1 pl-5">{MODEL.map((t) => <li key={t}>{t}</li>)}</ul>
+          <ul className="list-disc space-y-1 pl-5">
+            {MODEL.map((t) => (
+              <li key={t}>{t}</li>
+            ))}
+          </ul>
         </div>
         <div>
           <h3 className="mb-1 font-semibold">What the model leaves out</h3>
-          <ul className="list-disc space-y-1 pl-5">{LIMITS.map((t) => <li key={t}>{t}</li>)}</ul>
+          <ul className="list-disc space-y-1 pl-5">
+            {LIMITS.map((t) => (
+              <li key={t}>{t}</li>
+            ))}
+          </ul>
         </div>
       </div>
     </section>

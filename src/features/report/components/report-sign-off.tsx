@@ -12,7 +12,8 @@ export function ReportSignOff({ approval, scenarioId }: { approval: Approval | n
         {!approval && <p>The workstation has no approved control yet.</p>}
         {approval && (
           <p>
-            {ours ? 'This scenario is' : `“${approval.scenarioName}” is`} the station’s current approved control: approved by {approval.approvedBy} on {dateOnly(approval.approvedAt)}, review by {dateOnly(approval.reviewDate)}
+            {ours ? 'This scenario is' : `“${approval.scenarioName}” is`} the station’s current approved control: approved by{' '}
+            {approval.approvedBy} on {dateOnly(approval.approvedAt)}, review by {dateOnly(approval.reviewDate)}
             {approval.needsReview ? ' — needs review (' + (approval.expired ? 'expired' : 'its run is out of date') + ')' : ''}.
             {approval.note && <> Note: “{approval.note}”</>}
           </p>

@@ -4,14 +4,48 @@ import { hoodRows, inputSections } from './input-sections';
 
 const scenario = parseScenario({
   room: { length_m: 8, width_m: 6, height_m: 3.5, airChanges_perH: 3, draftSpeed_mPerS: 0.15, draftDirection_deg: 0 },
-  source: { x_m: 3, y_m: 3, z_m: 0.92, emission: { kind: 'continuous', rate_mgPerMin: 20, taskDuration_min: 60 }, taskMinutesPerShift: 240 },
+  source: {
+    x_m: 3,
+    y_m: 3,
+    z_m: 0.92,
+    emission: { kind: 'continuous', rate_mgPerMin: 20, taskDuration_min: 60 },
+    taskMinutesPerShift: 240,
+  },
   dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 1e-5, gsd: 2.5 } },
   worker: { x_m: 3, y_m: 2.35, z_m: 1.5 },
   limit: { fraction: 'respirable', value_mgPerM3: 0.025 },
-  hoods: [{ kind: 'flanged', x_m: 3, y_m: 3.3, z_m: 0.95, direction: { azimuth_deg: -90 }, faceWidth_m: 0.35, faceHeight_m: 0.25, airflow_m3PerS: 0.35 }],
+  hoods: [
+    {
+      kind: 'flanged',
+      x_m: 3,
+      y_m: 3.3,
+      z_m: 0.95,
+      direction: { azimuth_deg: -90 },
+      faceWidth_m: 0.35,
+      faceHeight_m: 0.25,
+      airflow_m3PerS: 0.35,
+    },
+  ],
 });
-const agent = { name: 'Respirable crystalline silica', data: { density_kgPerM3: 2650, shapeFactor: 1, limitFraction: 'respirable' as const, limit8h_mgPerM3: 0.025, limit15min_mgPerM3: null, jurisdiction: 'ACGIH (US)', limitSource: 'ACGIH TLV-TWA', limitDate: '2024', override: null, notes: '' } };
-const find = (title: string, label: string) => inputSections(scenario, { agent }).find((s) => s.title === title)?.rows.find(([l]) => l === label)?.[1];
+const agent = {
+  name: 'Respirable crystalline silica',
+  data: {
+    density_kgPerM3: 2650,
+    shapeFactor: 1,
+    limitFraction: 'respirable' as const,
+    limit8h_mgPerM3: 0.025,
+    limit15min_mgPerM3: null,
+    jurisdiction: 'ACGIH (US)',
+    limitSource: 'ACGIH TLV-TWA',
+    limitDate: '2024',
+    override: null,
+    notes: '',
+  },
+};
+const find = (title: string, label: string) =>
+  inputSections(scenario, { agent })
+    .find((s) => s.title === title)
+    ?.rows.find(([l]) => l === label)?.[1];
 
 describe('report inputs', () => {
   it('states the room with its volume and the ventilation as ACH and airflow', () => {
@@ -29,7 +63,12 @@ describe('report inputs', () => {
   it('shows the size profile in micrometres and the hood with its face velocity', () => {
     expect(find('Size profile', 'Distribution')).toBe('lognormal, MMAD 10 µm, GSD 2.5');
     // 0.35 m³/s over 0.0875 m² is 4 m/s; 0.35 m³/s is 1,260 m³/h.
-    expect(hoodRows(scenario)[0]).toMatchObject({ kind: 'Flanged opening', face: '350 × 250 mm', airflow: '1,260 m³/h', faceVelocity: '4 m/s' });
+    expect(hoodRows(scenario)[0]).toMatchObject({
+      kind: 'Flanged opening',
+      face: '350 × 250 mm',
+      airflow: '1,260 m³/h',
+      faceVelocity: '4 m/s',
+    });
   });
 
   it('says so when there is no limit', () => {

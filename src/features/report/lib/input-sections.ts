@@ -28,8 +28,16 @@ function direction(d: Hood['direction']): string {
 
 function emissionRows(s: Scenario['source']): Row[] {
   const e = s.emission;
-  const rate: Row = e.kind === 'continuous' ? ['Emission', `continuous, ${n(e.rate_mgPerMin)} mg/min`] : ['Emission', `bursts of ${n(e.massPerEvent_mg)} mg, ${n(e.eventsPerHour)} per hour`];
-  return [rate, ['Task duration', `${n(e.taskDuration_min)} min`], ['Task time in the shift', s.taskMinutesPerShift === undefined ? 'the task duration' : `${n(s.taskMinutesPerShift)} min of 480`], ['Background concentration', `${n(s.background_mgPerM3)} mg/m³`]];
+  const rate: Row =
+    e.kind === 'continuous'
+      ? ['Emission', `continuous, ${n(e.rate_mgPerMin)} mg/min`]
+      : ['Emission', `bursts of ${n(e.massPerEvent_mg)} mg, ${n(e.eventsPerHour)} per hour`];
+  return [
+    rate,
+    ['Task duration', `${n(e.taskDuration_min)} min`],
+    ['Task time in the shift', s.taskMinutesPerShift === undefined ? 'the task duration' : `${n(s.taskMinutesPerShift)} min of 480`],
+    ['Background concentration', `${n(s.background_mgPerM3)} mg/m³`],
+  ];
 }
 
 function profileText(p: Scenario['dust']['sizeProfile']): string {
@@ -39,37 +47,87 @@ function profileText(p: Scenario['dust']['sizeProfile']): string {
 
 function agentRows(s: Scenario, agent: AgentInfo | undefined): Row[] {
   const limit = s.limit;
-  const rows: Row[] = [['Dust agent', agent?.name ?? s.dust.name ?? 'not named'], ['Particle density', `${n(s.dust.density_kgPerM3)} kg/m³`], ['Shape factor', n(s.dust.shapeFactor)]];
+  const rows: Row[] = [
+    ['Dust agent', agent?.name ?? s.dust.name ?? 'not named'],
+    ['Particle density', `${n(s.dust.density_kgPerM3)} kg/m³`],
+    ['Shape factor', n(s.dust.shapeFactor)],
+  ];
   if (!limit) return [...rows, ['Exposure limit', 'none entered: concentrations only']];
   rows.push(['8-h limit used', `${n(limit.value_mgPerM3)} mg/m³, ${FRACTION[limit.fraction]} fraction`]);
   if (limit.shortTerm_mgPerM3) rows.push(['Short-term limit', `${n(limit.shortTerm_mgPerM3)} mg/m³ (15 min)`]);
   if (agent) {
-    rows.push(['Jurisdiction', agent.data.jurisdiction], ['Limit source', `${agent.data.limitSource}${agent.data.limitDate ? ` (${agent.data.limitDate})` : ''}`]);
-    if (agent.data.override) rows.push(['Limit override', `${n(agent.data.override.limit8h_mgPerM3)} mg/m³: ${agent.data.override.reason}`]);
+    rows.push(
+      ['Jurisdiction', agent.data.jurisdiction],
+      ['Limit source', `${agent.data.limitSource}${agent.data.limitDate ? ` (${agent.data.limitDate})` : ''}`],
+    );
+    if (agent.data.override)
+      rows.push(['Limit override', `${n(agent.data.override.limit8h_mgPerM3)} mg/m³: ${agent.data.override.reason}`]);
   } else if (limit.source) rows.push(['Limit source', limit.source]);
   return rows;
 }
 
 /** The scenario as run, in reading order and plain words with units, for the report's inputs section. */
-export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfileName?: string; releaseType?: ReleaseType } = {}): InputSection[] {
+export function inputSections(
+  s: Scenario,
+  opts: { agent?: AgentInfo; sizeProfileName?: string; releaseType?: ReleaseType } = {},
+): InputSection[] {
   const r = s.room;
   const volume_m3 = r.length_m * r.width_m * r.height_m;
   const eddy = r.eddyDiffusivity_m2PerS;
   return [
-    { title: 'Room', rows: [['Size', `${n(r.length_m)} × ${n(r.width_m)} × ${n(r.height_m)} m (${n(volume_m3)} m³)`], ['Air temperature', `${n(kelvinToCelsius(r.temperature_K))} °C`]] },
+    {
+      title: 'Room',
+      rows: [
+        ['Size', `${n(r.length_m)} × ${n(r.width_m)} × ${n(r.height_m)} m (${n(volume_m3)} m³)`],
+        ['Air temperature', `${n(kelvinToCelsius(r.temperature_K))} °C`],
+      ],
+    },
     {
       title: 'Ventilation',
       rows: [
         ['General ventilation', `${n(r.airChanges_perH)} air changes per hour (${m3h((r.airChanges_perH * volume_m3) / 3600)})`],
         ['Background draft', r.draftSpeed_mPerS > 0 ? `${n(r.draftSpeed_mPerS)} m/s toward ${n(r.draftDirection_deg)}° in plan` : 'none'],
-        ['Eddy diffusivity', eddy === undefined ? `${n(eddyDiffusivityFromVentilation(r.airChanges_perH, volume_m3))} m²/s, estimated from the ventilation` : `${n(eddy)} m²/s, entered`],
+        [
+          'Eddy diffusivity',
+          eddy === undefined
+            ? `${n(eddyDiffusivityFromVentilation(r.airChanges_perH, volume_m3))} m²/s, estimated from the ventilation`
+            : `${n(eddy)} m²/s, entered`,
+        ],
       ],
     },
-    { title: 'Source and emission', rows: [['Source position', `${at(s.source)}, ${s.source.shape}${s.source.size_m > 0 ? ` ${n(s.source.size_m)} m` : ''}`], ...(opts.releaseType ? [['Release type', RELEASE_TYPE_LABEL[opts.releaseType].description] as Row] : []), ...emissionRows(s.source)] },
+    {
+      title: 'Source and emission',
+      rows: [
+        ['Source position', `${at(s.source)}, ${s.source.shape}${s.source.size_m > 0 ? ` ${n(s.source.size_m)} m` : ''}`],
+        ...(opts.releaseType ? [['Release type', RELEASE_TYPE_LABEL[opts.releaseType].description] as Row] : []),
+        ...emissionRows(s.source),
+      ],
+    },
     { title: 'Dust agent and limit', rows: agentRows(s, opts.agent) },
-    { title: 'Size profile', rows: [['Profile', opts.sizeProfileName ?? 'entered with the scenario'], ['Distribution', profileText(s.dust.sizeProfile)]] },
-    { title: 'Worker', rows: [['Breathing-zone centre', at(s.worker)], ['Breathing-zone radius', `${n(s.worker.radius_m)} m`], ['Posture', s.worker.posture ?? 'not given']] },
-    { title: 'Simulation settings', rows: [['Particles', countText(s.run.particles)], ['Seed', String(s.run.seed)], ['Batches', String(s.run.batches)], ['Largest time step', `${n(s.run.maxTimeStep_s)} s`]] },
+    {
+      title: 'Size profile',
+      rows: [
+        ['Profile', opts.sizeProfileName ?? 'entered with the scenario'],
+        ['Distribution', profileText(s.dust.sizeProfile)],
+      ],
+    },
+    {
+      title: 'Worker',
+      rows: [
+        ['Breathing-zone centre', at(s.worker)],
+        ['Breathing-zone radius', `${n(s.worker.radius_m)} m`],
+        ['Posture', s.worker.posture ?? 'not given'],
+      ],
+    },
+    {
+      title: 'Simulation settings',
+      rows: [
+        ['Particles', countText(s.run.particles)],
+        ['Seed', String(s.run.seed)],
+        ['Batches', String(s.run.batches)],
+        ['Largest time step', `${n(s.run.maxTimeStep_s)} s`],
+      ],
+    },
   ];
 }
 

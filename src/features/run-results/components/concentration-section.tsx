@@ -9,9 +9,18 @@ import { Section } from './section';
 export function ConcentrationSection({ view }: { view: RunResult }) {
   const [fraction, setFraction] = useState<Fraction>('respirable');
   return (
-    <Section title="Breathing-zone concentration over time" intro="Mean over the batches with its 95 % confidence band, in the breathing zone around the worker's head, during the simulated task.">
+    <Section
+      title="Breathing-zone concentration over time"
+      intro="Mean over the batches with its 95 % confidence band, in the breathing zone around the worker's head, during the simulated task."
+    >
       <div className="mb-3">
-        <FractionPicker fractions={FRACTIONS} legend="Size fraction shown" value={fraction} onChange={setFraction} limitFraction={view.limit?.fraction} />
+        <FractionPicker
+          fractions={FRACTIONS}
+          legend="Size fraction shown"
+          value={fraction}
+          onChange={setFraction}
+          limitFraction={view.limit?.fraction}
+        />
       </div>
       <ConcentrationChart view={view} fraction={fraction} />
     </Section>

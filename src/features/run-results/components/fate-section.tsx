@@ -13,26 +13,55 @@ export function FateSection({ view }: { view: RunResult }) {
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));
   return (
     <Section title="Where the dust went" intro={`Fate of the ${readableNumber(emitted_mg)} mg emitted during the simulated window.`}>
-      <svg viewBox="0 0 1000 44" preserveAspectRatio="none" className="h-11 w-full rounded-md border border-line bg-white" role="img" aria-label={FATES.map((f) => `${FATE_LABEL[f]} ${readableNumber(100 * shares[f], 3)} %`).join(', ')}>
+      <svg
+        viewBox="0 0 1000 44"
+        preserveAspectRatio="none"
+        className="h-11 w-full rounded-md border border-line bg-white"
+        role="img"
+        aria-label={FATES.map((f) => `${FATE_LABEL[f]} ${readableNumber(100 * shares[f], 3)} %`).join(', ')}
+      >
         {FATES.map((f, i) => {
           const w = widths[i];
-          return <rect key={f} x={starts[i]} y={0} width={w} height={44} fill={FATE_COLOUR[f]} stroke="white" strokeWidth={w > 2 ? 2 : 0} vectorEffect="non-scaling-stroke" data-testid={`fate-${f}`} />;
+          return (
+            <rect
+              key={f}
+              x={starts[i]}
+              y={0}
+              width={w}
+              height={44}
+              fill={FATE_COLOUR[f]}
+              stroke="white"
+              strokeWidth={w > 2 ? 2 : 0}
+              vectorEffect="non-scaling-stroke"
+              data-testid={`fate-${f}`}
+            />
+          );
         })}
       </svg>
       <table className="mt-3 w-full max-w-xl text-sm">
         <caption className="sr-only">Fate of the emitted mass</caption>
         <thead>
           <tr className="text-left text-muted">
-            <th scope="col" className="py-1 font-semibold">Fate</th>
-            <th scope="col" className="py-1 text-right font-semibold">Share (%)</th>
-            <th scope="col" className="py-1 text-right font-semibold">Mass (mg)</th>
+            <th scope="col" className="py-1 font-semibold">
+              Fate
+            </th>
+            <th scope="col" className="py-1 text-right font-semibold">
+              Share (%)
+            </th>
+            <th scope="col" className="py-1 text-right font-semibold">
+              Mass (mg)
+            </th>
           </tr>
         </thead>
         <tbody>
           {FATES.map((f) => (
             <tr key={f} className="border-t border-line">
               <th scope="row" className="py-1.5 text-left font-normal">
-                <span aria-hidden="true" className="mr-2 inline-block h-3 w-3 rounded-sm align-middle" style={{ background: FATE_COLOUR[f] }} />
+                <span
+                  aria-hidden="true"
+                  className="mr-2 inline-block h-3 w-3 rounded-sm align-middle"
+                  style={{ background: FATE_COLOUR[f] }}
+                />
                 {FATE_LABEL[f]}
               </th>
               <td className="py-1.5 text-right tabular-nums">{readableNumber(100 * shares[f], 3)}</td>
@@ -40,8 +69,12 @@ export function FateSection({ view }: { view: RunResult }) {
             </tr>
           ))}
           <tr className="border-t-2 border-ink font-semibold">
-            <th scope="row" className="py-1.5 text-left">Sum</th>
-            <td className="py-1.5 text-right tabular-nums" data-testid="fate-sum">{readableNumber(100 * total, 4)}</td>
+            <th scope="row" className="py-1.5 text-left">
+              Sum
+            </th>
+            <td className="py-1.5 text-right tabular-nums" data-testid="fate-sum">
+              {readableNumber(100 * total, 4)}
+            </td>
             <td className="py-1.5 text-right tabular-nums">{readableNumber(total * emitted_mg, 4)}</td>
           </tr>
         </tbody>

@@ -20,20 +20,52 @@ const withCi = (value: number, ci: [number, number]) => (
 
 const COLUMNS: Column<Row>[] = [
   { key: 'fraction', header: 'Fraction', render: (r) => FRACTION_LABEL[r.fraction], sortValue: (r) => FRACTIONS.indexOf(r.fraction) },
-  { key: 'task', header: 'Task mean (mg/m³, 95 % CI)', align: 'right', render: (r) => withCi(r.taskMean_mgPerM3, r.taskMeanCi95_mgPerM3), sortValue: (r) => r.taskMean_mgPerM3 },
-  { key: 'twa', header: '8-h TWA (mg/m³, 95 % CI)', align: 'right', render: (r) => withCi(r.twa8h_mgPerM3, r.twa8hCi95_mgPerM3), sortValue: (r) => r.twa8h_mgPerM3 },
-  { key: 'peak', header: 'Peak 15-min average (mg/m³)', align: 'right', render: (r) => readableNumber(r.peak15min_mgPerM3), sortValue: (r) => r.peak15min_mgPerM3 },
+  {
+    key: 'task',
+    header: 'Task mean (mg/m³, 95 % CI)',
+    align: 'right',
+    render: (r) => withCi(r.taskMean_mgPerM3, r.taskMeanCi95_mgPerM3),
+    sortValue: (r) => r.taskMean_mgPerM3,
+  },
+  {
+    key: 'twa',
+    header: '8-h TWA (mg/m³, 95 % CI)',
+    align: 'right',
+    render: (r) => withCi(r.twa8h_mgPerM3, r.twa8hCi95_mgPerM3),
+    sortValue: (r) => r.twa8h_mgPerM3,
+  },
+  {
+    key: 'peak',
+    header: 'Peak 15-min average (mg/m³)',
+    align: 'right',
+    render: (r) => readableNumber(r.peak15min_mgPerM3),
+    sortValue: (r) => r.peak15min_mgPerM3,
+  },
   {
     key: 'percent',
     header: '% of limit (upper 95 %)',
     align: 'right',
-    render: (r) => (r.percent === undefined ? <span className="text-muted" title="The limit applies to another fraction">—</span> : <>{percentText(r.percent)}<span className="block text-xs text-muted">up to {percentText(r.percentUpper ?? NaN)}</span></>),
+    render: (r) =>
+      r.percent === undefined ? (
+        <span className="text-muted" title="The limit applies to another fraction">
+          —
+        </span>
+      ) : (
+        <>
+          {percentText(r.percent)}
+          <span className="block text-xs text-muted">up to {percentText(r.percentUpper ?? NaN)}</span>
+        </>
+      ),
     sortValue: (r) => r.percent ?? null,
   },
 ];
 
 export function FractionTable({ view, runLabel }: { view: RunResult; runLabel: string }) {
-  const rows: Row[] = FRACTIONS.map((f) => ({ fraction: f, ...view.breathingZone.fractions[f], ...(view.limit?.fraction === f ? { percent: view.limit.percentOfLimit, percentUpper: view.limit.percentOfLimitUpper } : {}) }));
+  const rows: Row[] = FRACTIONS.map((f) => ({
+    fraction: f,
+    ...view.breathingZone.fractions[f],
+    ...(view.limit?.fraction === f ? { percent: view.limit.percentOfLimit, percentUpper: view.limit.percentOfLimitUpper } : {}),
+  }));
   const actions = (
     <>
       <Button variant="secondary" onClick={() => downloadText(`${runLabel}-fractions.csv`, fractionTableCsv(view))}>
@@ -45,8 +77,18 @@ export function FractionTable({ view, runLabel }: { view: RunResult; runLabel: s
     </>
   );
   return (
-    <Section title="Concentrations by size fraction" intro="Task mean over the simulated window; the 8-h TWA adds the rest of the shift at background. Select a column heading to sort." actions={actions}>
-      <DataTable rows={rows} columns={COLUMNS} rowKey={(r) => r.fraction} caption="Breathing-zone concentrations by size fraction" initialSort={{ key: 'fraction', dir: 'asc' }} />
+    <Section
+      title="Concentrations by size fraction"
+      intro="Task mean over the simulated window; the 8-h TWA adds the rest of the shift at background. Select a column heading to sort."
+      actions={actions}
+    >
+      <DataTable
+        rows={rows}
+        columns={COLUMNS}
+        rowKey={(r) => r.fraction}
+        caption="Breathing-zone concentrations by size fraction"
+        initialSort={{ key: 'fraction', dir: 'asc' }}
+      />
     </Section>
   );
 }

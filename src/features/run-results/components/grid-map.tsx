@@ -5,7 +5,19 @@ import { projection } from '@/features/run-results/lib/room-projection';
 import { DRAWING_WIDTH, RoomView } from './room-view';
 
 /** A floor-plane grid ([ix][iy]) painted under the plan, with the source, hoods and breathing zone on top. */
-export function GridMap({ grid, scale, scenario, label, skipZero = false }: { grid: Grid; scale: SequentialScale; scenario: Scenario; label: string; skipZero?: boolean }) {
+export function GridMap({
+  grid,
+  scale,
+  scenario,
+  label,
+  skipZero = false,
+}: {
+  grid: Grid;
+  scale: SequentialScale;
+  scenario: Scenario;
+  label: string;
+  skipZero?: boolean;
+}) {
   const p = projection(scenario.room, 'plan', DRAWING_WIDTH);
   const cells = [];
   for (let ix = 0; ix < grid.nx; ix++) {
@@ -16,7 +28,16 @@ export function GridMap({ grid, scale, scenario, label, skipZero = false }: { gr
       const y1 = grid.origin_m[1] + (iy + 1) * grid.cell_m[1];
       const [sx, sy] = p.toSvg(x0, y1, 0);
       // Half a pixel of overlap hides the hairline seams anti-aliasing leaves between cells.
-      cells.push(<rect key={`${ix}-${iy}`} x={sx} y={sy} width={grid.cell_m[0] * p.scale + 0.5} height={grid.cell_m[1] * p.scale + 0.5} fill={scale.colour(v)} />);
+      cells.push(
+        <rect
+          key={`${ix}-${iy}`}
+          x={sx}
+          y={sy}
+          width={grid.cell_m[0] * p.scale + 0.5}
+          height={grid.cell_m[1] * p.scale + 0.5}
+          fill={scale.colour(v)}
+        />,
+      );
     }
   }
   return <RoomView scenario={scenario} p={p} label={label} textScale={1.4} under={<g data-testid="map-cells">{cells}</g>} />;

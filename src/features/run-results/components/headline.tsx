@@ -17,7 +17,17 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
   );
 }
 
-export function Headline({ view, scenario, agentName, limitSource }: { view: RunResult; scenario: Scenario; agentName?: string; limitSource?: string }) {
+export function Headline({
+  view,
+  scenario,
+  agentName,
+  limitSource,
+}: {
+  view: RunResult;
+  scenario: Scenario;
+  agentName?: string;
+  limitSource?: string;
+}) {
   const limit = view.limit;
   const fraction = limit?.fraction ?? 'respirable';
   const s = view.breathingZone.fractions[fraction];
@@ -26,7 +36,9 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
   return (
     <div>
       {limit ? (
-        <div className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER_CLASSES[limit.banner].border} ${BANNER_CLASSES[limit.banner].soft}`}>
+        <div
+          className={`flex flex-wrap items-center gap-4 rounded-lg border p-4 ${BANNER_CLASSES[limit.banner].border} ${BANNER_CLASSES[limit.banner].soft}`}
+        >
           <BannerBadge banner={limit.banner} size="lg" />
           <p className="max-w-xl text-sm text-ink">
             {BANNER_LABEL[limit.banner].meaning} ({readableNumber(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
@@ -36,7 +48,8 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
         </div>
       ) : (
         <p role="note" className="rounded-lg border border-line bg-paper-deep p-4 text-sm">
-          <span aria-hidden="true">○ </span>This scenario has no exposure limit, so there is no Clear / Watch / Act banner and no % of limit; concentrations only.
+          <span aria-hidden="true">○ </span>This scenario has no exposure limit, so there is no Clear / Watch / Act banner and no % of
+          limit; concentrations only.
         </p>
       )}
       <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
@@ -64,7 +77,8 @@ export function Headline({ view, scenario, agentName, limitSource }: { view: Run
         </Figure>
       </dl>
       <p className="mt-2 text-xs text-muted">
-        Engine {view.engine.version}, seed {String(view.engine.seed)}. The error is the half-width of the 95 % interval across batches, relative to the {FRACTION_LABEL[fraction].toLowerCase()} task mean; more particles narrow it.
+        Engine {view.engine.version}, seed {String(view.engine.seed)}. The error is the half-width of the 95 % interval across batches,
+        relative to the {FRACTION_LABEL[fraction].toLowerCase()} task mean; more particles narrow it.
       </p>
     </div>
   );

@@ -19,13 +19,22 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
   const depScale = dep && sequentialScale(dep.values);
   const capScale = cap && sequentialScale(cap.values);
   return (
-    <Section title="Floor deposition and capture velocity" intro="Both maps are plans of the room, drawn to the same scale as above, with the source, hood faces and breathing zone on top.">
+    <Section
+      title="Floor deposition and capture velocity"
+      intro="Both maps are plans of the room, drawn to the same scale as above, with the source, hood faces and breathing zone on top."
+    >
       <div className="grid gap-4 lg:grid-cols-2">
         <figure className="rounded-lg border border-line bg-white p-3">
           <figcaption className="mb-2 text-sm font-semibold">Dust settled on the floor</figcaption>
           {dep && depScale ? (
             <>
-              <GridMap grid={dep} scale={depScale} scenario={scenario} skipZero label={`Floor deposition map, up to ${readableNumber(Math.max(...dep.values))} mg/m²`} />
+              <GridMap
+                grid={dep}
+                scale={depScale}
+                scenario={scenario}
+                skipZero
+                label={`Floor deposition map, up to ${readableNumber(Math.max(...dep.values))} mg/m²`}
+              />
               <ColourLegend scale={depScale} unit="mg/m²" title="Deposited mass per floor area" />
               <p className="mt-1 text-xs text-muted">White cells received no simulated particle.</p>
             </>
@@ -34,11 +43,29 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
           )}
         </figure>
         <figure className="rounded-lg border border-line bg-white p-3">
-          <figcaption className="mb-2 text-sm font-semibold">Air speed towards the hoods{cap ? ` at ${trimSig(cap.height_m, 3)} m, the source height` : ''}</figcaption>
+          <figcaption className="mb-2 text-sm font-semibold">
+            Air speed towards the hoods{cap ? ` at ${trimSig(cap.height_m, 3)} m, the source height` : ''}
+          </figcaption>
           {cap && capScale ? (
             <>
-              <GridMap grid={cap} scale={capScale} scenario={scenario} label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`} />
-              <ColourLegend scale={capScale} unit="m/s" title="Capture velocity (hoods plus cross-draft)" band={range && { from: range.min_mPerS, to: Math.min(range.max_mPerS, capScale.max), label: `${release} release: ${range.min_mPerS}–${range.max_mPerS} m/s` }} />
+              <GridMap
+                grid={cap}
+                scale={capScale}
+                scenario={scenario}
+                label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`}
+              />
+              <ColourLegend
+                scale={capScale}
+                unit="m/s"
+                title="Capture velocity (hoods plus cross-draft)"
+                band={
+                  range && {
+                    from: range.min_mPerS,
+                    to: Math.min(range.max_mPerS, capScale.max),
+                    label: `${release} release: ${range.min_mPerS}–${range.max_mPerS} m/s`,
+                  }
+                }
+              />
               <p className="mt-1 text-xs text-muted">
                 {range
                   ? `Published capture velocity for ${release} release (${range.description.toLowerCase()}): ${range.min_mPerS}–${range.max_mPerS} m/s (ACGIH Industrial Ventilation). The source should sit where the map reaches this range.`

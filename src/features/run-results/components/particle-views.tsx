@@ -15,7 +15,9 @@ export function SizeLegend({ sizes }: { sizes: ReturnType<typeof sizeClasses> })
     <ul className="space-y-1" aria-label="Particle size classes">
       {sizes.classes.map((c) => (
         <li key={c.label} className="flex items-center gap-2">
-          <svg width={14} height={14} aria-hidden="true"><circle cx={7} cy={7} r={c.radius + 1} fill={c.colour} /></svg>
+          <svg width={14} height={14} aria-hidden="true">
+            <circle cx={7} cy={7} r={c.radius + 1} fill={c.colour} />
+          </svg>
           {c.label}
         </li>
       ))}
@@ -28,7 +30,10 @@ const TAIL_SECONDS = (t: Trajectories) => Math.round(TAIL_FRAMES * t.frameInterv
 export function ParticleViews({ view, scenario }: { view: RunResult; scenario: Scenario }) {
   const t = view.trajectories;
   const play = usePlayback(t.frames, t.frameInterval_s);
-  const sizes = useMemo(() => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, view.sizeBins.aerodynamic_m), [view.engine.sizeBins, t.bins, view.sizeBins.aerodynamic_m]);
+  const sizes = useMemo(
+    () => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, view.sizeBins.aerodynamic_m),
+    [view.engine.sizeBins, t.bins, view.sizeBins.aerodynamic_m],
+  );
   const from = useMemo(() => visibleFrom(t), [t]);
   const dots = useMemo(() => frameDots(t, play.frame, from), [t, play.frame, from]);
   const plan = projection(scenario.room, 'plan', DRAWING_WIDTH);
@@ -44,21 +49,43 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
   const intro = `A sample of the simulated particles, drawn to scale; dots are sized and coloured by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${BASE_RATE_sPerS} simulated seconds per second.`;
   return (
     <Section title="Particle paths, plan and elevation" intro={intro}>
-      <PlaybackControls frame={play.frame} frames={t.frames} time_s={frameTime_s(t, play.frame)} end_s={frameTime_s(t, t.frames - 1)} playing={play.playing} speed={play.speed} onToggle={play.toggle} onSeek={play.seek} onSpeed={play.setSpeed} />
+      <PlaybackControls
+        frame={play.frame}
+        frames={t.frames}
+        time_s={frameTime_s(t, play.frame)}
+        end_s={frameTime_s(t, t.frames - 1)}
+        playing={play.playing}
+        speed={play.speed}
+        onToggle={play.toggle}
+        onSeek={play.seek}
+        onSpeed={play.setSpeed}
+      />
       <div className="mt-3 grid gap-4 lg:grid-cols-[minmax(0,48rem)_minmax(0,1fr)]">
         <div className="grid gap-4">
           <figure className="rounded-lg border border-line bg-white p-3">
             <figcaption className="mb-1 text-sm font-semibold">Plan (seen from above)</figcaption>
-            <RoomView scenario={scenario} p={plan} label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />} />
+            <RoomView
+              scenario={scenario}
+              p={plan}
+              label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`}
+              over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />}
+            />
           </figure>
           <figure className="rounded-lg border border-line bg-white p-3">
             <figcaption className="mb-1 text-sm font-semibold">Elevation (side view, looking along y)</figcaption>
-            <RoomView scenario={scenario} p={elevation} label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`} over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />} />
+            <RoomView
+              scenario={scenario}
+              p={elevation}
+              label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`}
+              over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />}
+            />
           </figure>
         </div>
         <aside aria-label="Key to the particle views" className="space-y-4 text-sm lg:sticky lg:top-4 lg:self-start">
           <p className="rounded-lg border border-line bg-white p-3">
-            <span className="block text-2xl font-semibold tabular-nums" data-testid="airborne-count">{dots.length}</span>
+            <span className="block text-2xl font-semibold tabular-nums" data-testid="airborne-count">
+              {dots.length}
+            </span>
             of {sampled} sampled particles airborne at t = {frameTime_s(t, play.frame).toFixed(0)} s
           </p>
           <div>
@@ -68,9 +95,24 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
           <div>
             <h3 className="mb-1 font-semibold">Markers</h3>
             <ul className="space-y-1 text-muted">
-              <li><span aria-hidden="true" className="text-ink">◇</span> dust source</li>
-              <li><span aria-hidden="true" className="font-bold text-act">▕</span> hood face, arrow: air drawn in</li>
-              <li><span aria-hidden="true" className="text-ink">◌</span> breathing zone, radius {scenario.worker.radius_m} m</li>
+              <li>
+                <span aria-hidden="true" className="text-ink">
+                  ◇
+                </span>{' '}
+                dust source
+              </li>
+              <li>
+                <span aria-hidden="true" className="font-bold text-act">
+                  ▕
+                </span>{' '}
+                hood face, arrow: air drawn in
+              </li>
+              <li>
+                <span aria-hidden="true" className="text-ink">
+                  ◌
+                </span>{' '}
+                breathing zone, radius {scenario.worker.radius_m} m
+              </li>
               <li>Faint lines: each particle&apos;s last {TAIL_SECONDS(t)} s</li>
             </ul>
           </div>

@@ -3,7 +3,17 @@ import { Button } from '@/components/ui/button';
 
 export const SPEEDS = [0.5, 1, 2, 4] as const;
 
-export function PlaybackControls({ frame, frames, time_s, end_s, playing, speed, onToggle, onSeek, onSpeed }: {
+export function PlaybackControls({
+  frame,
+  frames,
+  time_s,
+  end_s,
+  playing,
+  speed,
+  onToggle,
+  onSeek,
+  onSpeed,
+}: {
   frame: number;
   frames: number;
   time_s: number;
@@ -22,17 +32,35 @@ export function PlaybackControls({ frame, frames, time_s, end_s, playing, speed,
         {playing ? 'Pause' : 'Play'}
       </Button>
       <div className="flex min-w-56 flex-1 items-center gap-3">
-        <label htmlFor={`${id}-scrub`} className="font-semibold">Frame</label>
-        <input id={`${id}-scrub`} type="range" min={0} max={Math.max(0, frames - 1)} step={1} value={frame} onChange={(e) => onSeek(Number(e.target.value))} aria-valuetext={`${time_s.toFixed(0)} s of ${end_s.toFixed(0)} s`} className="flex-1 accent-[var(--color-accent)]" data-testid="scrubber" />
+        <label htmlFor={`${id}-scrub`} className="font-semibold">
+          Frame
+        </label>
+        <input
+          id={`${id}-scrub`}
+          type="range"
+          min={0}
+          max={Math.max(0, frames - 1)}
+          step={1}
+          value={frame}
+          onChange={(e) => onSeek(Number(e.target.value))}
+          aria-valuetext={`${time_s.toFixed(0)} s of ${end_s.toFixed(0)} s`}
+          className="flex-1 accent-[var(--color-accent)]"
+          data-testid="scrubber"
+        />
         <output htmlFor={`${id}-scrub`} className="w-28 text-right tabular-nums" data-testid="frame-time" aria-live="off">
           t = {time_s.toFixed(0)} s / {end_s.toFixed(0)} s
         </output>
       </div>
       <fieldset className="flex items-center gap-1">
         <legend className="sr-only">Playback speed</legend>
-        <span aria-hidden="true" className="mr-1 font-semibold">Speed</span>
+        <span aria-hidden="true" className="mr-1 font-semibold">
+          Speed
+        </span>
         {SPEEDS.map((s) => (
-          <label key={s} className={`cursor-pointer rounded-md border px-2 py-1 tabular-nums has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${speed === s ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line'}`}>
+          <label
+            key={s}
+            className={`cursor-pointer rounded-md border px-2 py-1 tabular-nums has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${speed === s ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line'}`}
+          >
             <input type="radio" name={`${id}-speed`} className="sr-only" checked={speed === s} onChange={() => onSpeed(s)} />
             {s}×
           </label>

@@ -1,6 +1,16 @@
 import { useId, type ReactNode } from 'react';
 
-export function Section({ title, intro, actions, children }: { title: string; intro?: ReactNode; actions?: ReactNode; children: ReactNode }) {
+export function Section({
+  title,
+  intro,
+  actions,
+  children,
+}: {
+  title: string;
+  intro?: ReactNode;
+  actions?: ReactNode;
+  children: ReactNode;
+}) {
   const id = useId();
   return (
     <section aria-labelledby={id} className="mt-10 print:break-inside-avoid">

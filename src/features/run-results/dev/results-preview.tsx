@@ -12,7 +12,10 @@ type Options = { json: boolean; diameters: boolean; limit: boolean; hood: boolea
 function compute(o: Options): { scenario: Scenario; result: unknown } {
   const scenario = parseScenario({ ...INPUT, limit: o.limit ? INPUT.limit : undefined, hoods: o.hood ? INPUT.hoods : [] });
   const prepared = prepareScenario(scenario);
-  const results = combineBatches(prepared, Array.from({ length: prepared.batches }, (_, k) => runBatch(prepared, k)));
+  const results = combineBatches(
+    prepared,
+    Array.from({ length: prepared.batches }, (_, k) => runBatch(prepared, k)),
+  );
   // Results do not carry bin diameters yet; the preview adds them to show the µm legend.
   const withBins = o.diameters ? { ...results, sizeBins: { aerodynamic_m: Array.from(prepared.bins.aerodynamic_m) } } : results;
   return { scenario, result: o.json ? JSON.parse(JSON.stringify(toJsonFriendly(withBins))) : withBins };
@@ -32,7 +35,12 @@ export function ResultsPreview() {
       setBusy(false);
     }, 16);
   };
-  const labels: Record<keyof Options, string> = { json: 'As JSON from the server', diameters: 'Attach bin diameters', limit: 'With a limit', hood: 'With the hood' };
+  const labels: Record<keyof Options, string> = {
+    json: 'As JSON from the server',
+    diameters: 'Attach bin diameters',
+    limit: 'With a limit',
+    hood: 'With the hood',
+  };
   return (
     <main className="mx-auto w-full max-w-6xl px-4 py-8 sm:px-6">
       <h1>Run results preview</h1>
@@ -43,7 +51,9 @@ export function ResultsPreview() {
             {labels[k]}
           </label>
         ))}
-        <Button onClick={start} disabled={busy}>Compute</Button>
+        <Button onClick={start} disabled={busy}>
+          Compute
+        </Button>
       </div>
       {busy && <Spinner label="Running the engine…" />}
       {run && <RunResults result={run.result} scenario={run.scenario} />}

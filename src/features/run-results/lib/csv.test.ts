@@ -6,11 +6,23 @@ import { fractionTableCsv, seriesCsv } from './csv';
 import { parseRunResult } from '../../../../shared/schemas/run-result-stored';
 
 const view = parseRunResult(runEngine(scenarioInput()).result);
-const parse = (csv: string) => csv.trimEnd().split('\r\n').map((line) => line.split(','));
+const parse = (csv: string) =>
+  csv
+    .trimEnd()
+    .split('\r\n')
+    .map((line) => line.split(','));
 
 describe('CSV builders', () => {
   it('quote cells holding commas or quotes and leave missing figures empty', () => {
-    expect(toCsv(['a', 'b'], [['x, y', NaN], ['say "hi"', 2]])).toBe('a,b\r\n"x, y",\r\n"say ""hi""",2\r\n');
+    expect(
+      toCsv(
+        ['a', 'b'],
+        [
+          ['x, y', NaN],
+          ['say "hi"', 2],
+        ],
+      ),
+    ).toBe('a,b\r\n"x, y",\r\n"say ""hi""",2\r\n');
   });
 
   it('write one row per fraction with units in every numeric header', () => {

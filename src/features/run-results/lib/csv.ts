@@ -23,13 +23,30 @@ export function fractionTableCsv(view: RunResult): string {
   const rows = FRACTIONS.map((f) => {
     const s = view.breathingZone.fractions[f];
     const l = view.limit?.fraction === f ? view.limit : undefined;
-    return [FRACTION_LABEL[f], s.taskMean_mgPerM3, ...s.taskMeanCi95_mgPerM3, s.twa8h_mgPerM3, ...s.twa8hCi95_mgPerM3, s.peak15min_mgPerM3, l?.value_mgPerM3 ?? '', l?.percentOfLimit ?? '', l?.percentOfLimitUpper ?? ''];
+    return [
+      FRACTION_LABEL[f],
+      s.taskMean_mgPerM3,
+      ...s.taskMeanCi95_mgPerM3,
+      s.twa8h_mgPerM3,
+      ...s.twa8hCi95_mgPerM3,
+      s.peak15min_mgPerM3,
+      l?.value_mgPerM3 ?? '',
+      l?.percentOfLimit ?? '',
+      l?.percentOfLimitUpper ?? '',
+    ];
   });
   return toCsv(header, rows);
 }
 
 export function seriesCsv(view: RunResult): string {
-  const header = ['Time (s)', ...FRACTIONS.flatMap((f) => [`${FRACTION_LABEL[f]} mean (mg/m³)`, `${FRACTION_LABEL[f]} 95 % CI low (mg/m³)`, `${FRACTION_LABEL[f]} 95 % CI high (mg/m³)`])];
+  const header = [
+    'Time (s)',
+    ...FRACTIONS.flatMap((f) => [
+      `${FRACTION_LABEL[f]} mean (mg/m³)`,
+      `${FRACTION_LABEL[f]} 95 % CI low (mg/m³)`,
+      `${FRACTION_LABEL[f]} 95 % CI high (mg/m³)`,
+    ]),
+  ];
   const series = view.breathingZone.series;
   const rows = series.time_s.map((t, i) => [t, ...FRACTIONS.flatMap((f) => [series[f].mean[i], series[f].lo[i], series[f].hi[i]])]);
   return toCsv(header, rows);

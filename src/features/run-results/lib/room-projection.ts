@@ -1,6 +1,22 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { packHoods } from '../../../../workers/engine/hood-field';
-import { HOOD_E1X, HOOD_E1Y, HOOD_E1Z, HOOD_E2X, HOOD_E2Y, HOOD_E2Z, HOOD_HALF_HEIGHT, HOOD_HALF_WIDTH, HOOD_NX, HOOD_NY, HOOD_NZ, HOOD_STRIDE, HOOD_X, HOOD_Y, HOOD_Z } from '../../../../workers/engine/hood-slots';
+import {
+  HOOD_E1X,
+  HOOD_E1Y,
+  HOOD_E1Z,
+  HOOD_E2X,
+  HOOD_E2Y,
+  HOOD_E2Z,
+  HOOD_HALF_HEIGHT,
+  HOOD_HALF_WIDTH,
+  HOOD_NX,
+  HOOD_NY,
+  HOOD_NZ,
+  HOOD_STRIDE,
+  HOOD_X,
+  HOOD_Y,
+  HOOD_Z,
+} from '../../../../workers/engine/hood-slots';
 
 export type ViewKind = 'plan' | 'elevation';
 
@@ -49,8 +65,14 @@ export function hoodOutlines(hoods: Scenario['hoods']): HoodOutline[] {
     const e2 = [p[o + HOOD_E2X], p[o + HOOD_E2Y], p[o + HOOD_E2Z]];
     const hw = p[o + HOOD_HALF_WIDTH];
     const hh = p[o + HOOD_HALF_HEIGHT];
-    const corner = (a: number, b: number): [number, number, number] => [0, 1, 2].map((k) => c[k] + a * hw * e1[k] + b * hh * e2[k]) as [number, number, number];
-    return { name: hood.name ?? `Hood ${h + 1}`, corners: [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)], centre: c, normal: [p[o + HOOD_NX], p[o + HOOD_NY], p[o + HOOD_NZ]] };
+    const corner = (a: number, b: number): [number, number, number] =>
+      [0, 1, 2].map((k) => c[k] + a * hw * e1[k] + b * hh * e2[k]) as [number, number, number];
+    return {
+      name: hood.name ?? `Hood ${h + 1}`,
+      corners: [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)],
+      centre: c,
+      normal: [p[o + HOOD_NX], p[o + HOOD_NY], p[o + HOOD_NZ]],
+    };
   });
 }
 

@@ -36,7 +36,12 @@ describe('trajectory frames', () => {
   });
 
   it('hide the frames the engine fills with the release point before a particle is released', () => {
-    const waiting = { ...t, particles: 1, positions_m: Float32Array.from([2, 3, 0.875, 2, 3, 0.875, 2.25, 3, 1]), bins: Int32Array.from([5]) };
+    const waiting = {
+      ...t,
+      particles: 1,
+      positions_m: Float32Array.from([2, 3, 0.875, 2, 3, 0.875, 2.25, 3, 1]),
+      bins: Int32Array.from([5]),
+    };
     const from = visibleFrom(waiting);
     expect(Array.from(from)).toEqual([1]);
     expect(frameDots(waiting, 0, from)).toEqual([]);
@@ -50,12 +55,38 @@ describe('trajectory frames', () => {
   });
 
   it('break a tail where the particle wrapped from one end of the room to the other', () => {
-    const parts = splitAtWrap([[7.5, 3, 1], [7.9, 3, 1], [0.2, 3, 1], [0.6, 3.1, 1], [0.9, 3.2, 1]], 8, 6);
+    const parts = splitAtWrap(
+      [
+        [7.5, 3, 1],
+        [7.9, 3, 1],
+        [0.2, 3, 1],
+        [0.6, 3.1, 1],
+        [0.9, 3.2, 1],
+      ],
+      8,
+      6,
+    );
     expect(parts).toEqual([
-      [[7.5, 3, 1], [7.9, 3, 1]],
-      [[0.2, 3, 1], [0.6, 3.1, 1], [0.9, 3.2, 1]],
+      [
+        [7.5, 3, 1],
+        [7.9, 3, 1],
+      ],
+      [
+        [0.2, 3, 1],
+        [0.6, 3.1, 1],
+        [0.9, 3.2, 1],
+      ],
     ]);
-    expect(splitAtWrap([[1, 1, 1], [1.2, 1, 1]], 8, 6)).toHaveLength(1);
+    expect(
+      splitAtWrap(
+        [
+          [1, 1, 1],
+          [1.2, 1, 1],
+        ],
+        8,
+        6,
+      ),
+    ).toHaveLength(1);
   });
 
   it('advance 20 simulated seconds per wall second at 1×', () => {

@@ -49,7 +49,7 @@ export const frameTime_s = (t: Trajectories, frame: number): number => frame * t
 /** Frames advanced after dt_ms of wall time at a playback speed, where 1× shows BASE_RATE simulated seconds per second. */
 export const BASE_RATE_sPerS = 20;
 export function advanceFrames(frameInterval_s: number, dt_ms: number, speed: number): number {
-  return frameInterval_s > 0 ? (dt_ms / 1000) * BASE_RATE_sPerS * speed / frameInterval_s : 0;
+  return frameInterval_s > 0 ? ((dt_ms / 1000) * BASE_RATE_sPerS * speed) / frameInterval_s : 0;
 }
 
 /** The particle's last `length` airborne positions up to the frame, oldest first, for a fading tail. */

@@ -43,12 +43,22 @@ export function ControlsSection({ value, onChange, errors, releaseType, onReleas
       {hoods.length === 0 && <p className="text-sm text-muted">No hoods yet.</p>}
       {hoods.map((hood, i) => (
         <div key={i} className="flex flex-col gap-4 border-t border-line pt-5">
-          <HoodFields hood={hood} index={i} errors={errors} onChange={(patch) => onChange(withHood(value, i, patch))} onRemove={() => onChange(withoutHood(value, i))} />
+          <HoodFields
+            hood={hood}
+            index={i}
+            errors={errors}
+            onChange={(patch) => onChange(withHood(value, i, patch))}
+            onRemove={() => onChange(withoutHood(value, i))}
+          />
           <HoodHints hood={hood} index={i} source={value.source} releaseType={releaseType} />
         </div>
       ))}
       <div>
-        <Button variant="secondary" disabled={hoods.length >= MAX_HOODS} onClick={() => onChange({ ...value, hoods: [...hoods, newHood(value)] })}>
+        <Button
+          variant="secondary"
+          disabled={hoods.length >= MAX_HOODS}
+          onClick={() => onChange({ ...value, hoods: [...hoods, newHood(value)] })}
+        >
           + Add hood
         </Button>
       </div>

@@ -28,7 +28,16 @@ export function Draggable({ svgRef, frame, at, onMove, label, testId, readOnly, 
       style={{ touchAction: 'none' }}
       {...handlers}
     >
-      <rect x={frame.toX(at.a_m) - 16} y={frame.toY(at.b_m) - 16} width={32} height={32} rx={6} className="fill-transparent stroke-accent opacity-0 group-focus-visible:opacity-100" strokeWidth={2.5} strokeDasharray="4 3" />
+      <rect
+        x={frame.toX(at.a_m) - 16}
+        y={frame.toY(at.b_m) - 16}
+        width={32}
+        height={32}
+        rx={6}
+        className="fill-transparent stroke-accent opacity-0 group-focus-visible:opacity-100"
+        strokeWidth={2.5}
+        strokeDasharray="4 3"
+      />
       {children}
     </g>
   );

@@ -31,7 +31,12 @@ export function DustSection({ value, onChange, errors, agents, agentId, onAgentC
   return (
     <Section legend="Dust agent and size profile">
       <FieldGrid>
-        <SelectField label="Dust agent" className="sm:col-span-2" value={agentId ?? ''} onChange={(e) => chooseAgent(e.target.value === '' ? null : Number(e.target.value))}>
+        <SelectField
+          label="Dust agent"
+          className="sm:col-span-2"
+          value={agentId ?? ''}
+          onChange={(e) => chooseAgent(e.target.value === '' ? null : Number(e.target.value))}
+        >
           <option value="">None: enter the density by hand</option>
           {agents.map((a) => (
             <option key={a.id} value={a.id}>
@@ -39,8 +44,20 @@ export function DustSection({ value, onChange, errors, agents, agentId, onAgentC
             </option>
           ))}
         </SelectField>
-        <NumberField label="Particle density" unit="kg/m³" value={dust.density_kgPerM3} onValue={(v) => set({ density_kgPerM3: v })} error={errors['dust.density_kgPerM3']} />
-        <NumberField label="Shape factor" value={dust.shapeFactor ?? DEFAULTS.shapeFactor} onValue={(v) => set({ shapeFactor: v })} error={errors['dust.shapeFactor']} hint="1 for spheres" />
+        <NumberField
+          label="Particle density"
+          unit="kg/m³"
+          value={dust.density_kgPerM3}
+          onValue={(v) => set({ density_kgPerM3: v })}
+          error={errors['dust.density_kgPerM3']}
+        />
+        <NumberField
+          label="Shape factor"
+          value={dust.shapeFactor ?? DEFAULTS.shapeFactor}
+          onValue={(v) => set({ shapeFactor: v })}
+          error={errors['dust.shapeFactor']}
+          hint="1 for spheres"
+        />
       </FieldGrid>
       {value.limit && (
         <p className="text-sm text-muted" data-testid="agent-limit">

@@ -12,7 +12,17 @@ export function ElevationView({ value, onChange, readOnly }: Props) {
       value={value}
       onChange={onChange}
       readOnly={readOnly}
-      overlay={(frame) => <line x1={frame.toX(0)} x2={frame.toX(frame.span_m.a)} y1={frame.toY(0)} y2={frame.toY(0)} className="stroke-ink" strokeWidth={4} aria-hidden="true" />}
+      overlay={(frame) => (
+        <line
+          x1={frame.toX(0)}
+          x2={frame.toX(frame.span_m.a)}
+          y1={frame.toY(0)}
+          y2={frame.toY(0)}
+          className="stroke-ink"
+          strokeWidth={4}
+          aria-hidden="true"
+        />
+      )}
     />
   );
 }

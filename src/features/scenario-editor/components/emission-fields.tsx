@@ -11,7 +11,9 @@ type Emission = ScenarioInput['source']['emission'];
 function switchKind(emission: Emission, kind: Emission['kind']): Emission {
   if (kind === emission.kind) return emission;
   const { taskDuration_min } = emission;
-  return kind === 'continuous' ? { kind, rate_mgPerMin: 5, taskDuration_min } : { kind, massPerEvent_mg: 20, eventsPerHour: 12, taskDuration_min };
+  return kind === 'continuous'
+    ? { kind, rate_mgPerMin: 5, taskDuration_min }
+    : { kind, massPerEvent_mg: 20, eventsPerHour: 12, taskDuration_min };
 }
 
 export function EmissionFields({ value, onChange, errors }: SectionProps<ScenarioInput>) {
@@ -22,19 +24,48 @@ export function EmissionFields({ value, onChange, errors }: SectionProps<Scenari
 
   return (
     <FieldGrid>
-      <SelectField label="Emission" value={emission.kind} onChange={(e) => setEmission(switchKind(emission, e.target.value as Emission['kind']))}>
+      <SelectField
+        label="Emission"
+        value={emission.kind}
+        onChange={(e) => setEmission(switchKind(emission, e.target.value as Emission['kind']))}
+      >
         <option value="continuous">Continuous</option>
         <option value="bursts">Bursts</option>
       </SelectField>
       {emission.kind === 'continuous' ? (
-        <NumberField label="Emission rate" unit="mg/min" value={emission.rate_mgPerMin} onValue={(v) => setEmission({ ...emission, rate_mgPerMin: v })} error={at('rate_mgPerMin')} />
+        <NumberField
+          label="Emission rate"
+          unit="mg/min"
+          value={emission.rate_mgPerMin}
+          onValue={(v) => setEmission({ ...emission, rate_mgPerMin: v })}
+          error={at('rate_mgPerMin')}
+        />
       ) : (
         <>
-          <NumberField label="Mass per burst" unit="mg" value={emission.massPerEvent_mg} onValue={(v) => setEmission({ ...emission, massPerEvent_mg: v })} error={at('massPerEvent_mg')} />
-          <NumberField label="Bursts" unit="per h" value={emission.eventsPerHour} onValue={(v) => setEmission({ ...emission, eventsPerHour: v })} error={at('eventsPerHour')} />
+          <NumberField
+            label="Mass per burst"
+            unit="mg"
+            value={emission.massPerEvent_mg}
+            onValue={(v) => setEmission({ ...emission, massPerEvent_mg: v })}
+            error={at('massPerEvent_mg')}
+          />
+          <NumberField
+            label="Bursts"
+            unit="per h"
+            value={emission.eventsPerHour}
+            onValue={(v) => setEmission({ ...emission, eventsPerHour: v })}
+            error={at('eventsPerHour')}
+          />
         </>
       )}
-      <NumberField label="Task duration" unit="min" value={emission.taskDuration_min} onValue={(v) => setEmission({ ...emission, taskDuration_min: v })} error={at('taskDuration_min')} hint="The simulated stretch" />
+      <NumberField
+        label="Task duration"
+        unit="min"
+        value={emission.taskDuration_min}
+        onValue={(v) => setEmission({ ...emission, taskDuration_min: v })}
+        error={at('taskDuration_min')}
+        hint="The simulated stretch"
+      />
       <NumberField
         label="Task time per shift"
         unit="min"

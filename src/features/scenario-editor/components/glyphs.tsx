@@ -28,10 +28,19 @@ export function HoodGlyph({ hood, index, frame, view }: { hood: HoodInput; index
         // Facing straight at or away from the viewer: the usual dot (toward) and cross (away) symbols.
         <g className="stroke-accent-strong" strokeWidth={2} fill="none">
           <circle cx={cx} cy={cy} r={7} className="fill-white" />
-          {towardViewer ? <circle cx={cx} cy={cy} r={2} className="fill-accent-strong" /> : <path d={`M${cx - 4},${cy - 4} L${cx + 4},${cy + 4} M${cx - 4},${cy + 4} L${cx + 4},${cy - 4}`} />}
+          {towardViewer ? (
+            <circle cx={cx} cy={cy} r={2} className="fill-accent-strong" />
+          ) : (
+            <path d={`M${cx - 4},${cy - 4} L${cx + 4},${cy + 4} M${cx - 4},${cy + 4} L${cx + 4},${cy - 4}`} />
+          )}
         </g>
       ) : (
-        <path d={arrowPath(cx, cy, frame.toX(hood.x_m + n.a * ARROW_m), frame.toY((view === 'plan' ? hood.y_m : hood.z_m) + n.b * ARROW_m))} className="fill-none stroke-accent-strong" strokeWidth={2.5} strokeLinecap="round" />
+        <path
+          d={arrowPath(cx, cy, frame.toX(hood.x_m + n.a * ARROW_m), frame.toY((view === 'plan' ? hood.y_m : hood.z_m) + n.b * ARROW_m))}
+          className="fill-none stroke-accent-strong"
+          strokeWidth={2.5}
+          strokeLinecap="round"
+        />
       )}
       <text x={cx} y={Math.min(labelY, cy - 12)} textAnchor="middle" className="fill-accent-strong text-[11px] font-semibold">
         H{index + 1}
@@ -48,7 +57,8 @@ export function SourceGlyph({ source, frame, view }: { source: ScenarioInput['so
   return (
     <g className="fill-watch-soft stroke-watch" strokeWidth={2}>
       {shape === 'box' && <rect x={cx - half} y={cy - half} width={half * 2} height={half * 2} />}
-      {shape === 'disc' && (view === 'plan' ? <circle cx={cx} cy={cy} r={half} /> : <line x1={cx - half} x2={cx + half} y1={cy} y2={cy} strokeWidth={4} />)}
+      {shape === 'disc' &&
+        (view === 'plan' ? <circle cx={cx} cy={cy} r={half} /> : <line x1={cx - half} x2={cx + half} y1={cy} y2={cy} strokeWidth={4} />)}
       <path d={`M${cx},${cy - 7} L${cx + 7},${cy} L${cx},${cy + 7} L${cx - 7},${cy} Z`} className="fill-watch" />
     </g>
   );

@@ -1,4 +1,9 @@
-import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour, metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
+import {
+  cubicMetresPerHourToPerSecond,
+  cubicMetresPerSecondToPerHour,
+  metresToMillimetres,
+  millimetresToMetres,
+} from '../../../../shared/units';
 import { HOOD_KIND_LABEL, HOOD_KINDS } from '../../../../shared/vocabulary/index';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
@@ -33,7 +38,12 @@ export function HoodFields({ hood, index, onChange, onRemove, errors }: Props) {
         </Button>
       </div>
       <FieldGrid>
-        <SelectField label="Kind" value={hood.kind} onChange={(e) => onChange({ kind: e.target.value as HoodInput['kind'] })} error={at('kind')}>
+        <SelectField
+          label="Kind"
+          value={hood.kind}
+          onChange={(e) => onChange({ kind: e.target.value as HoodInput['kind'] })}
+          error={at('kind')}
+        >
           {KINDS.map((k) => (
             <option key={k.value} value={k.value}>
               {k.label}
@@ -59,8 +69,21 @@ export function HoodFields({ hood, index, onChange, onRemove, errors }: Props) {
           error={at('direction.elevation_deg')}
           hint="−90° faces the floor"
         />
-        <NumberField label={slot ? 'Slot length' : 'Face width'} {...mm} value={hood.faceWidth_m} onValue={(v) => onChange({ faceWidth_m: v })} error={at('faceWidth_m')} hint="Across, horizontal" />
-        <NumberField label={slot ? 'Slot width' : 'Face height'} {...mm} value={hood.faceHeight_m} onValue={(v) => onChange({ faceHeight_m: v })} error={at('faceHeight_m')} />
+        <NumberField
+          label={slot ? 'Slot length' : 'Face width'}
+          {...mm}
+          value={hood.faceWidth_m}
+          onValue={(v) => onChange({ faceWidth_m: v })}
+          error={at('faceWidth_m')}
+          hint="Across, horizontal"
+        />
+        <NumberField
+          label={slot ? 'Slot width' : 'Face height'}
+          {...mm}
+          value={hood.faceHeight_m}
+          onValue={(v) => onChange({ faceHeight_m: v })}
+          error={at('faceHeight_m')}
+        />
         <NumberField
           label="Airflow"
           unit="m³/h"

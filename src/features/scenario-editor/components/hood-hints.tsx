@@ -26,16 +26,31 @@ function Warning({ children }: { children: string }) {
 
 function warnings(h: HoodHint): string[] {
   const out: string[] = [];
-  if (h.behind) out.push('The source is behind the face, so the centre-line equation says nothing about it. Turn the hood toward the source.');
+  if (h.behind)
+    out.push('The source is behind the face, so the centre-line equation says nothing about it. Turn the hood toward the source.');
   if (h.beyondValidity && h.rule === 'slot')
-    out.push(`The source is ${metres(h.axial_m)} out; one slot is usually counted on to about ${metres(h.validUpTo_m)} (common practice). Expect less than this figure.`);
+    out.push(
+      `The source is ${metres(h.axial_m)} out; one slot is usually counted on to about ${metres(h.validUpTo_m)} (common practice). Expect less than this figure.`,
+    );
   if (h.beyondValidity && h.rule === 'diameters')
-    out.push(`The source is ${metres(h.axial_m)} out, past 1.5 equivalent diameters (${metres(h.validUpTo_m)}), where the equation stops holding. Expect less than this figure.`);
+    out.push(
+      `The source is ${metres(h.axial_m)} out, past 1.5 equivalent diameters (${metres(h.validUpTo_m)}), where the equation stops holding. Expect less than this figure.`,
+    );
   if (h.farOffAxis) out.push('The source is well off the hood axis; the air there moves slower than the centre-line figure.');
   return out;
 }
 
-export function HoodHints({ hood, index, source, releaseType }: { hood: HoodInput; index: number; source: Point; releaseType: ReleaseCondition }) {
+export function HoodHints({
+  hood,
+  index,
+  source,
+  releaseType,
+}: {
+  hood: HoodInput;
+  index: number;
+  source: Point;
+  releaseType: ReleaseCondition;
+}) {
   const h = hoodHint(hood, source, releaseType);
   if (!h) return <p className="text-sm text-muted">Hints appear once the face size and airflow are valid.</p>;
   const range = `${formatSig(h.range.min_mPerS, 2)}–${formatSig(h.range.max_mPerS, 2)} m/s`;
@@ -45,22 +60,33 @@ export function HoodHints({ hood, index, source, releaseType }: { hood: HoodInpu
   return (
     <div className="flex flex-col gap-3 rounded-md bg-paper p-4 text-sm" data-testid={`hood-hints-${index}`} aria-live="polite">
       <p>
-        Source {metres(Math.abs(h.axial_m))} {h.behind ? 'behind' : 'in front of'} the face along its axis, {metres(h.offAxis_m)} off the axis.
+        Source {metres(Math.abs(h.axial_m))} {h.behind ? 'behind' : 'in front of'} the face along its axis, {metres(h.offAxis_m)} off the
+        axis.
       </p>
       {h.centerline_mPerS !== null && verdict && (
         <p className={`flex items-start gap-2 rounded-md border px-3 py-2 ${verdict.tone}`} data-testid={`hood-verdict-${index}`}>
           <span aria-hidden="true">{verdict.icon}</span>
           <span>
             <strong className="font-semibold">≈ {mps(h.centerline_mPerS)} at the source</strong>
-            {h.rule === 'booth' ? ' (a booth: the face velocity)' : ' on the centre line'}. {verdict.words} the {range} capture range for this release.
+            {h.rule === 'booth' ? ' (a booth: the face velocity)' : ' on the centre line'}. {verdict.words} the {range} capture range for
+            this release.
           </span>
         </p>
       )}
       {h.verdict === 'below' && h.airflowForRange_m3PerS !== null && (
-        <p>About {formatSig(cubicMetresPerSecondToPerHour(h.airflowForRange_m3PerS), 2)} m³/h would reach {formatSig(h.range.min_mPerS, 2)} m/s at the source, or move the hood closer.</p>
+        <p>
+          About {formatSig(cubicMetresPerSecondToPerHour(h.airflowForRange_m3PerS), 2)} m³/h would reach {formatSig(h.range.min_mPerS, 2)}{' '}
+          m/s at the source, or move the hood closer.
+        </p>
       )}
       <p className="text-muted">Face velocity {mps(h.faceVelocity_mPerS)} (airflow ÷ face area).</p>
-      {notes.length > 0 && <ul className="flex flex-col gap-1">{notes.map((n) => <Warning key={n}>{n}</Warning>)}</ul>}
+      {notes.length > 0 && (
+        <ul className="flex flex-col gap-1">
+          {notes.map((n) => (
+            <Warning key={n}>{n}</Warning>
+          ))}
+        </ul>
+      )}
     </div>
   );
 }

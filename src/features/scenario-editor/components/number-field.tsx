@@ -20,7 +20,19 @@ type Props = Common & ({ optional?: false; onValue: (si: number) => void } | { o
 
 const same = (v: number) => v;
 
-export function NumberField({ label, value, onValue, unit, toDisplay = same, fromDisplay = same, optional, error, hint, placeholder, className }: Props) {
+export function NumberField({
+  label,
+  value,
+  onValue,
+  unit,
+  toDisplay = same,
+  fromDisplay = same,
+  optional,
+  error,
+  hint,
+  placeholder,
+  className,
+}: Props) {
   // Half-typed text ("1.", "-") has no number yet; it stays visible until the scenario moves on without it.
   const [draft, setDraft] = useState<{ text: string; si: number | undefined } | null>(null);
   const editing = draft !== null && Object.is(draft.si, value);

@@ -20,13 +20,41 @@ export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioIn
   const fromAch = room.eddyDiffusivity_m2PerS === undefined;
 
   return (
-    <Section legend="Room and ventilation" intro="x runs along the length, y across the width, z up from the floor; the origin is the room's corner.">
+    <Section
+      legend="Room and ventilation"
+      intro="x runs along the length, y across the width, z up from the floor; the origin is the room's corner."
+    >
       <FieldGrid>
-        <NumberField label="Length (x)" unit="m" value={room.length_m} onValue={(v) => set({ length_m: v })} error={errors['room.length_m']} />
+        <NumberField
+          label="Length (x)"
+          unit="m"
+          value={room.length_m}
+          onValue={(v) => set({ length_m: v })}
+          error={errors['room.length_m']}
+        />
         <NumberField label="Width (y)" unit="m" value={room.width_m} onValue={(v) => set({ width_m: v })} error={errors['room.width_m']} />
-        <NumberField label="Height (z)" unit="m" value={room.height_m} onValue={(v) => set({ height_m: v })} error={errors['room.height_m']} />
-        <NumberField label="Air changes" unit="per h" value={room.airChanges_perH ?? DEFAULTS.airChanges_perH} onValue={(v) => set({ airChanges_perH: v })} error={errors['room.airChanges_perH']} />
-        <NumberField label="Draft speed" unit="m/s" value={room.draftSpeed_mPerS ?? DEFAULTS.draftSpeed_mPerS} onValue={(v) => set({ draftSpeed_mPerS: v })} error={errors['room.draftSpeed_mPerS']} hint="Rooms average about 0.3 m/s" />
+        <NumberField
+          label="Height (z)"
+          unit="m"
+          value={room.height_m}
+          onValue={(v) => set({ height_m: v })}
+          error={errors['room.height_m']}
+        />
+        <NumberField
+          label="Air changes"
+          unit="per h"
+          value={room.airChanges_perH ?? DEFAULTS.airChanges_perH}
+          onValue={(v) => set({ airChanges_perH: v })}
+          error={errors['room.airChanges_perH']}
+        />
+        <NumberField
+          label="Draft speed"
+          unit="m/s"
+          value={room.draftSpeed_mPerS ?? DEFAULTS.draftSpeed_mPerS}
+          onValue={(v) => set({ draftSpeed_mPerS: v })}
+          error={errors['room.draftSpeed_mPerS']}
+          hint="Rooms average about 0.3 m/s"
+        />
         <NumberField
           label="Draft blows toward"
           unit="°"
@@ -56,10 +84,18 @@ export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioIn
           Estimate eddy diffusivity from air changes and room volume
         </label>
         {fromAch ? (
-          <p className="text-sm text-muted">{estimate === null ? 'Needs a room size and air changes.' : `Estimated ${formatSig(estimate, 2)} m²/s.`}</p>
+          <p className="text-sm text-muted">
+            {estimate === null ? 'Needs a room size and air changes.' : `Estimated ${formatSig(estimate, 2)} m²/s.`}
+          </p>
         ) : (
           <FieldGrid>
-            <NumberField label="Eddy diffusivity" unit="m²/s" value={room.eddyDiffusivity_m2PerS} onValue={(v) => set({ eddyDiffusivity_m2PerS: v })} error={errors['room.eddyDiffusivity_m2PerS']} />
+            <NumberField
+              label="Eddy diffusivity"
+              unit="m²/s"
+              value={room.eddyDiffusivity_m2PerS}
+              onValue={(v) => set({ eddyDiffusivity_m2PerS: v })}
+              error={errors['room.eddyDiffusivity_m2PerS']}
+            />
           </FieldGrid>
         )}
       </div>

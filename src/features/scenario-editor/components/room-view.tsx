@@ -44,15 +44,34 @@ export function RoomView({ view, title, value, onChange, readOnly, testId, overl
         <RoomGrid frame={frame} labelA={axes.a} labelB={axes.b} />
         <ScaleBar frame={frame} />
         {overlay?.(frame)}
-        <Draggable {...common} testId="drag-worker" label={label("Worker's head", value.worker)} at={{ a_m: value.worker.x_m, b_m: b(value.worker) }} onMove={(a_m, b_m) => onChange(withWorker(value, patch(a_m, b_m)))}>
+        <Draggable
+          {...common}
+          testId="drag-worker"
+          label={label("Worker's head", value.worker)}
+          at={{ a_m: value.worker.x_m, b_m: b(value.worker) }}
+          onMove={(a_m, b_m) => onChange(withWorker(value, patch(a_m, b_m)))}
+        >
           <WorkerGlyph worker={value.worker} frame={frame} view={view} />
         </Draggable>
         {(value.hoods ?? []).map((hood, i) => (
-          <Draggable key={i} {...common} testId={`drag-hood-${i}`} label={label(`Hood ${i + 1}`, hood)} at={{ a_m: hood.x_m, b_m: b(hood) }} onMove={(a_m, b_m) => onChange(withHood(value, i, patch(a_m, b_m)))}>
+          <Draggable
+            key={i}
+            {...common}
+            testId={`drag-hood-${i}`}
+            label={label(`Hood ${i + 1}`, hood)}
+            at={{ a_m: hood.x_m, b_m: b(hood) }}
+            onMove={(a_m, b_m) => onChange(withHood(value, i, patch(a_m, b_m)))}
+          >
             <HoodGlyph hood={hood} index={i} frame={frame} view={view} />
           </Draggable>
         ))}
-        <Draggable {...common} testId="drag-source" label={label('Source', value.source)} at={{ a_m: value.source.x_m, b_m: b(value.source) }} onMove={(a_m, b_m) => onChange(withSource(value, patch(a_m, b_m)))}>
+        <Draggable
+          {...common}
+          testId="drag-source"
+          label={label('Source', value.source)}
+          at={{ a_m: value.source.x_m, b_m: b(value.source) }}
+          onMove={(a_m, b_m) => onChange(withSource(value, patch(a_m, b_m)))}
+        >
           <SourceGlyph source={value.source} frame={frame} view={view} />
         </Draggable>
       </svg>

@@ -15,9 +15,26 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
   return (
     <Section legend="Run settings" intro="More particles narrow the confidence band; the same seed gives the same result.">
       <FieldGrid>
-        <NumberField label="Particles" value={run.particles ?? DEFAULTS.particles} onValue={(v) => set({ particles: v })} error={errors['run.particles']} />
-        <TextField label="Seed" value={String(run.seed ?? DEFAULTS.seed)} onChange={(e) => set({ seed: readSeed(e.target.value) })} error={errors['run.seed']} autoComplete="off" />
-        <NumberField label="Batches" value={run.batches ?? DEFAULTS.batches} onValue={(v) => set({ batches: v })} error={errors['run.batches']} hint="2 to 1000; they give the error bars" />
+        <NumberField
+          label="Particles"
+          value={run.particles ?? DEFAULTS.particles}
+          onValue={(v) => set({ particles: v })}
+          error={errors['run.particles']}
+        />
+        <TextField
+          label="Seed"
+          value={String(run.seed ?? DEFAULTS.seed)}
+          onChange={(e) => set({ seed: readSeed(e.target.value) })}
+          error={errors['run.seed']}
+          autoComplete="off"
+        />
+        <NumberField
+          label="Batches"
+          value={run.batches ?? DEFAULTS.batches}
+          onValue={(v) => set({ batches: v })}
+          error={errors['run.batches']}
+          hint="2 to 1000; they give the error bars"
+        />
       </FieldGrid>
     </Section>
   );

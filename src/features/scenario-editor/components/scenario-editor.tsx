@@ -43,9 +43,14 @@ export function ScenarioEditor(props: ScenarioEditorProps) {
   return (
     <div className="grid items-start gap-8 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
       {/* Sticky beside the form so a typed hood position shows in the drawing at once. */}
-      <div className="flex flex-col gap-4 xl:sticky xl:top-4 xl:col-start-2 xl:row-start-1 xl:max-h-[calc(100vh-2rem)] xl:overflow-y-auto" aria-label="Room drawings">
+      <div
+        className="flex flex-col gap-4 xl:sticky xl:top-4 xl:col-start-2 xl:row-start-1 xl:max-h-[calc(100vh-2rem)] xl:overflow-y-auto"
+        aria-label="Room drawings"
+      >
         <p className="text-sm text-muted">
-          {readOnly ? 'Positions are shown to scale.' : 'Drag the source, hoods and worker, or focus one and use the arrow keys (Shift for 50 cm). Positions snap to 5 cm.'}
+          {readOnly
+            ? 'Positions are shown to scale.'
+            : 'Drag the source, hoods and worker, or focus one and use the arrow keys (Shift for 50 cm). Positions snap to 5 cm.'}
         </p>
         <div className="grid gap-4">
           <PlanView value={value} onChange={onChange} readOnly={readOnly} />

@@ -17,7 +17,8 @@ type Props = SectionProps<ScenarioInput> & {
 const INLINE: Profile = { kind: 'lognormal', basis: 'mmad', median_m: micrometresToMetres(5), gsd: 2 };
 
 function describeProfile(p: Profile): string {
-  if (p.kind === 'lognormal') return `Lognormal, ${p.basis.toUpperCase()} ${formatSig(metresToMicrometres(p.median_m), 3)} µm, GSD ${formatSig(p.gsd, 3)}`;
+  if (p.kind === 'lognormal')
+    return `Lognormal, ${p.basis.toUpperCase()} ${formatSig(metresToMicrometres(p.median_m), 3)} µm, GSD ${formatSig(p.gsd, 3)}`;
   const edges = p.edges_m.map(metresToMicrometres);
   return `${p.amounts.length} ${p.basis} bins from ${formatSig(edges[0], 2)} to ${formatSig(edges[edges.length - 1], 3)} µm`;
 }
@@ -38,7 +39,12 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
   return (
     <div className="flex flex-col gap-4">
       <FieldGrid>
-        <SelectField label="Size profile" className="sm:col-span-2" value={sizeProfileId ?? ''} onChange={(e) => choose(e.target.value === '' ? null : Number(e.target.value))}>
+        <SelectField
+          label="Size profile"
+          className="sm:col-span-2"
+          value={sizeProfileId ?? ''}
+          onChange={(e) => choose(e.target.value === '' ? null : Number(e.target.value))}
+        >
           <option value="">Enter lognormal here</option>
           {sizeProfiles.map((p) => (
             <option key={p.id} value={p.id}>
@@ -48,7 +54,11 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
         </SelectField>
         {sizeProfileId === null && profile.kind === 'lognormal' && (
           <>
-            <SelectField label="Median of" value={profile.basis} onChange={(e) => setProfile({ ...profile, basis: e.target.value as 'mmad' | 'cmd' })}>
+            <SelectField
+              label="Median of"
+              value={profile.basis}
+              onChange={(e) => setProfile({ ...profile, basis: e.target.value as 'mmad' | 'cmd' })}
+            >
               <option value="mmad">Mass (MMAD)</option>
               <option value="cmd">Count (CMD)</option>
             </SelectField>
@@ -61,7 +71,13 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
               onValue={(v) => setProfile({ ...profile, median_m: v })}
               error={at('median_m')}
             />
-            <NumberField label="GSD" value={profile.gsd} onValue={(v) => setProfile({ ...profile, gsd: v })} error={at('gsd')} hint="1 is a single size" />
+            <NumberField
+              label="GSD"
+              value={profile.gsd}
+              onValue={(v) => setProfile({ ...profile, gsd: v })}
+              error={at('gsd')}
+              hint="1 is a single size"
+            />
           </>
         )}
       </FieldGrid>

@@ -20,7 +20,14 @@ export function SourceSection({ value, onChange, errors }: SectionProps<Scenario
       <FieldGrid>
         <NumberField label="Source x" unit="m" value={source.x_m} onValue={(v) => set({ x_m: v })} error={errors['source.x_m']} />
         <NumberField label="Source y" unit="m" value={source.y_m} onValue={(v) => set({ y_m: v })} error={errors['source.y_m']} />
-        <NumberField label="Release height" unit="m" value={source.z_m} onValue={(v) => set({ z_m: v })} error={errors['source.z_m']} hint="Above the floor" />
+        <NumberField
+          label="Release height"
+          unit="m"
+          value={source.z_m}
+          onValue={(v) => set({ z_m: v })}
+          error={errors['source.z_m']}
+          hint="Above the floor"
+        />
         <SelectField label="Shape" value={shape} onChange={(e) => set({ shape: e.target.value as Shape })} error={errors['source.shape']}>
           <option value="point">Point</option>
           <option value="disc">Disc (flat, horizontal)</option>

@@ -14,9 +14,13 @@ export function RoomGrid({ frame, labelA, labelB }: { frame: ViewFrame; labelA: 
     <g aria-hidden="true">
       <rect x={x0} y={y1} width={x1 - x0} height={y0 - y1} className="fill-paper" />
       {halves &&
-        range(a * 2).map((i) => <line key={`ha${i}`} x1={frame.toX(i / 2)} x2={frame.toX(i / 2)} y1={y0} y2={y1} className="stroke-paper-deep" />)}
+        range(a * 2).map((i) => (
+          <line key={`ha${i}`} x1={frame.toX(i / 2)} x2={frame.toX(i / 2)} y1={y0} y2={y1} className="stroke-paper-deep" />
+        ))}
       {halves &&
-        range(b * 2).map((i) => <line key={`hb${i}`} x1={x0} x2={x1} y1={frame.toY(i / 2)} y2={frame.toY(i / 2)} className="stroke-paper-deep" />)}
+        range(b * 2).map((i) => (
+          <line key={`hb${i}`} x1={x0} x2={x1} y1={frame.toY(i / 2)} y2={frame.toY(i / 2)} className="stroke-paper-deep" />
+        ))}
       {range(a).map((i) => (
         <g key={`a${i}`}>
           <line x1={frame.toX(i)} x2={frame.toX(i)} y1={y0} y2={y1} className="stroke-line" />

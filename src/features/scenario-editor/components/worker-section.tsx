@@ -11,7 +11,8 @@ export function WorkerSection({ value, onChange, errors }: SectionProps<Scenario
   const worker = value.worker;
   const set = (patch: Partial<ScenarioInput['worker']>) => onChange(withWorker(value, patch));
   // Choosing a posture moves the nose to its usual height; typing a height keeps the posture as a label.
-  const choosePosture = (posture: Posture | '') => set(posture === '' ? { posture: undefined } : { posture, z_m: POSTURE_HEIGHT_m[posture] });
+  const choosePosture = (posture: Posture | '') =>
+    set(posture === '' ? { posture: undefined } : { posture, z_m: POSTURE_HEIGHT_m[posture] });
 
   return (
     <Section legend="Worker and breathing zone" intro="The breathing zone is a sphere around the nose and mouth.">
@@ -23,8 +24,21 @@ export function WorkerSection({ value, onChange, errors }: SectionProps<Scenario
         </SelectField>
         <NumberField label="Nose and mouth x" unit="m" value={worker.x_m} onValue={(v) => set({ x_m: v })} error={errors['worker.x_m']} />
         <NumberField label="Nose and mouth y" unit="m" value={worker.y_m} onValue={(v) => set({ y_m: v })} error={errors['worker.y_m']} />
-        <NumberField label="Nose and mouth height" unit="m" value={worker.z_m} onValue={(v) => set({ z_m: v })} error={errors['worker.z_m']} />
-        <NumberField label="Breathing-zone radius" unit="m" value={worker.radius_m ?? DEFAULTS.radius_m} onValue={(v) => set({ radius_m: v })} error={errors['worker.radius_m']} hint="Usually 0.3 m" />
+        <NumberField
+          label="Nose and mouth height"
+          unit="m"
+          value={worker.z_m}
+          onValue={(v) => set({ z_m: v })}
+          error={errors['worker.z_m']}
+        />
+        <NumberField
+          label="Breathing-zone radius"
+          unit="m"
+          value={worker.radius_m ?? DEFAULTS.radius_m}
+          onValue={(v) => set({ radius_m: v })}
+          error={errors['worker.radius_m']}
+          hint="Usually 0.3 m"
+        />
       </FieldGrid>
     </Section>
   );

@@ -9,17 +9,39 @@ export const SAMPLE_AGENTS: AgentOption[] = [
   {
     id: 1,
     name: 'Sample mineral dust',
-    data: { density_kgPerM3: 2650, shapeFactor: 1.4, limitFraction: 'respirable', limit8h_mgPerM3: 0.1, limit15min_mgPerM3: null, override: null, jurisdiction: 'Sample', limitSource: 'preview data' },
+    data: {
+      density_kgPerM3: 2650,
+      shapeFactor: 1.4,
+      limitFraction: 'respirable',
+      limit8h_mgPerM3: 0.1,
+      limit15min_mgPerM3: null,
+      override: null,
+      jurisdiction: 'Sample',
+      limitSource: 'preview data',
+    },
   },
   {
     id: 2,
     name: 'Sample organic dust',
-    data: { density_kgPerM3: 1450, shapeFactor: 1.2, limitFraction: 'inhalable', limit8h_mgPerM3: 10, limit15min_mgPerM3: 30, override: { limit8h_mgPerM3: 1, reason: 'site policy' }, jurisdiction: 'Sample', limitSource: 'preview data' },
+    data: {
+      density_kgPerM3: 1450,
+      shapeFactor: 1.2,
+      limitFraction: 'inhalable',
+      limit8h_mgPerM3: 10,
+      limit15min_mgPerM3: 30,
+      override: { limit8h_mgPerM3: 1, reason: 'site policy' },
+      jurisdiction: 'Sample',
+      limitSource: 'preview data',
+    },
   },
 ];
 
 export const SAMPLE_PROFILES: SizeProfileOption[] = [
-  { id: 10, name: 'Fine powder (lognormal)', sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: micrometresToMetres(3), gsd: 2.2 } },
+  {
+    id: 10,
+    name: 'Fine powder (lognormal)',
+    sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: micrometresToMetres(3), gsd: 2.2 },
+  },
   {
     id: 11,
     name: 'Sieved grit (bins)',
@@ -29,7 +51,15 @@ export const SAMPLE_PROFILES: SizeProfileOption[] = [
 
 export function sampleScenario(): ScenarioInput {
   const base = defaultScenario({
-    room: { length_m: 6, width_m: 4, height_m: 3, airChanges_perH: 4, draftSpeed_mPerS: 0.2, draftDirection_deg: 90, temperature_K: 293.15 },
+    room: {
+      length_m: 6,
+      width_m: 4,
+      height_m: 3,
+      airChanges_perH: 4,
+      draftSpeed_mPerS: 0.2,
+      draftDirection_deg: 90,
+      temperature_K: 293.15,
+    },
     source: { x_m: 2, y_m: 2.7, z_m: 0.9 },
     worker: { x_m: 2.6, y_m: 2.7, z_m: 1.5 },
   });

@@ -13,7 +13,16 @@ const errorsOf = (input: unknown) => issuesByPath(scenarioSchema.safeParse(input
 
 describe('field errors', () => {
   it('keys each issue by its dotted path in plain words', () => {
-    const hood = { kind: 'plain', x_m: 1, y_m: 1, z_m: 1, direction: { azimuth_deg: 0 }, faceWidth_m: 0.3, faceHeight_m: 0.3, airflow_m3PerS: -0.1 };
+    const hood = {
+      kind: 'plain',
+      x_m: 1,
+      y_m: 1,
+      z_m: 1,
+      direction: { azimuth_deg: 0 },
+      faceWidth_m: 0.3,
+      faceHeight_m: 0.3,
+      airflow_m3PerS: -0.1,
+    };
     const errors = errorsOf({ ...base, hoods: [hood], run: { particles: 1.5 } });
     expect(errors['hoods.0.airflow_m3PerS']).toBe('Must be at least 0');
     expect(errors['run.particles']).toBe('Enter a whole number');

@@ -12,7 +12,16 @@ const AT_FIELD = [
 
 export const isShownAtField = (path: string) => AT_FIELD.some((re) => re.test(path));
 
-const WORDS: Record<string, string> = { room: 'Room', source: 'Source', dust: 'Dust', hoods: 'Hood', worker: 'Worker', limit: 'Limit', run: 'Run', '(root)': 'Scenario' };
+const WORDS: Record<string, string> = {
+  room: 'Room',
+  source: 'Source',
+  dust: 'Dust',
+  hoods: 'Hood',
+  worker: 'Worker',
+  limit: 'Limit',
+  run: 'Run',
+  '(root)': 'Scenario',
+};
 
 export function fieldLabel(path: string): string {
   const [head, ...rest] = path.split('.');

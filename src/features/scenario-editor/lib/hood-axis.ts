@@ -50,5 +50,5 @@ export function azimuthToward(from: { x_m: number; y_m: number }, to: { x_m: num
   const dx = to.x_m - from.x_m;
   const dy = to.y_m - from.y_m;
   if (Math.hypot(dx, dy) < 1e-9) return 0;
-  return ((Math.atan2(dy, dx) / RAD + 360) % 360);
+  return (Math.atan2(dy, dx) / RAD + 360) % 360;
 }

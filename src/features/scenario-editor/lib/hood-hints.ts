@@ -1,4 +1,10 @@
-import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow, type CaptureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index';
+import {
+  captureVelocityRange,
+  hoodCenterlineVelocity,
+  hoodRequiredAirflow,
+  type CaptureVelocityRange,
+  type ReleaseCondition,
+} from '../../../../shared/physics/index';
 import { isSlotKind } from '../../../../shared/vocabulary/index';
 import { hoodAxis, type HoodInput } from './hood-axis';
 

@@ -4,7 +4,8 @@ import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 import { scenarioKeys } from './get-scenarios';
 
-export const duplicateScenario = ({ id, name }: { id: number; name?: string }) => apiFetch<ScenarioDetail>(api.duplicateScenario(id), { method: 'POST', body: name ? { name } : {} });
+export const duplicateScenario = ({ id, name }: { id: number; name?: string }) =>
+  apiFetch<ScenarioDetail>(api.duplicateScenario(id), { method: 'POST', body: name ? { name } : {} });
 
 export function useDuplicateScenario() {
   const qc = useQueryClient();

@@ -3,7 +3,16 @@ import type { Page, ScenarioSummary } from '../../../../shared/schemas/workspace
 import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 
-export type ScenarioFilters = { sort?: string; order?: 'asc' | 'desc'; siteId?: number; workstationId?: number; agentId?: number; status?: 'draft' | 'approved'; q?: string; pageSize?: number };
+export type ScenarioFilters = {
+  sort?: string;
+  order?: 'asc' | 'desc';
+  siteId?: number;
+  workstationId?: number;
+  agentId?: number;
+  status?: 'draft' | 'approved';
+  q?: string;
+  pageSize?: number;
+};
 
 export const scenarioKeys = {
   all: ['scenarios'] as const,
@@ -17,6 +26,7 @@ export function getScenarios(f: ScenarioFilters) {
   return apiFetch<Page<ScenarioSummary>>(`${api.scenarios}?${params}`);
 }
 
-export const scenariosQueryOptions = (f: ScenarioFilters) => queryOptions({ queryKey: scenarioKeys.list(f), queryFn: () => getScenarios(f), placeholderData: keepPreviousData });
+export const scenariosQueryOptions = (f: ScenarioFilters) =>
+  queryOptions({ queryKey: scenarioKeys.list(f), queryFn: () => getScenarios(f), placeholderData: keepPreviousData });
 
 export const useScenarios = (f: ScenarioFilters) => useQuery(scenariosQueryOptions(f));

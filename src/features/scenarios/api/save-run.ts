@@ -6,7 +6,17 @@ import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 import { scenarioKeys } from './get-scenarios';
 
-export const saveRun = ({ scenarioId, scenarioVersion, input, result }: { scenarioId: number; scenarioVersion: number; input: Scenario; result: unknown }) =>
+export const saveRun = ({
+  scenarioId,
+  scenarioVersion,
+  input,
+  result,
+}: {
+  scenarioId: number;
+  scenarioVersion: number;
+  input: Scenario;
+  result: unknown;
+}) =>
   apiFetch<SavedRun>(api.scenarioRuns(scenarioId), { method: 'POST', body: { scenarioVersion, input, result: toJsonFriendly(result) } });
 
 export function useSaveRun() {

@@ -5,7 +5,8 @@ import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 import { scenarioKeys } from './get-scenarios';
 
-export const updateScenario = ({ id, patch }: { id: number; patch: ScenarioUpdate }) => apiFetch<ScenarioDetail>(api.scenario(id), { method: 'PATCH', body: patch });
+export const updateScenario = ({ id, patch }: { id: number; patch: ScenarioUpdate }) =>
+  apiFetch<ScenarioDetail>(api.scenario(id), { method: 'PATCH', body: patch });
 
 export function useUpdateScenario() {
   const qc = useQueryClient();

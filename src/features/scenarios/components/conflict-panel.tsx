@@ -6,14 +6,29 @@ function diffLines(mine: unknown, theirs: unknown, path = ''): string[] {
   if (JSON.stringify(mine) === JSON.stringify(theirs)) return [];
   if (mine && theirs && typeof mine === 'object' && typeof theirs === 'object' && !Array.isArray(mine)) {
     const keys = new Set([...Object.keys(mine), ...Object.keys(theirs as object)]);
-    return [...keys].flatMap((k) => diffLines((mine as Record<string, unknown>)[k], (theirs as Record<string, unknown>)[k], path ? `${path}.${k}` : k));
+    return [...keys].flatMap((k) =>
+      diffLines((mine as Record<string, unknown>)[k], (theirs as Record<string, unknown>)[k], path ? `${path}.${k}` : k),
+    );
   }
   return [`${path}: yours ${JSON.stringify(mine)} · saved ${JSON.stringify(theirs)}`];
 }
 
 // Both versions stay on screen, so nothing typed is lost while the engineer decides.
-export function ConflictPanel({ mine, theirs, onKeepMine, onTakeTheirs }: { mine: Side; theirs: Side; onKeepMine: () => void; onTakeTheirs: () => void }) {
-  const lines = [...(mine.name !== theirs.name ? [`name: yours "${mine.name}" · saved "${theirs.name}"`] : []), ...diffLines(mine.input, theirs.input)];
+export function ConflictPanel({
+  mine,
+  theirs,
+  onKeepMine,
+  onTakeTheirs,
+}: {
+  mine: Side;
+  theirs: Side;
+  onKeepMine: () => void;
+  onTakeTheirs: () => void;
+}) {
+  const lines = [
+    ...(mine.name !== theirs.name ? [`name: yours "${mine.name}" · saved "${theirs.name}"`] : []),
+    ...diffLines(mine.input, theirs.input),
+  ];
   return (
     <section role="alert" aria-label="Edit conflict" className="rounded-lg border-2 border-watch bg-watch-soft p-4 text-sm">
       <h2 className="text-watch">Someone else saved this scenario while you were editing</h2>
@@ -23,7 +38,9 @@ export function ConflictPanel({ mine, theirs, onKeepMine, onTakeTheirs }: { mine
       </ul>
       <div className="mt-3 flex gap-2">
         <Button onClick={onKeepMine}>Save mine over version {theirs.version}</Button>
-        <Button variant="secondary" onClick={onTakeTheirs}>Discard mine and load the saved one</Button>
+        <Button variant="secondary" onClick={onTakeTheirs}>
+          Discard mine and load the saved one
+        </Button>
       </div>
     </section>
   );

@@ -31,19 +31,35 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
           </Button>
         )}
         {!scenario && <span className="text-sm text-act">Fix the fields marked above before running.</span>}
-        {state.phase === 'cancelled' && <span role="status" className="text-sm text-muted">Run cancelled; nothing was kept.</span>}
+        {state.phase === 'cancelled' && (
+          <span role="status" className="text-sm text-muted">
+            Run cancelled; nothing was kept.
+          </span>
+        )}
       </div>
       {running && (
         <div className="mt-3">
-          <div role="progressbar" aria-label="Simulation progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct} className="h-3 w-full overflow-hidden rounded-full bg-paper-deep">
+          <div
+            role="progressbar"
+            aria-label="Simulation progress"
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={pct}
+            className="h-3 w-full overflow-hidden rounded-full bg-paper-deep"
+          >
             <div className="h-full bg-accent transition-[width]" style={{ width: `${pct}%` }} />
           </div>
           <p className="mt-1 text-sm text-muted" aria-live="polite">
-            {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {secs(state.progress.secondsLeft)} left
+            {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {secs(state.progress.secondsLeft)}{' '}
+            left
           </p>
         </div>
       )}
-      {state.phase === 'failed' && <div className="mt-3"><ErrorMessage title="The run failed" error={state.error} /></div>}
+      {state.phase === 'failed' && (
+        <div className="mt-3">
+          <ErrorMessage title="The run failed" error={state.error} />
+        </div>
+      )}
     </section>
   );
 }

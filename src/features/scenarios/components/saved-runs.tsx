@@ -8,14 +8,40 @@ import { paths } from '@/config/paths';
 import { dateTime, sig } from '@/lib/format';
 
 const COLUMNS: Column<RunListItem>[] = [
-  { key: 'when', header: 'Saved', sortValue: (r) => r.created_at, render: (r) => <Link className="font-semibold text-accent underline" to={paths.run(r.id)}>{dateTime(r.created_at)}</Link> },
-  { key: 'twa', header: '8-h TWA [95 % CI] (mg/m³)', align: 'right', sortValue: (r) => r.twa8h_mgPerM3, render: (r) => `${sig(r.twa8h_mgPerM3)} [${sig(r.twa8h_lo_mgPerM3)}, ${sig(r.twa8h_hi_mgPerM3)}]` },
+  {
+    key: 'when',
+    header: 'Saved',
+    sortValue: (r) => r.created_at,
+    render: (r) => (
+      <Link className="font-semibold text-accent underline" to={paths.run(r.id)}>
+        {dateTime(r.created_at)}
+      </Link>
+    ),
+  },
+  {
+    key: 'twa',
+    header: '8-h TWA [95 % CI] (mg/m³)',
+    align: 'right',
+    sortValue: (r) => r.twa8h_mgPerM3,
+    render: (r) => `${sig(r.twa8h_mgPerM3)} [${sig(r.twa8h_lo_mgPerM3)}, ${sig(r.twa8h_hi_mgPerM3)}]`,
+  },
   { key: 'fraction', header: 'Fraction', render: (r) => r.limit_fraction ?? '—' },
-  { key: 'pct', header: '% of limit', align: 'right', sortValue: (r) => r.percent_of_limit, render: (r) => percentText(r.percent_of_limit) },
+  {
+    key: 'pct',
+    header: '% of limit',
+    align: 'right',
+    sortValue: (r) => r.percent_of_limit,
+    render: (r) => percentText(r.percent_of_limit),
+  },
   { key: 'banner', header: 'Banner', render: (r) => <BannerBadge banner={r.banner} /> },
   { key: 'particles', header: 'Particles', align: 'right', sortValue: (r) => r.particles, render: (r) => countText(r.particles) },
   { key: 'seed', header: 'Seed', render: (r) => <code className="text-xs">{r.seed}</code> },
-  { key: 'state', header: 'Inputs', render: (r) => (r.outOfDate ? <span className="font-semibold text-watch">⟳ out of date</span> : <span className="text-clear">✓ current</span>) },
+  {
+    key: 'state',
+    header: 'Inputs',
+    render: (r) =>
+      r.outOfDate ? <span className="font-semibold text-watch">⟳ out of date</span> : <span className="text-clear">✓ current</span>,
+  },
 ];
 
 export function SavedRuns({ runs }: { runs: RunListItem[] }) {

@@ -3,7 +3,13 @@ import { SelectField, TextField } from '@/components/ui/field';
 export type FilterOption = { id: number; name: string };
 export type FilterValue = { siteId?: number; workstationId?: number; agentId?: number; status?: 'draft' | 'approved'; q?: string };
 
-type Props = { sites: FilterOption[]; workstations: FilterOption[]; agents: FilterOption[]; value: FilterValue; onChange: (v: FilterValue) => void };
+type Props = {
+  sites: FilterOption[];
+  workstations: FilterOption[];
+  agents: FilterOption[];
+  value: FilterValue;
+  onChange: (v: FilterValue) => void;
+};
 
 const num = (v: string) => (v ? Number(v) : undefined);
 
@@ -19,7 +25,11 @@ export function ScenarioFilters({ sites, workstations, agents, value, onChange }
           </option>
         ))}
       </SelectField>
-      <SelectField label="Workstation" value={value.workstationId ?? ''} onChange={(e) => onChange({ ...value, workstationId: num(e.target.value) })}>
+      <SelectField
+        label="Workstation"
+        value={value.workstationId ?? ''}
+        onChange={(e) => onChange({ ...value, workstationId: num(e.target.value) })}
+      >
         <option value="">All workstations</option>
         {workstations.map((w) => (
           <option key={w.id} value={w.id}>
@@ -35,7 +45,11 @@ export function ScenarioFilters({ sites, workstations, agents, value, onChange }
           </option>
         ))}
       </SelectField>
-      <SelectField label="Status" value={value.status ?? ''} onChange={(e) => onChange({ ...value, status: (e.target.value || undefined) as FilterValue['status'] })}>
+      <SelectField
+        label="Status"
+        value={value.status ?? ''}
+        onChange={(e) => onChange({ ...value, status: (e.target.value || undefined) as FilterValue['status'] })}
+      >
         <option value="">Any status</option>
         <option value="draft">Draft</option>
         <option value="approved">Approved</option>

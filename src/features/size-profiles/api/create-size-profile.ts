@@ -4,9 +4,13 @@ import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 import { sizeProfilesQueryOptions } from './get-size-profiles';
 
-export const createSizeProfile = (input: CreateSizeProfileInput) => apiFetch<SizeProfileDetail>(api.sizeProfiles, { method: 'POST', body: input });
+export const createSizeProfile = (input: CreateSizeProfileInput) =>
+  apiFetch<SizeProfileDetail>(api.sizeProfiles, { method: 'POST', body: input });
 
 export function useCreateSizeProfile() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: createSizeProfile, onSuccess: () => qc.invalidateQueries({ queryKey: sizeProfilesQueryOptions().queryKey }) });
+  return useMutation({
+    mutationFn: createSizeProfile,
+    onSuccess: () => qc.invalidateQueries({ queryKey: sizeProfilesQueryOptions().queryKey }),
+  });
 }

@@ -7,5 +7,8 @@ export const deleteSizeProfile = (id: number) => apiFetch<void>(api.sizeProfile(
 
 export function useDeleteSizeProfile() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: deleteSizeProfile, onSuccess: () => qc.invalidateQueries({ queryKey: sizeProfilesQueryOptions().queryKey }) });
+  return useMutation({
+    mutationFn: deleteSizeProfile,
+    onSuccess: () => qc.invalidateQueries({ queryKey: sizeProfilesQueryOptions().queryKey }),
+  });
 }

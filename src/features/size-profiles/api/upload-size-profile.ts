@@ -19,16 +19,25 @@ export async function uploadSizeProfile(input: UploadInput): Promise<SizeProfile
   form.set('file', input.file);
   let res: Response;
   try {
-    res = await fetch(api.sizeProfileUpload, { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
+    res = await fetch(api.sizeProfileUpload, {
+      method: 'POST',
+      body: form,
+      credentials: 'same-origin',
+      headers: { Accept: 'application/json' },
+    });
   } catch {
     throw new ApiError(0, 'network', 'The server could not be reached. Check your connection and try again.');
   }
   const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw new ApiError(res.status, data.code ?? 'error', data.message ?? `The server answered ${res.status}`, data.issues ?? [], data);
+  if (!res.ok)
+    throw new ApiError(res.status, data.code ?? 'error', data.message ?? `The server answered ${res.status}`, data.issues ?? [], data);
   return data as SizeProfileDetail;
 }
 
 export function useUploadSizeProfile() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: uploadSizeProfile, onSuccess: () => qc.invalidateQueries({ queryKey: sizeProfilesQueryOptions().queryKey }) });
+  return useMutation({
+    mutationFn: uploadSizeProfile,
+    onSuccess: () => qc.invalidateQueries({ queryKey: sizeProfilesQueryOptions().queryKey }),
+  });
 }

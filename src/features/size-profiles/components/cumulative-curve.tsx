@@ -21,7 +21,12 @@ export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: numb
   return (
     <figure className="rounded-lg border border-line bg-white p-3">
       <figcaption className="mb-2 text-sm font-semibold">Cumulative mass below each size</figcaption>
-      <svg viewBox={`0 0 ${width} ${height}`} className="h-auto w-full" role="img" aria-label="Cumulative mass fraction in percent against aerodynamic diameter on a log axis">
+      <svg
+        viewBox={`0 0 ${width} ${height}`}
+        className="h-auto w-full"
+        role="img"
+        aria-label="Cumulative mass fraction in percent against aerodynamic diameter on a log axis"
+      >
         <Group left={margin.left} top={margin.top}>
           <GridRows scale={y} width={innerW} tickValues={[0, 25, 50, 75, 100]} stroke={LINE} strokeOpacity={0.6} />
           <GridColumns scale={x} height={innerH} tickValues={ticks} stroke={LINE} strokeOpacity={0.4} />
@@ -32,11 +37,33 @@ export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: numb
           {mmad_um !== null && mmad_um >= min_um && mmad_um <= max_um && (
             <g>
               <line x1={x(mmad_um)} x2={x(mmad_um)} y1={y(50)} y2={innerH} stroke={MUTED} strokeDasharray="3 3" />
-              <text x={x(mmad_um) + 4} y={y(50) - 6} fill={MUTED} fontSize={11}>fitted MMAD</text>
+              <text x={x(mmad_um) + 4} y={y(50) - 6} fill={MUTED} fontSize={11}>
+                fitted MMAD
+              </text>
             </g>
           )}
-          <AxisLeft scale={y} tickValues={[0, 25, 50, 75, 100]} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label="Cumulative mass (%)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={36} />
-          <AxisBottom top={innerH} scale={x} tickValues={ticks} tickFormat={(v) => String(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Aerodynamic diameter (µm, log scale)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={16} />
+          <AxisLeft
+            scale={y}
+            tickValues={[0, 25, 50, 75, 100]}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
+            label="Cumulative mass (%)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={36}
+          />
+          <AxisBottom
+            top={innerH}
+            scale={x}
+            tickValues={ticks}
+            tickFormat={(v) => String(Number(v))}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
+            label="Aerodynamic diameter (µm, log scale)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={16}
+          />
         </Group>
       </svg>
     </figure>

@@ -12,7 +12,10 @@ export function FormatHelp({ format }: { format: UploadFormat }) {
         {info.explain.map((line) => (
           <li key={line}>{line}</li>
         ))}
-        <li>A comma-separated .csv file, UTF-8 text, 2 to {MAX_DATA_ROWS} data rows, at most 256 kB. Any problem stops the upload and lists every bad row and column.</li>
+        <li>
+          A comma-separated .csv file, UTF-8 text, 2 to {MAX_DATA_ROWS} data rows, at most 256 kB. Any problem stops the upload and lists
+          every bad row and column.
+        </li>
       </ul>
     </div>
   );

@@ -20,7 +20,14 @@ export function LognormalForm() {
   const input =
     mode === 'respirable'
       ? { kind: 'respirable' as const, name: form.name, respirableFraction: (number(form.respirable) ?? NaN) / 100, gsd: number(form.gsd) }
-      : { kind: 'lognormal' as const, name: form.name, basis: mode, median_m: median_um === undefined ? NaN : micrometresToMetres(median_um), gsd: number(form.gsd) ?? NaN, density_kgPerM3: number(form.density) };
+      : {
+          kind: 'lognormal' as const,
+          name: form.name,
+          basis: mode,
+          median_m: median_um === undefined ? NaN : micrometresToMetres(median_um),
+          gsd: number(form.gsd) ?? NaN,
+          density_kgPerM3: number(form.density),
+        };
   const parsed = createSizeProfileSchema.safeParse(input);
   const errors = submitted ? fieldErrors(parsed, create.error) : {};
   const set = (key: keyof typeof form) => (e: { target: { value: string } }) => setForm({ ...form, [key]: e.target.value });
@@ -32,7 +39,12 @@ export function LognormalForm() {
   }
 
   return (
-    <form onSubmit={submit} noValidate aria-label="Enter lognormal parameters" className="space-y-4 rounded-lg border border-line bg-white p-4">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label="Enter lognormal parameters"
+      className="space-y-4 rounded-lg border border-line bg-white p-4"
+    >
       <h2 className="text-lg font-semibold">Enter a lognormal or a respirable fraction</h2>
       <div className="grid gap-4 sm:grid-cols-3">
         <SelectField label="What you know" value={mode} onChange={(e) => setMode(e.target.value as Mode)}>
@@ -42,16 +54,48 @@ export function LognormalForm() {
         </SelectField>
         <TextField label="Name" value={form.name} onChange={set('name')} error={errors.name} />
         {mode === 'respirable' ? (
-          <TextField label="Respirable fraction" unit="%" inputMode="decimal" value={form.respirable} onChange={set('respirable')} error={errors.respirableFraction} />
+          <TextField
+            label="Respirable fraction"
+            unit="%"
+            inputMode="decimal"
+            value={form.respirable}
+            onChange={set('respirable')}
+            error={errors.respirableFraction}
+          />
         ) : (
-          <TextField label={mode === 'mmad' ? 'MMAD' : 'CMD (physical)'} unit="µm" inputMode="decimal" value={form.median_um} onChange={set('median_um')} error={errors.median_m} />
+          <TextField
+            label={mode === 'mmad' ? 'MMAD' : 'CMD (physical)'}
+            unit="µm"
+            inputMode="decimal"
+            value={form.median_um}
+            onChange={set('median_um')}
+            error={errors.median_m}
+          />
         )}
-        <TextField label="GSD" inputMode="decimal" value={form.gsd} onChange={set('gsd')} error={errors.gsd} hint={mode === 'respirable' ? 'Assumed spread; 2 unless you know better' : undefined} />
-        {mode === 'cmd' && <TextField label="Particle density" unit="kg/m³" inputMode="decimal" value={form.density} onChange={set('density')} error={errors.density_kgPerM3} />}
+        <TextField
+          label="GSD"
+          inputMode="decimal"
+          value={form.gsd}
+          onChange={set('gsd')}
+          error={errors.gsd}
+          hint={mode === 'respirable' ? 'Assumed spread; 2 unless you know better' : undefined}
+        />
+        {mode === 'cmd' && (
+          <TextField
+            label="Particle density"
+            unit="kg/m³"
+            inputMode="decimal"
+            value={form.density}
+            onChange={set('density')}
+            error={errors.density_kgPerM3}
+          />
+        )}
       </div>
       <p className="text-sm text-muted">
-        {mode === 'cmd' && 'The CMD becomes an MMAD through Hatch–Choate and the density; this is approximate because aerodynamic and physical diameters do not scale alike below about 1 µm. '}
-        {mode === 'respirable' && 'Stored as given. For the other fractions and the simulation, Motewalk assumes a lognormal of this GSD whose respirable fraction matches: an assumption, not a measurement. '}
+        {mode === 'cmd' &&
+          'The CMD becomes an MMAD through Hatch–Choate and the density; this is approximate because aerodynamic and physical diameters do not scale alike below about 1 µm. '}
+        {mode === 'respirable' &&
+          'Stored as given. For the other fractions and the simulation, Motewalk assumes a lognormal of this GSD whose respirable fraction matches: an assumption, not a measurement. '}
       </p>
       <Button type="submit" disabled={create.isPending}>
         {create.isPending ? 'Saving…' : 'Save profile'}

@@ -19,16 +19,50 @@ export function SizeHistogram({ bins }: { bins: MassBins }) {
   return (
     <figure className="rounded-lg border border-line bg-white p-3">
       <figcaption className="mb-2 text-sm font-semibold">Mass distribution (histogram, per unit of log width)</figcaption>
-      <svg viewBox={`0 0 ${width} ${height}`} className="h-auto w-full" role="img" aria-label={`Histogram of mass fraction per log width over ${bars.length} bins from ${formatSig(min_um, 3)} to ${formatSig(max_um, 3)} µm`}>
+      <svg
+        viewBox={`0 0 ${width} ${height}`}
+        className="h-auto w-full"
+        role="img"
+        aria-label={`Histogram of mass fraction per log width over ${bars.length} bins from ${formatSig(min_um, 3)} to ${formatSig(max_um, 3)} µm`}
+      >
         <Group left={margin.left} top={margin.top}>
           <GridRows scale={y} width={innerW} stroke={LINE} strokeOpacity={0.6} numTicks={5} />
           {bars.map((b, i) => (
-            <rect key={i} x={x(b.lower_um)} width={Math.max(0.5, x(b.upper_um) - x(b.lower_um))} y={y(b.perLogWidth)} height={innerH - y(b.perLogWidth)} fill={ACCENT_SOFT} stroke={ACCENT} strokeWidth={1}>
+            <rect
+              key={i}
+              x={x(b.lower_um)}
+              width={Math.max(0.5, x(b.upper_um) - x(b.lower_um))}
+              y={y(b.perLogWidth)}
+              height={innerH - y(b.perLogWidth)}
+              fill={ACCENT_SOFT}
+              stroke={ACCENT}
+              strokeWidth={1}
+            >
               <title>{`${formatSig(b.lower_um, 3)}–${formatSig(b.upper_um, 3)} µm: ${formatSig(b.perLogWidth, 3)} per log width`}</title>
             </rect>
           ))}
-          <AxisLeft scale={y} numTicks={5} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} label="dM/dlog d (mass fraction per decade)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={36} />
-          <AxisBottom top={innerH} scale={x} tickValues={decadeTicks_um(min_um, max_um)} tickFormat={(v) => String(Number(v))} stroke={MUTED} tickStroke={MUTED} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} label="Aerodynamic diameter (µm, log scale)" labelProps={{ ...axisLabel, textAnchor: 'middle' }} labelOffset={16} />
+          <AxisLeft
+            scale={y}
+            numTicks={5}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
+            label="dM/dlog d (mass fraction per decade)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={36}
+          />
+          <AxisBottom
+            top={innerH}
+            scale={x}
+            tickValues={decadeTicks_um(min_um, max_um)}
+            tickFormat={(v) => String(Number(v))}
+            stroke={MUTED}
+            tickStroke={MUTED}
+            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
+            label="Aerodynamic diameter (µm, log scale)"
+            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
+            labelOffset={16}
+          />
         </Group>
       </svg>
     </figure>

@@ -10,7 +10,10 @@ import { TemplateLinks } from './format-help';
 export function SizeProfilesPage() {
   const profiles = useSizeProfiles();
   return (
-    <Page title="Size profiles" intro="How the dust’s mass spreads over particle size. Upload impactor stages, counter bins or plain bins, or enter a lognormal; each profile is fitted with an MMAD and GSD and split into respirable, thoracic and inhalable fractions (ISO 7708).">
+    <Page
+      title="Size profiles"
+      intro="How the dust’s mass spreads over particle size. Upload impactor stages, counter bins or plain bins, or enter a lognormal; each profile is fitted with an MMAD and GSD and split into respirable, thoracic and inhalable fractions (ISO 7708)."
+    >
       <div className="space-y-6">
         {profiles.isPending && <Spinner label="Loading size profiles…" />}
         {profiles.error && <ErrorMessage error={profiles.error} />}

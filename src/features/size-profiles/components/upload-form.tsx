@@ -44,10 +44,19 @@ export function UploadForm() {
       <FormatHelp format={format} />
       {needsDensity && (
         <div className="grid gap-3 sm:grid-cols-[16rem_1fr] sm:items-end">
-          <TextField label="Particle density" unit="kg/m³" inputMode="decimal" value={density} onChange={(e) => setDensity(e.target.value)} hint="e.g. 2650 for quartz, 1500 for flour" />
+          <TextField
+            label="Particle density"
+            unit="kg/m³"
+            inputMode="decimal"
+            value={density}
+            onChange={(e) => setDensity(e.target.value)}
+            hint="e.g. 2650 for quartz, 1500 for flour"
+          />
           <label className="flex items-start gap-2 text-sm">
             <input type="checkbox" checked={confirmed} onChange={(e) => setConfirmed(e.target.checked)} className="mt-1" />
-            <span>I confirm this density applies to the counted particles; it turns counts into mass and sizes into aerodynamic diameters.</span>
+            <span>
+              I confirm this density applies to the counted particles; it turns counts into mass and sizes into aerodynamic diameters.
+            </span>
           </label>
         </div>
       )}

@@ -11,5 +11,6 @@ export const useBoards = () => useQuery(boardsQueryOptions());
 
 // The board refreshes itself so an approval or an expiry reaches the shop floor without a reload.
 export const getBoard = (id: number) => apiFetch<StationBoard>(api.board(id));
-export const boardQueryOptions = (id: number) => queryOptions({ queryKey: ['boards', id], queryFn: () => getBoard(id), refetchInterval: REFRESH_MS, refetchOnWindowFocus: true });
+export const boardQueryOptions = (id: number) =>
+  queryOptions({ queryKey: ['boards', id], queryFn: () => getBoard(id), refetchInterval: REFRESH_MS, refetchOnWindowFocus: true });
 export const useBoard = (id: number) => useQuery(boardQueryOptions(id));

@@ -15,9 +15,18 @@ export function StationBoard({ board }: { board: Board }) {
   const c = BANNER_CLASSES[look.colour];
   return (
     <article aria-labelledby={`board-${board.workstationId}`} className="mx-auto max-w-3xl">
-      <h1 id={`board-${board.workstationId}`} className="text-3xl">{board.workstationName}</h1>
-      <div role="status" data-testid="station-banner" className={`mt-6 flex items-center gap-6 rounded-2xl border-4 p-6 ${c.border} ${c.soft} ${c.text}`}>
-        <span aria-hidden="true" className="flex h-20 w-20 shrink-0 items-center justify-center rounded-full border-4 border-current text-5xl font-bold">
+      <h1 id={`board-${board.workstationId}`} className="text-3xl">
+        {board.workstationName}
+      </h1>
+      <div
+        role="status"
+        data-testid="station-banner"
+        className={`mt-6 flex items-center gap-6 rounded-2xl border-4 p-6 ${c.border} ${c.soft} ${c.text}`}
+      >
+        <span
+          aria-hidden="true"
+          className="flex h-20 w-20 shrink-0 items-center justify-center rounded-full border-4 border-current text-5xl font-bold"
+        >
           {look.icon}
         </span>
         <div>
@@ -46,7 +55,9 @@ export function StationBoard({ board }: { board: Board }) {
           <dd className="font-semibold">{board.reviewDate ?? '—'}</dd>
         </div>
       </dl>
-      <p className="mt-4 text-sm text-muted">Checked {new Date(board.checkedAt).toLocaleTimeString()}; this page refreshes itself every minute.</p>
+      <p className="mt-4 text-sm text-muted">
+        Checked {new Date(board.checkedAt).toLocaleTimeString()}; this page refreshes itself every minute.
+      </p>
       <Cautions compact />
     </article>
   );

@@ -6,7 +6,14 @@ import { crossingSentence, disagreementSentence, handCalcSentence } from '@/feat
 import type { SweepParameter } from '@/features/sweep/lib/sweep-points';
 import { targetCrossing, type CrossingPoint } from '@/features/sweep/lib/target-crossing';
 
-type Props = { points: CrossingPoint[]; parameter: SweepParameter; targetPercent: number; hood: Hood; distance_m: number; release: ReleaseCondition };
+type Props = {
+  points: CrossingPoint[];
+  parameter: SweepParameter;
+  targetPercent: number;
+  hood: Hood;
+  distance_m: number;
+  release: ReleaseCondition;
+};
 
 // Both answers side by side: the simulated dose and the capture-velocity rule disagree often enough that the engineer must see both.
 export function SweepAnswer({ points, parameter, targetPercent, hood, distance_m, release }: Props) {
@@ -14,7 +21,9 @@ export function SweepAnswer({ points, parameter, targetPercent, hood, distance_m
   const calc = handCalcAnswer(hood, distance_m, release, parameter);
   return (
     <section aria-labelledby="sweep-answer-heading" className="grid gap-3 md:grid-cols-2">
-      <h2 id="sweep-answer-heading" className="md:col-span-2">What the sweep says</h2>
+      <h2 id="sweep-answer-heading" className="md:col-span-2">
+        What the sweep says
+      </h2>
       <div className="rounded-lg border border-accent bg-accent-soft p-4 text-sm">
         <h3 className="mb-1 font-semibold">Simulation</h3>
         <p data-testid="sweep-meets">{crossingSentence(crossing, parameter, targetPercent)}</p>

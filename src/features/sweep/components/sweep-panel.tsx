@@ -23,8 +23,15 @@ export function SweepPanel({ scenario, release, onSavePoint }: Props) {
   const [saved, setSaved] = useState<Record<number, { id: number; name: string } | 'saving'>>({});
   const [saveError, setSaveError] = useState<unknown>(null);
 
-  if (!scenario.limit) return <ErrorMessage title="No exposure limit" error="This scenario has no limit, so there is no target to sweep towards. Choose a dust agent with a limit in the scenario first." />;
-  if (scenario.hoods.length === 0) return <ErrorMessage title="No hood" error="This scenario has no hood to move or resize. Add one in the scenario first." />;
+  if (!scenario.limit)
+    return (
+      <ErrorMessage
+        title="No exposure limit"
+        error="This scenario has no limit, so there is no target to sweep towards. Choose a dust agent with a limit in the scenario first."
+      />
+    );
+  if (scenario.hoods.length === 0)
+    return <ErrorMessage title="No hood" error="This scenario has no hood to move or resize. Add one in the scenario first." />;
 
   const start = (r: SweepRequest) => {
     setRequest(r);
@@ -62,10 +69,23 @@ export function SweepPanel({ scenario, release, onSavePoint }: Props) {
     <div className="space-y-6">
       <SweepForm scenario={scenario} disabled={state.phase === 'running'} onStart={start} />
       {state.phase === 'running' && <SweepProgress progress={state.progress} onCancel={sweep.cancel} />}
-      {state.phase === 'cancelled' && <p role="status" className="text-sm text-muted">Sweep cancelled after {results.length} of {request?.points.length} points; the finished points are kept below.</p>}
+      {state.phase === 'cancelled' && (
+        <p role="status" className="text-sm text-muted">
+          Sweep cancelled after {results.length} of {request?.points.length} points; the finished points are kept below.
+        </p>
+      )}
       {state.phase === 'failed' && <ErrorMessage title="The sweep failed" error={state.error} />}
       {request && rows.length >= 2 && (
-        <SweepChart parameter={request.spec.parameter} targetPercent={targetPercent} points={rows.map((r) => ({ value: r.value, percent: r.result.percentOfLimit, lower: r.result.percentOfLimitLower, upper: r.result.percentOfLimitUpper }))} />
+        <SweepChart
+          parameter={request.spec.parameter}
+          targetPercent={targetPercent}
+          points={rows.map((r) => ({
+            value: r.value,
+            percent: r.result.percentOfLimit,
+            lower: r.result.percentOfLimitLower,
+            upper: r.result.percentOfLimitUpper,
+          }))}
+        />
       )}
       {request && state.phase === 'done' && (
         <SweepAnswer
@@ -77,7 +97,9 @@ export function SweepPanel({ scenario, release, onSavePoint }: Props) {
           release={scenario.hoods[request.spec.hoodIndex].releaseType ?? release}
         />
       )}
-      {request && rows.length > 0 && <SweepTable rows={rows} parameter={request.spec.parameter} onSave={save} canSave={state.phase !== 'running'} />}
+      {request && rows.length > 0 && (
+        <SweepTable rows={rows} parameter={request.spec.parameter} onSave={save} canSave={state.phase !== 'running'} />
+      )}
       {saveError !== null && <ErrorMessage title="Point not saved" error={saveError} />}
       <Cautions />
     </div>

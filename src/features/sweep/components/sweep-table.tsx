@@ -14,25 +14,95 @@ export type TableRow = { index: number; value: number; result: PointResult; save
 
 export function sweepCsv(rows: TableRow[], parameter: SweepParameter): string {
   const p = PARAMETER[parameter];
-  const header = ['point', `${parameter}_${p.unit.replace(/\W+/g, '')}`, 'fraction', 'twa8h_mgPerM3', 'twa8h_ci95_lo_mgPerM3', 'twa8h_ci95_hi_mgPerM3', 'percent_of_limit', 'percent_of_limit_upper', 'banner', 'particles'];
-  return toCsv(header, rows.map((r) => [r.index + 1, p.fromSi(r.value), r.result.fraction, r.result.twa8h_mgPerM3, ...r.result.twa8hCi95_mgPerM3, r.result.percentOfLimit, r.result.percentOfLimitUpper, r.result.banner, r.result.particles]));
+  const header = [
+    'point',
+    `${parameter}_${p.unit.replace(/\W+/g, '')}`,
+    'fraction',
+    'twa8h_mgPerM3',
+    'twa8h_ci95_lo_mgPerM3',
+    'twa8h_ci95_hi_mgPerM3',
+    'percent_of_limit',
+    'percent_of_limit_upper',
+    'banner',
+    'particles',
+  ];
+  return toCsv(
+    header,
+    rows.map((r) => [
+      r.index + 1,
+      p.fromSi(r.value),
+      r.result.fraction,
+      r.result.twa8h_mgPerM3,
+      ...r.result.twa8hCi95_mgPerM3,
+      r.result.percentOfLimit,
+      r.result.percentOfLimitUpper,
+      r.result.banner,
+      r.result.particles,
+    ]),
+  );
 }
 
-export function SweepTable({ rows, parameter, onSave, canSave }: { rows: TableRow[]; parameter: SweepParameter; onSave: (row: TableRow) => void; canSave: boolean }) {
+export function SweepTable({
+  rows,
+  parameter,
+  onSave,
+  canSave,
+}: {
+  rows: TableRow[];
+  parameter: SweepParameter;
+  onSave: (row: TableRow) => void;
+  canSave: boolean;
+}) {
   const columns: Column<TableRow>[] = [
     { key: 'index', header: 'Point', render: (r) => r.index + 1, sortValue: (r) => r.index, align: 'right' },
-    { key: 'value', header: PARAMETER[parameter].label, render: (r) => formatValue(parameter, r.value), sortValue: (r) => r.value, align: 'right' },
-    { key: 'twa', header: '8-h TWA (mg/m³)', render: (r) => sig(r.result.twa8h_mgPerM3), sortValue: (r) => r.result.twa8h_mgPerM3, align: 'right' },
-    { key: 'ci', header: '95 % CI (mg/m³)', render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`, align: 'right' },
-    { key: 'pct', header: '% of limit', render: (r) => percentText(r.result.percentOfLimit), sortValue: (r) => r.result.percentOfLimit, align: 'right' },
-    { key: 'upper', header: 'Upper 95 % (% of limit)', render: (r) => percentText(r.result.percentOfLimitUpper), sortValue: (r) => r.result.percentOfLimitUpper, align: 'right' },
-    { key: 'banner', header: 'Banner', render: (r) => <BannerBadge banner={r.result.banner} />, sortValue: (r) => ['clear', 'watch', 'act'].indexOf(r.result.banner) },
+    {
+      key: 'value',
+      header: PARAMETER[parameter].label,
+      render: (r) => formatValue(parameter, r.value),
+      sortValue: (r) => r.value,
+      align: 'right',
+    },
+    {
+      key: 'twa',
+      header: '8-h TWA (mg/m³)',
+      render: (r) => sig(r.result.twa8h_mgPerM3),
+      sortValue: (r) => r.result.twa8h_mgPerM3,
+      align: 'right',
+    },
+    {
+      key: 'ci',
+      header: '95 % CI (mg/m³)',
+      render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`,
+      align: 'right',
+    },
+    {
+      key: 'pct',
+      header: '% of limit',
+      render: (r) => percentText(r.result.percentOfLimit),
+      sortValue: (r) => r.result.percentOfLimit,
+      align: 'right',
+    },
+    {
+      key: 'upper',
+      header: 'Upper 95 % (% of limit)',
+      render: (r) => percentText(r.result.percentOfLimitUpper),
+      sortValue: (r) => r.result.percentOfLimitUpper,
+      align: 'right',
+    },
+    {
+      key: 'banner',
+      header: 'Banner',
+      render: (r) => <BannerBadge banner={r.result.banner} />,
+      sortValue: (r) => ['clear', 'watch', 'act'].indexOf(r.result.banner),
+    },
     {
       key: 'save',
       header: 'Keep',
       render: (r) =>
         r.saved ? (
-          <Link className="font-semibold text-accent underline" to={paths.scenario(r.saved.id)}>Open “{r.saved.name}”</Link>
+          <Link className="font-semibold text-accent underline" to={paths.scenario(r.saved.id)}>
+            Open “{r.saved.name}”
+          </Link>
         ) : canSave ? (
           <Button variant="secondary" className="no-print px-2 py-1" disabled={r.saving} onClick={() => onSave(r)}>
             {r.saving ? 'Saving…' : 'Save as new scenario'}
@@ -44,7 +114,9 @@ export function SweepTable({ rows, parameter, onSave, canSave }: { rows: TableRo
     <section aria-labelledby="sweep-points-heading" className="space-y-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 id="sweep-points-heading">Points</h2>
-        <Button variant="secondary" onClick={() => downloadCsv(`motewalk-sweep-${parameter}.csv`, sweepCsv(rows, parameter))}>Download CSV</Button>
+        <Button variant="secondary" onClick={() => downloadCsv(`motewalk-sweep-${parameter}.csv`, sweepCsv(rows, parameter))}>
+          Download CSV
+        </Button>
       </div>
       <DataTable rows={rows} columns={columns} rowKey={(r) => r.index} caption="Sweep points" initialSort={{ key: 'value', dir: 'asc' }} />
     </section>

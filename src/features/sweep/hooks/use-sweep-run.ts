@@ -44,21 +44,33 @@ export function useSweepRun() {
 
   const start = useCallback(
     (points: SweepPoint[]) =>
-      startRun(async ({ signal, onProgress }) => {
-        const results: PointResult[] = [];
-        const started = performance.now();
-        const progress = (fraction: number): Progress => {
-          const elapsed_s = (performance.now() - started) / 1000;
-          return { fraction, pointsDone: results.length, points: points.length, secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity, results: [...results] };
-        };
-        onProgress(progress(0));
-        for (const point of points) {
-          const result = await runSimulation(point.scenario, { signal, onProgress: (p) => onProgress(progress((results.length + p.fraction) / points.length)) });
-          results.push(pointResult(result));
-          onProgress(progress(results.length / points.length));
-        }
-        return results;
-      }, { ...START, points: points.length }),
+      startRun(
+        async ({ signal, onProgress }) => {
+          const results: PointResult[] = [];
+          const started = performance.now();
+          const progress = (fraction: number): Progress => {
+            const elapsed_s = (performance.now() - started) / 1000;
+            return {
+              fraction,
+              pointsDone: results.length,
+              points: points.length,
+              secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity,
+              results: [...results],
+            };
+          };
+          onProgress(progress(0));
+          for (const point of points) {
+            const result = await runSimulation(point.scenario, {
+              signal,
+              onProgress: (p) => onProgress(progress((results.length + p.fraction) / points.length)),
+            });
+            results.push(pointResult(result));
+            onProgress(progress(results.length / points.length));
+          }
+          return results;
+        },
+        { ...START, points: points.length },
+      ),
     [startRun],
   );
 

@@ -4,7 +4,16 @@ import { handCalcAnswer, HOOD_EQUATION } from './hand-calc';
 
 // [C] physics.md §8 check values: a plain opening of A = 0.1 m² drawing Q = 0.5 m³/s gives
 // V(0.1, 0.2, 0.3, 0.5 m) = 2.50, 1.00, 0.50, 0.192 m/s on its centre line.
-const plain: Hood = { kind: 'plain', x_m: 1, y_m: 1, z_m: 1, direction: { azimuth_deg: 0, elevation_deg: 0 }, faceWidth_m: 0.4, faceHeight_m: 0.25, airflow_m3PerS: 0.5 };
+const plain: Hood = {
+  kind: 'plain',
+  x_m: 1,
+  y_m: 1,
+  z_m: 1,
+  direction: { azimuth_deg: 0, elevation_deg: 0 },
+  faceWidth_m: 0.4,
+  faceHeight_m: 0.25,
+  airflow_m3PerS: 0.5,
+};
 
 describe('hand-calculation answer (Dalla Valle / ACGIH)', () => {
   it('needs 0.5 m³/s for 1.0 m/s (active generation, low end) at 0.2 m from a plain 0.1 m² opening [C]', () => {

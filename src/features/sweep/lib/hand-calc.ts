@@ -1,4 +1,12 @@
-import { captureVelocityRange, HOOD_FIT_COEFFICIENT as C, hoodCenterlineVelocity, hoodRequiredAirflow, type HoodGeometry, OPENING_DISTANCE_FACTOR, type ReleaseCondition } from '../../../../shared/physics/index';
+import {
+  captureVelocityRange,
+  HOOD_FIT_COEFFICIENT as C,
+  hoodCenterlineVelocity,
+  hoodRequiredAirflow,
+  type HoodGeometry,
+  OPENING_DISTANCE_FACTOR,
+  type ReleaseCondition,
+} from '../../../../shared/physics/index';
 import type { Hood } from '../../../../shared/schemas/scenario';
 import type { SweepParameter } from './sweep-points';
 
@@ -45,7 +53,12 @@ function reachAt(hood: Hood, velocity_mPerS: number): number | null {
 
 // Q = V·f(X) grows with face area for openings and with slot length for slots, so the largest face that still reaches V at X is the answer.
 function largestFaceScale(hood: Hood, velocity_mPerS: number, distance_m: number): number | null {
-  const reaches = (s: number) => hoodRequiredAirflow(hoodGeometry({ ...hood, faceWidth_m: hood.faceWidth_m * s, faceHeight_m: hood.faceHeight_m * s }), velocity_mPerS, distance_m) <= hood.airflow_m3PerS;
+  const reaches = (s: number) =>
+    hoodRequiredAirflow(
+      hoodGeometry({ ...hood, faceWidth_m: hood.faceWidth_m * s, faceHeight_m: hood.faceHeight_m * s }),
+      velocity_mPerS,
+      distance_m,
+    ) <= hood.airflow_m3PerS;
   if (hood.kind === 'booth' || !reaches(1e-6)) return null;
   let lo = 1e-6;
   let hi = 1;
@@ -61,7 +74,20 @@ function largestFaceScale(hood: Hood, velocity_mPerS: number, distance_m: number
 /** The Dalla Valle / ACGIH answer to the same question the sweep asks, at the scenario's own hood and source distance. */
 export function handCalcAnswer(hood: Hood, distance_m: number, release: ReleaseCondition, parameter: SweepParameter): HandCalc {
   const v = designCaptureVelocity_mPerS(release);
-  if (parameter === 'airflow') return { kind: 'airflow', captureVelocity_mPerS: v, airflow_m3PerS: hoodRequiredAirflow(hoodGeometry(hood), v, Math.max(0, distance_m)), distance_m };
-  if (parameter === 'distance') return { kind: 'distance', captureVelocity_mPerS: v, distance_m: reachAt(hood, v), airflow_m3PerS: hood.airflow_m3PerS };
-  return { kind: 'faceScale', captureVelocity_mPerS: v, faceScale: largestFaceScale(hood, v, Math.max(0, distance_m)), airflow_m3PerS: hood.airflow_m3PerS, distance_m };
+  if (parameter === 'airflow')
+    return {
+      kind: 'airflow',
+      captureVelocity_mPerS: v,
+      airflow_m3PerS: hoodRequiredAirflow(hoodGeometry(hood), v, Math.max(0, distance_m)),
+      distance_m,
+    };
+  if (parameter === 'distance')
+    return { kind: 'distance', captureVelocity_mPerS: v, distance_m: reachAt(hood, v), airflow_m3PerS: hood.airflow_m3PerS };
+  return {
+    kind: 'faceScale',
+    captureVelocity_mPerS: v,
+    faceScale: largestFaceScale(hood, v, Math.max(0, distance_m)),
+    airflow_m3PerS: hood.airflow_m3PerS,
+    distance_m,
+  };
 }

@@ -7,10 +7,34 @@ import type { Preferred } from './target-crossing';
 import type { SweepParameter } from './sweep-points';
 
 /** The form's unit for each parameter; SI stays inside, the conversion happens here only. */
-export const PARAMETER: Record<SweepParameter, { label: string; unit: string; axis: string; preferred: Preferred; toSi: (v: number) => number; fromSi: (v: number) => number }> = {
-  distance: { label: 'Distance from the source along the hood axis', unit: 'm', axis: 'Source distance along the hood axis (m)', preferred: 'largest', toSi: (v) => v, fromSi: (v) => v },
-  airflow: { label: 'Hood airflow', unit: 'm³/h', axis: 'Hood airflow (m³/h)', preferred: 'smallest', toSi: cubicMetresPerHourToPerSecond, fromSi: cubicMetresPerSecondToPerHour },
-  faceScale: { label: 'Face size (width and height scaled together)', unit: '× current', axis: 'Face size (× current width and height)', preferred: 'smallest', toSi: (v) => v, fromSi: (v) => v },
+export const PARAMETER: Record<
+  SweepParameter,
+  { label: string; unit: string; axis: string; preferred: Preferred; toSi: (v: number) => number; fromSi: (v: number) => number }
+> = {
+  distance: {
+    label: 'Distance from the source along the hood axis',
+    unit: 'm',
+    axis: 'Source distance along the hood axis (m)',
+    preferred: 'largest',
+    toSi: (v) => v,
+    fromSi: (v) => v,
+  },
+  airflow: {
+    label: 'Hood airflow',
+    unit: 'm³/h',
+    axis: 'Hood airflow (m³/h)',
+    preferred: 'smallest',
+    toSi: cubicMetresPerHourToPerSecond,
+    fromSi: cubicMetresPerSecondToPerHour,
+  },
+  faceScale: {
+    label: 'Face size (width and height scaled together)',
+    unit: '× current',
+    axis: 'Face size (× current width and height)',
+    preferred: 'smallest',
+    toSi: (v) => v,
+    fromSi: (v) => v,
+  },
 };
 
 const plain = (v: number, digits = 3) => sig(v, digits);

@@ -24,7 +24,9 @@ describe('sweep points', () => {
     points.forEach((p) => {
       expect(sourceDistance_m(p.scenario, 0)).toBeCloseTo(p.value, 12);
       const h = p.scenario.hoods[0];
-      expect(inside(h.x_m, scenario.room.length_m) && inside(h.y_m, scenario.room.width_m) && inside(h.z_m, scenario.room.height_m)).toBe(true);
+      expect(inside(h.x_m, scenario.room.length_m) && inside(h.y_m, scenario.room.width_m) && inside(h.z_m, scenario.room.height_m)).toBe(
+        true,
+      );
       // The hood faces −y, so only y changes: the offset from the axis is kept.
       expect(h.x_m).toBeCloseTo(scenario.hoods[0].x_m, 12);
       expect(h.z_m).toBeCloseTo(scenario.hoods[0].z_m, 12);
@@ -38,11 +40,17 @@ describe('sweep points', () => {
     const [lo, hi] = distanceRange_m(scenario, 0);
     expect(lo).toBeCloseTo(0.02, 12);
     expect(hi).toBeCloseTo(3, 12);
-    expect(() => buildSweepPoints(scenario, { hoodIndex: 0, parameter: 'distance', from: 0.5, to: 3.5, count: 3 })).toThrow(/outside the room; keep it between 0.020 and 3.000 m/);
+    expect(() => buildSweepPoints(scenario, { hoodIndex: 0, parameter: 'distance', from: 0.5, to: 3.5, count: 3 })).toThrow(
+      /outside the room; keep it between 0.020 and 3.000 m/,
+    );
   });
 
   it('keeps the seed and every other input identical; only the swept field changes', () => {
-    for (const [parameter, from, to] of [['distance', 0.2, 0.5], ['airflow', 0.2, 0.8], ['faceScale', 0.5, 2]] as const) {
+    for (const [parameter, from, to] of [
+      ['distance', 0.2, 0.5],
+      ['airflow', 0.2, 0.8],
+      ['faceScale', 0.5, 2],
+    ] as const) {
       const points = buildSweepPoints(scenario, { hoodIndex: 0, parameter, from, to, count: 4 });
       points.forEach((p) => {
         expect(p.scenario.run).toEqual(scenario.run);
@@ -55,14 +63,20 @@ describe('sweep points', () => {
   });
 
   it('scales the face width and height together', () => {
-    const [half, , double] = buildSweepPoints(scenario, { hoodIndex: 0, parameter: 'faceScale', from: 0.5, to: 2, count: 3 }).map((p) => p.scenario.hoods[0]);
+    const [half, , double] = buildSweepPoints(scenario, { hoodIndex: 0, parameter: 'faceScale', from: 0.5, to: 2, count: 3 }).map(
+      (p) => p.scenario.hoods[0],
+    );
     expect([half.faceWidth_m, half.faceHeight_m]).toEqual([0.175, 0.125]);
     expect([double.faceWidth_m, double.faceHeight_m]).toEqual([0.7, 0.5]);
     expect(scenario.hoods[0].faceWidth_m).toBe(0.35);
   });
 
   it('names a missing hood and a non-positive value', () => {
-    expect(() => buildSweepPoints(scenario, { hoodIndex: 3, parameter: 'airflow', from: 0.1, to: 0.2, count: 3 })).toThrow(/1 hoods, got 3/);
-    expect(() => buildSweepPoints(scenario, { hoodIndex: 0, parameter: 'airflow', from: 0, to: 0.2, count: 3 })).toThrow(/above zero, got 0/);
+    expect(() => buildSweepPoints(scenario, { hoodIndex: 3, parameter: 'airflow', from: 0.1, to: 0.2, count: 3 })).toThrow(
+      /1 hoods, got 3/,
+    );
+    expect(() => buildSweepPoints(scenario, { hoodIndex: 0, parameter: 'airflow', from: 0, to: 0.2, count: 3 })).toThrow(
+      /above zero, got 0/,
+    );
   });
 });

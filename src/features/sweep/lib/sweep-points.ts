@@ -23,8 +23,6 @@ export const MAX_POINTS = 12;
 // A face closer than this to the source sits inside the release box of most demo sources.
 export const MIN_DISTANCE_m = 0.02;
 
-
-
 /** Distance from the face centre to the source measured along the hood axis (positive in front). */
 export function sourceDistance_m(scenario: Scenario, hoodIndex: number): number {
   const hood = hoodAt(scenario, hoodIndex);
@@ -55,8 +53,10 @@ export function distanceRange_m(scenario: Scenario, hoodIndex: number): [number,
 
 /** Evenly spaced values with both ends exact, so the table shows the numbers the engineer typed. */
 export function sweepValues(from: number, to: number, count: number): number[] {
-  if (!Number.isInteger(count) || count < MIN_POINTS || count > MAX_POINTS) throw new RangeError(`count must be a whole number from ${MIN_POINTS} to ${MAX_POINTS}, got ${count}`);
-  if (!Number.isFinite(from) || !Number.isFinite(to) || from === to) throw new RangeError(`from and to must be two different numbers, got ${from} and ${to}`);
+  if (!Number.isInteger(count) || count < MIN_POINTS || count > MAX_POINTS)
+    throw new RangeError(`count must be a whole number from ${MIN_POINTS} to ${MAX_POINTS}, got ${count}`);
+  if (!Number.isFinite(from) || !Number.isFinite(to) || from === to)
+    throw new RangeError(`from and to must be two different numbers, got ${from} and ${to}`);
   return Array.from({ length: count }, (_, i) => (i === count - 1 ? to : from + ((to - from) * i) / (count - 1)));
 }
 
@@ -74,7 +74,10 @@ function withHood(scenario: Scenario, hoodIndex: number, change: (hood: Hood) =>
 
 function moveTo(scenario: Scenario, hoodIndex: number, distance_m: number): Scenario {
   const [lo, hi] = distanceRange_m(scenario, hoodIndex);
-  if (!(distance_m >= lo - 1e-9 && distance_m <= hi + 1e-9)) throw new RangeError(`distance ${distance_m} m would put the hood face outside the room; keep it between ${lo.toFixed(3)} and ${hi.toFixed(3)} m`);
+  if (!(distance_m >= lo - 1e-9 && distance_m <= hi + 1e-9))
+    throw new RangeError(
+      `distance ${distance_m} m would put the hood face outside the room; keep it between ${lo.toFixed(3)} and ${hi.toFixed(3)} m`,
+    );
   const n = hoodAxis(scenario.hoods[hoodIndex].direction);
   const shift = sourceDistance_m(scenario, hoodIndex) - distance_m;
   return withHood(scenario, hoodIndex, (h) => ({ ...h, x_m: h.x_m + shift * n[0], y_m: h.y_m + shift * n[1], z_m: h.z_m + shift * n[2] }));

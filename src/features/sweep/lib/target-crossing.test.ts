@@ -14,7 +14,11 @@ describe('target crossing', () => {
   });
 
   it('interpolates the largest distance that still meets, whatever order the points come in', () => {
-    const distance = [{ value: 0.5, upperPercent: 90 }, { value: 0.1, upperPercent: 10 }, { value: 0.3, upperPercent: 40 }];
+    const distance = [
+      { value: 0.5, upperPercent: 90 },
+      { value: 0.1, upperPercent: 10 },
+      { value: 0.3, upperPercent: 40 },
+    ];
     const c = targetCrossing(distance, 50, 'largest');
     expect(c.kind).toBe('interpolated');
     if (c.kind === 'interpolated') {
@@ -36,7 +40,11 @@ describe('target crossing', () => {
   });
 
   it('takes the most preferred meeting point when the curve is not monotonic', () => {
-    const bumpy = [{ value: 0.2, upperPercent: 40 }, { value: 0.4, upperPercent: 60 }, { value: 0.6, upperPercent: 20 }];
+    const bumpy = [
+      { value: 0.2, upperPercent: 40 },
+      { value: 0.4, upperPercent: 60 },
+      { value: 0.6, upperPercent: 20 },
+    ];
     expect(targetCrossing(bumpy, 50, 'smallest')).toEqual({ kind: 'beyond-range', value: 0.2 });
   });
 });

@@ -8,9 +8,7 @@ export interface CrossingPoint {
 export type Preferred = 'largest' | 'smallest';
 
 export type Crossing =
-  | { kind: 'interpolated'; value: number; meets: number; fails: number }
-  | { kind: 'beyond-range'; value: number }
-  | { kind: 'none' };
+  { kind: 'interpolated'; value: number; meets: number; fails: number } | { kind: 'beyond-range'; value: number } | { kind: 'none' };
 
 /**
  * The most preferred value at which the upper 95 % bound meets the target. Between the best point
