@@ -1,6 +1,7 @@
 import type { Approval, Banner } from '../../shared/schemas/workspace-views';
 import type { Conn } from '../db/knex';
 import type { ApprovalRow } from '../db/tables';
+import { approvalReview } from './review-rule';
 
 export type CurrentApproval = Approval;
 
@@ -9,6 +10,7 @@ type JoinedRow = ApprovalRow & {
   scenario_hash: string;
   scenario_deleted: string | null;
   run_hash: string;
+  run_engine_version: string;
   banner: string | null;
   percent_of_limit: number | null;
   approver: string;
@@ -16,8 +18,8 @@ type JoinedRow = ApprovalRow & {
 
 const today = () => new Date().toISOString().slice(0, 10);
 
-// Needs review when the review date has passed or the scenario changed after the approved run.
-export async function currentApproval(db: Conn, workstationId: number): Promise<CurrentApproval | null> {
+// Needs review when the review date has passed, the scenario changed after the approved run, or the engine's major version moved on.
+export async function currentApproval(db: Conn, workstationId: number, currentEngineVersion?: string): Promise<CurrentApproval | null> {
   const a: JoinedRow | undefined = await db('approvals as ap')
     .join('scenarios as s', 's.id', 'ap.scenario_id')
     .join('runs as r', 'r.id', 'ap.run_id')
@@ -31,6 +33,7 @@ export async function currentApproval(db: Conn, workstationId: number): Promise<
       's.input_hash as scenario_hash',
       's.deleted_at as scenario_deleted',
       'r.input_hash as run_hash',
+      'r.engine_version as run_engine_version',
       'r.banner',
       'r.percent_of_limit',
       'p.name as approver',
@@ -39,6 +42,7 @@ export async function currentApproval(db: Conn, workstationId: number): Promise<
   if (!a) return null;
   const expired = a.review_date < today();
   const outOfDate = a.scenario_hash !== a.run_hash || a.scenario_deleted != null;
+  const review = approvalReview({ expired, outOfDate, runEngineVersion: a.run_engine_version }, currentEngineVersion);
   return {
     id: a.id,
     scenarioId: a.scenario_id,
@@ -52,7 +56,7 @@ export async function currentApproval(db: Conn, workstationId: number): Promise<
     percentOfLimit: a.percent_of_limit,
     expired,
     outOfDate,
-    needsReview: expired || outOfDate,
+    ...review,
   };
 }
 

@@ -8,7 +8,7 @@ import { findScenario } from '../scenarios/scenarios.repo';
 // Operators get a banner they can act on: no valid assessment counts as Act, a stale one at least as Watch.
 function boardBanner(a: Awaited<ReturnType<typeof currentApproval>>): Banner {
   if (!a || a.expired || !a.banner) return 'act';
-  if (a.outOfDate && a.banner === 'clear') return 'watch';
+  if ((a.outOfDate || a.engineChanged) && a.banner === 'clear') return 'watch';
   return a.banner;
 }
 

@@ -83,4 +83,47 @@ describe('scenario schema', () => {
     expect(files.length).toBeGreaterThanOrEqual(10);
     for (const f of files) expect(() => parseScenario(JSON.parse(readFileSync(new URL(f, dir), 'utf8')))).not.toThrow();
   });
+
+  it('reads the release type and the jet from the source, and collects on walls unless told not to', () => {
+    const s = parseScenario({
+      ...valid(),
+      source: { ...valid().source, releaseType: 'high', jet: { speed_mPerS: 5, diameter_m: 0.05, direction: { azimuth_deg: -90 } } },
+    });
+    expect(s.source.releaseType).toBe('high');
+    expect(s.source.jet).toEqual({ speed_mPerS: 5, diameter_m: 0.05, direction: { azimuth_deg: -90, elevation_deg: 0 } });
+    expect(s.room.wallDeposition).toBe(true);
+    expect(parseScenario({ ...valid(), room: { ...valid().room, wallDeposition: false } }).room.wallDeposition).toBe(false);
+  });
+
+  it('refuses a jet outside 0-100 m/s and 1 mm-1 m, naming the field and the value', () => {
+    const jet = (speed_mPerS: number, diameter_m: number) => ({
+      ...valid(),
+      source: { ...valid().source, jet: { speed_mPerS, diameter_m } },
+    });
+    expect(issuesOf(jet(120, 0.05))).toEqual([{ path: 'source.jet.speed_mPerS', message: 'must be 0 to 100 m/s, got 120' }]);
+    expect(issuesOf(jet(-1, 0.05))).toEqual([{ path: 'source.jet.speed_mPerS', message: 'must be 0 to 100 m/s, got -1' }]);
+    expect(issuesOf(jet(5, 0.0005))).toEqual([{ path: 'source.jet.diameter_m', message: 'must be 1 mm to 1 m, got 0.0005' }]);
+    expect(issuesOf(jet(5, 1.5))).toEqual([{ path: 'source.jet.diameter_m', message: 'must be 1 mm to 1 m, got 1.5' }]);
+    expect(parseScenario(jet(0, 0.001)).source.jet).toEqual({ speed_mPerS: 0, diameter_m: 0.001 });
+  });
+
+  it('refuses a zero jet direction vector', () => {
+    const input = { ...valid(), source: { ...valid().source, jet: { speed_mPerS: 5, diameter_m: 0.05, direction: { x: 0, y: 0, z: 0 } } } };
+    expect(issuesOf(input)).toEqual([
+      { path: 'source.jet.direction', message: 'direction must be a non-zero vector, got {"x":0,"y":0,"z":0}' },
+    ]);
+  });
+
+  it("moves an old file's hood release type to the source, taking the most demanding when hoods disagree", () => {
+    const old = valid();
+    const second = { ...old.hoods[0], x_m: 2.2, releaseType: 'active' };
+    const s = parseScenario({ ...old, hoods: [{ ...old.hoods[0], releaseType: 'high' }, second] });
+    expect(s.source.releaseType).toBe('high');
+    expect(s.hoods.every((h) => !('releaseType' in h))).toBe(true);
+    expect(
+      parseScenario({ ...old, source: { ...old.source, releaseType: 'low' }, hoods: [{ ...old.hoods[0], releaseType: 'high' }] }).source
+        .releaseType,
+    ).toBe('low');
+    expect(parseScenario(old).source.releaseType).toBeUndefined();
+  });
 });

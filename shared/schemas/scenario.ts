@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { upgradeScenario } from './scenario-upgrade';
 import { HOOD_KINDS, RELEASE_TYPES } from '../vocabulary/index';
 
 const finite = (min?: { gt?: number; gte?: number }) => {
@@ -20,6 +21,7 @@ const roomSchema = z.object({
   temperature_K: positive().default(293.15),
   pressure_Pa: positive().default(101325),
   eddyDiffusivity_m2PerS: nonNegative().optional(),
+  wallDeposition: z.boolean().default(true),
 });
 
 const emissionSchema = z.discriminatedUnion('kind', [
@@ -32,6 +34,20 @@ const emissionSchema = z.discriminatedUnion('kind', [
   }),
 ]);
 
+const directionSchema = z.union([
+  z.object({ x: finite(), y: finite(), z: finite() }),
+  z.object({ azimuth_deg: finite(), elevation_deg: finite().default(0) }),
+]);
+
+const releaseTypeSchema = z.enum(RELEASE_TYPES);
+
+// Without a direction the jet points at the breathing zone (shared/physics/release-jets.ts).
+const jetSchema = z.object({
+  speed_mPerS: z.number().gte(0, 'must be 0 to 100 m/s').lte(100, 'must be 0 to 100 m/s'),
+  direction: directionSchema.optional(),
+  diameter_m: z.number().gte(0.001, 'must be 1 mm to 1 m').lte(1, 'must be 1 mm to 1 m'),
+});
+
 const sourceSchema = z.object({
   x_m: finite(),
   y_m: finite(),
@@ -41,6 +57,8 @@ const sourceSchema = z.object({
   emission: emissionSchema,
   taskMinutesPerShift: finite({ gte: 0 }).max(480).optional(),
   background_mgPerM3: nonNegative().default(0),
+  releaseType: releaseTypeSchema.optional(),
+  jet: jetSchema.optional(),
 });
 
 const sizeProfileSchema = z.discriminatedUnion('kind', [
@@ -66,11 +84,6 @@ const dustSchema = z.object({
   sizeProfile: sizeProfileSchema,
 });
 
-const directionSchema = z.union([
-  z.object({ x: finite(), y: finite(), z: finite() }),
-  z.object({ azimuth_deg: finite(), elevation_deg: finite().default(0) }),
-]);
-
 const hoodSchema = z.object({
   name: z.string().optional(),
   kind: z.enum(HOOD_KINDS),
@@ -81,7 +94,6 @@ const hoodSchema = z.object({
   faceWidth_m: positive(),
   faceHeight_m: positive(),
   airflow_m3PerS: nonNegative(),
-  releaseType: z.enum(RELEASE_TYPES).optional(),
 });
 
 const workerSchema = z.object({
@@ -137,19 +149,22 @@ function checkGeometry(s: z.output<typeof baseSchema>, ctx: z.RefinementCtx) {
   };
   inside(s.source, ['source'], 'source');
   inside(s.worker, ['worker'], 'breathing-zone centre');
-  s.hoods.forEach((hood, i) => {
-    inside(hood, ['hoods', i], 'hood face centre');
-    const d = hood.direction;
+  const nonZero = (d: z.output<typeof directionSchema>, path: (string | number)[]) => {
     const length = 'x' in d ? Math.hypot(d.x, d.y, d.z) : 1;
     if (!(length > 1e-9)) {
       ctx.addIssue({
         code: 'custom',
-        path: ['hoods', i, 'direction'],
+        path: [...path, 'direction'],
         input: d,
         message: `direction must be a non-zero vector, got ${JSON.stringify(d)}`,
       });
     }
+  };
+  s.hoods.forEach((hood, i) => {
+    inside(hood, ['hoods', i], 'hood face centre');
+    nonZero(hood.direction, ['hoods', i]);
   });
+  if (s.source.jet?.direction) nonZero(s.source.jet.direction, ['source', 'jet']);
   const profile = s.dust.sizeProfile;
   if (profile.kind === 'bins') {
     if (profile.amounts.length !== profile.edges_m.length - 1) {
@@ -181,10 +196,17 @@ function checkGeometry(s: z.output<typeof baseSchema>, ctx: z.RefinementCtx) {
   }
 }
 
-export const scenarioSchema = baseSchema.superRefine(checkGeometry);
+const checkedSchema = baseSchema.superRefine(checkGeometry);
 
-export type Scenario = z.output<typeof scenarioSchema>;
-export type ScenarioInput = z.input<typeof scenarioSchema>;
+// Files and stored rows written before the release type moved to the source still read.
+export const scenarioSchema = z.preprocess(upgradeScenario, checkedSchema);
+/** The fields with their defaults, for forms that show what a blank field becomes. */
+export const scenarioFields = baseSchema.shape;
+
+export type Scenario = z.output<typeof checkedSchema>;
+export type ScenarioInput = z.input<typeof checkedSchema>;
+export type ReleaseType = (typeof RELEASE_TYPES)[number];
+export type Jet = NonNullable<Scenario['source']['jet']>;
 export type Hood = Scenario['hoods'][number];
 
 function describe(value: unknown): string {

@@ -52,7 +52,11 @@ export type Approval = {
   percentOfLimit: number | null;
   expired: boolean;
   outOfDate: boolean;
+  /** The approved run came from an engine of an older major version than the one running now. */
+  engineChanged: boolean;
   needsReview: boolean;
+  /** Why it needs review, in words ("the engine has changed since this approval"); null when it does not. */
+  reviewReason: string | null;
 };
 
 export type StationBoard = {

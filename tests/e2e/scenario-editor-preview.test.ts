@@ -76,6 +76,33 @@ describe('the scenario editor preview', () => {
     await closeUp('scenario-editor-1280-focus');
   });
 
+  it('gives the source a release type and its default jet, aimed at the breathing zone, which the engineer can override', async () => {
+    const source = page.getByRole('group', { name: 'Source and emission', exact: true });
+    expect(await source.getByLabel('How the dust is released').inputValue()).toBe('low');
+    expect(await page.getByTestId('jet-default').textContent()).toMatch(/0\.70? m\/s from a 100 mm stream, aimed at the breathing zone/);
+    await source.getByLabel('Use the default jet for this release type').uncheck();
+    // Unticked, the fields start from the default itself (0.7 m/s, 100 mm), aimed at the worker to a tenth of a degree: tilt = atan(rise / run) [C].
+    expect(await fieldValue('Jet speed')).toBeCloseTo(0.7, 9);
+    expect(await fieldValue('Jet diameter')).toBeCloseTo(100, 9);
+    const run_m = Math.hypot(
+      (await fieldValue('Nose and mouth x')) - (await fieldValue('Source x')),
+      (await fieldValue('Nose and mouth y')) - (await fieldValue('Source y')),
+    );
+    const rise_m = (await fieldValue('Nose and mouth height')) - (await fieldValue('Release height'));
+    expect(Math.abs((await fieldValue('Jet tilt')) - (Math.atan2(rise_m, run_m) * 180) / Math.PI)).toBeLessThanOrEqual(0.05);
+    await page.getByLabel('Jet speed', { exact: true }).fill('150');
+    await expect.poll(() => page.getByLabel('Jet speed', { exact: true }).getAttribute('aria-invalid')).toBe('true');
+    await page.getByLabel('Jet speed', { exact: true }).fill('6');
+    await source.getByLabel('How the dust is released').selectOption('high');
+    await expect
+      .poll(async () => JSON.parse((await page.getByTestId('scenario-json').textContent()) ?? '{}').source)
+      .toMatchObject({ releaseType: 'high', jet: { speed_mPerS: 6, diameter_m: 0.1 } });
+    expect(await page.getByTestId('hood-verdict-0').textContent()).toMatch(/2\.5–10 m\/s capture range/);
+    await source.screenshot({ path: path.join(SCREENSHOTS, 'scenario-editor-1280-source.png') });
+    await source.getByLabel('Use the default jet for this release type').check();
+    await expect.poll(async () => JSON.parse((await page.getByTestId('scenario-json').textContent()) ?? '{}').source.jet).toBeUndefined();
+  });
+
   it('shows the error at the airflow field when the airflow is impossible', async () => {
     const airflow = page.getByLabel('Airflow', { exact: true });
     await airflow.fill('-300');

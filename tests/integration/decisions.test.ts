@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { currentApproval } from '../../server/approvals/approvals.repo';
 import { createTestApp, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -127,6 +128,38 @@ describe('approving a scenario as the current control', () => {
     const board = await (await t.signIn('operator')).get(`/api/boards/${benchId}`);
     expect(board.body.needsReview).toBe(true);
     expect(board.body.banner).not.toBe('clear');
+  });
+});
+
+describe('approvals that rest on an older engine', () => {
+  it("need review, with the reason in words, once the engine's major version has moved on", async () => {
+    const eng = await t.signIn('engineer');
+    const s = await scenarioAt(otherBenchId, 'Flanged hood');
+    const run = await runOf(s.id);
+    expect((await eng.post(`/api/scenarios/${s.id}/approve`).send({ runId: run.id })).status).toBe(201);
+    expect((await eng.get(`/api/workstations/${otherBenchId}`)).body.approval).toMatchObject({
+      engineChanged: false,
+      needsReview: false,
+      reviewReason: null,
+    });
+    // As if the 2.0 engine were running: the stored 1.x run no longer backs the approval.
+    await t.db('runs').where({ id: run.id }).update({ engine_version: '1.3.0' });
+    expect(await currentApproval(t.db, otherBenchId, '2.0.0')).toMatchObject({
+      engineChanged: true,
+      needsReview: true,
+      reviewReason: 'the engine has changed since this approval',
+    });
+    // Through the API with the engine that runs now: a run from a major version below it.
+    await t.db('runs').where({ id: run.id }).update({ engine_version: '0.9.0' });
+    const ws = await eng.get(`/api/workstations/${otherBenchId}`);
+    expect(ws.body.approval).toMatchObject({
+      outOfDate: false,
+      engineChanged: true,
+      needsReview: true,
+      reviewReason: 'the engine has changed since this approval',
+    });
+    const list = await eng.get(`/api/scenarios?workstationId=${otherBenchId}`);
+    expect(list.body.items.find((i: { id: number }) => i.id === s.id).needsReview).toBe(true);
   });
 });
 

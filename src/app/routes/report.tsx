@@ -9,7 +9,6 @@ import { paths } from '@/config/paths';
 import { dateTime } from '@/lib/format';
 import { useAgents } from '@/features/agents/api/get-agents';
 import { useAudit } from '@/features/audit/api/get-audit';
-import { useWorkstation } from '@/features/places/api/get-sites';
 import { ReportDocument } from '@/features/report/components/report-document';
 import { RunResults } from '@/features/run-results/components/run-results';
 import { runQueryOptions } from '@/features/scenarios/api/get-run';
@@ -30,7 +29,6 @@ function Report({ detail }: { detail: ScenarioDetail }) {
   const runId = Number(params.get('run')) || detail.runs[0]?.id;
   const run = useQuery({ ...runQueryOptions(runId ?? 0), enabled: Boolean(runId) });
   const agent = useAgents().data?.items.find((a) => a.id === detail.agentId);
-  const workstation = useWorkstation(detail.workstationId);
   const profile = useSizeProfile(detail.sizeProfileId ?? 0);
   // Who ran it lives in the audit trail; a reader without it sees "not recorded" rather than an error.
   const audit = useAudit({ action: 'run.saved', workstationId: detail.workstationId });
@@ -87,7 +85,6 @@ function Report({ detail }: { detail: ScenarioDetail }) {
       }
       agent={agent ? { name: agent.name, data: agent.data } : undefined}
       sizeProfileName={profile.data?.name}
-      releaseType={workstation.data?.data.releaseType}
       approval={detail.approval}
       runPicker={picker}
     >

@@ -9,7 +9,6 @@ import { Page } from '@/components/ui/page';
 import { ErrorMessage, Notice, Spinner } from '@/components/ui/status';
 import { paths } from '@/config/paths';
 import { useAgents } from '@/features/agents/api/get-agents';
-import { useWorkstation } from '@/features/places/api/get-sites';
 import { useScenario } from '@/features/scenarios/api/get-scenario';
 import { RunResults } from '@/features/run-results/components/run-results';
 import { ScenarioEditor } from '@/features/scenario-editor/components/scenario-editor';
@@ -37,14 +36,12 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const user = useUser().data;
   const agents = useAgents().data?.items ?? [];
   const profiles = useSizeProfileOptions();
-  const workstation = useWorkstation(initial.workstationId);
   const [draft, setDraft] = useState<Draft>(() => fromDetail(initial));
   const [base, setBase] = useState<ScenarioDetail>(initial);
   const [fresh, setFresh] = useState<{ result: RunResult; input: Scenario } | null>(null);
   const parsed = useMemo(() => scenarioSchema.safeParse(draft.input), [draft]);
   const readOnly = !can(user?.role, 'scenarios:write');
   const dirty = JSON.stringify(fromDetail(base)) !== JSON.stringify(draft);
-  const releaseType = workstation.data?.data.releaseType ?? 'active';
 
   return (
     <Page
@@ -82,8 +79,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
     >
       {base.approval?.needsReview && (
         <p role="status" className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch">
-          ⟳ Needs review: the station's approval{' '}
-          {base.approval.expired ? 'has expired' : 'rests on a run that no longer matches its scenario'}.
+          ⟳ Needs review: {base.approval.reviewReason ?? "the station's approval is due for a look"}.
         </p>
       )}
       {!readOnly && (
@@ -100,7 +96,6 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
       <ScenarioEditor
         value={draft.input}
         onChange={(input) => setDraft((d) => ({ ...d, input }))}
-        releaseType={releaseType}
         agents={agents}
         agentId={draft.agentId}
         onAgentChange={(agentId) => setDraft((d) => ({ ...d, agentId }))}

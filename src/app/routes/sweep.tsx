@@ -67,7 +67,11 @@ function SweepWorkspace({ detail }: { detail: ScenarioDetail }) {
       ) : workstation.isPending ? (
         <Spinner label="Loading the workstation…" />
       ) : (
-        <SweepPanel scenario={parsed.scenario} release={workstation.data?.data.releaseType ?? 'active'} onSavePoint={savePoint} />
+        <SweepPanel
+          scenario={parsed.scenario}
+          release={parsed.scenario.source.releaseType ?? workstation.data?.data.releaseType ?? 'active'}
+          onSavePoint={savePoint}
+        />
       )}
     </Page>
   );

@@ -57,9 +57,7 @@ export function WorkstationRoute() {
             <strong>{a.scenarioName}</strong> approved by {a.approvedBy} on {a.approvedAt.slice(0, 10)}, review by {a.reviewDate} ·{' '}
             <BannerBadge banner={a.banner} />
             {a.needsReview && (
-              <span className="ml-2 font-semibold text-watch">
-                ⟳ needs review{a.expired ? ' (review date passed)' : ' (scenario changed since its run)'}
-              </span>
+              <span className="ml-2 font-semibold text-watch">⟳ needs review{a.reviewReason ? ` (${a.reviewReason})` : ''}</span>
             )}
           </p>
         ) : (

@@ -79,6 +79,15 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
           <span className="text-muted">None</span>
         ),
     },
+    {
+      key: 'capture',
+      label: (
+        <>
+          Capture speed at the source<Sub>hand calculation against the release type&apos;s range</Sub>
+        </>
+      ),
+      cell: (c) => c.capture ?? <span className="text-muted">No hood</span>,
+    },
     { key: 'airflow', label: 'Total hood airflow', cell: (c) => `${Math.round(airflow_m3PerH(c.totalAirflow_m3PerS))} m³/h` },
     {
       key: 'fan',

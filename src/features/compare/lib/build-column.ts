@@ -1,3 +1,5 @@
+import { captureCheck, type CaptureHood } from '../../../../shared/physics/capture-verdict';
+import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { ControlTier } from '../../../../shared/schemas/workspace';
 import type { CompareColumn, HoodFigures, RunFigures } from './types';
 
@@ -8,19 +10,27 @@ export interface ScenarioLike {
   siteName: string;
   controlTier: string;
   controlDescription: string;
-  input: { hoods?: HoodFigures[] };
+  input: { hoods?: HoodFigures[]; source?: object };
 }
 
 export interface RunLike {
   id: number;
   createdAt: string;
   outOfDate: boolean;
-  input: { hoods?: HoodFigures[] };
+  input: { hoods?: HoodFigures[]; source?: object };
+}
+
+// Stored inputs are parsed scenarios, so a source and hoods that are there are whole.
+function captureSentence(input: { hoods?: HoodFigures[]; source?: object }): string | null {
+  if (!input.source || !input.hoods?.length) return null;
+  const check = captureCheck(input as unknown as { source: Scenario['source']; hoods: CaptureHood[] });
+  return check?.sentence ?? 'No release type is given for the source.';
 }
 
 // The hoods the run simulated, when there is one, so airflow and exposure describe the same set-up.
 export function buildColumn(scenario: ScenarioLike, run: RunLike | null, figures: RunFigures | null): CompareColumn {
-  const hoods = (run && figures ? run.input.hoods : scenario.input.hoods) ?? [];
+  const setup = run && figures ? run.input : scenario.input;
+  const hoods = setup.hoods ?? [];
   return {
     id: scenario.id,
     name: scenario.name,
@@ -36,6 +46,7 @@ export function buildColumn(scenario: ScenarioLike, run: RunLike | null, figures
       faceHeight_m,
     })),
     totalAirflow_m3PerS: hoods.reduce((sum, h) => sum + h.airflow_m3PerS, 0),
+    capture: captureSentence(setup),
     run: run && figures ? { ...figures, id: run.id, createdAt: run.createdAt, outOfDate: run.outOfDate } : null,
   };
 }

@@ -18,6 +18,7 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
     'Control tier',
     'Control',
     'Hoods',
+    'Capture speed at the source (hand calculation)',
     'Total hood airflow (m³/h)',
     'Rough fan power (W)',
     ...TABLE_FRACTIONS.flatMap((f) => [
@@ -53,6 +54,7 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
       controlTierLabel(c.controlTier),
       c.controlDescription,
       c.hoods.map(hoodText).join('; '),
+      c.capture ?? '',
       airflow_m3PerH(c.totalAirflow_m3PerS),
       roughFanPower_W(c.totalAirflow_m3PerS),
       ...TABLE_FRACTIONS.flatMap((f) =>

@@ -38,6 +38,8 @@ export interface CompareColumn {
   controlDescription: string;
   hoods: HoodFigures[];
   totalAirflow_m3PerS: number;
+  /** The hand-calculated capture speed at the source against the release type's range, in words; null without a hood. */
+  capture?: string | null;
   run: (RunFigures & { id: number; createdAt: string; outOfDate: boolean }) | null;
 }
 

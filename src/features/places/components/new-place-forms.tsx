@@ -155,7 +155,7 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
           error={errors[`data.${k}`]}
         />
       ))}
-      <SelectField label="Release type" value={releaseType} onChange={(e) => setReleaseType(e.target.value)}>
+      <SelectField label="Release type for new options" value={releaseType} onChange={(e) => setReleaseType(e.target.value)}>
         {RELEASE_TYPES.map((r) => (
           <option key={r} value={r}>
             {RELEASE_TYPE_LABEL[r].description}

@@ -30,7 +30,6 @@ type Props = {
   run: ReportRun | null;
   agent?: AgentInfo;
   sizeProfileName?: string;
-  releaseType?: 'quiet' | 'low' | 'active' | 'high';
   approval: Approval | null;
   /** A picker of saved runs, shown on screen only. */
   runPicker?: ReactNode;
@@ -48,7 +47,6 @@ export function ReportDocument({
   run,
   agent,
   sizeProfileName,
-  releaseType,
   approval,
   runPicker,
   children,
@@ -105,7 +103,7 @@ export function ReportDocument({
           </div>
         </dl>
       </header>
-      <ReportInputs scenario={input} agent={agent} sizeProfileName={sizeProfileName} releaseType={releaseType} />
+      <ReportInputs scenario={input} agent={agent} sizeProfileName={sizeProfileName} />
       <ReportModel />
       <section aria-labelledby="report-results" className="report-section mt-8">
         <h2 id="report-results">3. Results</h2>

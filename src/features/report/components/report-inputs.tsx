@@ -1,10 +1,10 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { hoodRows, inputSections, type AgentInfo } from '@/features/report/lib/input-sections';
 
-type Props = { scenario: Scenario; agent?: AgentInfo; sizeProfileName?: string; releaseType?: 'quiet' | 'low' | 'active' | 'high' };
+type Props = { scenario: Scenario; agent?: AgentInfo; sizeProfileName?: string };
 
-export function ReportInputs({ scenario, agent, sizeProfileName, releaseType }: Props) {
-  const sections = inputSections(scenario, { agent, sizeProfileName, releaseType });
+export function ReportInputs({ scenario, agent, sizeProfileName }: Props) {
+  const sections = inputSections(scenario, { agent, sizeProfileName });
   const hoods = hoodRows(scenario);
   return (
     <section aria-labelledby="report-inputs" className="report-section mt-8">

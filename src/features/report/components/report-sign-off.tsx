@@ -14,7 +14,7 @@ export function ReportSignOff({ approval, scenarioId }: { approval: Approval | n
           <p>
             {ours ? 'This scenario is' : `“${approval.scenarioName}” is`} the station’s current approved control: approved by{' '}
             {approval.approvedBy} on {dateOnly(approval.approvedAt)}, review by {dateOnly(approval.reviewDate)}
-            {approval.needsReview ? ' — needs review (' + (approval.expired ? 'expired' : 'its run is out of date') + ')' : ''}.
+            {approval.needsReview ? ` — needs review (${approval.reviewReason ?? 'due for a look'})` : ''}.
             {approval.note && <> Note: “{approval.note}”</>}
           </p>
         )}

@@ -75,4 +75,15 @@ describe('report inputs', () => {
     const rows = inputSections({ ...scenario, limit: undefined }).find((s) => s.title === 'Dust agent and limit')!.rows;
     expect(rows.at(-1)).toEqual(['Exposure limit', 'none entered: concentrations only']);
   });
+
+  it('reads the release type and its jet from the source, and says whether walls collect', () => {
+    expect(find('Source and emission', 'Release type')).toBe('not given');
+    expect(find('Source and emission', 'Release jet')).toBe('none');
+    expect(find('Room', 'Walls and ceiling')).toBe('collect dust that reaches them');
+    const high = parseScenario({ ...scenario, source: { ...scenario.source, releaseType: 'high' } });
+    const rows = inputSections(high).find((x) => x.title === 'Source and emission')!.rows;
+    expect(Object.fromEntries(rows)['Release jet']).toBe(
+      "5 m/s from a 50 mm stream, aimed at the breathing zone (the release type's default)",
+    );
+  });
 });

@@ -2,8 +2,9 @@ import { countText } from '../../../../shared/format/index';
 import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index';
 import type { Hood, Scenario } from '../../../../shared/schemas/scenario';
 import type { AgentData } from '../../../../shared/schemas/workspace';
-import { cubicMetresPerSecondToPerHour, kelvinToCelsius, metresToMicrometres } from '../../../../shared/units';
-import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL, type ReleaseType } from '../../../../shared/vocabulary/index';
+import { cubicMetresPerSecondToPerHour, kelvinToCelsius, metresToMicrometres, metresToMillimetres } from '../../../../shared/units';
+import { resolveJet } from '../../../../shared/physics/release-jets';
+import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index';
 import { sig } from '@/lib/format';
 
 export type Row = [label: string, value: string];
@@ -24,6 +25,19 @@ const FRACTION = { total: 'total', inhalable: 'inhalable', thoracic: 'thoracic',
 function direction(d: Hood['direction']): string {
   if ('x' in d) return `vector (${n(d.x)}, ${n(d.y)}, ${n(d.z)})`;
   return `azimuth ${n(d.azimuth_deg)}°, tilt ${n(d.elevation_deg)}°`;
+}
+
+function releaseRows(s: Scenario): Row[] {
+  const release = s.source.releaseType;
+  const jet = resolveJet(s.source, s.worker);
+  const aim = s.source.jet?.direction ? direction(s.source.jet.direction) : 'at the breathing zone';
+  const jetText = jet
+    ? `${n(jet.speed_mPerS)} m/s from a ${n(metresToMillimetres(jet.diameter_m))} mm stream, aimed ${aim}${jet.fromDefault ? " (the release type's default)" : ''}`
+    : 'none';
+  return [
+    ['Release type', release ? RELEASE_TYPE_LABEL[release].description : 'not given'],
+    ['Release jet', jetText],
+  ];
 }
 
 function emissionRows(s: Scenario['source']): Row[] {
@@ -67,10 +81,7 @@ function agentRows(s: Scenario, agent: AgentInfo | undefined): Row[] {
 }
 
 /** The scenario as run, in reading order and plain words with units, for the report's inputs section. */
-export function inputSections(
-  s: Scenario,
-  opts: { agent?: AgentInfo; sizeProfileName?: string; releaseType?: ReleaseType } = {},
-): InputSection[] {
+export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfileName?: string } = {}): InputSection[] {
   const r = s.room;
   const volume_m3 = r.length_m * r.width_m * r.height_m;
   const eddy = r.eddyDiffusivity_m2PerS;
@@ -80,6 +91,7 @@ export function inputSections(
       rows: [
         ['Size', `${n(r.length_m)} × ${n(r.width_m)} × ${n(r.height_m)} m (${n(volume_m3)} m³)`],
         ['Air temperature', `${n(kelvinToCelsius(r.temperature_K))} °C`],
+        ['Walls and ceiling', r.wallDeposition ? 'collect dust that reaches them' : 'reflect dust'],
       ],
     },
     {
@@ -99,7 +111,7 @@ export function inputSections(
       title: 'Source and emission',
       rows: [
         ['Source position', `${at(s.source)}, ${s.source.shape}${s.source.size_m > 0 ? ` ${n(s.source.size_m)} m` : ''}`],
-        ...(opts.releaseType ? [['Release type', RELEASE_TYPE_LABEL[opts.releaseType].description] as Row] : []),
+        ...releaseRows(s),
         ...emissionRows(s.source),
       ],
     },

@@ -1,6 +1,7 @@
 import { countText, percentText, readableNumber } from '../../../../shared/format/index';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
+import { CaptureVerdict } from '@/components/capture-verdict';
 import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/vocabulary/index';
 import { BANNER_CLASSES, BannerBadge } from '@/components/banner-badge';
 import { ciText, relativeError } from '@/features/run-results/lib/format';
@@ -52,6 +53,9 @@ export function Headline({
           limit; concentrations only.
         </p>
       )}
+      <div className="mt-3">
+        <CaptureVerdict scenario={scenario} />
+      </div>
       <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Figure label={`8-h TWA, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="twa">
           {readableNumber(s.twa8h_mgPerM3)} mg/m³

@@ -1,5 +1,5 @@
 import { readableNumber, trimSig } from '../../../../shared/format/index';
-import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index';
+import { captureVelocityRange } from '../../../../shared/physics/index';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { sequentialScale } from '@/features/run-results/lib/colour-scale';
 import type { RunResult } from '../../../../shared/schemas/run-result';
@@ -7,14 +7,10 @@ import { ColourLegend } from './colour-legend';
 import { GridMap } from './grid-map';
 import { Section } from './section';
 
-function releaseType(scenario: Scenario): ReleaseCondition | undefined {
-  return scenario.hoods.find((h) => h.releaseType)?.releaseType;
-}
-
 export function MapsSection({ view, scenario }: { view: RunResult; scenario: Scenario }) {
   const dep = view.maps.deposition_mgPerM2;
   const cap = view.maps.captureVelocity_mPerS;
-  const release = releaseType(scenario);
+  const release = scenario.source.releaseType;
   const range = release ? captureVelocityRange(release) : undefined;
   const depScale = dep && sequentialScale(dep.values);
   const capScale = cap && sequentialScale(cap.values);
@@ -69,7 +65,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
               <p className="mt-1 text-xs text-muted">
                 {range
                   ? `Published capture velocity for ${release} release (${range.description.toLowerCase()}): ${range.min_mPerS}–${range.max_mPerS} m/s (ACGIH Industrial Ventilation). The source should sit where the map reaches this range.`
-                  : 'No release type is given for the hoods, so no published capture-velocity range is shown.'}
+                  : 'No release type is given for the source, so no published capture-velocity range is shown.'}
               </p>
             </>
           ) : (

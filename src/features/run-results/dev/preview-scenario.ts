@@ -4,7 +4,14 @@ import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 export const PREVIEW_SCENARIO: ScenarioInput = {
   name: 'Preview bench',
   room: { length_m: 8, width_m: 6, height_m: 3, airChanges_perH: 4, draftSpeed_mPerS: 0.1, draftDirection_deg: 0 },
-  source: { x_m: 2, y_m: 3, z_m: 0.9, emission: { kind: 'continuous', rate_mgPerMin: 5, taskDuration_min: 10 }, taskMinutesPerShift: 240 },
+  source: {
+    x_m: 2,
+    y_m: 3,
+    z_m: 0.9,
+    emission: { kind: 'continuous', rate_mgPerMin: 5, taskDuration_min: 10 },
+    taskMinutesPerShift: 240,
+    releaseType: 'active',
+  },
   dust: {
     name: 'Test quartz',
     density_kgPerM3: 2650,
@@ -21,7 +28,6 @@ export const PREVIEW_SCENARIO: ScenarioInput = {
       faceWidth_m: 0.3,
       faceHeight_m: 0.3,
       airflow_m3PerS: 0.3,
-      releaseType: 'active',
     },
   ],
   worker: { x_m: 2.5, y_m: 3, z_m: 1.5 },

@@ -1,8 +1,5 @@
-import type { ReleaseCondition } from '../../../../shared/physics/index';
-import { captureVelocityRange } from '../../../../shared/physics/index';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { Button } from '@/components/ui/button';
-import { SelectField } from '@/components/ui/field';
 import { newHood } from '@/features/scenario-editor/lib/new-hood';
 import { withHood, withoutHood } from '@/features/scenario-editor/lib/update';
 import { HoodFields } from './hood-fields';
@@ -11,35 +8,16 @@ import { Section, type SectionProps } from './section';
 
 // The schema caps a scenario at eight hoods; more is a different kind of study.
 const MAX_HOODS = 8;
-const RELEASES: ReleaseCondition[] = ['quiet', 'low', 'active', 'high'];
 
-type Props = SectionProps<ScenarioInput> & {
-  releaseType: ReleaseCondition;
-  onReleaseTypeChange?: (r: ReleaseCondition) => void;
-};
-
-export function ControlsSection({ value, onChange, errors, releaseType, onReleaseTypeChange }: Props) {
+export function ControlsSection({ value, onChange, errors }: SectionProps<ScenarioInput>) {
   const hoods = value.hoods ?? [];
-  const range = captureVelocityRange(releaseType);
+  const releaseType = value.source.releaseType;
 
   return (
-    <Section legend="Controls" intro="Capturing hoods and booths. With none, the run shows the exposure the controls have to fix.">
-      <SelectField
-        label="How the dust is released"
-        value={releaseType}
-        disabled={!onReleaseTypeChange}
-        onChange={(e) => onReleaseTypeChange?.(e.target.value as ReleaseCondition)}
-      >
-        {RELEASES.map((r) => {
-          const c = captureVelocityRange(r);
-          return (
-            <option key={r} value={r}>
-              {c.description} ({c.min_mPerS}–{c.max_mPerS} m/s)
-            </option>
-          );
-        })}
-      </SelectField>
-      <p className="-mt-4 text-xs text-muted">For example {range.examples.join(', ')}.</p>
+    <Section
+      legend="Controls"
+      intro="Capturing hoods and booths. With none, the run shows the exposure the controls have to fix. Each hood is compared with the capture range of the release type set under Source and emission."
+    >
       {hoods.length === 0 && <p className="text-sm text-muted">No hoods yet.</p>}
       {hoods.map((hood, i) => (
         <div key={i} className="flex flex-col gap-4 border-t border-line pt-5">

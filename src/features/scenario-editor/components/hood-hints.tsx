@@ -49,11 +49,11 @@ export function HoodHints({
   hood: HoodInput;
   index: number;
   source: Point;
-  releaseType: ReleaseCondition;
+  releaseType: ReleaseCondition | undefined;
 }) {
   const h = hoodHint(hood, source, releaseType);
   if (!h) return <p className="text-sm text-muted">Hints appear once the face size and airflow are valid.</p>;
-  const range = `${formatSig(h.range.min_mPerS, 2)}–${formatSig(h.range.max_mPerS, 2)} m/s`;
+  const range = h.range ? `${formatSig(h.range.min_mPerS, 2)}–${formatSig(h.range.max_mPerS, 2)} m/s` : '';
   const verdict = h.verdict && VERDICT[h.verdict];
   const notes = warnings(h);
 
@@ -73,7 +73,13 @@ export function HoodHints({
           </span>
         </p>
       )}
-      {h.verdict === 'below' && h.airflowForRange_m3PerS !== null && (
+      {h.centerline_mPerS !== null && !h.range && (
+        <p data-testid={`hood-verdict-${index}`}>
+          ≈ {mps(h.centerline_mPerS)} at the source on the centre line. Say how the dust is released (under Source and emission) to compare
+          it with a capture range.
+        </p>
+      )}
+      {h.verdict === 'below' && h.range && h.airflowForRange_m3PerS !== null && (
         <p>
           About {formatSig(cubicMetresPerSecondToPerHour(h.airflowForRange_m3PerS), 2)} m³/h would reach {formatSig(h.range.min_mPerS, 2)}{' '}
           m/s at the source, or move the hood closer.

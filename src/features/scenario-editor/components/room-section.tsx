@@ -99,6 +99,15 @@ export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioIn
           </FieldGrid>
         )}
       </div>
+      <label className="inline-flex items-center gap-2 text-sm font-semibold">
+        <input
+          type="checkbox"
+          className="h-4 w-4 accent-accent"
+          checked={room.wallDeposition ?? true}
+          onChange={(e) => set({ wallDeposition: e.target.checked })}
+        />
+        Walls and ceiling collect dust that reaches them (untick to let them reflect it)
+      </label>
     </Section>
   );
 }

@@ -1,5 +1,4 @@
 import { useMemo } from 'react';
-import type { ReleaseCondition } from '../../../../shared/physics/index';
 import { scenarioSchema, type ScenarioInput } from '../../../../shared/schemas/scenario';
 import type { AgentOption } from '@/features/scenario-editor/lib/apply-agent';
 import { issuesByPath } from '@/features/scenario-editor/lib/field-errors';
@@ -18,8 +17,6 @@ import { WorkerSection } from './worker-section';
 export type ScenarioEditorProps = {
   value: ScenarioInput;
   onChange: (next: ScenarioInput) => void;
-  releaseType: ReleaseCondition;
-  onReleaseTypeChange?: (r: ReleaseCondition) => void;
   agents: AgentOption[];
   agentId: number | null;
   onAgentChange: (id: number | null) => void;
@@ -72,7 +69,7 @@ export function ScenarioEditor(props: ScenarioEditorProps) {
             sizeProfileId={props.sizeProfileId}
             onSizeProfileChange={props.onSizeProfileChange}
           />
-          <ControlsSection {...section} releaseType={props.releaseType} onReleaseTypeChange={props.onReleaseTypeChange} />
+          <ControlsSection {...section} />
           <WorkerSection {...section} />
           <RunSection {...section} />
         </fieldset>

@@ -5,6 +5,7 @@ import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withSource } from '@/features/scenario-editor/lib/update';
 import { EmissionFields } from './emission-fields';
 import { NumberField } from './number-field';
+import { ReleaseFields } from './release-fields';
 import { FieldGrid, Section, Subheading, type SectionProps } from './section';
 
 type Shape = NonNullable<ScenarioInput['source']['shape']>;
@@ -45,6 +46,8 @@ export function SourceSection({ value, onChange, errors }: SectionProps<Scenario
           />
         )}
       </FieldGrid>
+      <Subheading>Release</Subheading>
+      <ReleaseFields value={value} onChange={onChange} errors={errors} />
       <Subheading>Emission</Subheading>
       <EmissionFields value={value} onChange={onChange} errors={errors} />
     </Section>

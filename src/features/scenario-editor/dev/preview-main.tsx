@@ -3,13 +3,12 @@ import { createRoot } from 'react-dom/client';
 import '@fontsource/manrope/400.css';
 import '@fontsource/manrope/600.css';
 import '../../../styles.css';
-import { ScenarioEditor, type ScenarioEditorProps } from '@/features/scenario-editor/components/scenario-editor';
+import { ScenarioEditor } from '@/features/scenario-editor/components/scenario-editor';
 import { SAMPLE_AGENTS, SAMPLE_PROFILES, sampleScenario } from './sample-data';
 
 // Dev-only: holds the state a route module would hold, so the editor can be seen and driven by the browser test.
 function Preview() {
   const [value, setValue] = useState(sampleScenario);
-  const [releaseType, setReleaseType] = useState<ScenarioEditorProps['releaseType']>('low');
   const [agentId, setAgentId] = useState<number | null>(null);
   const [sizeProfileId, setSizeProfileId] = useState<number | null>(null);
   const readOnly = new URLSearchParams(window.location.search).has('readonly');
@@ -19,8 +18,6 @@ function Preview() {
       <ScenarioEditor
         value={value}
         onChange={setValue}
-        releaseType={releaseType}
-        onReleaseTypeChange={setReleaseType}
         agents={SAMPLE_AGENTS}
         agentId={agentId}
         onAgentChange={setAgentId}

@@ -65,6 +65,7 @@ export function sampleScenario(): ScenarioInput {
   });
   return {
     ...base,
+    source: { ...base.source, releaseType: 'low' },
     hoods: [
       {
         kind: 'flanged',

@@ -30,4 +30,9 @@ describe('defaultScenario', () => {
     expect(hood).toMatchObject({ x_m: 1.7, y_m: 2, z_m: 0.9, direction: { azimuth_deg: 0 } });
     expect(scenarioSchema.safeParse({ ...s, hoods: [hood] }).success).toBe(true);
   });
+
+  it("takes the workstation's release type as the source's, and leaves it unset without one", () => {
+    expect(defaultScenario({ ...args, releaseType: 'high' }).source.releaseType).toBe('high');
+    expect(defaultScenario(args).source.releaseType).toBeUndefined();
+  });
 });

@@ -1,4 +1,4 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import type { ReleaseType, ScenarioInput } from '../../../../shared/schemas/scenario';
 import { micrometresToMetres } from '../../../../shared/units';
 
 type Point = { x_m: number; y_m: number; z_m: number };
@@ -8,10 +8,11 @@ export interface DefaultScenarioArgs {
     Required<Pick<ScenarioInput['room'], 'airChanges_perH' | 'draftSpeed_mPerS' | 'draftDirection_deg' | 'temperature_K'>>;
   source: Point;
   worker: Point;
+  releaseType?: ReleaseType;
 }
 
 // A starting point for a new option: no controls, so the first run shows what the hood has to fix.
-export function defaultScenario({ room, source, worker }: DefaultScenarioArgs): ScenarioInput {
+export function defaultScenario({ room, source, worker, releaseType }: DefaultScenarioArgs): ScenarioInput {
   return {
     room: { ...room },
     source: {
@@ -21,6 +22,7 @@ export function defaultScenario({ room, source, worker }: DefaultScenarioArgs): 
       // [P] common practice: a few mg/min is a typical light manual task such as scooping powder.
       emission: { kind: 'continuous', rate_mgPerMin: 5, taskDuration_min: 30 },
       background_mgPerM3: 0,
+      ...(releaseType ? { releaseType } : {}),
     },
     dust: {
       density_kgPerM3: 2650,

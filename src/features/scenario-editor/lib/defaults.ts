@@ -1,6 +1,6 @@
-import { scenarioSchema } from '../../../../shared/schemas/scenario';
+import { scenarioFields } from '../../../../shared/schemas/scenario';
 
-const shape = scenarioSchema.shape;
+const shape = scenarioFields;
 const run = shape.run.unwrap().shape;
 
 // Read from the schema itself so what the form shows for a blank field is what the server will store.

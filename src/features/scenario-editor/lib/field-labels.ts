@@ -1,7 +1,8 @@
 // Paths that have an input of their own in the form; anything else goes in the summary.
 const AT_FIELD = [
   /^room\.(length_m|width_m|height_m|airChanges_perH|draftSpeed_mPerS|draftDirection_deg|temperature_K|eddyDiffusivity_m2PerS)$/,
-  /^source\.(x_m|y_m|z_m|shape|size_m|taskMinutesPerShift|background_mgPerM3)$/,
+  /^source\.(x_m|y_m|z_m|shape|size_m|taskMinutesPerShift|background_mgPerM3|releaseType)$/,
+  /^source\.jet\.(speed_mPerS|diameter_m|direction|direction\.azimuth_deg|direction\.elevation_deg)$/,
   /^source\.emission\.(rate_mgPerMin|massPerEvent_mg|eventsPerHour|taskDuration_min)$/,
   /^dust\.(density_kgPerM3|shapeFactor)$/,
   /^dust\.sizeProfile\./,

@@ -25,7 +25,8 @@ export interface HoodHint {
   centerline_mPerS: number | null;
   // Airflow that would bring the centre-line velocity at the source to the low end of the range.
   airflowForRange_m3PerS: number | null;
-  range: CaptureVelocityRange;
+  /** Null while the source has no release type: there is no range to compare with. */
+  range: CaptureVelocityRange | null;
   verdict: CaptureVerdict | null;
   faceVelocity_mPerS: number;
   rule: ValidityRule;
@@ -48,7 +49,11 @@ export function equivalentDiameter_m(faceArea_m2: number): number {
 const usable = (...values: number[]) => values.every(Number.isFinite);
 
 // Null while the hood is half-entered: the physics functions rightly refuse a zero face or negative airflow.
-export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_m: number }, release: ReleaseCondition): HoodHint | null {
+export function hoodHint(
+  hood: HoodInput,
+  source: { x_m: number; y_m: number; z_m: number },
+  release: ReleaseCondition | undefined,
+): HoodHint | null {
   if (!usable(hood.x_m, hood.y_m, hood.z_m, source.x_m, source.y_m, source.z_m, hood.airflow_m3PerS)) return null;
   if (!(hood.faceWidth_m > 0 && hood.faceHeight_m > 0 && hood.airflow_m3PerS >= 0)) return null;
   const n = hoodAxis(hood.direction);
@@ -57,7 +62,7 @@ export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_
   const offAxis_m = Math.sqrt(Math.max(0, r.x ** 2 + r.y ** 2 + r.z ** 2 - axial_m ** 2));
   const faceArea_m2 = hood.faceWidth_m * hood.faceHeight_m;
   const behind = axial_m < 0;
-  const range = captureVelocityRange(release);
+  const range = release ? captureVelocityRange(release) : null;
   // The engine treats faceWidth as the slot's length, so the same is used here.
   const geometry = { kind: hood.kind, faceArea_m2, slotLength_m: hood.faceWidth_m };
   const centerline_mPerS = behind ? null : hoodCenterlineVelocity({ ...geometry, airflow_m3PerS: hood.airflow_m3PerS }, axial_m);
@@ -68,9 +73,9 @@ export function hoodHint(hood: HoodInput, source: { x_m: number; y_m: number; z_
     offAxis_m,
     behind,
     centerline_mPerS,
-    airflowForRange_m3PerS: behind ? null : hoodRequiredAirflow(geometry, range.min_mPerS, axial_m),
+    airflowForRange_m3PerS: behind || !range ? null : hoodRequiredAirflow(geometry, range.min_mPerS, axial_m),
     range,
-    verdict: centerline_mPerS === null ? null : captureVerdict(centerline_mPerS, range),
+    verdict: centerline_mPerS === null || !range ? null : captureVerdict(centerline_mPerS, range),
     faceVelocity_mPerS: hood.airflow_m3PerS / faceArea_m2,
     rule,
     validUpTo_m,

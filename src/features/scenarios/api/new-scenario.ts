@@ -1,6 +1,7 @@
 import type { WorkstationDetail } from '../../../../shared/schemas/workspace-views';
 
-// The new option starts from the workstation as entered: its room, source and worker positions.
+// The new option starts from the workstation as entered: its room, source and worker positions, and its
+// release type as the source's (the option's own from then on; the workstation's is only this default).
 export function workstationGeometry(ws: WorkstationDetail) {
   const r = ws.room.data;
   return {
@@ -15,5 +16,6 @@ export function workstationGeometry(ws: WorkstationDetail) {
     },
     source: ws.data.source,
     worker: { x_m: ws.data.worker.x_m, y_m: ws.data.worker.y_m, z_m: ws.data.worker.z_m },
+    releaseType: ws.data.releaseType,
   };
 }

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import type { ReleaseCondition } from '../../../../shared/physics/index';
+import { captureCheck } from '../../../../shared/physics/capture-verdict';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { Cautions } from '@/components/cautions';
 import { ErrorMessage } from '@/components/ui/status';
@@ -44,7 +45,16 @@ export function SweepPanel({ scenario, release, onSavePoint }: Props) {
   const rows: TableRow[] = request
     ? results.map((result, i) => {
         const s = saved[i];
-        return { index: i, value: request.points[i].value, result, saved: s && s !== 'saving' ? s : undefined, saving: s === 'saving' };
+        const point = request.points[i].scenario;
+        const capture = captureCheck({ ...point, source: { ...point.source, releaseType: point.source.releaseType ?? release } })?.sentence;
+        return {
+          index: i,
+          value: request.points[i].value,
+          result,
+          capture,
+          saved: s && s !== 'saving' ? s : undefined,
+          saving: s === 'saving',
+        };
       })
     : [];
   const targetPercent = (request?.targetFraction ?? 0.5) * 100;
@@ -94,7 +104,7 @@ export function SweepPanel({ scenario, release, onSavePoint }: Props) {
           targetPercent={targetPercent}
           hood={scenario.hoods[request.spec.hoodIndex]}
           distance_m={sourceDistance_m(scenario, request.spec.hoodIndex)}
-          release={scenario.hoods[request.spec.hoodIndex].releaseType ?? release}
+          release={release}
         />
       )}
       {request && rows.length > 0 && (

@@ -10,7 +10,14 @@ import type { PointResult } from '@/features/sweep/lib/point-result';
 import { formatValue, PARAMETER } from '@/features/sweep/lib/parameter-format';
 import type { SweepParameter } from '@/features/sweep/lib/sweep-points';
 
-export type TableRow = { index: number; value: number; result: PointResult; saved?: { id: number; name: string }; saving?: boolean };
+export type TableRow = {
+  index: number;
+  value: number;
+  result: PointResult;
+  capture?: string;
+  saved?: { id: number; name: string };
+  saving?: boolean;
+};
 
 export function sweepCsv(rows: TableRow[], parameter: SweepParameter): string {
   const p = PARAMETER[parameter];
@@ -94,6 +101,11 @@ export function SweepTable({
       header: 'Banner',
       render: (r) => <BannerBadge banner={r.result.banner} />,
       sortValue: (r) => ['clear', 'watch', 'act'].indexOf(r.result.banner),
+    },
+    {
+      key: 'capture',
+      header: 'Capture speed at the source (hand calculation)',
+      render: (r) => <span className="text-xs">{r.capture ?? '—'}</span>,
     },
     {
       key: 'save',

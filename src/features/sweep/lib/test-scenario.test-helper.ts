@@ -13,6 +13,7 @@ export const stoneBench = () =>
       emission: { kind: 'continuous', rate_mgPerMin: 20, taskDuration_min: 60 },
       taskMinutesPerShift: 240,
       background_mgPerM3: 0.002,
+      releaseType: 'high',
     },
     dust: {
       name: 'Crystalline silica',
@@ -33,7 +34,6 @@ export const stoneBench = () =>
         faceWidth_m: 0.35,
         faceHeight_m: 0.25,
         airflow_m3PerS: 0.35,
-        releaseType: 'high',
       },
     ],
     run: { particles: 40000, seed: 20240601, batches: 10 },

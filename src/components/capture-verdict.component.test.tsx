@@ -1,0 +1,25 @@
+import { render, screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import demoText from '../../shared/demo-scenarios/default.json?raw';
+import { parseScenario } from '../../shared/schemas/scenario';
+import { CaptureVerdict } from './capture-verdict';
+
+const demo = () => parseScenario(JSON.parse(demoText));
+
+describe('capture verdict beside a result', () => {
+  it("says the stone bench hood gives 0.47 m/s at the source against grinding's 2.5–10 m/s (issue 14's hand calculation)", () => {
+    render(<CaptureVerdict scenario={demo()} />);
+    expect(screen.getByTestId('capture-verdict').textContent).toMatch(
+      /^▼▼0\.47 m\/s at the source; a high-energy release, such as grinding, needs 2\.5–10 m\/s \(less than half the low end\)\./,
+    );
+  });
+
+  it('says why there is no comparison when the source has no release type, and nothing without a hood', () => {
+    const s = demo();
+    const { unmount } = render(<CaptureVerdict scenario={{ ...s, source: { ...s.source, releaseType: undefined } }} />);
+    expect(screen.getByTestId('capture-verdict').textContent).toMatch(/No release type is given for the source/);
+    unmount();
+    render(<CaptureVerdict scenario={{ ...s, hoods: [] }} />);
+    expect(screen.queryByTestId('capture-verdict')).toBeNull();
+  });
+});
