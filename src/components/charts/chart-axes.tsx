@@ -9,49 +9,29 @@ export type AxisSpec = {
   format?: (value: number) => string;
 };
 
+export type AxesSpec = { x: AxisScale; y: AxisScale; left: AxisSpec; bottom: AxisSpec };
+
 // visx passes (value, index, ticks); the wrapper keeps a formatter's optional second argument from receiving the index.
 const formatter = (format: AxisSpec['format']) => format && ((v: unknown) => format(Number(v)));
 
-export function ChartAxes({
-  x,
-  y,
-  innerH,
-  left,
-  bottom,
-}: {
-  x: AxisScale;
-  y: AxisScale;
-  innerH: number;
-  left: AxisSpec;
-  bottom: AxisSpec;
-}) {
+// Both axes look alike; only where the tick labels sit differs.
+const look = (spec: AxisSpec) =>
+  ({
+    tickValues: spec.tickValues,
+    numTicks: spec.numTicks,
+    tickFormat: formatter(spec.format),
+    stroke: MUTED,
+    tickStroke: MUTED,
+    label: spec.label,
+    labelProps: { ...axisLabel, textAnchor: 'middle' },
+    labelOffset: spec.labelOffset,
+  }) as const;
+
+export function ChartAxes({ x, y, left, bottom, innerH }: AxesSpec & { innerH: number }) {
   return (
     <>
-      <AxisLeft
-        scale={y}
-        tickValues={left.tickValues}
-        numTicks={left.numTicks}
-        tickFormat={formatter(left.format)}
-        stroke={MUTED}
-        tickStroke={MUTED}
-        tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
-        label={left.label}
-        labelProps={{ ...axisLabel, textAnchor: 'middle' }}
-        labelOffset={left.labelOffset}
-      />
-      <AxisBottom
-        top={innerH}
-        scale={x}
-        tickValues={bottom.tickValues}
-        numTicks={bottom.numTicks}
-        tickFormat={formatter(bottom.format)}
-        stroke={MUTED}
-        tickStroke={MUTED}
-        tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
-        label={bottom.label}
-        labelProps={{ ...axisLabel, textAnchor: 'middle' }}
-        labelOffset={bottom.labelOffset}
-      />
+      <AxisLeft scale={y} {...look(left)} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })} />
+      <AxisBottom top={innerH} scale={x} {...look(bottom)} tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })} />
     </>
   );
 }

@@ -6,7 +6,6 @@ import { decadeTicks, plainTick } from '@/features/calculators/lib/chart-ticks';
 import { plainNumber } from '@/features/calculators/lib/format';
 import type { HoodFigures } from '@/features/calculators/lib/hood-figures';
 import { ACCENT, CLEAR_SOFT, INK, LINE, PAPER_DEEP, WATCH, halo } from '@/components/chart-style';
-import { ChartAxes } from '@/components/charts/chart-axes';
 import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 import { LegendKey } from '@/components/charts/legend-key';
 
@@ -32,6 +31,12 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
     <ChartFigure
       box={BOX}
       label={`Centre-line velocity from the face to ${readableNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}
+      axes={{
+        x,
+        y,
+        left: { label: 'Centre-line velocity (m/s, log scale)', labelOffset: 40, tickValues: yTicks, format: plainTick },
+        bottom: { label: 'Distance from the face along the centre line (m)', labelOffset: 18, numTicks: 8, format: plainTick },
+      }}
       caption={
         <figcaption className="mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
           <span className="font-semibold">Centre-line velocity against distance</span>
@@ -68,13 +73,6 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
       <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
         {readableNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
       </text>
-      <ChartAxes
-        x={x}
-        y={y}
-        innerH={innerH}
-        left={{ label: 'Centre-line velocity (m/s, log scale)', labelOffset: 40, tickValues: yTicks, format: plainTick }}
-        bottom={{ label: 'Distance from the face along the centre line (m)', labelOffset: 18, numTicks: 8, format: plainTick }}
-      />
     </ChartFigure>
   );
 }

@@ -7,7 +7,6 @@ import { decadeTicks, diameterTick, logSpace, powerTick } from '@/features/calcu
 import { displayDiameter, plainNumber } from '@/features/calculators/lib/format';
 import { particleProperties, type ParticleMedium } from '@/features/calculators/lib/particle-properties';
 import { ACCENT, INK, LINE, MUTED, WATCH, halo } from '@/components/chart-style';
-import { ChartAxes } from '@/components/charts/chart-axes';
 import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 import { LegendKey } from '@/components/charts/legend-key';
 
@@ -49,6 +48,12 @@ export default function ParticleChart({
         </figcaption>
       }
       label={`Log–log chart of settling distance and rms Brownian displacement over ${over} from 1 nm to 100 µm${crossover_m ? `; they cross at ${displayDiameter(crossover_m)}` : ''}`}
+      axes={{
+        x,
+        y,
+        left: { label: `Distance over ${over} (m)`, labelOffset: 46, tickValues: yTicks, format: powerTick },
+        bottom: { label: 'Physical particle diameter (nm, µm; log scale)', labelOffset: 18, tickValues: xTicks, format: diameterTick },
+      }}
     >
       <GridRows scale={y} width={innerW} tickValues={yTicks} stroke={LINE} strokeOpacity={0.6} />
       <GridColumns scale={x} height={innerH} tickValues={xTicks} stroke={LINE} strokeOpacity={0.6} />
@@ -76,13 +81,6 @@ export default function ParticleChart({
           </text>
         </g>
       )}
-      <ChartAxes
-        x={x}
-        y={y}
-        innerH={innerH}
-        left={{ label: `Distance over ${over} (m)`, labelOffset: 46, tickValues: yTicks, format: powerTick }}
-        bottom={{ label: 'Physical particle diameter (nm, µm; log scale)', labelOffset: 18, tickValues: xTicks, format: diameterTick }}
-      />
     </ChartFigure>
   );
 }

@@ -6,10 +6,10 @@ import { useState } from 'react';
 import type { Fraction } from '../../../../shared/vocabulary/fractions';
 import { plain } from '@/features/compare/lib/labels';
 import { type CompareColumn } from '@/features/compare/lib/types';
-import { ACT, LINE } from '@/components/chart-style';
-import { ChartAxes } from '@/components/charts/chart-axes';
+import { LINE } from '@/components/chart-style';
 import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 import { LegendKey } from '@/components/charts/legend-key';
+import { ReferenceLine } from '@/components/charts/reference-line';
 import { chartSeries, limitsFor, SERIES_LOOK } from './chart-series';
 
 const BOX = { width: 900, height: 380, margin: { top: 16, right: 24, bottom: 52, left: 84 } };
@@ -68,6 +68,17 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
         </figcaption>
       }
       label={`Breathing-zone ${word} concentration over time for ${series.map((s) => s.name).join(', ')}`}
+      axes={{
+        x,
+        y,
+        left: {
+          label: `${FRACTION_LABEL[fraction]} concentration (mg/m³)`,
+          labelOffset: 56,
+          numTicks: log ? LOG_DECADES : 6,
+          format: (v) => plain(v, 2),
+        },
+        bottom: { label: 'Time since the task started (min)', labelOffset: 16, numTicks: 10, format: plain },
+      }}
       footer={
         log && (
           <p className="mt-1 text-xs text-muted">
@@ -94,29 +105,8 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
         );
       })}
       {limits.map((l) => (
-        <line
-          key={l.value_mgPerM3}
-          x1={0}
-          x2={INNER_W}
-          y1={yOf(l.value_mgPerM3)}
-          y2={yOf(l.value_mgPerM3)}
-          stroke={ACT}
-          strokeWidth={1.5}
-          strokeDasharray="7 5"
-        />
+        <ReferenceLine key={l.value_mgPerM3} y={yOf(l.value_mgPerM3)} width={INNER_W} />
       ))}
-      <ChartAxes
-        x={x}
-        y={y}
-        innerH={INNER_H}
-        left={{
-          label: `${FRACTION_LABEL[fraction]} concentration (mg/m³)`,
-          labelOffset: 56,
-          numTicks: log ? LOG_DECADES : 6,
-          format: (v) => plain(v, 2),
-        }}
-        bottom={{ label: 'Time since the task started (min)', labelOffset: 16, numTicks: 10, format: plain }}
-      />
     </ChartFigure>
   );
 }

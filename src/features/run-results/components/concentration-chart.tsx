@@ -5,10 +5,10 @@ import { Area, LinePath } from '@visx/shape';
 import type { Fraction } from '../../../../shared/vocabulary/fractions';
 import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import type { RunResult } from '../../../../shared/schemas/run-result';
-import { ACCENT, ACCENT_SOFT, ACT, LINE } from '@/components/chart-style';
-import { ChartAxes } from '@/components/charts/chart-axes';
+import { ACCENT, ACCENT_SOFT, LINE } from '@/components/chart-style';
 import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 import { LegendKey } from '@/components/charts/legend-key';
+import { ReferenceLine } from '@/components/charts/reference-line';
 
 const BOX = { width: 760, height: 340, margin: { top: 20, right: 24, bottom: 52, left: 78 } };
 // A limit far above the curve would flatten it to the axis; past this ratio it is stated in words instead.
@@ -42,6 +42,12 @@ export function ConcentrationChart({ view, fraction }: { view: RunResult; fracti
         </figcaption>
       }
       label={`Breathing-zone ${name} concentration over ${readableNumber(tMax)} min, peaking at ${readableNumber(Math.max(...points.map((p) => p.mean)))} mg/m³`}
+      axes={{
+        x,
+        y,
+        left: { label: 'Concentration (mg/m³)', labelOffset: 50, numTicks: 6, format: tick },
+        bottom: { label: 'Time since the task started (min)', labelOffset: 16, numTicks: 10, format: tick },
+      }}
       footer={
         <>
           {limit !== undefined && !showLimit && (
@@ -69,25 +75,7 @@ export function ConcentrationChart({ view, fraction }: { view: RunResult; fracti
         data-testid="ci-band"
       />
       <LinePath data={points} x={(p) => x(p.t)} y={(p) => y(p.mean)} stroke={ACCENT} strokeWidth={2} />
-      {showLimit && (
-        <line
-          x1={0}
-          x2={innerW}
-          y1={y(limit)}
-          y2={y(limit)}
-          stroke={ACT}
-          strokeWidth={1.5}
-          strokeDasharray="7 5"
-          data-testid="limit-line"
-        />
-      )}
-      <ChartAxes
-        x={x}
-        y={y}
-        innerH={innerH}
-        left={{ label: 'Concentration (mg/m³)', labelOffset: 50, numTicks: 6, format: tick }}
-        bottom={{ label: 'Time since the task started (min)', labelOffset: 16, numTicks: 10, format: tick }}
-      />
+      {showLimit && <ReferenceLine y={y(limit)} width={innerW} testId="limit-line" />}
     </ChartFigure>
   );
 }

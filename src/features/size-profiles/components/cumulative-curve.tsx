@@ -4,7 +4,6 @@ import { LinePath } from '@visx/shape';
 import type { MassBins } from '../../../../shared/size-profiles/index';
 import { cumulativePoints, decadeTicks_um } from '@/features/size-profiles/lib/chart-data';
 import { ACCENT, CHART, LINE, MUTED, diameterAxis } from './chart-style';
-import { ChartAxes } from '@/components/charts/chart-axes';
 import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 
 export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: number | null }) {
@@ -21,6 +20,12 @@ export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: numb
       box={CHART}
       caption={<figcaption className="mb-2 text-sm font-semibold">Cumulative mass below each size</figcaption>}
       label="Cumulative mass fraction in percent against aerodynamic diameter on a log axis"
+      axes={{
+        x,
+        y,
+        left: { label: 'Cumulative mass (%)', labelOffset: 36, tickValues: [0, 25, 50, 75, 100] },
+        bottom: diameterAxis(ticks),
+      }}
     >
       <GridRows scale={y} width={innerW} tickValues={[0, 25, 50, 75, 100]} stroke={LINE} strokeOpacity={0.6} />
       <GridColumns scale={x} height={innerH} tickValues={ticks} stroke={LINE} strokeOpacity={0.4} />
@@ -36,13 +41,6 @@ export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: numb
           </text>
         </g>
       )}
-      <ChartAxes
-        x={x}
-        y={y}
-        innerH={innerH}
-        left={{ label: 'Cumulative mass (%)', labelOffset: 36, tickValues: [0, 25, 50, 75, 100] }}
-        bottom={diameterAxis(ticks)}
-      />
     </ChartFigure>
   );
 }

@@ -4,7 +4,6 @@ import type { MassBins } from '../../../../shared/size-profiles/index';
 import { formatSig } from '../../../../shared/format/index';
 import { decadeTicks_um, histogramBars } from '@/features/size-profiles/lib/chart-data';
 import { ACCENT, ACCENT_SOFT, CHART, LINE, diameterAxis } from './chart-style';
-import { ChartAxes } from '@/components/charts/chart-axes';
 import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 
 export function SizeHistogram({ bins }: { bins: MassBins }) {
@@ -19,6 +18,12 @@ export function SizeHistogram({ bins }: { bins: MassBins }) {
       box={CHART}
       caption={<figcaption className="mb-2 text-sm font-semibold">Mass distribution (histogram, per unit of log width)</figcaption>}
       label={`Histogram of mass fraction per log width over ${bars.length} bins from ${formatSig(min_um, 3)} to ${formatSig(max_um, 3)} µm`}
+      axes={{
+        x,
+        y,
+        left: { label: 'dM/dlog d (mass fraction per decade)', labelOffset: 36, numTicks: 5 },
+        bottom: diameterAxis(decadeTicks_um(min_um, max_um)),
+      }}
     >
       <GridRows scale={y} width={innerW} stroke={LINE} strokeOpacity={0.6} numTicks={5} />
       {bars.map((b, i) => (
@@ -35,13 +40,6 @@ export function SizeHistogram({ bins }: { bins: MassBins }) {
           <title>{`${formatSig(b.lower_um, 3)}–${formatSig(b.upper_um, 3)} µm: ${formatSig(b.perLogWidth, 3)} per log width`}</title>
         </rect>
       ))}
-      <ChartAxes
-        x={x}
-        y={y}
-        innerH={innerH}
-        left={{ label: 'dM/dlog d (mass fraction per decade)', labelOffset: 36, numTicks: 5 }}
-        bottom={diameterAxis(decadeTicks_um(min_um, max_um))}
-      />
     </ChartFigure>
   );
 }
