@@ -3,14 +3,12 @@ import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
 import { lazy, Suspense, useMemo, useState } from 'react';
 import { airflowToPerSecond, hoodCalculatorSchema } from '../../../../shared/schemas/calculators';
 import { cubicMetresPerSecondToPerHour } from '../../../../shared/units';
-import { Cautions } from '@/components/cautions';
-import { Page } from '@/components/ui/page';
 import { Spinner } from '@/components/ui/status';
 import { fieldErrors } from '@/lib/form-errors';
 import { hoodFigures } from '@/features/calculators/lib/hood-figures';
 import { HOOD_DEFAULTS, HoodForm, type HoodFormState } from './hood-form';
 import { HoodResultsPanel } from './hood-results-panel';
-import { InvalidInputs } from './result-item';
+import { CalculatorLayout } from './calculator-layout';
 
 const HoodChart = lazy(() => import('./hood-chart'));
 
@@ -44,26 +42,21 @@ export function HoodCalculatorPage() {
   const figures = useMemo(() => (parsed.success ? hoodFigures(parsed.data) : null), [parsed]);
 
   return (
-    <Page
+    <CalculatorLayout
       title="Hood calculator"
       intro="Centre-line air velocity in front of a capturing hood, the airflow it needs for a capture velocity, and the duct to carry it. Results update as you type."
-    >
-      <div className="grid gap-6 lg:grid-cols-[20rem_minmax(0,1fr)] lg:items-start">
-        <HoodForm form={form} errors={fieldErrors(parsed)} onChange={(patch) => setForm((f) => withUnitChange(f, patch))} />
-        <div className="min-w-0 space-y-6">
-          {figures && parsed.success ? (
-            <>
-              <HoodResultsPanel f={figures} distance_m={parsed.data.distance_m} basis={parsed.data.basis} />
-              <Suspense fallback={<Spinner label="Drawing the chart…" />}>
-                <HoodChart f={figures} distance_m={parsed.data.distance_m} />
-              </Suspense>
-            </>
-          ) : (
-            <InvalidInputs />
-          )}
-        </div>
-      </div>
-      <Cautions />
-    </Page>
+      formColumn="wide"
+      form={<HoodForm form={form} errors={fieldErrors(parsed)} onChange={(patch) => setForm((f) => withUnitChange(f, patch))} />}
+      results={
+        figures && parsed.success ? (
+          <>
+            <HoodResultsPanel f={figures} distance_m={parsed.data.distance_m} basis={parsed.data.basis} />
+            <Suspense fallback={<Spinner label="Drawing the chart…" />}>
+              <HoodChart f={figures} distance_m={parsed.data.distance_m} />
+            </Suspense>
+          </>
+        ) : null
+      }
+    />
   );
 }

@@ -1,17 +1,15 @@
 import { readableNumber } from '../../../../shared/format/index';
-import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
-import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { LinePath } from '@visx/shape';
 import { decadeTicks, plainTick } from '@/features/calculators/lib/chart-ticks';
 import { plainNumber } from '@/features/calculators/lib/format';
 import type { HoodFigures } from '@/features/calculators/lib/hood-figures';
-import { ACCENT, CLEAR_SOFT, INK, LINE, MUTED, PAPER_DEEP, WATCH, axisLabel, halo, tickLabel } from '@/components/chart-style';
+import { ACCENT, CLEAR_SOFT, INK, LINE, PAPER_DEEP, WATCH, halo } from '@/components/chart-style';
+import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
+import { LegendKey } from '@/components/charts/legend-key';
 
-const WIDTH = 760;
-const HEIGHT = 360;
-const MARGIN = { top: 24, right: 24, bottom: 56, left: 70 };
+const BOX = { width: 760, height: 360, margin: { top: 24, right: 24, bottom: 56, left: 70 } };
 const SAMPLES = 160;
 
 // Velocities span decades between face and far field, so the velocity axis is logarithmic; distance stays linear.
@@ -22,8 +20,7 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
   const velocities = [...points.map((p) => p.v), f.range.min_mPerS, f.range.max_mPerS];
   const yMin = 10 ** Math.floor(Math.log10(Math.min(...velocities)));
   const yMax = 10 ** Math.ceil(Math.log10(Math.max(...velocities)));
-  const innerW = WIDTH - MARGIN.left - MARGIN.right;
-  const innerH = HEIGHT - MARGIN.top - MARGIN.bottom;
+  const { innerW, innerH } = plotSize(BOX);
   const x = scaleLinear({ domain: [0, xMax], range: [0, innerW], nice: false });
   const y = scaleLog({ domain: [yMin, yMax], range: [innerH, 0] });
   const yTicks = decadeTicks(yMin, yMax)
@@ -31,83 +28,51 @@ export default function HoodChart({ f, distance_m }: { f: HoodFigures; distance_
     .filter((t) => t >= yMin && t <= yMax);
 
   return (
-    <figure className="rounded-lg border border-line bg-white p-3">
-      <figcaption className="mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
-        <span className="font-semibold">Centre-line velocity against distance</span>
-        <span className="inline-flex items-center gap-1.5">
-          <span aria-hidden="true" className="inline-block h-0.5 w-5 bg-accent" />
-          Centre-line velocity
-        </span>
-        <span className="inline-flex items-center gap-1.5">
-          <span aria-hidden="true" className="inline-block h-3 w-5 bg-clear-soft outline outline-1 outline-clear" />
-          Published capture range
-        </span>
-        {!booth && (
-          <span className="inline-flex items-center gap-1.5">
-            <span aria-hidden="true" className="inline-block h-3 w-5 bg-paper-deep" />
-            Beyond the equation&apos;s range
-          </span>
-        )}
-      </figcaption>
-      <svg
-        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
-        className="h-auto w-full"
-        role="img"
-        aria-label={`Centre-line velocity from the face to ${readableNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}
-      >
-        <Group left={MARGIN.left} top={MARGIN.top}>
-          {!booth && f.validUpTo_m < xMax && (
-            <rect x={x(f.validUpTo_m)} width={innerW - x(f.validUpTo_m)} y={0} height={innerH} fill={PAPER_DEEP} />
-          )}
-          <rect
-            x={0}
-            width={innerW}
-            y={y(f.range.max_mPerS)}
-            height={y(f.range.min_mPerS) - y(f.range.max_mPerS)}
-            fill={CLEAR_SOFT}
-            fillOpacity={0.85}
-            data-testid="capture-band"
-          />
-          <GridRows scale={y} width={innerW} tickValues={yTicks} stroke={LINE} strokeOpacity={0.7} />
-          <LinePath data={points} x={(p) => x(p.x)} y={(p) => y(p.v)} stroke={ACCENT} strokeWidth={2.5} />
-          {!booth && f.validUpTo_m < xMax && (
-            <g data-testid="validity-marker">
-              <line x1={x(f.validUpTo_m)} x2={x(f.validUpTo_m)} y1={0} y2={innerH} stroke={WATCH} strokeWidth={1.5} strokeDasharray="6 4" />
-              <text x={x(f.validUpTo_m) + 6} y={14} fill={WATCH} fontSize={12} fontWeight={600}>
-                1.5 hood diameters: {readableNumber(f.validUpTo_m)} m
-              </text>
-            </g>
-          )}
-          <line x1={x(distance_m)} x2={x(distance_m)} y1={y(f.centerline_mPerS)} y2={innerH} stroke={INK} strokeDasharray="2 3" />
-          <circle cx={x(distance_m)} cy={y(f.centerline_mPerS)} r={5} fill="white" stroke={INK} strokeWidth={2} />
-          <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
-            {readableNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
+    <ChartFigure
+      box={BOX}
+      label={`Centre-line velocity from the face to ${readableNumber(xMax)} m, with the capture range ${f.range.min_mPerS}–${f.range.max_mPerS} m/s shaded`}
+      axes={{
+        x,
+        y,
+        left: { label: 'Centre-line velocity (m/s, log scale)', labelOffset: 40, tickValues: yTicks, format: plainTick },
+        bottom: { label: 'Distance from the face along the centre line (m)', labelOffset: 18, numTicks: 8, format: plainTick },
+      }}
+      caption={
+        <figcaption className="mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
+          <span className="font-semibold">Centre-line velocity against distance</span>
+          <LegendKey swatch="h-0.5 w-5 bg-accent">Centre-line velocity</LegendKey>
+          <LegendKey swatch="h-3 w-5 bg-clear-soft outline outline-1 outline-clear">Published capture range</LegendKey>
+          {!booth && <LegendKey swatch="h-3 w-5 bg-paper-deep">Beyond the equation&apos;s range</LegendKey>}
+        </figcaption>
+      }
+    >
+      {!booth && f.validUpTo_m < xMax && (
+        <rect x={x(f.validUpTo_m)} width={innerW - x(f.validUpTo_m)} y={0} height={innerH} fill={PAPER_DEEP} />
+      )}
+      <rect
+        x={0}
+        width={innerW}
+        y={y(f.range.max_mPerS)}
+        height={y(f.range.min_mPerS) - y(f.range.max_mPerS)}
+        fill={CLEAR_SOFT}
+        fillOpacity={0.85}
+        data-testid="capture-band"
+      />
+      <GridRows scale={y} width={innerW} tickValues={yTicks} stroke={LINE} strokeOpacity={0.7} />
+      <LinePath data={points} x={(p) => x(p.x)} y={(p) => y(p.v)} stroke={ACCENT} strokeWidth={2.5} />
+      {!booth && f.validUpTo_m < xMax && (
+        <g data-testid="validity-marker">
+          <line x1={x(f.validUpTo_m)} x2={x(f.validUpTo_m)} y1={0} y2={innerH} stroke={WATCH} strokeWidth={1.5} strokeDasharray="6 4" />
+          <text x={x(f.validUpTo_m) + 6} y={14} fill={WATCH} fontSize={12} fontWeight={600}>
+            1.5 hood diameters: {readableNumber(f.validUpTo_m)} m
           </text>
-          <AxisLeft
-            scale={y}
-            tickValues={yTicks}
-            tickFormat={(v) => plainTick(Number(v))}
-            stroke={MUTED}
-            tickStroke={MUTED}
-            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
-            label="Centre-line velocity (m/s, log scale)"
-            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
-            labelOffset={40}
-          />
-          <AxisBottom
-            top={innerH}
-            scale={x}
-            numTicks={8}
-            tickFormat={(v) => plainTick(Number(v))}
-            stroke={MUTED}
-            tickStroke={MUTED}
-            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
-            label="Distance from the face along the centre line (m)"
-            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
-            labelOffset={18}
-          />
-        </Group>
-      </svg>
-    </figure>
+        </g>
+      )}
+      <line x1={x(distance_m)} x2={x(distance_m)} y1={y(f.centerline_mPerS)} y2={innerH} stroke={INK} strokeDasharray="2 3" />
+      <circle cx={x(distance_m)} cy={y(f.centerline_mPerS)} r={5} fill="white" stroke={INK} strokeWidth={2} />
+      <text x={x(distance_m) + 8} y={y(f.centerline_mPerS) - 10} fill={INK} fontSize={12} fontWeight={600} {...halo}>
+        {readableNumber(f.centerline_mPerS)} m/s at {plainNumber(distance_m)} m
+      </text>
+    </ChartFigure>
   );
 }

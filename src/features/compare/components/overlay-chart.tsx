@@ -1,24 +1,21 @@
 import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
-import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridRows } from '@visx/grid';
-import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
 import { useState } from 'react';
 import type { Fraction } from '../../../../shared/vocabulary/fractions';
 import { plain } from '@/features/compare/lib/labels';
 import { type CompareColumn } from '@/features/compare/lib/types';
+import { LINE } from '@/components/chart-style';
+import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
+import { LegendKey } from '@/components/charts/legend-key';
+import { ReferenceLine } from '@/components/charts/reference-line';
 import { chartSeries, limitsFor, SERIES_LOOK } from './chart-series';
 
-const WIDTH = 900;
-const HEIGHT = 380;
-const MARGIN = { top: 16, right: 24, bottom: 52, left: 84 };
-const INNER_W = WIDTH - MARGIN.left - MARGIN.right;
-const INNER_H = HEIGHT - MARGIN.top - MARGIN.bottom;
+const BOX = { width: 900, height: 380, margin: { top: 16, right: 24, bottom: 52, left: 84 } };
+const { innerW: INNER_W, innerH: INNER_H } = plotSize(BOX);
 // A log axis needs a floor; four decades below the top keeps a near-zero hood curve visible without flattening the rest.
 const LOG_DECADES = 4;
-const tickLabel = { fill: 'var(--color-muted)', fontSize: 11, fontFamily: 'inherit' } as const;
-const axisLabel = { fill: 'var(--color-ink)', fontSize: 12, fontWeight: 600, fontFamily: 'inherit', textAnchor: 'middle' } as const;
 
 export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; fraction: Fraction }) {
   const series = chartSeries(columns, fraction);
@@ -42,105 +39,74 @@ export function OverlayChart({ columns, fraction }: { columns: CompareColumn[]; 
 
   if (series.length === 0) return <p className="text-sm text-muted">None of the chosen scenarios has a saved run to draw.</p>;
   return (
-    <figure className="rounded-lg border border-line bg-white p-3">
-      <figcaption className="mb-2 flex flex-wrap items-center gap-x-5 gap-y-1 text-sm">
-        {series.map((s) => {
-          const look = SERIES_LOOK[columns.findIndex((c) => c.id === s.id) % SERIES_LOOK.length];
-          return (
-            <span key={s.id} className="inline-flex items-center gap-1.5">
-              <svg width="28" height="12" aria-hidden="true">
-                <rect x="0" y="1" width="28" height="10" fill={look.stroke} opacity={0.15} />
-                <line x1="0" x2="28" y1="6" y2="6" stroke={look.stroke} strokeWidth={2} strokeDasharray={look.dash} />
-              </svg>
-              {s.name}
-            </span>
-          );
-        })}
-        {limits.map((l) => (
-          <span key={l.value_mgPerM3} className="inline-flex items-center gap-1.5">
-            <span aria-hidden="true" className="inline-block w-6 border-t-2 border-dashed border-act" />
-            Limit {plain(l.value_mgPerM3)} mg/m³{limits.length > 1 ? ` (${l.names.join(', ')})` : ''}
-          </span>
-        ))}
-        <span className="text-muted">Shaded: 95 % confidence band</span>
-        <label className="ml-auto inline-flex items-center gap-1.5">
-          <input type="checkbox" className="accent-accent" checked={log} onChange={(e) => setLog(e.target.checked)} />
-          Logarithmic concentration axis
-        </label>
-      </figcaption>
-      <svg
-        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
-        className="h-auto w-full"
-        role="img"
-        aria-label={`Breathing-zone ${word} concentration over time for ${series.map((s) => s.name).join(', ')}`}
-      >
-        <Group left={MARGIN.left} top={MARGIN.top}>
-          <GridRows scale={y} width={INNER_W} numTicks={log ? LOG_DECADES : 6} stroke="var(--color-line)" strokeOpacity={0.7} />
+    <ChartFigure
+      box={BOX}
+      caption={
+        <figcaption className="mb-2 flex flex-wrap items-center gap-x-5 gap-y-1 text-sm">
           {series.map((s) => {
             const look = SERIES_LOOK[columns.findIndex((c) => c.id === s.id) % SERIES_LOOK.length];
             return (
-              <g key={s.id} data-testid="compare-series">
-                <Area
-                  data={s.points}
-                  x={(p) => x(p.t_min)}
-                  y0={(p) => yOf(p.lo)}
-                  y1={(p) => yOf(p.hi)}
-                  fill={look.stroke}
-                  fillOpacity={0.13}
-                />
-                <LinePath
-                  data={s.points}
-                  x={(p) => x(p.t_min)}
-                  y={(p) => yOf(p.mean)}
-                  stroke={look.stroke}
-                  strokeWidth={2}
-                  strokeDasharray={look.dash}
-                />
-              </g>
+              <span key={s.id} className="inline-flex items-center gap-1.5">
+                <svg width="28" height="12" aria-hidden="true">
+                  <rect x="0" y="1" width="28" height="10" fill={look.stroke} opacity={0.15} />
+                  <line x1="0" x2="28" y1="6" y2="6" stroke={look.stroke} strokeWidth={2} strokeDasharray={look.dash} />
+                </svg>
+                {s.name}
+              </span>
             );
           })}
           {limits.map((l) => (
-            <line
-              key={l.value_mgPerM3}
-              x1={0}
-              x2={INNER_W}
-              y1={yOf(l.value_mgPerM3)}
-              y2={yOf(l.value_mgPerM3)}
-              stroke="var(--color-act)"
-              strokeWidth={1.5}
-              strokeDasharray="7 5"
-            />
+            <LegendKey key={l.value_mgPerM3} swatch="w-6 border-t-2 border-dashed border-act">
+              Limit {plain(l.value_mgPerM3)} mg/m³{limits.length > 1 ? ` (${l.names.join(', ')})` : ''}
+            </LegendKey>
           ))}
-          <AxisLeft
-            scale={y}
-            numTicks={log ? LOG_DECADES : 6}
-            tickFormat={(v) => plain(Number(v), 2)}
-            stroke="var(--color-muted)"
-            tickStroke="var(--color-muted)"
-            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
-            label={`${FRACTION_LABEL[fraction]} concentration (mg/m³)`}
-            labelProps={axisLabel}
-            labelOffset={56}
-          />
-          <AxisBottom
-            top={INNER_H}
-            scale={x}
-            numTicks={10}
-            tickFormat={(v) => plain(Number(v))}
-            stroke="var(--color-muted)"
-            tickStroke="var(--color-muted)"
-            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
-            label="Time since the task started (min)"
-            labelProps={axisLabel}
-            labelOffset={16}
-          />
-        </Group>
-      </svg>
-      {log && (
-        <p className="mt-1 text-xs text-muted">
-          On the logarithmic axis, values below {plain(floor, 2)} mg/m³, zero included, are drawn on the bottom edge.
-        </p>
-      )}
-    </figure>
+          <span className="text-muted">Shaded: 95 % confidence band</span>
+          <label className="ml-auto inline-flex items-center gap-1.5">
+            <input type="checkbox" className="accent-accent" checked={log} onChange={(e) => setLog(e.target.checked)} />
+            Logarithmic concentration axis
+          </label>
+        </figcaption>
+      }
+      label={`Breathing-zone ${word} concentration over time for ${series.map((s) => s.name).join(', ')}`}
+      axes={{
+        x,
+        y,
+        left: {
+          label: `${FRACTION_LABEL[fraction]} concentration (mg/m³)`,
+          labelOffset: 56,
+          numTicks: log ? LOG_DECADES : 6,
+          format: (v) => plain(v, 2),
+        },
+        bottom: { label: 'Time since the task started (min)', labelOffset: 16, numTicks: 10, format: plain },
+      }}
+      footer={
+        log && (
+          <p className="mt-1 text-xs text-muted">
+            On the logarithmic axis, values below {plain(floor, 2)} mg/m³, zero included, are drawn on the bottom edge.
+          </p>
+        )
+      }
+    >
+      <GridRows scale={y} width={INNER_W} numTicks={log ? LOG_DECADES : 6} stroke={LINE} strokeOpacity={0.7} />
+      {series.map((s) => {
+        const look = SERIES_LOOK[columns.findIndex((c) => c.id === s.id) % SERIES_LOOK.length];
+        return (
+          <g key={s.id} data-testid="compare-series">
+            <Area data={s.points} x={(p) => x(p.t_min)} y0={(p) => yOf(p.lo)} y1={(p) => yOf(p.hi)} fill={look.stroke} fillOpacity={0.13} />
+            <LinePath
+              data={s.points}
+              x={(p) => x(p.t_min)}
+              y={(p) => yOf(p.mean)}
+              stroke={look.stroke}
+              strokeWidth={2}
+              strokeDasharray={look.dash}
+            />
+          </g>
+        );
+      })}
+      {limits.map((l) => (
+        <ReferenceLine key={l.value_mgPerM3} y={yOf(l.value_mgPerM3)} width={INNER_W} />
+      ))}
+    </ChartFigure>
   );
 }

@@ -2,6 +2,7 @@ import { formatSig, percentText } from '../../../../shared/format/index';
 import { parseScenario } from '../../../../shared/schemas/scenario';
 import { Cautions } from '@/components/cautions';
 import { Button } from '@/components/ui/button';
+import { ProgressBar } from '@/components/progress-bar';
 import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
 import { runSimulation } from '@/lib/simulation-bridge';
 import type { RunResult } from '../../../../shared/schemas/run-result';
@@ -60,16 +61,7 @@ export function EngineCheckPage() {
       </div>
       {state.phase === 'running' && (
         <div className="mt-4">
-          <div
-            role="progressbar"
-            aria-label="Simulation progress"
-            aria-valuemin={0}
-            aria-valuemax={100}
-            aria-valuenow={percent}
-            className="h-2 w-full overflow-hidden rounded bg-line"
-          >
-            <div className="h-full bg-accent" style={{ width: `${percent}%` }} />
-          </div>
+          <ProgressBar label="Simulation progress" percent={percent} look="slim" />
           <p className="mt-1 text-sm text-muted">
             {percent} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s
             {Number.isFinite(state.progress.secondsLeft) && ` · about ${Math.ceil(state.progress.secondsLeft)} s left`}

@@ -1,17 +1,10 @@
-import type { ScenarioInput } from '../../../../shared/schemas/scenario';
-import { RoomView } from './room-view';
+import { RoomView, type RoomViewProps } from './room-view';
 
-type Props = { value: ScenarioInput; onChange: (next: ScenarioInput) => void; readOnly?: boolean };
-
-export function ElevationView({ value, onChange, readOnly }: Props) {
+export function ElevationView(props: RoomViewProps) {
   return (
     <RoomView
       view="elevation"
-      title="Elevation (x–z), looking toward +y"
-      testId="elevation-view"
-      value={value}
-      onChange={onChange}
-      readOnly={readOnly}
+      {...props}
       overlay={(frame) => (
         <line
           x1={frame.toX(0)}

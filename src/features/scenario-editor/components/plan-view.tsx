@@ -1,11 +1,8 @@
 import { formatSig } from '../../../../shared/format/index';
-import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
-import { RoomView } from './room-view';
+import { RoomView, type RoomViewProps } from './room-view';
 import { arrowPath } from './view-parts';
-
-type Props = { value: ScenarioInput; onChange: (next: ScenarioInput) => void; readOnly?: boolean };
 
 // Drawn in the top margin, outside the room, so it never hides a marker.
 function DraftArrow({ frame, speed_mPerS, direction_deg }: { frame: ViewFrame; speed_mPerS: number; direction_deg: number }) {
@@ -24,17 +21,13 @@ function DraftArrow({ frame, speed_mPerS, direction_deg }: { frame: ViewFrame; s
   );
 }
 
-export function PlanView({ value, onChange, readOnly }: Props) {
-  const speed = value.room.draftSpeed_mPerS ?? DEFAULTS.draftSpeed_mPerS;
-  const direction = value.room.draftDirection_deg ?? DEFAULTS.draftDirection_deg;
+export function PlanView(props: RoomViewProps) {
+  const speed = props.value.room.draftSpeed_mPerS ?? DEFAULTS.draftSpeed_mPerS;
+  const direction = props.value.room.draftDirection_deg ?? DEFAULTS.draftDirection_deg;
   return (
     <RoomView
       view="plan"
-      title="Plan (x–y), seen from above"
-      testId="plan-view"
-      value={value}
-      onChange={onChange}
-      readOnly={readOnly}
+      {...props}
       overlay={(frame) => (speed > 0 ? <DraftArrow frame={frame} speed_mPerS={speed} direction_deg={direction} /> : null)}
     />
   );

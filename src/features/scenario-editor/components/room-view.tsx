@@ -7,22 +7,23 @@ import { Draggable } from './draggable';
 import { HoodGlyph, SourceGlyph, WorkerGlyph, type ViewKind } from './glyphs';
 import { RoomGrid, ScaleBar } from './view-parts';
 
-type Props = {
-  view: ViewKind;
-  title: string;
-  value: ScenarioInput;
-  onChange: (next: ScenarioInput) => void;
-  readOnly?: boolean;
-  testId: string;
-  overlay?: (frame: ViewFrame) => ReactNode;
-};
+export type RoomViewProps = { value: ScenarioInput; onChange: (next: ScenarioInput) => void; readOnly?: boolean };
 
-const AXES = { plan: { a: 'x', b: 'y', span: 'width_m' }, elevation: { a: 'x', b: 'z', span: 'height_m' } } as const;
+const VIEWS = {
+  plan: { a: 'x', b: 'y', span: 'width_m', title: 'Plan (x–y), seen from above', testId: 'plan-view' },
+  elevation: { a: 'x', b: 'z', span: 'height_m', title: 'Elevation (x–z), looking toward +y', testId: 'elevation-view' },
+} as const;
 
-export function RoomView({ view, title, value, onChange, readOnly, testId, overlay }: Props) {
+export function RoomView({
+  view,
+  value,
+  onChange,
+  readOnly,
+  overlay,
+}: RoomViewProps & { view: ViewKind; overlay?: (frame: ViewFrame) => ReactNode }) {
   const svgRef = useRef<SVGSVGElement>(null);
-  const axes = AXES[view];
-  const frame = viewFrame(value.room.length_m, value.room[axes.span]);
+  const spec = VIEWS[view];
+  const frame = viewFrame(value.room.length_m, value.room[spec.span]);
   const bName = view === 'plan' ? 'y' : 'height';
   // The second coordinate is y in plan and z in elevation; the same drag writes whichever this view shows.
   const b = (p: { y_m: number; z_m: number }) => (view === 'plan' ? p.y_m : p.z_m);
@@ -32,16 +33,16 @@ export function RoomView({ view, title, value, onChange, readOnly, testId, overl
 
   return (
     <figure className="flex flex-col gap-2">
-      <figcaption className="text-sm font-semibold text-ink">{title}</figcaption>
+      <figcaption className="text-sm font-semibold text-ink">{spec.title}</figcaption>
       <svg
         ref={svgRef}
         viewBox={`0 0 ${frame.width} ${frame.height}`}
         className="h-auto w-full rounded-lg border border-line bg-white select-none"
         role="group"
-        aria-label={`${title}, drawn to scale`}
-        data-testid={testId}
+        aria-label={`${spec.title}, drawn to scale`}
+        data-testid={spec.testId}
       >
-        <RoomGrid frame={frame} labelA={axes.a} labelB={axes.b} />
+        <RoomGrid frame={frame} labelA={spec.a} labelB={spec.b} />
         <ScaleBar frame={frame} />
         {overlay?.(frame)}
         <Draggable

@@ -2,10 +2,9 @@ import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { RunResult } from '../../../../shared/schemas/run-result';
 import { Button } from '@/components/ui/button';
 import { ErrorMessage } from '@/components/ui/status';
+import { ProgressBar, timeLeft } from '@/components/progress-bar';
 import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
 import { runSimulation } from '@/lib/simulation-bridge';
-
-const secs = (s: number) => (Number.isFinite(s) ? (s < 60 ? `${Math.ceil(s)} s` : `${Math.ceil(s / 60)} min`) : '…');
 
 export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: RunResult, input: Scenario) => void }) {
   const run = useEngineRun<RunResult>(RUN_START);
@@ -39,18 +38,9 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
       </div>
       {running && (
         <div className="mt-3">
-          <div
-            role="progressbar"
-            aria-label="Simulation progress"
-            aria-valuemin={0}
-            aria-valuemax={100}
-            aria-valuenow={pct}
-            className="h-3 w-full overflow-hidden rounded-full bg-paper-deep"
-          >
-            <div className="h-full bg-accent transition-[width]" style={{ width: `${pct}%` }} />
-          </div>
+          <ProgressBar label="Simulation progress" percent={pct} />
           <p className="mt-1 text-sm text-muted" aria-live="polite">
-            {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {secs(state.progress.secondsLeft)}{' '}
+            {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {timeLeft(state.progress.secondsLeft)}{' '}
             left
           </p>
         </div>

@@ -1,17 +1,14 @@
-import { AxisBottom, AxisLeft } from '@visx/axis';
 import { GridColumns, GridRows } from '@visx/grid';
-import { Group } from '@visx/group';
 import { scaleLinear, scaleLog } from '@visx/scale';
 import { LinePath } from '@visx/shape';
 import type { MassBins } from '../../../../shared/size-profiles/index';
 import { cumulativePoints, decadeTicks_um } from '@/features/size-profiles/lib/chart-data';
-import { ACCENT, CHART, LINE, MUTED, axisLabel, tickLabel } from './chart-style';
+import { ACCENT, CHART, LINE, MUTED, diameterAxis } from './chart-style';
+import { ChartFigure, plotSize } from '@/components/charts/chart-figure';
 
 export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: number | null }) {
   const points = cumulativePoints(bins);
-  const { width, height, margin } = CHART;
-  const innerW = width - margin.left - margin.right;
-  const innerH = height - margin.top - margin.bottom;
+  const { innerW, innerH } = plotSize(CHART);
   const min_um = points[0].d_um;
   const max_um = points[points.length - 1].d_um;
   const x = scaleLog({ domain: [min_um, max_um], range: [0, innerW] });
@@ -19,53 +16,31 @@ export function CumulativeCurve({ bins, mmad_m }: { bins: MassBins; mmad_m: numb
   const ticks = decadeTicks_um(min_um, max_um);
   const mmad_um = mmad_m === null ? null : mmad_m * 1e6;
   return (
-    <figure className="rounded-lg border border-line bg-white p-3">
-      <figcaption className="mb-2 text-sm font-semibold">Cumulative mass below each size</figcaption>
-      <svg
-        viewBox={`0 0 ${width} ${height}`}
-        className="h-auto w-full"
-        role="img"
-        aria-label="Cumulative mass fraction in percent against aerodynamic diameter on a log axis"
-      >
-        <Group left={margin.left} top={margin.top}>
-          <GridRows scale={y} width={innerW} tickValues={[0, 25, 50, 75, 100]} stroke={LINE} strokeOpacity={0.6} />
-          <GridColumns scale={x} height={innerH} tickValues={ticks} stroke={LINE} strokeOpacity={0.4} />
-          <LinePath data={points} x={(p) => x(p.d_um)} y={(p) => y(100 * p.F)} stroke={ACCENT} strokeWidth={2.5} />
-          {points.map((p, i) => (
-            <circle key={i} cx={x(p.d_um)} cy={y(100 * p.F)} r={2.5} fill="white" stroke={ACCENT} />
-          ))}
-          {mmad_um !== null && mmad_um >= min_um && mmad_um <= max_um && (
-            <g>
-              <line x1={x(mmad_um)} x2={x(mmad_um)} y1={y(50)} y2={innerH} stroke={MUTED} strokeDasharray="3 3" />
-              <text x={x(mmad_um) + 4} y={y(50) - 6} fill={MUTED} fontSize={11}>
-                fitted MMAD
-              </text>
-            </g>
-          )}
-          <AxisLeft
-            scale={y}
-            tickValues={[0, 25, 50, 75, 100]}
-            stroke={MUTED}
-            tickStroke={MUTED}
-            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'end', dx: -4, dy: 4 })}
-            label="Cumulative mass (%)"
-            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
-            labelOffset={36}
-          />
-          <AxisBottom
-            top={innerH}
-            scale={x}
-            tickValues={ticks}
-            tickFormat={(v) => String(Number(v))}
-            stroke={MUTED}
-            tickStroke={MUTED}
-            tickLabelProps={() => ({ ...tickLabel, textAnchor: 'middle' })}
-            label="Aerodynamic diameter (µm, log scale)"
-            labelProps={{ ...axisLabel, textAnchor: 'middle' }}
-            labelOffset={16}
-          />
-        </Group>
-      </svg>
-    </figure>
+    <ChartFigure
+      box={CHART}
+      caption={<figcaption className="mb-2 text-sm font-semibold">Cumulative mass below each size</figcaption>}
+      label="Cumulative mass fraction in percent against aerodynamic diameter on a log axis"
+      axes={{
+        x,
+        y,
+        left: { label: 'Cumulative mass (%)', labelOffset: 36, tickValues: [0, 25, 50, 75, 100] },
+        bottom: diameterAxis(ticks),
+      }}
+    >
+      <GridRows scale={y} width={innerW} tickValues={[0, 25, 50, 75, 100]} stroke={LINE} strokeOpacity={0.6} />
+      <GridColumns scale={x} height={innerH} tickValues={ticks} stroke={LINE} strokeOpacity={0.4} />
+      <LinePath data={points} x={(p) => x(p.d_um)} y={(p) => y(100 * p.F)} stroke={ACCENT} strokeWidth={2.5} />
+      {points.map((p, i) => (
+        <circle key={i} cx={x(p.d_um)} cy={y(100 * p.F)} r={2.5} fill="white" stroke={ACCENT} />
+      ))}
+      {mmad_um !== null && mmad_um >= min_um && mmad_um <= max_um && (
+        <g>
+          <line x1={x(mmad_um)} x2={x(mmad_um)} y1={y(50)} y2={innerH} stroke={MUTED} strokeDasharray="3 3" />
+          <text x={x(mmad_um) + 4} y={y(50) - 6} fill={MUTED} fontSize={11}>
+            fitted MMAD
+          </text>
+        </g>
+      )}
+    </ChartFigure>
   );
 }
