@@ -9,6 +9,12 @@ export type Column<T> = {
 };
 
 type Sort = { key: string; dir: 'asc' | 'desc' };
+type Figure<T> = { value: (row: T) => number; show: (v: number) => ReactNode };
+
+// A figure sorts by its number, never by the text it is shown as.
+export function figureColumn<T>({ value, show, ...column }: Pick<Column<T>, 'key' | 'header'> & Figure<T>): Column<T> {
+  return { ...column, render: (row) => show(value(row)), sortValue: value, align: 'right' };
+}
 
 type Props<T> = {
   rows: T[];

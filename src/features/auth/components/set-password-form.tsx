@@ -17,13 +17,13 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
-      {/* eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field */}
       <TextField
         label="New password"
         type="password"
         autoComplete="new-password"
         {...field('password')}
         hint="At least 10 characters."
+        // eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field
         autoFocus
       />
       <TextField label="Repeat the password" type="password" autoComplete="new-password" {...field('repeat')} />
