@@ -1,6 +1,6 @@
 import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
 import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/index';
-import { useState } from 'react';
+import { useState, type ComponentProps } from 'react';
 import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
 import type { SiteTree } from '../../../../shared/schemas/workspace-views';
 import { Button } from '@/components/ui/button';
@@ -12,6 +12,13 @@ import { useCreateRoom, useCreateSite, useCreateWorkstation } from '@/features/p
 
 const n = decimalOrNaN;
 const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
+
+type ParentProps = Omit<ComponentProps<typeof IdSelectField>, 'none' | 'error'> & { missing: boolean };
+
+// The place a new one sits in; the schema's own message for a missing id means nothing to people.
+function ParentField({ missing, ...select }: ParentProps) {
+  return <IdSelectField none="Choose…" error={missing ? `Choose a ${select.label.toLowerCase()}` : undefined} {...select} />;
+}
 
 type Outcome = { isPending: boolean; isSuccess: boolean; data?: { name: string }; error: unknown };
 
@@ -74,14 +81,7 @@ export function NewRoomForm({ sites }: { sites: SiteTree[] }) {
   const { errors, submit } = useSchemaSubmit(roomInputSchema, { siteId: siteId ?? undefined, name, data }, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New room" className={box}>
-      <IdSelectField
-        label="Site"
-        options={sites}
-        none="Choose…"
-        value={siteId}
-        onChange={setSiteId}
-        error={errors.siteId ? 'Choose a site' : undefined}
-      />
+      <ParentField label="Site" options={sites} value={siteId} onChange={setSiteId} missing={Boolean(errors.siteId)} />
       <TextField label="Room name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       {ROOM_FIELDS.map(([k, label, unit]) => (
         <TextField
@@ -125,14 +125,7 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
   const { errors, submit } = useSchemaSubmit(workstationInputSchema, value, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New workstation" className={box}>
-      <IdSelectField
-        label="Room"
-        options={rooms}
-        none="Choose…"
-        value={roomId}
-        onChange={setRoomId}
-        error={errors.roomId ? 'Choose a room' : undefined}
-      />
+      <ParentField label="Room" options={rooms} value={roomId} onChange={setRoomId} missing={Boolean(errors.roomId)} />
       <TextField label="Workstation name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       <TextField label="What happens here" value={description} onChange={(e) => setDescription(e.target.value)} />
       {WS_FIELDS.map(([k, label]) => (

@@ -3,6 +3,7 @@ import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 
 export const SPEEDS = [0.5, 1, 2, 4] as const;
+const SPEED_CHOICE = { look: 'box', legend: 'Playback speed', caption: 'Speed', options: SPEEDS, label: (s: number) => `${s}×` } as const;
 
 export function PlaybackControls({
   frame,
@@ -52,15 +53,7 @@ export function PlaybackControls({
           t = {time_s.toFixed(0)} s / {end_s.toFixed(0)} s
         </output>
       </div>
-      <ChoiceChips
-        look="box"
-        legend="Playback speed"
-        caption="Speed"
-        options={SPEEDS}
-        value={speed}
-        onChange={onSpeed}
-        label={(s) => `${s}×`}
-      />
+      <ChoiceChips {...SPEED_CHOICE} value={speed} onChange={onSpeed} />
     </div>
   );
 }
