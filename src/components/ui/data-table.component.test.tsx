@@ -1,7 +1,7 @@
 import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { type Column, DataTable } from './data-table';
+import { type Column, DataTable, figureColumn } from './data-table';
 
 type Hood = { name: string; airflow_m3PerS: number | null };
 const rows: Hood[] = [
@@ -69,5 +69,19 @@ describe('sortable table', () => {
   it('offers no sort control on a column without a sort value', () => {
     table();
     expect(within(header('Note')).queryByRole('button')).toBeNull();
+  });
+
+  it('sorts a figure column by its number, not by the text shown (9 before 10)', async () => {
+    const user = userEvent.setup();
+    const points = [
+      { id: 1, n: 10 },
+      { id: 2, n: 9 },
+      { id: 3, n: 100 },
+    ];
+    const figure = figureColumn<(typeof points)[number]>({ key: 'n', header: 'Count', value: (r) => r.n, show: (v) => `${v} pcs` });
+    render(<DataTable rows={points} columns={[figure]} caption="Counts" />);
+    await user.click(screen.getByRole('button', { name: /Count/ }));
+    expect(shownNames()).toEqual(['9 pcs', '10 pcs', '100 pcs']);
+    expect(header('Count').closest('th')?.className).toContain('text-right');
   });
 });

@@ -9,11 +9,20 @@ export type Column<T> = {
 };
 
 type Sort = { key: string; dir: 'asc' | 'desc' };
+type Figure<T> = { value: (row: T) => number; show: (v: number) => ReactNode };
 
-type Props<T> = {
+// A figure sorts by its number, never by the text it is shown as.
+export function figureColumn<T>({ value, show, ...column }: Pick<Column<T>, 'key' | 'header'> & Figure<T>): Column<T> {
+  return { ...column, render: (row) => show(value(row)), sortValue: value, align: 'right' };
+}
+
+type RowKey<T> = (row: T) => string | number;
+// Stored records are told apart by their id; any other row says how.
+type Keyed<T> = T extends { id: string | number } ? { rowKey?: RowKey<T> } : { rowKey: RowKey<T> };
+
+type Props<T> = Keyed<T> & {
   rows: T[];
   columns: Column<T>[];
-  rowKey: (row: T) => string | number;
   caption: string;
   initialSort?: Sort;
   // Given, the parent sorts (e.g. on the server) and the table only shows the state.
@@ -23,7 +32,9 @@ type Props<T> = {
 
 export type { Sort as TableSort };
 
-export function DataTable<T>({ rows, columns, rowKey, caption, initialSort, sort: controlled, onSortChange }: Props<T>) {
+const byId = <T,>(row: T) => (row as { id: string | number }).id;
+
+export function DataTable<T>({ rows, columns, rowKey = byId, caption, initialSort, sort: controlled, onSortChange }: Props<T>) {
   const [own, setOwn] = useState<Sort | undefined>(initialSort);
   const sort = onSortChange ? controlled : own;
   const sorted = useMemo(() => {

@@ -6,6 +6,7 @@ import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorMessage, Notice } from '@/components/ui/status';
+import { bindFields } from '@/lib/bind-fields';
 import { fieldErrors } from '@/lib/form-errors';
 import { useSaveAgent } from '@/features/agents/api/save-agent';
 
@@ -47,7 +48,7 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
   };
   const parsed = agentInputSchema.safeParse(body);
   const e = submitted ? fieldErrors(parsed, save.error) : {};
-  const set = (k: keyof typeof f) => (ev: { target: { value: string } }) => setF({ ...f, [k]: ev.target.value });
+  const field = bindFields(f, setF, e);
   const submit = (ev: FormEvent) => {
     ev.preventDefault();
     setSubmitted(true);
@@ -61,72 +62,35 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
       aria-label={agent ? `Edit ${agent.name}` : 'New dust agent'}
       className="grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3"
     >
-      <TextField label="Name" value={f.name} onChange={set('name')} error={e.name} />
-      <TextField
-        label="Particle density"
-        unit="kg/m³"
-        inputMode="decimal"
-        value={f.density}
-        onChange={set('density')}
-        error={e['data.density_kgPerM3']}
-      />
-      <TextField
-        label="Dynamic shape factor"
-        unit="–"
-        inputMode="decimal"
-        value={f.shape}
-        onChange={set('shape')}
-        error={e['data.shapeFactor']}
-        hint="1 for a sphere"
-      />
-      <SelectField label="Limit applies to" value={f.fraction} onChange={set('fraction')}>
+      <TextField label="Name" {...field('name')} />
+      <TextField label="Particle density" unit="kg/m³" inputMode="decimal" {...field('density', 'data.density_kgPerM3')} />
+      <TextField label="Dynamic shape factor" unit="–" inputMode="decimal" {...field('shape', 'data.shapeFactor')} hint="1 for a sphere" />
+      <SelectField label="Limit applies to" {...field('fraction', 'data.limitFraction')}>
         {LIMIT_FRACTIONS.map((x) => (
           <option key={x} value={x}>
             {FRACTION_LABEL[x]} fraction
           </option>
         ))}
       </SelectField>
-      <TextField
-        label="8-h limit (TWA)"
-        unit="mg/m³"
-        inputMode="decimal"
-        value={f.limit8h}
-        onChange={set('limit8h')}
-        error={e['data.limit8h_mgPerM3']}
-      />
+      <TextField label="8-h limit (TWA)" unit="mg/m³" inputMode="decimal" {...field('limit8h', 'data.limit8h_mgPerM3')} />
       <TextField
         label="15-min limit"
         unit="mg/m³"
         inputMode="decimal"
-        value={f.limit15}
-        onChange={set('limit15')}
-        error={e['data.limit15min_mgPerM3']}
+        {...field('limit15', 'data.limit15min_mgPerM3')}
         hint="Leave empty if none"
       />
-      <TextField label="Jurisdiction" value={f.jurisdiction} onChange={set('jurisdiction')} error={e['data.jurisdiction']} />
-      <TextField label="Source of the limit" value={f.source} onChange={set('source')} error={e['data.limitSource']} />
-      <TextField label="Date of the limit" value={f.date} onChange={set('date')} />
+      <TextField label="Jurisdiction" {...field('jurisdiction', 'data.jurisdiction')} />
+      <TextField label="Source of the limit" {...field('source', 'data.limitSource')} />
+      <TextField label="Date of the limit" {...field('date', 'data.limitDate')} />
       <label className="flex items-center gap-2 text-sm font-semibold sm:col-span-3">
         <input type="checkbox" checked={f.overrideOn} onChange={(ev) => setF({ ...f, overrideOn: ev.target.checked })} /> Use a different
         limit here (override)
       </label>
       {f.overrideOn && (
         <>
-          <TextField
-            label="Override 8-h limit"
-            unit="mg/m³"
-            inputMode="decimal"
-            value={f.override}
-            onChange={set('override')}
-            error={e['data.override.limit8h_mgPerM3']}
-          />
-          <TextField
-            label="Reason for the override"
-            className="sm:col-span-2"
-            value={f.reason}
-            onChange={set('reason')}
-            error={e['data.override.reason']}
-          />
+          <TextField label="Override 8-h limit" unit="mg/m³" inputMode="decimal" {...field('override', 'data.override.limit8h_mgPerM3')} />
+          <TextField label="Reason for the override" className="sm:col-span-2" {...field('reason', 'data.override.reason')} />
         </>
       )}
       <div className="flex gap-2 sm:col-span-3">

@@ -69,13 +69,7 @@ export function AgentsPage() {
       {agents.isPending && <Spinner />}
       {agents.error && <ErrorMessage error={agents.error} />}
       {agents.data && (
-        <DataTable
-          caption="Dust agents"
-          rows={agents.data.items}
-          columns={columns}
-          rowKey={(a) => a.id}
-          initialSort={{ key: 'name', dir: 'asc' }}
-        />
+        <DataTable caption="Dust agents" rows={agents.data.items} columns={columns} initialSort={{ key: 'name', dir: 'asc' }} />
       )}
       <p className="mt-2 text-xs text-muted">
         Limits differ by country and change over time: confirm the one in force where the work is done.

@@ -1,25 +1,19 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { setPasswordSchema } from '../../../../shared/schemas/auth';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorMessage } from '@/components/ui/status';
-import { fieldErrors } from '@/lib/form-errors';
+import { useSchemaSubmit } from '@/hooks/use-schema-submit';
+import { bindFields } from '@/lib/bind-fields';
 import { useSetPassword } from '@/features/auth/api/set-password';
 
 export function SetPasswordForm({ token, onDone }: { token: string; onDone: (email: string) => void }) {
-  const [password, setPassword] = useState('');
-  const [repeat, setRepeat] = useState('');
-  const [submitted, setSubmitted] = useState(false);
+  const [form, setForm] = useState({ password: '', repeat: '' });
   const mutation = useSetPassword();
-  const parsed = setPasswordSchema.safeParse({ token, password });
-  const errors = submitted ? fieldErrors(parsed, mutation.error) : {};
-  const mismatch = submitted && repeat !== password ? 'The two passwords differ' : undefined;
-
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setSubmitted(true);
-    if (parsed.success && repeat === password) mutation.mutate(parsed.data, { onSuccess: (r) => onDone(r.email) });
-  }
+  const { errors, submit } = useSchemaSubmit(setPasswordSchema, { token, password: form.password }, mutation, (r) => onDone(r.email), {
+    repeat: form.repeat !== form.password ? 'The two passwords differ' : undefined,
+  });
+  const field = bindFields(form, setForm, errors);
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
@@ -27,21 +21,12 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
         label="New password"
         type="password"
         autoComplete="new-password"
-        value={password}
-        onChange={(e) => setPassword(e.target.value)}
-        error={errors.password}
+        {...field('password')}
         hint="At least 10 characters."
         // eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field
         autoFocus
       />
-      <TextField
-        label="Repeat the password"
-        type="password"
-        autoComplete="new-password"
-        value={repeat}
-        onChange={(e) => setRepeat(e.target.value)}
-        error={mismatch}
-      />
+      <TextField label="Repeat the password" type="password" autoComplete="new-password" {...field('repeat')} />
       {errors.token && (
         <ErrorMessage
           title="Link not usable"

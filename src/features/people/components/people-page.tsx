@@ -96,13 +96,7 @@ export function PeoplePage() {
         {people.error && <ErrorMessage error={people.error} />}
         {people.data &&
           (people.data.items.length ? (
-            <DataTable
-              caption="People"
-              rows={people.data.items}
-              columns={columns}
-              rowKey={(p) => p.id}
-              initialSort={{ key: 'name', dir: 'asc' }}
-            />
+            <DataTable caption="People" rows={people.data.items} columns={columns} initialSort={{ key: 'name', dir: 'asc' }} />
           ) : (
             <EmptyState title="Nobody here yet" />
           ))}

@@ -1,16 +1,48 @@
 import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
 import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/index';
-import { useState } from 'react';
+import { useState, type ComponentProps } from 'react';
 import { roomInputSchema, siteInputSchema, workstationInputSchema } from '../../../../shared/schemas/workspace';
 import type { SiteTree } from '../../../../shared/schemas/workspace-views';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { IdSelectField } from '@/components/ui/id-select-field';
 import { ErrorMessage, Notice } from '@/components/ui/status';
 import { useSchemaSubmit } from '@/hooks/use-schema-submit';
 import { useCreateRoom, useCreateSite, useCreateWorkstation } from '@/features/places/api/create-place';
 
 const n = decimalOrNaN;
 const box = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
+
+type ParentProps = Omit<ComponentProps<typeof IdSelectField>, 'none' | 'error'> & { missing: boolean };
+
+// The place a new one sits in; the schema's own message for a missing id means nothing to people.
+function ParentField({ missing, ...select }: ParentProps) {
+  return <IdSelectField none="Choose…" error={missing ? `Choose a ${select.label.toLowerCase()}` : undefined} {...select} />;
+}
+
+type Outcome = { isPending: boolean; isSuccess: boolean; data?: { name: string }; error: unknown };
+
+function FormEnd({ noun, mutation: m }: { noun: string; mutation: Outcome }) {
+  return (
+    <>
+      <Button type="submit" className="self-end" disabled={m.isPending}>
+        Add {noun.toLowerCase()}
+      </Button>
+      {m.isSuccess && (
+        <div className="sm:col-span-3">
+          <Notice>
+            {noun} “{m.data?.name}” added.
+          </Notice>
+        </div>
+      )}
+      {m.error && (
+        <div className="sm:col-span-3">
+          <ErrorMessage error={m.error} />
+        </div>
+      )}
+    </>
+  );
+}
 
 export function NewSiteForm() {
   const [name, setName] = useState('');
@@ -24,19 +56,7 @@ export function NewSiteForm() {
     <form onSubmit={submit} noValidate aria-label="New site" className={box}>
       <TextField label="Site name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       <TextField label="Address" value={address} onChange={(e) => setAddress(e.target.value)} />
-      <Button type="submit" className="self-end" disabled={m.isPending}>
-        Add site
-      </Button>
-      {m.isSuccess && (
-        <div className="sm:col-span-3">
-          <Notice>Site “{m.data.name}” added.</Notice>
-        </div>
-      )}
-      {m.error && (
-        <div className="sm:col-span-3">
-          <ErrorMessage error={m.error} />
-        </div>
-      )}
+      <FormEnd noun="Site" mutation={m} />
     </form>
   );
 }
@@ -52,28 +72,16 @@ const ROOM_FIELDS = [
 ] as const;
 
 export function NewRoomForm({ sites }: { sites: SiteTree[] }) {
-  const [siteId, setSiteId] = useState<number | ''>('');
+  const [siteId, setSiteId] = useState<number | null>(null);
   const [name, setName] = useState('');
   const [vals, setVals] = useState<Record<string, string>>(Object.fromEntries(ROOM_FIELDS.map(([k, , , d]) => [k, d])));
   const m = useCreateRoom();
   const { temperature_C, ...rest } = vals;
   const data = { ...Object.fromEntries(Object.entries(rest).map(([k, v]) => [k, n(v)])), temperature_K: n(temperature_C) + 273.15 };
-  const { errors, submit } = useSchemaSubmit(roomInputSchema, { siteId: siteId || undefined, name, data }, m, () => setName(''));
+  const { errors, submit } = useSchemaSubmit(roomInputSchema, { siteId: siteId ?? undefined, name, data }, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New room" className={box}>
-      <SelectField
-        label="Site"
-        value={siteId}
-        onChange={(e) => setSiteId(e.target.value ? Number(e.target.value) : '')}
-        error={errors.siteId ? 'Choose a site' : undefined}
-      >
-        <option value="">Choose…</option>
-        {sites.map((s) => (
-          <option key={s.id} value={s.id}>
-            {s.name}
-          </option>
-        ))}
-      </SelectField>
+      <ParentField label="Site" options={sites} value={siteId} onChange={setSiteId} missing={Boolean(errors.siteId)} />
       <TextField label="Room name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       {ROOM_FIELDS.map(([k, label, unit]) => (
         <TextField
@@ -86,19 +94,7 @@ export function NewRoomForm({ sites }: { sites: SiteTree[] }) {
           error={errors[`data.${k === 'temperature_C' ? 'temperature_K' : k}`]}
         />
       ))}
-      <Button type="submit" className="self-end" disabled={m.isPending}>
-        Add room
-      </Button>
-      {m.isSuccess && (
-        <div className="sm:col-span-3">
-          <Notice>Room “{m.data.name}” added.</Notice>
-        </div>
-      )}
-      {m.error && (
-        <div className="sm:col-span-3">
-          <ErrorMessage error={m.error} />
-        </div>
-      )}
+      <FormEnd noun="Room" mutation={m} />
     </form>
   );
 }
@@ -113,8 +109,8 @@ const WS_FIELDS = [
 ] as const;
 
 export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
-  const rooms = sites.flatMap((s) => s.rooms.map((r) => ({ id: r.id, label: `${r.name} (${s.name})` })));
-  const [roomId, setRoomId] = useState<number | ''>('');
+  const rooms = sites.flatMap((s) => s.rooms.map((r) => ({ id: r.id, name: `${r.name} (${s.name})` })));
+  const [roomId, setRoomId] = useState<number | null>(null);
   const [name, setName] = useState('');
   const [description, setDescription] = useState('');
   const [releaseType, setReleaseType] = useState('active');
@@ -122,26 +118,14 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
   const m = useCreateWorkstation();
   const point = (p: 'source' | 'worker') => ({ x_m: n(vals[`${p}.x_m`]), y_m: n(vals[`${p}.y_m`]), z_m: n(vals[`${p}.z_m`]) });
   const value = {
-    roomId: roomId || undefined,
+    roomId: roomId ?? undefined,
     name,
     data: { description, source: point('source'), worker: { ...point('worker'), posture: 'standing' }, releaseType },
   };
   const { errors, submit } = useSchemaSubmit(workstationInputSchema, value, m, () => setName(''));
   return (
     <form onSubmit={submit} noValidate aria-label="New workstation" className={box}>
-      <SelectField
-        label="Room"
-        value={roomId}
-        onChange={(e) => setRoomId(e.target.value ? Number(e.target.value) : '')}
-        error={errors.roomId ? 'Choose a room' : undefined}
-      >
-        <option value="">Choose…</option>
-        {rooms.map((r) => (
-          <option key={r.id} value={r.id}>
-            {r.label}
-          </option>
-        ))}
-      </SelectField>
+      <ParentField label="Room" options={rooms} value={roomId} onChange={setRoomId} missing={Boolean(errors.roomId)} />
       <TextField label="Workstation name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       <TextField label="What happens here" value={description} onChange={(e) => setDescription(e.target.value)} />
       {WS_FIELDS.map(([k, label]) => (
@@ -162,19 +146,7 @@ export function NewWorkstationForm({ sites }: { sites: SiteTree[] }) {
           </option>
         ))}
       </SelectField>
-      <Button type="submit" className="self-end" disabled={m.isPending}>
-        Add workstation
-      </Button>
-      {m.isSuccess && (
-        <div className="sm:col-span-3">
-          <Notice>Workstation “{m.data.name}” added.</Notice>
-        </div>
-      )}
-      {m.error && (
-        <div className="sm:col-span-3">
-          <ErrorMessage error={m.error} />
-        </div>
-      )}
+      <FormEnd noun="Workstation" mutation={m} />
     </form>
   );
 }

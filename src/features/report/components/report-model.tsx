@@ -13,27 +13,26 @@ const LIMITS = [
   'Particles do not collide, grow, break up or re-enter the air once settled.',
 ];
 
+const LISTS = [
+  ['How the estimate is made', MODEL],
+  ['What the model leaves out', LIMITS],
+] as const;
+
 export function ReportModel() {
   return (
     <section aria-labelledby="report-model" className="report-section mt-8 break-inside-avoid">
       <h2 id="report-model">2. Assumptions, the model and its limits</h2>
       <div className="mt-3 grid gap-4 text-sm md:grid-cols-2 print:grid-cols-2">
-        <div>
-          <h3 className="mb-1 font-semibold">How the estimate is made</h3>
-          <ul className="list-disc space-y-1 pl-5">
-            {MODEL.map((t) => (
-              <li key={t}>{t}</li>
-            ))}
-          </ul>
-        </div>
-        <div>
-          <h3 className="mb-1 font-semibold">What the model leaves out</h3>
-          <ul className="list-disc space-y-1 pl-5">
-            {LIMITS.map((t) => (
-              <li key={t}>{t}</li>
-            ))}
-          </ul>
-        </div>
+        {LISTS.map(([title, items]) => (
+          <div key={title}>
+            <h3 className="mb-1 font-semibold">{title}</h3>
+            <ul className="list-disc space-y-1 pl-5">
+              {items.map((t) => (
+                <li key={t}>{t}</li>
+              ))}
+            </ul>
+          </div>
+        ))}
       </div>
     </section>
   );

@@ -1,7 +1,9 @@
 import { useId } from 'react';
 import { Button } from '@/components/ui/button';
+import { ChoiceChips } from '@/components/ui/choice-chips';
 
 export const SPEEDS = [0.5, 1, 2, 4] as const;
+const SPEED_CHOICE = { look: 'box', legend: 'Playback speed', caption: 'Speed', options: SPEEDS, label: (s: number) => `${s}×` } as const;
 
 export function PlaybackControls({
   frame,
@@ -51,21 +53,7 @@ export function PlaybackControls({
           t = {time_s.toFixed(0)} s / {end_s.toFixed(0)} s
         </output>
       </div>
-      <fieldset className="flex items-center gap-1">
-        <legend className="sr-only">Playback speed</legend>
-        <span aria-hidden="true" className="mr-1 font-semibold">
-          Speed
-        </span>
-        {SPEEDS.map((s) => (
-          <label
-            key={s}
-            className={`cursor-pointer rounded-md border px-2 py-1 tabular-nums has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent ${speed === s ? 'border-accent bg-accent-soft font-semibold text-accent-strong' : 'border-line'}`}
-          >
-            <input type="radio" name={`${id}-speed`} className="sr-only" checked={speed === s} onChange={() => onSpeed(s)} />
-            {s}×
-          </label>
-        ))}
-      </fieldset>
+      <ChoiceChips {...SPEED_CHOICE} value={speed} onChange={onSpeed} />
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
-import { SelectField } from '@/components/ui/field';
+import { IdSelectField } from '@/components/ui/id-select-field';
 import { applyAgent, type AgentOption } from '@/features/scenario-editor/lib/apply-agent';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withDust } from '@/features/scenario-editor/lib/update';
@@ -7,7 +7,7 @@ import { NumberField } from './number-field';
 import { FieldGrid, Section, Subheading, type SectionProps } from './section';
 import { SizeProfileFields, type SizeProfileOption } from './size-profile-fields';
 
-type Props = SectionProps<ScenarioInput> & {
+export type DustChoices = {
   agents: AgentOption[];
   agentId: number | null;
   onAgentChange: (id: number | null) => void;
@@ -15,6 +15,7 @@ type Props = SectionProps<ScenarioInput> & {
   sizeProfileId: number | null;
   onSizeProfileChange: (id: number | null) => void;
 };
+type Props = SectionProps<ScenarioInput> & DustChoices;
 
 const FRACTION: Record<string, string> = { total: 'total', inhalable: 'inhalable', thoracic: 'thoracic', respirable: 'respirable' };
 
@@ -31,19 +32,14 @@ export function DustSection({ value, onChange, errors, agents, agentId, onAgentC
   return (
     <Section legend="Dust agent and size profile">
       <FieldGrid>
-        <SelectField
+        <IdSelectField
           label="Dust agent"
           className="sm:col-span-2"
-          value={agentId ?? ''}
-          onChange={(e) => chooseAgent(e.target.value === '' ? null : Number(e.target.value))}
-        >
-          <option value="">None: enter the density by hand</option>
-          {agents.map((a) => (
-            <option key={a.id} value={a.id}>
-              {a.name}
-            </option>
-          ))}
-        </SelectField>
+          options={agents}
+          none="None: enter the density by hand"
+          value={agentId}
+          onChange={chooseAgent}
+        />
         <NumberField
           label="Particle density"
           unit="kg/m³"

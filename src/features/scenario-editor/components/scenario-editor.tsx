@@ -1,28 +1,20 @@
 import { useMemo } from 'react';
 import { scenarioSchema, type ScenarioInput } from '../../../../shared/schemas/scenario';
-import type { AgentOption } from '@/features/scenario-editor/lib/apply-agent';
 import { issuesByPath } from '@/features/scenario-editor/lib/field-errors';
 import { ControlsSection } from './controls-section';
-import { DustSection } from './dust-section';
+import { DustSection, type DustChoices } from './dust-section';
 import { ElevationView } from './elevation-view';
 import { PlanView } from './plan-view';
 import { RoomSection } from './room-section';
 import { RunSection } from './run-section';
-import type { SizeProfileOption } from './size-profile-fields';
 import { SourceSection } from './source-section';
 import { ValidationSummary } from './validation-summary';
 import { ViewsLegend } from './views-legend';
 import { WorkerSection } from './worker-section';
 
-export type ScenarioEditorProps = {
+export type ScenarioEditorProps = DustChoices & {
   value: ScenarioInput;
   onChange: (next: ScenarioInput) => void;
-  agents: AgentOption[];
-  agentId: number | null;
-  onAgentChange: (id: number | null) => void;
-  sizeProfiles: SizeProfileOption[];
-  sizeProfileId: number | null;
-  onSizeProfileChange: (id: number | null) => void;
   readOnly?: boolean;
   serverErrors?: Record<string, string>;
 };

@@ -2,6 +2,7 @@ import { formatSig } from '../../../../shared/format/index';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { metresToMicrometres, micrometresToMetres } from '../../../../shared/units';
 import { SelectField } from '@/components/ui/field';
+import { IdSelectField } from '@/components/ui/id-select-field';
 import { withDust } from '@/features/scenario-editor/lib/update';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
@@ -39,19 +40,14 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
   return (
     <div className="flex flex-col gap-4">
       <FieldGrid>
-        <SelectField
+        <IdSelectField
           label="Size profile"
           className="sm:col-span-2"
-          value={sizeProfileId ?? ''}
-          onChange={(e) => choose(e.target.value === '' ? null : Number(e.target.value))}
-        >
-          <option value="">Enter lognormal here</option>
-          {sizeProfiles.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name}
-            </option>
-          ))}
-        </SelectField>
+          options={sizeProfiles}
+          none="Enter lognormal here"
+          value={sizeProfileId}
+          onChange={choose}
+        />
         {sizeProfileId === null && profile.kind === 'lognormal' && (
           <>
             <SelectField

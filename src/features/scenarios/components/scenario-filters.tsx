@@ -1,4 +1,5 @@
 import { SelectField, TextField } from '@/components/ui/field';
+import { IdSelectField } from '@/components/ui/id-select-field';
 
 export type FilterOption = { id: number; name: string };
 export type FilterValue = { siteId?: number; workstationId?: number; agentId?: number; status?: 'draft' | 'approved'; q?: string };
@@ -11,40 +12,26 @@ type Props = {
   onChange: (v: FilterValue) => void;
 };
 
-const num = (v: string) => (v ? Number(v) : undefined);
+const PICKERS = [
+  { key: 'siteId', list: 'sites', label: 'Site', none: 'All sites' },
+  { key: 'workstationId', list: 'workstations', label: 'Workstation', none: 'All workstations' },
+  { key: 'agentId', list: 'agents', label: 'Dust agent', none: 'All agents' },
+] as const;
 
-export function ScenarioFilters({ sites, workstations, agents, value, onChange }: Props) {
+export function ScenarioFilters({ value, onChange, ...lists }: Props) {
   return (
     <div role="search" aria-label="Filter scenarios" className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-5">
       <TextField label="Name contains" value={value.q ?? ''} onChange={(e) => onChange({ ...value, q: e.target.value || undefined })} />
-      <SelectField label="Site" value={value.siteId ?? ''} onChange={(e) => onChange({ ...value, siteId: num(e.target.value) })}>
-        <option value="">All sites</option>
-        {sites.map((s) => (
-          <option key={s.id} value={s.id}>
-            {s.name}
-          </option>
-        ))}
-      </SelectField>
-      <SelectField
-        label="Workstation"
-        value={value.workstationId ?? ''}
-        onChange={(e) => onChange({ ...value, workstationId: num(e.target.value) })}
-      >
-        <option value="">All workstations</option>
-        {workstations.map((w) => (
-          <option key={w.id} value={w.id}>
-            {w.name}
-          </option>
-        ))}
-      </SelectField>
-      <SelectField label="Dust agent" value={value.agentId ?? ''} onChange={(e) => onChange({ ...value, agentId: num(e.target.value) })}>
-        <option value="">All agents</option>
-        {agents.map((a) => (
-          <option key={a.id} value={a.id}>
-            {a.name}
-          </option>
-        ))}
-      </SelectField>
+      {PICKERS.map((p) => (
+        <IdSelectField
+          key={p.key}
+          label={p.label}
+          options={lists[p.list]}
+          none={p.none}
+          value={value[p.key]}
+          onChange={(id) => onChange({ ...value, [p.key]: id ?? undefined })}
+        />
+      ))}
       <SelectField
         label="Status"
         value={value.status ?? ''}

@@ -1,11 +1,12 @@
 import { decimalOrNaN } from '../../../../shared/format/parse-decimal';
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { createSizeProfileSchema } from '../../../../shared/schemas/size-profiles';
 import { micrometresToMetres } from '../../../../shared/units';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { ErrorMessage, Notice } from '@/components/ui/status';
-import { fieldErrors } from '@/lib/form-errors';
+import { useSchemaSubmit } from '@/hooks/use-schema-submit';
+import { bindFields } from '@/lib/bind-fields';
 import { useCreateSizeProfile } from '@/features/size-profiles/api/create-size-profile';
 
 type Mode = 'mmad' | 'cmd' | 'respirable';
@@ -14,7 +15,6 @@ const number = (text: string) => (text.trim() === '' ? undefined : decimalOrNaN(
 export function LognormalForm() {
   const [mode, setMode] = useState<Mode>('mmad');
   const [form, setForm] = useState({ name: '', median_um: '', gsd: '2', density: '', respirable: '' });
-  const [submitted, setSubmitted] = useState(false);
   const create = useCreateSizeProfile();
   const median_um = number(form.median_um);
   const input =
@@ -28,15 +28,8 @@ export function LognormalForm() {
           gsd: number(form.gsd) ?? NaN,
           density_kgPerM3: number(form.density),
         };
-  const parsed = createSizeProfileSchema.safeParse(input);
-  const errors = submitted ? fieldErrors(parsed, create.error) : {};
-  const set = (key: keyof typeof form) => (e: { target: { value: string } }) => setForm({ ...form, [key]: e.target.value });
-
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setSubmitted(true);
-    if (parsed.success) create.mutate(parsed.data, { onSuccess: () => setSubmitted(false) });
-  }
+  const { errors, submit } = useSchemaSubmit(createSizeProfileSchema, input, create);
+  const field = bindFields(form, setForm, errors);
 
   return (
     <form
@@ -52,44 +45,24 @@ export function LognormalForm() {
           <option value="cmd">CMD and GSD (with density)</option>
           <option value="respirable">Respirable fraction only</option>
         </SelectField>
-        <TextField label="Name" value={form.name} onChange={set('name')} error={errors.name} />
+        <TextField label="Name" {...field('name')} />
         {mode === 'respirable' ? (
-          <TextField
-            label="Respirable fraction"
-            unit="%"
-            inputMode="decimal"
-            value={form.respirable}
-            onChange={set('respirable')}
-            error={errors.respirableFraction}
-          />
+          <TextField label="Respirable fraction" unit="%" inputMode="decimal" {...field('respirable', 'respirableFraction')} />
         ) : (
           <TextField
             label={mode === 'mmad' ? 'MMAD' : 'CMD (physical)'}
             unit="µm"
             inputMode="decimal"
-            value={form.median_um}
-            onChange={set('median_um')}
-            error={errors.median_m}
+            {...field('median_um', 'median_m')}
           />
         )}
         <TextField
           label="GSD"
           inputMode="decimal"
-          value={form.gsd}
-          onChange={set('gsd')}
-          error={errors.gsd}
+          {...field('gsd')}
           hint={mode === 'respirable' ? 'Assumed spread; 2 unless you know better' : undefined}
         />
-        {mode === 'cmd' && (
-          <TextField
-            label="Particle density"
-            unit="kg/m³"
-            inputMode="decimal"
-            value={form.density}
-            onChange={set('density')}
-            error={errors.density_kgPerM3}
-          />
-        )}
+        {mode === 'cmd' && <TextField label="Particle density" unit="kg/m³" inputMode="decimal" {...field('density', 'density_kgPerM3')} />}
       </div>
       <p className="text-sm text-muted">
         {mode === 'cmd' &&

@@ -2,7 +2,7 @@ import { percentText } from '../../../../shared/format/index';
 import { Link } from 'react-router-dom';
 import { BannerBadge } from '@/components/banner-badge';
 import { Button } from '@/components/ui/button';
-import { type Column, DataTable } from '@/components/ui/data-table';
+import { type Column, DataTable, figureColumn } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
 import { downloadCsv, toCsv } from '@/lib/csv';
 import { sig } from '@/lib/format';
@@ -61,41 +61,17 @@ export function SweepTable({
   canSave: boolean;
 }) {
   const columns: Column<TableRow>[] = [
-    { key: 'index', header: 'Point', render: (r) => r.index + 1, sortValue: (r) => r.index, align: 'right' },
-    {
-      key: 'value',
-      header: PARAMETER[parameter].label,
-      render: (r) => formatValue(parameter, r.value),
-      sortValue: (r) => r.value,
-      align: 'right',
-    },
-    {
-      key: 'twa',
-      header: '8-h TWA (mg/m³)',
-      render: (r) => sig(r.result.twa8h_mgPerM3),
-      sortValue: (r) => r.result.twa8h_mgPerM3,
-      align: 'right',
-    },
+    figureColumn({ key: 'index', header: 'Point', value: (r) => r.index, show: (i) => i + 1 }),
+    figureColumn({ key: 'value', header: PARAMETER[parameter].label, value: (r) => r.value, show: (v) => formatValue(parameter, v) }),
+    figureColumn({ key: 'twa', header: '8-h TWA (mg/m³)', value: (r) => r.result.twa8h_mgPerM3, show: sig }),
     {
       key: 'ci',
       header: '95 % CI (mg/m³)',
       render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`,
       align: 'right',
     },
-    {
-      key: 'pct',
-      header: '% of limit',
-      render: (r) => percentText(r.result.percentOfLimit),
-      sortValue: (r) => r.result.percentOfLimit,
-      align: 'right',
-    },
-    {
-      key: 'upper',
-      header: 'Upper 95 % (% of limit)',
-      render: (r) => percentText(r.result.percentOfLimitUpper),
-      sortValue: (r) => r.result.percentOfLimitUpper,
-      align: 'right',
-    },
+    figureColumn({ key: 'pct', header: '% of limit', value: (r) => r.result.percentOfLimit, show: percentText }),
+    figureColumn({ key: 'upper', header: 'Upper 95 % (% of limit)', value: (r) => r.result.percentOfLimitUpper, show: percentText }),
     {
       key: 'banner',
       header: 'Banner',
