@@ -23,7 +23,6 @@ export function LoginForm({ onSignedIn }: { onSignedIn: (user: SignedInUser) => 
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
-      {/* eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field */}
       <TextField
         label="E-mail"
         type="email"
@@ -31,6 +30,7 @@ export function LoginForm({ onSignedIn }: { onSignedIn: (user: SignedInUser) => 
         value={email}
         onChange={(e) => setEmail(e.target.value)}
         error={errors.email}
+        // eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field
         autoFocus
       />
       <TextField

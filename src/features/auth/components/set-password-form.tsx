@@ -23,7 +23,6 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4">
-      {/* eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field */}
       <TextField
         label="New password"
         type="password"
@@ -32,6 +31,7 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
         onChange={(e) => setPassword(e.target.value)}
         error={errors.password}
         hint="At least 10 characters."
+        // eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field
         autoFocus
       />
       <TextField
