@@ -1,4 +1,5 @@
 import fs from 'node:fs';
+import { parse } from 'csv-parse/sync';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PEOPLE } from '../../server/db/seed';
@@ -59,7 +60,11 @@ describe('the particle calculator', () => {
     const download = page.waitForEvent('download');
     await page.getByRole('button', { name: 'Download CSV' }).click();
     const csv = fs.readFileSync((await (await download).path())!, 'utf8');
-    expect(csv).toContain('"Settling velocity (m/s)"');
+    // The BOM is there on purpose (spreadsheets then read µ and ²); the writer quotes a cell only when it must (RFC 4180).
+    expect(csv.startsWith('\uFEFF')).toBe(true);
+    const table: string[][] = parse(csv.slice(1));
+    expect(table[0]).toContain('Settling velocity (m/s)');
+    expect(table).toHaveLength(7);
     expect(csv.trim().split('\r\n')).toHaveLength(7);
   });
 

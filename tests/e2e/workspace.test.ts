@@ -35,6 +35,8 @@ describe('an engineer builds, runs and saves a scenario; a viewer reads it', () 
   it('adds an option at the stone bench, drags the hood in the plan view, saves, runs with progress and saves the run', async () => {
     const page = await asEngineer();
     await page.getByRole('link', { name: 'Workstations' }).click();
+    // The scenario list stays on screen while the next page loads, and it links the bench once per scenario.
+    await page.getByRole('heading', { name: 'Sites and workstations' }).waitFor();
     await page.getByRole('link', { name: 'Edge-grinding bench 2' }).click();
     await page.getByRole('button', { name: 'Add an option' }).click();
     await page.waitForURL(/\/scenarios\/\d+$/);

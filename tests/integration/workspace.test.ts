@@ -151,3 +151,25 @@ describe('scenarios', () => {
     expect((await t.db('scenarios').where({ id: dup.body.id }).first()).deleted_at).not.toBeNull();
   });
 });
+
+describe('the site tree', () => {
+  it('lists each live workstation once, under its own room, even when it has scenarios and an operator', async () => {
+    const eng = await t.signIn('engineer');
+    const siteId = (await t.db('sites').first()).id;
+    const room = await eng.post('/api/rooms').send({ siteId, name: 'Polishing hall', data: ROOM_DATA });
+    await eng.post('/api/workstations').send({ roomId: room.body.id, name: 'Bench 3', data: WORKSTATION_DATA });
+    await eng.post('/api/workstations').send({ roomId: room.body.id, name: 'Bench 4', data: WORKSTATION_DATA });
+    await t.db('workstation_operators').insert({ workstation_id: workstationId, person_id: await t.personId('operator') });
+    const tree = (await (await t.signIn('viewer')).get('/api/sites')).body.items as {
+      rooms: { id: number; workstations: { id: number; roomId: number }[] }[];
+    }[];
+    const listed = tree.flatMap((s) =>
+      s.rooms.flatMap((r) => r.workstations.map((w) => ({ id: w.id, roomId: w.roomId, underRoom: r.id }))),
+    );
+    // The database itself is the reference: one entry per live workstation row.
+    const rows = await t.db('workstations').whereNull('deleted_at').select('id', 'room_id');
+    expect(rows.length).toBeGreaterThanOrEqual(3);
+    expect(listed.map((w) => w.id).sort((a, b) => a - b)).toEqual(rows.map((r) => r.id).sort((a, b) => a - b));
+    for (const w of listed) expect(w.underRoom).toBe(w.roomId);
+  });
+});

@@ -16,9 +16,10 @@ function compute(o: Options): { scenario: Scenario; result: unknown } {
     prepared,
     Array.from({ length: prepared.batches }, (_, k) => runBatch(prepared, k)),
   );
-  // Results do not carry bin diameters yet; the preview adds them to show the µm legend.
-  const withBins = o.diameters ? { ...results, sizeBins: { aerodynamic_m: Array.from(prepared.bins.aerodynamic_m) } } : results;
-  return { scenario, result: o.json ? JSON.parse(JSON.stringify(toJsonFriendly(withBins))) : withBins };
+  // Without diameters the result has the shape engine 1.0.0 first stored, which views read by bin index.
+  const { sizeBins: _bins, ...withoutBins } = results;
+  const shown = o.diameters ? results : withoutBins;
+  return { scenario, result: o.json ? JSON.parse(JSON.stringify(toJsonFriendly(shown))) : shown };
 }
 
 /** Dev-only page: runs the engine in-process and shows the results view, no server involved. */
