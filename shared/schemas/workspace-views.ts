@@ -16,6 +16,9 @@ export type LastRun = {
   percentOfLimit: number | null;
   ratingCategory: number | null;
   banner: Banner | null;
+  /** The server's verdict: false while more particles could change the banner (shared/verdict). */
+  decided: boolean | null;
+  reasons: string[];
 };
 
 export type ScenarioSummary = {
@@ -52,6 +55,8 @@ export type Approval = {
   percentOfLimit: number | null;
   expired: boolean;
   outOfDate: boolean;
+  /** The agent's limit is not the one the approval was given under. */
+  limitChanged: boolean;
   needsReview: boolean;
 };
 
@@ -84,6 +89,8 @@ export type RunListItem = {
   created_by: number | null;
   created_at: string;
   outOfDate: boolean;
+  decided: boolean | null;
+  reasons: string[];
 };
 
 export type ScenarioDetail = ScenarioSummary & { input: ScenarioInput; inputHash: string; approval: Approval | null; runs: RunListItem[] };
