@@ -4,6 +4,7 @@ import { withTransaction, type Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
 import { agents } from './agents.repo';
+import { rejudgeAgentRuns } from '../verdicts/rejudge-agent-runs';
 
 type Actor = { id: number; email: string };
 
@@ -29,12 +30,13 @@ export const agentsService = {
     return withTransaction(db, async (trx) => {
       await agents.update(trx, id, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
+      const scenariosRejudged = await rejudgeAgentRuns(trx, id, input.data);
       await writeAudit(trx, {
         actor,
         action: overridden ? 'agent.limit_overridden' : 'agent.changed',
         targetType: 'agent',
         targetId: id,
-        detail: overridden ? { override: input.data.override } : undefined,
+        detail: overridden ? { override: input.data.override, scenariosRejudged } : undefined,
       });
       return (await agents.get(trx, id))!;
     });

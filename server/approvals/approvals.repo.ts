@@ -1,7 +1,8 @@
-import type { Approval, Banner } from '../../shared/schemas/workspace-views';
+import type { Approval } from '../../shared/schemas/workspace-views';
 import type { Conn } from '../db/knex';
 import type { ApprovalRow } from '../db/tables';
 import { approvalReview } from './review-rule';
+import { currentLimit, judgeStored } from '../verdicts/run-verdict';
 
 export type CurrentApproval = Approval;
 
@@ -11,19 +12,22 @@ type JoinedRow = ApprovalRow & {
   scenario_deleted: string | null;
   run_hash: string;
   run_engine_version: string;
-  banner: string | null;
-  percent_of_limit: number | null;
+  verdict_numbers: string | null;
+  agent_data: string | null;
+  scenario_input: string;
   approver: string;
 };
 
 const today = () => new Date().toISOString().slice(0, 10);
 
-// Needs review when the review date has passed, the scenario changed after the approved run, or the engine's major version moved on.
+// Needs review when the review date has passed, the scenario changed after the approved run, the engine's major
+// version moved on, the agent's limit is no longer the one approved under, or the run judged against today's limit is Act.
 export async function currentApproval(db: Conn, workstationId: number, currentEngineVersion?: string): Promise<CurrentApproval | null> {
   const a: JoinedRow | undefined = await db('approvals as ap')
     .join('scenarios as s', 's.id', 'ap.scenario_id')
     .join('runs as r', 'r.id', 'ap.run_id')
     .join('people as p', 'p.id', 'ap.approved_by')
+    .leftJoin('dust_agents as ag', 'ag.id', 's.agent_id')
     .where('ap.workstation_id', workstationId)
     .whereNull('ap.superseded_at')
     .orderBy('ap.id', 'desc')
@@ -34,8 +38,9 @@ export async function currentApproval(db: Conn, workstationId: number, currentEn
       's.deleted_at as scenario_deleted',
       'r.input_hash as run_hash',
       'r.engine_version as run_engine_version',
-      'r.banner',
-      'r.percent_of_limit',
+      'r.verdict_numbers',
+      'ag.data as agent_data',
+      's.input as scenario_input',
       'p.name as approver',
     )
     .first();
@@ -43,6 +48,9 @@ export async function currentApproval(db: Conn, workstationId: number, currentEn
   const expired = a.review_date < today();
   const outOfDate = a.scenario_hash !== a.run_hash || a.scenario_deleted != null;
   const review = approvalReview({ expired, outOfDate, runEngineVersion: a.run_engine_version }, currentEngineVersion);
+  const limit = currentLimit(a.agent_data, a.scenario_input);
+  const verdict = judgeStored(a.verdict_numbers, limit);
+  const limitChanged = a.limit_mgPerM3 != null && (limit?.value_mgPerM3 !== a.limit_mgPerM3 || limit?.fraction !== a.limit_fraction);
   return {
     id: a.id,
     scenarioId: a.scenario_id,
@@ -52,11 +60,25 @@ export async function currentApproval(db: Conn, workstationId: number, currentEn
     reviewDate: a.review_date,
     approvedAt: a.approved_at,
     approvedBy: a.approver,
-    banner: a.banner as Banner | null,
-    percentOfLimit: a.percent_of_limit,
+    banner: verdict?.banner ?? null,
+    percentOfLimit: verdict?.percentOfLimit ?? null,
     expired,
     outOfDate,
     ...review,
+    limitChanged,
+    needsReview: review.needsReview || limitChanged || !verdict || verdict.banner === 'act',
+    reviewReason:
+      [
+        review.reviewReason,
+        limitChanged ? 'the limit has changed since approval' : null,
+        !verdict
+          ? 'the approved run cannot be judged against the current limit'
+          : verdict.banner === 'act'
+            ? 'the approved run is above the current limit'
+            : null,
+      ]
+        .filter(Boolean)
+        .join('; ') || null,
   };
 }
 
@@ -68,6 +90,8 @@ export type NewApproval = {
   reviewDate: string;
   approvedBy: number;
   approvedAt: string;
+  limitFraction: string | null;
+  limit_mgPerM3: number | null;
 };
 
 // The workstation's earlier approval stays on record, marked superseded at the new one's time.
@@ -82,6 +106,8 @@ export async function replaceApproval(db: Conn, a: NewApproval): Promise<number>
       review_date: a.reviewDate,
       approved_by: a.approvedBy,
       approved_at: a.approvedAt,
+      limit_fraction: a.limitFraction,
+      limit_mgPerM3: a.limit_mgPerM3,
     })
     .returning('id');
   return typeof row === 'object' ? row.id : row;

@@ -4,8 +4,10 @@ import type { Approval } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { writeAudit } from '../audit/audit.repo';
+import { agents } from '../agents/agents.repo';
 import { findRunOfScenario } from '../scenarios/runs.repo';
 import { findScenario, markApproved } from '../scenarios/scenarios.repo';
+import { currentLimit, judgeStored } from '../verdicts/run-verdict';
 import { currentApproval, replaceApproval } from './approvals.repo';
 
 type Actor = { id: number; email: string };
@@ -21,13 +23,17 @@ export async function approveScenario(db: Db, actor: Actor, scenarioId: number, 
       ]);
     if (run.inputHash !== scenario.inputHash)
       throw new AppError(409, 'run_out_of_date', 'The scenario changed after this run. Run it again and save the run before approving.');
-    if (run.banner === 'act')
+    // The server's own verdict against today's limit, never the banner stored with the run.
+    const agent = scenario.agentId ? await agents.get(trx, scenario.agentId) : undefined;
+    const limit = currentLimit(agent?.data ?? null, scenario.input);
+    const verdict = judgeStored(run.verdictNumbers, limit);
+    if (verdict?.banner === 'act')
       throw new AppError(
         409,
         'above_limit',
         'This run is above the limit (Act). An option that fails its limit cannot be approved as the current control.',
       );
-    const reviewDate = input.reviewDate ?? reviewDueDate(run.banner, new Date());
+    const reviewDate = input.reviewDate ?? reviewDueDate(verdict?.banner ?? null, new Date());
     if (reviewDate <= new Date().toISOString().slice(0, 10))
       throw new AppError(400, 'invalid_input', 'The review date must be in the future', [
         { path: 'body.reviewDate', message: 'Pick a later date' },
@@ -42,6 +48,8 @@ export async function approveScenario(db: Db, actor: Actor, scenarioId: number, 
       reviewDate,
       approvedBy: actor.id,
       approvedAt: now,
+      limitFraction: limit?.fraction ?? null,
+      limit_mgPerM3: limit?.value_mgPerM3 ?? null,
     });
     await writeAudit(trx, {
       actor,

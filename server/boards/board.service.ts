@@ -60,7 +60,9 @@ export async function stationBoard(db: Db, workstationId: number): Promise<Stati
     ? 'There is no approved assessment for this station.'
     : approval.expired
       ? `The assessment was due for review on ${approval.reviewDate}.`
-      : null;
+      : approval.limitChanged
+        ? 'The exposure limit for this dust changed after the assessment was approved: it is being checked again.'
+        : null;
   return {
     workstationId,
     workstationName: ws.name,

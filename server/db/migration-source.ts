@@ -7,6 +7,7 @@ import * as createWorkspace from '../../migrations/20261202000500_create_workspa
 import * as createSizeProfiles from '../../migrations/20261202000600_create_size_profiles';
 import * as createScenarios from '../../migrations/20261202000700_create_scenarios';
 import * as createApprovals from '../../migrations/20261202000800_create_approvals';
+import * as addRunVerdictNumbers from '../../migrations/20261202000900_add_run_verdict_numbers';
 import * as moveReleaseTypeToSource from '../../migrations/20261202150000_move_release_type_to_source';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
@@ -22,6 +23,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202000600_create_size_profiles.ts': createSizeProfiles,
   '20261202000700_create_scenarios.ts': createScenarios,
   '20261202000800_create_approvals.ts': createApprovals,
+  '20261202000900_add_run_verdict_numbers.ts': addRunVerdictNumbers,
   '20261202150000_move_release_type_to_source.ts': moveReleaseTypeToSource,
 };
 

@@ -102,6 +102,8 @@ export type RunRow = {
   percent_of_limit: number | null;
   rating_category: number | null;
   banner: string | null;
+  /** JSON of server/verdicts/verdict-numbers.ts: what the server judges every read from. */
+  verdict_numbers: string | null;
   input: string;
   result: string;
   created_by: number | null;
@@ -119,6 +121,9 @@ export type ApprovalRow = {
   approved_by: number;
   approved_at: string;
   superseded_at: string | null;
+  /** The limit the approval was given under; null for approvals from before it was kept, or without a limit. */
+  limit_fraction: string | null;
+  limit_mgPerM3: number | null;
 };
 
 // Inserts leave out the generated id and the columns that have defaults or may stay null.
@@ -144,7 +149,7 @@ declare module 'knex/types/tables' {
       ScenarioRow,
       'control_description' | 'control_tier' | 'status' | 'version' | 'deleted_at' | 'agent_id' | 'size_profile_id'
     >;
-    runs: Table<RunRow, 'deleted_at'>;
-    approvals: Table<ApprovalRow, 'note' | 'superseded_at'>;
+    runs: Table<RunRow, 'deleted_at' | 'verdict_numbers'>;
+    approvals: Table<ApprovalRow, 'note' | 'superseded_at' | 'limit_fraction' | 'limit_mgPerM3'>;
   }
 }

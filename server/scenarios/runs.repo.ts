@@ -3,6 +3,7 @@ import type { Scenario } from '../../shared/schemas/scenario';
 import type { Banner, RunListItem } from '../../shared/schemas/workspace-views';
 import type { Conn } from '../db/knex';
 import type { RunRow } from '../db/tables';
+import type { VerdictNumbers } from '../verdicts/verdict-numbers';
 
 export type NewRun = {
   scenarioId: number;
@@ -17,6 +18,7 @@ export type NewRun = {
   percentOfLimit: number | null;
   ratingCategory: number | null;
   banner: Banner | null;
+  verdictNumbers: VerdictNumbers;
   input: unknown;
   result: unknown;
   createdBy: number;
@@ -30,6 +32,7 @@ export type StoredRun = {
   inputHash: string;
   particles: number;
   banner: Banner | null;
+  verdictNumbers: string | null;
   createdAt: string;
 };
 export type StoredRunWithData = StoredRun & { input: Scenario; result: unknown };
@@ -42,6 +45,7 @@ const toStored = (r: RunRow): StoredRun => ({
   inputHash: r.input_hash,
   particles: r.particles,
   banner: r.banner as Banner | null,
+  verdictNumbers: r.verdict_numbers,
   createdAt: r.created_at,
 });
 
@@ -61,6 +65,7 @@ export async function insertRun(db: Conn, run: NewRun): Promise<number> {
       percent_of_limit: run.percentOfLimit,
       rating_category: run.ratingCategory,
       banner: run.banner,
+      verdict_numbers: JSON.stringify(run.verdictNumbers),
       input: JSON.stringify(run.input),
       // Typed arrays in the parsed result would stringify as {"0": …} objects: store plain lists.
       result: JSON.stringify(toJsonFriendly(run.result)),
@@ -92,7 +97,8 @@ export async function findRunOfScenario(
   return row ? toStored(row) : undefined;
 }
 
-export type RunListRow = Omit<RunListItem, 'outOfDate'>;
+// The stored banner columns are only what the run was saved with; the service judges the list afresh.
+export type RunListRow = Omit<RunListItem, 'outOfDate' | 'decided' | 'reasons'> & { verdictNumbers: string | null };
 
 export async function listRuns(db: Conn, scenarioId: number): Promise<RunListRow[]> {
   const rows = await db('runs')
@@ -113,8 +119,33 @@ export async function listRuns(db: Conn, scenarioId: number): Promise<RunListRow
       'percent_of_limit',
       'rating_category',
       'banner',
+      'verdict_numbers',
       'created_by',
       'created_at',
     );
-  return rows.map((r) => ({ ...r, banner: r.banner as Banner | null }));
+  return rows.map(({ verdict_numbers, ...r }) => ({ ...r, banner: r.banner as Banner | null, verdictNumbers: verdict_numbers }));
+}
+
+/** Every live run of the scenarios that use a dust agent, with what a verdict needs. */
+export async function runsOfAgent(db: Conn, agentId: number): Promise<{ id: number; scenarioId: number; verdictNumbers: string | null }[]> {
+  const rows: Pick<RunRow, 'id' | 'scenario_id' | 'verdict_numbers'>[] = await db('runs as r')
+    .join('scenarios as s', 's.id', 'r.scenario_id')
+    .where('s.agent_id', agentId)
+    .whereNull('r.deleted_at')
+    .whereNull('s.deleted_at')
+    .select('r.id', 'r.scenario_id', 'r.verdict_numbers');
+  return rows.map((r) => ({ id: r.id, scenarioId: r.scenario_id, verdictNumbers: r.verdict_numbers }));
+}
+
+export type RunVerdictColumns = {
+  limitFraction: string | null;
+  percentOfLimit: number | null;
+  ratingCategory: number | null;
+  banner: Banner | null;
+};
+
+export async function updateRunVerdict(db: Conn, runId: number, v: RunVerdictColumns): Promise<void> {
+  await db('runs')
+    .where({ id: runId })
+    .update({ limit_fraction: v.limitFraction, percent_of_limit: v.percentOfLimit, rating_category: v.ratingCategory, banner: v.banner });
 }

@@ -1,8 +1,9 @@
 import type { Scenario } from '../../shared/schemas/scenario';
 import type { ControlTier, ScenarioListQuery } from '../../shared/schemas/workspace';
-import type { Banner, Page, ScenarioSummary } from '../../shared/schemas/workspace-views';
+import type { Page, ScenarioSummary } from '../../shared/schemas/workspace-views';
 import type { Conn } from '../db/knex';
 import type { RunRow, ScenarioRow } from '../db/tables';
+import { currentLimit, judgedRunFigures } from '../verdicts/run-verdict';
 
 const SORT: Record<ScenarioListQuery['sort'], string> = {
   name: 's.name',
@@ -58,6 +59,9 @@ const COLUMNS = [
   'lr.rating_category',
   'lr.banner',
   'lr.created_at as run_created_at',
+  'lr.verdict_numbers',
+  'a.data as agent_data',
+  's.input as scenario_input',
 ];
 
 type JoinedRow = ScenarioRow & {
@@ -70,6 +74,8 @@ type JoinedRow = ScenarioRow & {
   run_id: number | null;
   run_input_hash: string | null;
   run_created_at: string | null;
+  agent_data: string | null;
+  scenario_input: string;
 } & Pick<
     RunRow,
     | 'respirable_twa8h_mgPerM3'
@@ -80,9 +86,13 @@ type JoinedRow = ScenarioRow & {
     | 'percent_of_limit'
     | 'rating_category'
     | 'banner'
+    | 'verdict_numbers'
   >;
 
+// The banner, percentage and rating are judged on every read against the agent's current limit.
 function toSummary(r: JoinedRow): ScenarioSummary {
+  const judged = r.run_id ? judgedRunFigures(r, currentLimit(r.agent_data, r.scenario_input)) : null;
+  const v = judged?.verdict ?? null;
   return {
     id: r.id,
     name: r.name,
@@ -106,12 +116,14 @@ function toSummary(r: JoinedRow): ScenarioSummary {
           createdAt: r.run_created_at as string,
           outOfDate: r.run_input_hash !== r.input_hash,
           respirableTwa8h_mgPerM3: r.respirable_twa8h_mgPerM3,
-          limitFraction: r.limit_fraction,
-          twa8h_mgPerM3: r.twa8h_mgPerM3,
-          twa8hCi95_mgPerM3: [r.twa8h_lo_mgPerM3, r.twa8h_hi_mgPerM3],
-          percentOfLimit: r.percent_of_limit,
-          ratingCategory: r.rating_category,
-          banner: r.banner as Banner | null,
+          limitFraction: judged!.limitFraction,
+          twa8h_mgPerM3: judged!.twa8h_mgPerM3,
+          twa8hCi95_mgPerM3: judged!.twa8hCi95_mgPerM3,
+          percentOfLimit: v?.percentOfLimit ?? null,
+          ratingCategory: v?.ratingCategory ?? null,
+          banner: v?.banner ?? null,
+          decided: v?.decided ?? null,
+          reasons: v?.reasons ?? [],
         }
       : null,
   };
@@ -140,17 +152,18 @@ export async function listScenarios(db: Conn, q: ScenarioListQuery): Promise<Pag
 export async function findScenarioSummary(
   db: Conn,
   id: number,
-): Promise<{ summary: ScenarioSummary; input: Scenario; inputHash: string } | undefined> {
+): Promise<{ summary: ScenarioSummary; input: Scenario; inputHash: string; agentData: string | null } | undefined> {
   const row = (await baseQuery(db)
     .where('s.id', id)
     .select([...COLUMNS, 's.input'])
     .first()) as JoinedRow | undefined;
-  return row ? { summary: toSummary(row), input: JSON.parse(row.input), inputHash: row.input_hash } : undefined;
+  return row ? { summary: toSummary(row), input: JSON.parse(row.input), inputHash: row.input_hash, agentData: row.agent_data } : undefined;
 }
 
 export type StoredScenario = {
   id: number;
   workstationId: number;
+  agentId: number | null;
   name: string;
   controlDescription: string;
   status: ScenarioSummary['status'];
@@ -162,6 +175,7 @@ export type StoredScenario = {
 const toStored = (r: ScenarioRow): StoredScenario => ({
   id: r.id,
   workstationId: r.workstation_id,
+  agentId: r.agent_id,
   name: r.name,
   controlDescription: r.control_description,
   status: r.status as StoredScenario['status'],
@@ -239,4 +253,17 @@ export async function softDeleteScenario(db: Conn, id: number): Promise<void> {
 export async function markApproved(db: Conn, id: number, workstationId: number): Promise<void> {
   await db('scenarios').where({ workstation_id: workstationId, status: 'approved' }).update({ status: 'draft' });
   await db('scenarios').where({ id }).update({ status: 'approved' });
+}
+
+/** What the current limit of a scenario's runs is read from: its agent's data and its own input. */
+export async function scenarioLimitSource(
+  db: Conn,
+  scenarioId: number,
+): Promise<{ agentData: string | null; scenarioInput: string } | undefined> {
+  const row = (await db('scenarios as s')
+    .leftJoin('dust_agents as a', 'a.id', 's.agent_id')
+    .where('s.id', scenarioId)
+    .select('a.data as agent_data', 's.input as scenario_input')
+    .first()) as { agent_data: string | null; scenario_input: string } | undefined;
+  return row ? { agentData: row.agent_data, scenarioInput: row.scenario_input } : undefined;
 }

@@ -1,3 +1,4 @@
+import type { RunResult } from '../../shared/schemas/run-result';
 import type { RunCreate } from '../../shared/schemas/runs';
 import type { ScenarioCreate, ScenarioListQuery, ScenarioUpdate } from '../../shared/schemas/workspace';
 import type { Page, SavedRun, ScenarioDetail, ScenarioSummary } from '../../shared/schemas/workspace-views';
@@ -8,8 +9,19 @@ import { writeAudit } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { workstations } from '../places/places.repo';
 import { currentApproval } from '../approvals/approvals.repo';
-import { findScenario, findScenarioSummary, insertScenario, listScenarios, softDeleteScenario, updateScenario } from './scenarios.repo';
+import {
+  findScenario,
+  findScenarioSummary,
+  insertScenario,
+  listScenarios,
+  scenarioLimitSource,
+  softDeleteScenario,
+  updateScenario,
+} from './scenarios.repo';
 import { findRun, insertRun, listRuns } from './runs.repo';
+import { currentLimit, judgedRunFigures } from '../verdicts/run-verdict';
+import { verdictNumbers } from '../verdicts/verdict-numbers';
+import { withVerdict } from '../../shared/verdict/index';
 
 type Actor = { id: number; email: string };
 
@@ -40,12 +52,29 @@ export async function getScenario(db: Db, id: number): Promise<ScenarioDetail> {
   const found = await findScenarioSummary(db, id);
   if (!found) throw notFound('Scenario');
   const runs = await listRuns(db, id);
+  const limit = currentLimit(found.agentData, found.input);
   return {
     ...found.summary,
     input: found.input,
     inputHash: found.inputHash,
     approval: await currentApproval(db, found.summary.workstationId),
-    runs: runs.map((r) => ({ ...r, outOfDate: r.input_hash !== found.inputHash })),
+    runs: runs.map(({ verdictNumbers: numbers, ...r }) => {
+      const judged = judgedRunFigures({ ...r, verdict_numbers: numbers }, limit);
+      const v = judged.verdict;
+      return {
+        ...r,
+        limit_fraction: judged.limitFraction,
+        twa8h_mgPerM3: judged.twa8h_mgPerM3,
+        twa8h_lo_mgPerM3: judged.twa8hCi95_mgPerM3[0],
+        twa8h_hi_mgPerM3: judged.twa8hCi95_mgPerM3[1],
+        percent_of_limit: v?.percentOfLimit ?? null,
+        rating_category: v?.ratingCategory ?? null,
+        banner: v?.banner ?? null,
+        decided: v?.decided ?? null,
+        reasons: v?.reasons ?? [],
+        outOfDate: r.input_hash !== found.inputHash,
+      };
+    }),
   };
 }
 
@@ -129,23 +158,28 @@ export const scenariosService = {
     const runId = await withTransaction(db, async (trx) => {
       const current = await findScenario(trx, id);
       if (!current) throw notFound('Scenario');
-      const fraction = run.result.limit?.fraction ?? 'respirable';
-      const summary = run.result.breathingZone.fractions[fraction];
+      // Whatever verdict the client sent is dropped: the server judges from the numbers and today's limit.
+      const source = await scenarioLimitSource(trx, id);
+      const limit = currentLimit(source?.agentData ?? null, current.input);
+      const result = withVerdict(run.result, limit);
+      const verdict = result.limit ?? null;
+      const summary = run.result.breathingZone.fractions[verdict?.fraction ?? 'respirable'];
       const newId = await insertRun(trx, {
         scenarioId: id,
         seed: String(run.result.engine.seed),
         engineVersion: run.result.engine.version,
         inputHash: inputHash(run.input),
         particles: run.result.engine.particles,
-        limitFraction: run.result.limit?.fraction ?? null,
+        limitFraction: verdict?.fraction ?? null,
         twa8h_mgPerM3: summary.twa8h_mgPerM3,
         twa8hCi95_mgPerM3: [summary.twa8hCi95_mgPerM3[0], summary.twa8hCi95_mgPerM3[1]],
         respirableTwa8h_mgPerM3: run.result.breathingZone.fractions.respirable.twa8h_mgPerM3,
-        percentOfLimit: run.result.limit?.percentOfLimit ?? null,
-        ratingCategory: run.result.limit?.ratingCategory ?? null,
-        banner: run.result.limit?.banner ?? null,
+        percentOfLimit: verdict?.percentOfLimit ?? null,
+        ratingCategory: verdict?.ratingCategory ?? null,
+        banner: verdict?.banner ?? null,
+        verdictNumbers: verdictNumbers(run.result),
         input: run.input,
-        result: run.result,
+        result,
         createdBy: actor.id,
       });
       await writeAudit(trx, {
@@ -165,6 +199,8 @@ export async function getRun(db: Db, runId: number): Promise<SavedRun> {
   const run = await findRun(db, runId);
   if (!run) throw notFound('Run');
   const scenario = await findScenario(db, run.scenarioId, { includeDeleted: true });
+  const source = await scenarioLimitSource(db, run.scenarioId);
+  const limit = currentLimit(source?.agentData ?? null, source?.scenarioInput ?? null);
   return {
     id: run.id,
     scenarioId: run.scenarioId,
@@ -175,6 +211,6 @@ export async function getRun(db: Db, runId: number): Promise<SavedRun> {
     createdAt: run.createdAt,
     outOfDate: !scenario || scenario.inputHash !== run.inputHash,
     input: run.input,
-    result: run.result,
+    result: withVerdict(run.result as RunResult, limit),
   };
 }

@@ -25,6 +25,8 @@ export const fractionSummarySchema = z.object({
   twa8h_mgPerM3: conc,
   twa8hCi95_mgPerM3: ci,
   peak15min_mgPerM3: conc,
+  /** Simulated particles that spent any time in the breathing zone and count for this fraction; absent in older results (unknown). */
+  zoneHistories: count.optional(),
 });
 
 export const seriesBandSchema = z.object({ mean: numberList, lo: numberList, hi: numberList });
@@ -72,6 +74,12 @@ export const resultLimitSchema = z.object({
   percentOfLimitUpper: z.number().finite(),
   ratingCategory: z.union([z.literal(0), z.literal(1), z.literal(2), z.literal(3), z.literal(4)]),
   banner: z.enum(BANNERS),
+  // The verdict's own account (shared/verdict); absent in results judged before it.
+  p95_mgPerM3: conc.optional(),
+  decided: z.boolean().optional(),
+  reasons: z.array(z.string().max(500)).max(10).optional(),
+  moreHistories: count.nullable().optional(),
+  gsd: z.number().finite().gte(1).optional(),
 });
 
 /** A run's result in the shape the current engine writes; typed arrays or their JSON lists both read. */

@@ -16,6 +16,9 @@ export type LastRun = {
   percentOfLimit: number | null;
   ratingCategory: number | null;
   banner: Banner | null;
+  /** The server's verdict: false while more particles could change the banner (shared/verdict). */
+  decided: boolean | null;
+  reasons: string[];
 };
 
 export type ScenarioSummary = {
@@ -54,6 +57,8 @@ export type Approval = {
   outOfDate: boolean;
   /** The approved run came from an engine of an older major version than the one running now. */
   engineChanged: boolean;
+  /** The agent's limit is not the one the approval was given under. */
+  limitChanged: boolean;
   needsReview: boolean;
   /** Why it needs review, in words ("the engine has changed since this approval"); null when it does not. */
   reviewReason: string | null;
@@ -88,6 +93,8 @@ export type RunListItem = {
   created_by: number | null;
   created_at: string;
   outOfDate: boolean;
+  decided: boolean | null;
+  reasons: string[];
 };
 
 export type ScenarioDetail = ScenarioSummary & { input: ScenarioInput; inputHash: string; approval: Approval | null; runs: RunListItem[] };

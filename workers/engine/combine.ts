@@ -1,4 +1,4 @@
-import { bannerFor, exposureRatingCategory } from '../../shared/physics/index';
+import { judgeResult, limitBlock } from '../../shared/verdict/index';
 import { crossChecks } from './cross-checks';
 import { captureVelocityMap, depositionMap } from './maps';
 import { batchEstimate } from './statistics';
@@ -68,12 +68,18 @@ function summarise(p: PreparedScenario, batches: readonly BatchResult[], fractio
     band.hi.push(e.hi);
   }
   const mean = batchEstimate(perBatch.map(taskMean));
+  const nB = p.bins.count;
+  const f = FRACTIONS.indexOf(fraction);
+  let zoneHistories = 0;
+  for (const batch of batches)
+    for (let b = 0; b < nB; b++) if (p.bins.conventionWeight[f * nB + b] > 0) zoneHistories += batch.zoneHistories[b];
   const summary: FractionSummary = {
     taskMean_mgPerM3: mean.mean,
     taskMeanCi95_mgPerM3: [mean.lo, mean.hi],
     twa8h_mgPerM3: twa8h(p, mean.mean),
     twa8hCi95_mgPerM3: [twa8h(p, mean.lo), twa8h(p, mean.hi)],
     peak15min_mgPerM3: peak15min(p, band.mean),
+    zoneHistories,
   };
   return { summary, band };
 }
@@ -114,18 +120,6 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     sizeBins: { aerodynamic_m: Array.from(p.bins.aerodynamic_m), physical_m: Array.from(p.bins.physical_m) },
     performance: { particleSteps, wallTime_s, particleStepsPerS: wallTime_s > 0 ? particleSteps / wallTime_s : 0 },
   };
-  if (p.limit) {
-    const s = fractions[p.limit.fraction];
-    const limit = p.limit.value_mgPerM3;
-    const upper = s.twa8hCi95_mgPerM3[1];
-    results.limit = {
-      ...p.limit,
-      percentOfLimit: (100 * s.twa8h_mgPerM3) / limit,
-      percentOfLimitUpper: (100 * upper) / limit,
-      // The upper confidence bound stands in for the 95th percentile the rating bands are defined on.
-      ratingCategory: exposureRatingCategory(upper / limit),
-      banner: bannerFor(upper, limit),
-    };
-  }
+  if (p.limit) results.limit = limitBlock(judgeResult(results, p.limit));
   return results;
 }

@@ -51,6 +51,8 @@ export class Kernel {
   readonly sigmaMax: Float64Array;
   readonly sigmaMin: Float64Array;
   readonly zoneResidence_s: Float64Array;
+  /** 1 for a particle (by release id) that spent any time in the breathing zone: its history counts towards the verdict. */
+  readonly zoneVisited: Uint8Array;
   readonly trajectories: Float32Array;
   readonly nextFrame: Int32Array;
   readonly hoods: Float64Array;
@@ -123,6 +125,7 @@ export class Kernel {
     this.lastBin = p.timeBins - 1;
     this.ids = Int32Array.from({ length: a.count }, (_, i) => i);
     this.fate = new Int8Array(a.count).fill(-1);
+    this.zoneVisited = new Uint8Array(a.count);
     this.depositionNx = p.deposition.nx;
     this.depositionNy = p.deposition.ny;
     this.deposition_mg = new Float64Array(p.deposition.nx * p.deposition.ny);

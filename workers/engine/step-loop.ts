@@ -10,6 +10,7 @@ export interface Tallies {
   deposition_mg: Float64Array;
   trajectories: Float32Array;
   fate: Int8Array;
+  zoneVisited: Uint8Array;
   particleSteps: number;
 }
 
@@ -38,6 +39,7 @@ export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshi
     deposition_mg: k.deposition_mg,
     trajectories: k.trajectories,
     fate: k.fate,
+    zoneVisited: k.zoneVisited,
     particleSteps: k.steps,
   };
 }

@@ -69,6 +69,8 @@ export interface BatchResult {
   zoneResidence_s: Float64Array;
   /** Mass per fate (FATES order), mg. */
   fateMass_mg: Float64Array;
+  /** Simulated particles per size bin that spent any time in the breathing zone. */
+  zoneHistories: Int32Array;
   /** Deposited mass per floor cell, mg, [ix][iy]. */
   deposition_mg: Float64Array;
   /** x, y, z per frame per sampled particle, NaN when not airborne. */

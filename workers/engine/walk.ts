@@ -332,6 +332,7 @@ export function walk(k: Kernel, i: number): number {
       }
     }
     if (r2 < R2) {
+      k.zoneVisited[k.ids[i]] = 1;
       let tb = (t * invBin) | 0;
       if (tb > lastBin) tb = lastBin;
       residence[tb * nBins + b] += dt;

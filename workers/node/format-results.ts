@@ -29,6 +29,9 @@ export function summary(name: string, r: RunResult): string {
       '',
       `Limit ${l.value_mgPerM3} mg/m³ (${l.fraction}): ${percentText(l.percentOfLimit)} of limit (upper CI ${percentText(l.percentOfLimitUpper)}), rating category ${l.ratingCategory}, banner ${l.banner.toUpperCase()}`,
     );
+    if (l.p95_mgPerM3 !== undefined)
+      lines.push(`Daily 95th percentile ${mg(l.p95_mgPerM3)} mg/m³ (day-to-day GSD ${l.gsd}); ${l.decided ? 'decided' : 'not decided'}`);
+    for (const reason of l.reasons ?? []) lines.push(`  ${reason}`);
   }
   const fate = r.fate;
   lines.push(

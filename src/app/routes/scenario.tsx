@@ -15,6 +15,7 @@ import { ScenarioEditor } from '@/features/scenario-editor/components/scenario-e
 import { useSizeProfileOptions } from '@/features/size-profiles/api/use-size-profile-options';
 import { useUser } from '@/lib/auth';
 import type { RunResult } from '../../../shared/schemas/run-result';
+import { agentLimit, withVerdict } from '../../../shared/verdict/index';
 import { ScenarioActions } from './scenario-actions';
 import { ScenarioRecords } from './scenario-records';
 import { ScenarioRunArea } from './scenario-run-area';
@@ -42,6 +43,9 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const parsed = useMemo(() => scenarioSchema.safeParse(draft.input), [draft]);
   const readOnly = !can(user?.role, 'scenarios:write');
   const dirty = JSON.stringify(fromDetail(base)) !== JSON.stringify(draft);
+  const agent = agents.find((a) => a.id === draft.agentId);
+  // Judged against the agent's current limit, as the server will judge it once saved.
+  const judged = useMemo(() => (fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data)) : null), [fresh, agent]);
 
   return (
     <Page
@@ -109,9 +113,9 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
       </Can>
       {fresh && (
         <RunResults
-          result={fresh.result}
+          result={judged ?? fresh.result}
           scenario={fresh.input}
-          agentName={agents.find((a) => a.id === draft.agentId)?.name}
+          agentName={agent?.name}
           limitSource={fresh.input.limit?.source}
         />
       )}

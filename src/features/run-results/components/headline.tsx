@@ -46,6 +46,13 @@ export function Headline({
             {agent ? ` for ${agent}` : ''}
             {source ? `, ${source}` : ''}).
           </p>
+          {limit.reasons && limit.reasons.length > 0 && (
+            <ul role="status" data-testid="verdict-reasons" className="w-full list-disc pl-5 text-sm font-semibold text-ink">
+              {limit.reasons.map((reason) => (
+                <li key={reason}>{reason}</li>
+              ))}
+            </ul>
+          )}
         </div>
       ) : (
         <p role="note" className="rounded-lg border border-line bg-paper-deep p-4 text-sm">
@@ -70,7 +77,11 @@ export function Headline({
         {limit && (
           <Figure label="Exposure rating category" testId="rating">
             {limit.ratingCategory} · {RATING_LABEL[limit.ratingCategory].name}
-            <span className="block text-xs font-normal text-muted">AIHA band: {RATING_LABEL[limit.ratingCategory].band}</span>
+            <span className="block text-xs font-normal text-muted">
+              AIHA band: {RATING_LABEL[limit.ratingCategory].band}
+              {limit.p95_mgPerM3 !== undefined &&
+                `; daily 95th percentile ${readableNumber(limit.p95_mgPerM3)} mg/m³ at a day-to-day GSD of ${readableNumber(limit.gsd ?? NaN, 2)}`}
+            </span>
           </Figure>
         )}
         <Figure label="Statistical error" testId="statistical-error">

@@ -65,6 +65,11 @@ const COLUMNS: Column<ScenarioSummary>[] = [
     render: (s) => (
       <span className="inline-flex items-center gap-2">
         <BannerBadge banner={s.lastRun?.banner} />
+        {s.lastRun?.decided === false && (
+          <span className="text-xs font-semibold text-watch" title={s.lastRun.reasons.join(' ')}>
+            ? not decided
+          </span>
+        )}
         {s.lastRun?.outOfDate && <span className="text-xs font-semibold text-watch">⟳ out of date</span>}
       </span>
     ),

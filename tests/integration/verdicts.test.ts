@@ -1,0 +1,141 @@
+import fs from 'node:fs';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from '../helpers/test-app';
+import { runEngine } from '../helpers/run-engine';
+import { ROOM_DATA, SITE, WORKSTATION_DATA } from '../fixtures/workspace';
+import type { ScenarioInput } from '../../shared/schemas/scenario';
+
+type Result = { breathingZone: { fractions: Record<string, { twa8h_mgPerM3: number }> }; limit?: Record<string, unknown> };
+
+const demo = (file: string, particles: number): ScenarioInput => {
+  const s = JSON.parse(fs.readFileSync(new URL(`../../shared/demo-scenarios/${file}.json`, import.meta.url), 'utf8'));
+  return { ...s, run: { ...s.run, particles } };
+};
+const agent = (name: string, limitFraction: string, limit8h_mgPerM3: number) => ({
+  name,
+  data: {
+    density_kgPerM3: 2650,
+    shapeFactor: 1.2,
+    limitFraction,
+    limit8h_mgPerM3,
+    limit15min_mgPerM3: null,
+    jurisdiction: 'Test',
+    limitSource: 'Test limit',
+    limitDate: '2024',
+  },
+});
+
+let t: TestApp;
+let workstationId: number;
+let quartzId: number;
+let woodId: number;
+
+async function scenarioWithRun(name: string, agentId: number, input: ScenarioInput, forge: (r: Result) => Result = (r) => r) {
+  const eng = await t.signIn('engineer');
+  const sc = await eng.post('/api/scenarios').send({ workstationId, agentId, name, input });
+  const run = runEngine(input);
+  const res = await eng
+    .post(`/api/scenarios/${sc.body.id}/runs`)
+    .send({ scenarioVersion: 1, input: run.scenario, result: forge(run.result as unknown as Result) });
+  return { scenarioId: sc.body.id as number, res, result: run.result as unknown as Result };
+}
+
+beforeAll(async () => {
+  t = await createTestApp();
+  const eng = await t.signIn('engineer');
+  const site = await eng.post('/api/sites').send(SITE);
+  const room = await eng.post('/api/rooms').send({ siteId: site.body.id, name: 'Hall', data: ROOM_DATA });
+  workstationId = (await eng.post('/api/workstations').send({ roomId: room.body.id, name: 'Bench', data: WORKSTATION_DATA })).body.id;
+  quartzId = (await eng.post('/api/agents').send(agent('Quartz', 'respirable', 0.025))).body.id;
+  woodId = (await eng.post('/api/agents').send(agent('Oak dust', 'inhalable', 2))).body.id;
+  const admin = await t.signIn('admin');
+  expect((await admin.put(`/api/workstations/${workstationId}/operators`).send({ personIds: [await t.personId('operator')] })).status).toBe(
+    200,
+  );
+});
+afterAll(() => t.close());
+
+describe('the server judges saved runs', () => {
+  it('stores and answers Act for a run at over 600 % of the limit that the client sent as Clear with −5 %', async () => {
+    const forged = (r: Result): Result => ({
+      ...r,
+      limit: { ...r.limit, banner: 'clear', percentOfLimit: -5, percentOfLimitUpper: -5, ratingCategory: 0 },
+    });
+    const { scenarioId, res, result } = await scenarioWithRun('No control', quartzId, demo('stone-bench-no-control', 2000), forged);
+    expect(res.status).toBe(201);
+    // The percentage is the TWA over the agent's limit, 0.025 mg/m³ respirable, whatever the client claimed.
+    const percent = (100 * result.breathingZone.fractions.respirable.twa8h_mgPerM3) / 0.025;
+    expect(percent).toBeGreaterThan(600);
+    expect(res.body.result.limit).toMatchObject({ banner: 'act', ratingCategory: 4, decided: true });
+    expect(res.body.result.limit.percentOfLimit).toBeCloseTo(percent, 9);
+    const row = await t.db('runs').where({ id: res.body.id }).first();
+    expect(row).toMatchObject({ banner: 'act', rating_category: 4 });
+    expect(row.percent_of_limit).toBeCloseTo(percent, 9);
+    expect(JSON.parse(row.result).limit.banner).toBe('act');
+    const viewer = await t.signIn('viewer');
+    expect((await viewer.get(`/api/runs/${res.body.id}`)).body.result.limit.banner).toBe('act');
+    const listed = (await viewer.get('/api/scenarios')).body.items.find((s: { id: number }) => s.id === scenarioId);
+    expect(listed.lastRun).toMatchObject({ banner: 'act', ratingCategory: 4 });
+    expect(listed.lastRun.percentOfLimit).toBeCloseTo(percent, 9);
+    expect((await viewer.get(`/api/scenarios/${scenarioId}`)).body.runs[0]).toMatchObject({ banner: 'act', rating_category: 4 });
+  });
+
+  it('refuses to approve that run: the rule reads the server’s verdict, not the client’s', async () => {
+    const { scenarioId, res } = await scenarioWithRun('No control (again)', quartzId, demo('stone-bench-no-control', 2000), (r) => ({
+      ...r,
+      limit: { ...r.limit, banner: 'clear' },
+    }));
+    const approve = await (await t.signIn('engineer')).post(`/api/scenarios/${scenarioId}/approve`).send({ runId: res.body.id });
+    expect(approve.status).toBe(409);
+    expect(approve.body.code).toBe('above_limit');
+  });
+
+  it('judges a run sent without any verdict against the agent’s limit, and says when too few particles reached the zone', async () => {
+    const { res } = await scenarioWithRun('Side hood, few particles', woodId, demo('joinery-sander-side-hood', 2000), (r) => {
+      const rest = { ...r };
+      delete rest.limit;
+      return rest;
+    });
+    expect(res.status).toBe(201);
+    expect(res.body.result.limit).toMatchObject({ fraction: 'inhalable', value_mgPerM3: 2, banner: 'watch', decided: false });
+    expect(res.body.result.limit.reasons[0]).toMatch(/Not enough particles reached the breathing zone to decide/);
+  });
+});
+
+describe('a limit change re-judges without a new run', () => {
+  it(
+    'turns the operator’s board from Clear to Act and marks the approval for review when the agent’s limit is cut tenfold',
+    { timeout: 60_000 },
+    async () => {
+      const { scenarioId, res } = await scenarioWithRun('Side hood', woodId, demo('joinery-sander-side-hood', 40_000));
+      expect(res.body.result.limit).toMatchObject({ banner: 'clear', decided: true });
+      const eng = await t.signIn('engineer');
+      expect((await eng.post(`/api/scenarios/${scenarioId}/approve`).send({ runId: res.body.id })).status).toBe(201);
+      const op = await t.signIn('operator');
+      expect((await op.get(`/api/boards/${workstationId}`)).body).toMatchObject({ banner: 'clear', needsReview: false });
+      const runsBefore = await t.db('runs').count({ n: '*' });
+
+      const wood = agent('Oak dust', 'inhalable', 2);
+      const cut = await eng
+        .put(`/api/agents/${woodId}`)
+        .send({ ...wood, data: { ...wood.data, override: { limit8h_mgPerM3: 0.2, reason: 'Site applies a stricter limit' } } });
+      expect(cut.status).toBe(200);
+
+      const board = (await op.get(`/api/boards/${workstationId}`)).body;
+      expect(board).toMatchObject({ banner: 'act', needsReview: true });
+      expect(board.advice[0]).toMatch(/limit for this dust changed/);
+      const detail = (await eng.get(`/api/scenarios/${scenarioId}`)).body;
+      expect(detail.approval).toMatchObject({ banner: 'act', limitChanged: true, needsReview: true });
+      expect(detail.lastRun.banner).toBe('act');
+      expect((await eng.get(`/api/runs/${res.body.id}`)).body.result.limit).toMatchObject({ value_mgPerM3: 0.2, banner: 'act' });
+      expect(await t.db('runs').count({ n: '*' })).toEqual(runsBefore);
+      // The stored columns that lists sort by follow, and the audit trail names the scenarios re-judged.
+      expect((await t.db('runs').where({ id: res.body.id }).first()).banner).toBe('act');
+      const audit = await t
+        .db('audit_log')
+        .where({ action: 'agent.limit_overridden', target_id: String(woodId) })
+        .first();
+      expect(JSON.parse(audit.detail).scenariosRejudged).toContain(scenarioId);
+    },
+  );
+});
