@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { RunListItem } from '../../shared/schemas/workspace-views';
 
 // Row types as the migrations in migrations/ create them. knex checks db('<table>') calls against them;
 // queries over aliased joins ('scenarios as s') declare their joined row type in the repo.
@@ -87,25 +88,13 @@ export type ScenarioRow = {
   deleted_at: string | null;
 };
 
-export type RunRow = {
-  id: number;
+// The runs table stores every column the API lists (RunListItem spells them with the table's own
+// names), the banner as plain text, and what the list leaves out.
+export type RunRow = Omit<RunListItem, 'banner' | 'outOfDate'> & {
   scenario_id: number;
-  seed: string;
-  engine_version: string;
-  input_hash: string;
-  particles: number;
-  limit_fraction: string | null;
-  twa8h_mgPerM3: number | null;
-  twa8h_lo_mgPerM3: number | null;
-  twa8h_hi_mgPerM3: number | null;
-  respirable_twa8h_mgPerM3: number | null;
-  percent_of_limit: number | null;
-  rating_category: number | null;
   banner: string | null;
   input: string;
   result: string;
-  created_by: number | null;
-  created_at: string;
   deleted_at: string | null;
 };
 
