@@ -4,14 +4,14 @@ import type { Page, SavedRun, ScenarioDetail, ScenarioSummary } from '../../shar
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { inputHash } from '../lib/hash';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { workstations } from '../places/places.repo';
 import { currentApproval } from '../approvals/approvals.repo';
 import { findScenario, findScenarioSummary, insertScenario, listScenarios, softDeleteScenario, updateScenario } from './scenarios.repo';
 import { findRun, insertRun, listRuns } from './runs.repo';
 
-type Actor = { id: number; email: string };
+const auditScenario = auditOf('scenario');
 
 async function checkRefs(db: Db, v: { workstationId?: number; agentId?: number | null }) {
   if (v.workstationId && !(await workstations.get(db, v.workstationId)))
@@ -54,13 +54,7 @@ export const scenariosService = {
     await checkRefs(db, input);
     const id = await withTransaction(db, async (trx) => {
       const newId = await insertScenario(trx, { ...input, inputHash: inputHash(input.input) }, actor.id);
-      await writeAudit(trx, {
-        actor,
-        action: 'scenario.created',
-        targetType: 'scenario',
-        targetId: newId,
-        detail: { name: input.name, workstationId: input.workstationId },
-      });
+      await auditScenario(trx, actor, 'scenario.created', newId, { name: input.name, workstationId: input.workstationId });
       return newId;
     });
     return getScenario(db, id);
@@ -90,13 +84,7 @@ export const scenariosService = {
         { ...fields, version: current.version + 1, inputHash: patch.input === undefined ? undefined : inputHash(patch.input) },
         actor.id,
       );
-      await writeAudit(trx, {
-        actor,
-        action: 'scenario.changed',
-        targetType: 'scenario',
-        targetId: id,
-        detail: { version: current.version + 1 },
-      });
+      await auditScenario(trx, actor, 'scenario.changed', id, { version: current.version + 1 });
     });
     return getScenario(db, id);
   },
@@ -121,7 +109,7 @@ export const scenariosService = {
       if (current.status === 'approved')
         throw new AppError(409, 'approved', 'An approved scenario cannot be deleted; approve another option first.');
       await softDeleteScenario(trx, id);
-      await writeAudit(trx, { actor, action: 'scenario.deleted', targetType: 'scenario', targetId: id });
+      await auditScenario(trx, actor, 'scenario.deleted', id);
     });
   },
 
@@ -148,12 +136,10 @@ export const scenariosService = {
         result: run.result,
         createdBy: actor.id,
       });
-      await writeAudit(trx, {
-        actor,
-        action: 'run.saved',
-        targetType: 'scenario',
-        targetId: id,
-        detail: { runId: newId, particles: run.result.engine.particles, seed: String(run.result.engine.seed) },
+      await auditScenario(trx, actor, 'run.saved', id, {
+        runId: newId,
+        particles: run.result.engine.particles,
+        seed: String(run.result.engine.seed),
       });
       return newId;
     });
