@@ -2,11 +2,11 @@ import type { AgentInput } from '../../shared/schemas/workspace';
 import type { AgentRecord } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { agents } from './agents.repo';
 import { rejudgeAgentRuns } from '../verdicts/rejudge-agent-runs';
 
-type Actor = { id: number; email: string };
+const auditAgent = auditOf('agent');
 
 export const agentsService = {
   list(db: Db): Promise<AgentRecord[]> {
@@ -20,7 +20,7 @@ export const agentsService = {
   async create(db: Db, actor: Actor, input: AgentInput): Promise<AgentRecord> {
     return withTransaction(db, async (trx) => {
       const id = await agents.insert(trx, { ...input, createdBy: actor.id });
-      await writeAudit(trx, { actor, action: 'agent.created', targetType: 'agent', targetId: id, detail: { name: input.name } });
+      await auditAgent(trx, actor, 'agent.created', id, { name: input.name });
       return (await agents.get(trx, id))!;
     });
   },
@@ -31,13 +31,13 @@ export const agentsService = {
       await agents.update(trx, id, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
       const scenariosRejudged = await rejudgeAgentRuns(trx, id, input.data);
-      await writeAudit(trx, {
+      await auditAgent(
+        trx,
         actor,
-        action: overridden ? 'agent.limit_overridden' : 'agent.changed',
-        targetType: 'agent',
-        targetId: id,
-        detail: overridden ? { override: input.data.override, scenariosRejudged } : undefined,
-      });
+        overridden ? 'agent.limit_overridden' : 'agent.changed',
+        id,
+        overridden ? { override: input.data.override, scenariosRejudged } : undefined,
+      );
       return (await agents.get(trx, id))!;
     });
   },

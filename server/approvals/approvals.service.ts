@@ -3,14 +3,14 @@ import type { ApproveInput } from '../../shared/schemas/workspace';
 import type { Approval } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { findRunOfScenario } from '../scenarios/runs.repo';
 import { findScenario, markApproved } from '../scenarios/scenarios.repo';
 import { currentLimit, judgeStored } from '../verdicts/run-verdict';
 import { currentApproval, replaceApproval } from './approvals.repo';
 
-type Actor = { id: number; email: string };
+const auditScenario = auditOf('scenario');
 
 export async function approveScenario(db: Db, actor: Actor, scenarioId: number, input: ApproveInput): Promise<Approval | null> {
   const workstationId = await withTransaction(db, async (trx) => {
@@ -51,12 +51,12 @@ export async function approveScenario(db: Db, actor: Actor, scenarioId: number, 
       limitFraction: limit?.fraction ?? null,
       limit_mgPerM3: limit?.value_mgPerM3 ?? null,
     });
-    await writeAudit(trx, {
-      actor,
-      action: 'scenario.approved',
-      targetType: 'scenario',
-      targetId: scenarioId,
-      detail: { approvalId, runId: run.id, reviewDate, note: input.note, workstationId: scenario.workstationId },
+    await auditScenario(trx, actor, 'scenario.approved', scenarioId, {
+      approvalId,
+      runId: run.id,
+      reviewDate,
+      note: input.note,
+      workstationId: scenario.workstationId,
     });
     return scenario.workstationId;
   });

@@ -2,13 +2,16 @@ import { withTransaction, type Db } from '../db/knex';
 import type { OperatorAssignment } from '../../shared/schemas/workspace-views';
 import type { Mailer } from '../mail/mailer';
 import { AppError, notFound } from '../lib/app-error';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf } from '../audit/audit.repo';
 import { replaceOperators, workstations } from '../places/places.repo';
 import { rolesOf } from '../people/people.repo';
 import { findRunOfScenario } from '../scenarios/runs.repo';
 import { findScenario } from '../scenarios/scenarios.repo';
 
 type Actor = { id: number; email: string; name?: string };
+
+const auditScenario = auditOf('scenario');
+const auditWorkstation = auditOf('workstation');
 
 const escape = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
@@ -36,13 +39,7 @@ export async function shareReport(
     text: `${from} shared a Motewalk report with you: ${scenario.name}\n\nOpen it here (sign-in required):\n${link}\n`,
     html: `<p>${escape(from)} shared a Motewalk report with you: <strong>${escape(scenario.name)}</strong></p><p><a href="${escape(link)}">Open the report</a> (sign-in required)</p>`,
   });
-  await writeAudit(db, {
-    actor,
-    action: 'report.shared',
-    targetType: 'scenario',
-    targetId: scenarioId,
-    detail: { to: body.email, runId: body.runId ?? null },
-  });
+  await auditScenario(db, actor, 'report.shared', scenarioId, { to: body.email, runId: body.runId ?? null });
 }
 
 export async function assignOperators(db: Db, actor: Actor, workstationId: number, personIds: number[]): Promise<OperatorAssignment> {
@@ -58,13 +55,7 @@ export async function assignOperators(db: Db, actor: Actor, workstationId: numbe
     );
   await withTransaction(db, async (trx) => {
     await replaceOperators(trx, workstationId, personIds);
-    await writeAudit(trx, {
-      actor,
-      action: 'workstation.operators_assigned',
-      targetType: 'workstation',
-      targetId: workstationId,
-      detail: { personIds },
-    });
+    await auditWorkstation(trx, actor, 'workstation.operators_assigned', workstationId, { personIds });
   });
   return { workstationId, personIds };
 }

@@ -2,8 +2,10 @@ import type { AuditEntry as AuditView, Page } from '../../shared/schemas/workspa
 import type { Conn } from '../db/knex';
 import type { AuditLogRow } from '../db/tables';
 
+export type Actor = { id: number; email: string };
+
 export type AuditEntry = {
-  actor?: { id: number; email: string } | null;
+  actor?: Actor | null;
   actorEmail?: string | null;
   action: string;
   targetType?: string;
@@ -23,6 +25,12 @@ export async function writeAudit(db: Conn, entry: AuditEntry): Promise<void> {
     detail: entry.detail ? JSON.stringify(entry.detail) : null,
     created_at: new Date().toISOString(),
   });
+}
+
+// Binds a service's target type, so each entry names only what happened to which record.
+export function auditOf(targetType: string) {
+  return (db: Conn, actor: Actor, action: string, targetId: number, detail?: Record<string, unknown>): Promise<void> =>
+    writeAudit(db, { actor, action, targetType, targetId, detail });
 }
 
 const toView = (a: AuditLogRow): AuditView => ({

@@ -1,8 +1,6 @@
 import type { Db } from '../db/knex';
-import { writeAudit } from '../audit/audit.repo';
+import { writeAudit, type Actor } from '../audit/audit.repo';
 import { updatePerson } from '../people/people.repo';
-
-type Actor = { id: number; email: string };
 
 export async function recordFailedSignIn(db: Db, email: string): Promise<void> {
   await writeAudit(db, { actorEmail: email, action: 'auth.sign_in_failed' });

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { RunListItem } from '../../shared/schemas/workspace-views';
 
 // Row types as the migrations in migrations/ create them. knex checks db('<table>') calls against them;
 // queries over aliased joins ('scenarios as s') declare their joined row type in the repo.
@@ -87,27 +88,15 @@ export type ScenarioRow = {
   deleted_at: string | null;
 };
 
-export type RunRow = {
-  id: number;
+// The runs table stores every column the API lists (RunListItem spells them with the table's own
+// names), the banner as plain text, and what the list leaves out (the list's verdict is judged on every read).
+export type RunRow = Omit<RunListItem, 'banner' | 'outOfDate' | 'decided' | 'reasons'> & {
   scenario_id: number;
-  seed: string;
-  engine_version: string;
-  input_hash: string;
-  particles: number;
-  limit_fraction: string | null;
-  twa8h_mgPerM3: number | null;
-  twa8h_lo_mgPerM3: number | null;
-  twa8h_hi_mgPerM3: number | null;
-  respirable_twa8h_mgPerM3: number | null;
-  percent_of_limit: number | null;
-  rating_category: number | null;
   banner: string | null;
   /** JSON of server/verdicts/verdict-numbers.ts: what the server judges every read from. */
   verdict_numbers: string | null;
   input: string;
   result: string;
-  created_by: number | null;
-  created_at: string;
   deleted_at: string | null;
 };
 

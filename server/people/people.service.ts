@@ -3,13 +3,13 @@ import type { Page } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import type { Mailer } from '../mail/mailer';
 import { AppError, notFound } from '../lib/app-error';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { hashPassword } from '../auth/password';
 import { findByEmail, findPerson, insertPerson, listPeople, updatePerson, type PeopleQuery } from './people.repo';
 import { findUsableToken, issueToken, markTokenUsed } from './tokens.repo';
 import { passwordLinkMail } from './people.mails';
 
-type Actor = { id: number; email: string };
+const auditPerson = auditOf('person');
 
 export const listPeoplePage = (db: Db, q: PeopleQuery): Promise<Page<Person>> => listPeople(db, q);
 
@@ -22,13 +22,7 @@ export async function invitePerson(db: Db, mailer: Mailer, actor: Actor, input: 
   const { id, token } = await withTransaction(db, async (trx) => {
     const newId = await insertPerson(trx, { ...input, status: 'invited' });
     const t = await issueToken(trx, newId, 'invite');
-    await writeAudit(trx, {
-      actor,
-      action: 'person.invited',
-      targetType: 'person',
-      targetId: newId,
-      detail: { email: input.email, role: input.role },
-    });
+    await auditPerson(trx, actor, 'person.invited', newId, { email: input.email, role: input.role });
     return { id: newId, token: t };
   });
   await sendOrExplain(
@@ -53,20 +47,9 @@ export async function changePerson(db: Db, actor: Actor, id: number, patch: Upda
   await withTransaction(db, async (trx) => {
     await updatePerson(trx, id, patch);
     if (patch.role && patch.role !== person.role)
-      await writeAudit(trx, {
-        actor,
-        action: 'person.role_changed',
-        targetType: 'person',
-        targetId: id,
-        detail: { from: person.role, to: patch.role },
-      });
+      await auditPerson(trx, actor, 'person.role_changed', id, { from: person.role, to: patch.role });
     if (patch.status && patch.status !== person.status)
-      await writeAudit(trx, {
-        actor,
-        action: patch.status === 'deactivated' ? 'person.deactivated' : 'person.reactivated',
-        targetType: 'person',
-        targetId: id,
-      });
+      await auditPerson(trx, actor, patch.status === 'deactivated' ? 'person.deactivated' : 'person.reactivated', id);
   });
   return (await findPerson(db, id))!;
 }
@@ -78,7 +61,7 @@ export async function sendResetLink(db: Db, mailer: Mailer, actor: Actor, id: nu
   const purpose = person.status === 'invited' ? 'invite' : 'reset';
   const token = await withTransaction(db, async (trx) => {
     const t = await issueToken(trx, id, purpose);
-    await writeAudit(trx, { actor, action: 'person.password_link_sent', targetType: 'person', targetId: id });
+    await auditPerson(trx, actor, 'person.password_link_sent', id);
     return t;
   });
   await sendOrExplain(
@@ -111,12 +94,7 @@ export async function setPasswordWithToken(db: Db, token: string, password: stri
       throw new AppError(400, 'invalid_token', 'This account is not active', [{ path: 'body.token', message: 'Account not active' }]);
     await updatePerson(trx, person.id, { passwordHash, status: 'active' });
     await markTokenUsed(trx, found.id);
-    await writeAudit(trx, {
-      actor: { id: person.id, email: person.email },
-      action: 'person.password_set',
-      targetType: 'person',
-      targetId: person.id,
-    });
+    await auditPerson(trx, { id: person.id, email: person.email }, 'person.password_set', person.id);
     return person.email;
   });
 }

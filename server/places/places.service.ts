@@ -2,11 +2,13 @@ import type { RoomInput, SiteInput, WorkstationInput } from '../../shared/schema
 import type { RoomRecord, SiteRecord, SiteTree, WorkstationDetail, WorkstationRecord } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { currentApproval } from '../approvals/approvals.repo';
 import { operatorIds, placesTree, rooms, sites, workstations } from './places.repo';
 
-type Actor = { id: number; email: string };
+const auditSite = auditOf('site');
+const auditRoom = auditOf('room');
+const auditWorkstation = auditOf('workstation');
 
 async function insideRoom(db: Db, roomId: number, data: WorkstationInput['data']) {
   const room = await rooms.get(db, roomId);
@@ -39,7 +41,7 @@ export const placesService = {
   async createSite(db: Db, actor: Actor, input: SiteInput): Promise<SiteRecord> {
     return withTransaction(db, async (trx) => {
       const id = await sites.insert(trx, { ...input, createdBy: actor.id });
-      await writeAudit(trx, { actor, action: 'site.created', targetType: 'site', targetId: id, detail: { name: input.name } });
+      await auditSite(trx, actor, 'site.created', id, { name: input.name });
       return (await sites.get(trx, id))!;
     });
   },
@@ -48,7 +50,7 @@ export const placesService = {
       throw new AppError(400, 'invalid_input', 'That site does not exist', [{ path: 'body.siteId', message: `No site ${input.siteId}` }]);
     return withTransaction(db, async (trx) => {
       const id = await rooms.insert(trx, { ...input, createdBy: actor.id });
-      await writeAudit(trx, { actor, action: 'room.created', targetType: 'room', targetId: id, detail: { name: input.name } });
+      await auditRoom(trx, actor, 'room.created', id, { name: input.name });
       return (await rooms.get(trx, id))!;
     });
   },
@@ -56,13 +58,7 @@ export const placesService = {
     await insideRoom(db, input.roomId, input.data);
     return withTransaction(db, async (trx) => {
       const id = await workstations.insert(trx, { ...input, createdBy: actor.id });
-      await writeAudit(trx, {
-        actor,
-        action: 'workstation.created',
-        targetType: 'workstation',
-        targetId: id,
-        detail: { name: input.name },
-      });
+      await auditWorkstation(trx, actor, 'workstation.created', id, { name: input.name });
       return (await workstations.get(trx, id))!;
     });
   },
@@ -72,7 +68,7 @@ export const placesService = {
     await insideRoom(db, current.roomId, input.data);
     return withTransaction(db, async (trx) => {
       await workstations.update(trx, id, input);
-      await writeAudit(trx, { actor, action: 'workstation.changed', targetType: 'workstation', targetId: id });
+      await auditWorkstation(trx, actor, 'workstation.changed', id);
       return (await workstations.get(trx, id))!;
     });
   },

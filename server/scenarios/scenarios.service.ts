@@ -5,7 +5,7 @@ import type { Page, SavedRun, ScenarioDetail, ScenarioSummary } from '../../shar
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { inputHash } from '../lib/hash';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { workstations } from '../places/places.repo';
 import { currentApproval } from '../approvals/approvals.repo';
@@ -23,7 +23,7 @@ import { currentLimit, judgedRunFigures } from '../verdicts/run-verdict';
 import { verdictNumbers } from '../verdicts/verdict-numbers';
 import { withVerdict } from '../../shared/verdict/index';
 
-type Actor = { id: number; email: string };
+const auditScenario = auditOf('scenario');
 
 async function checkRefs(db: Db, v: { workstationId?: number; agentId?: number | null }) {
   if (v.workstationId && !(await workstations.get(db, v.workstationId)))
@@ -83,13 +83,7 @@ export const scenariosService = {
     await checkRefs(db, input);
     const id = await withTransaction(db, async (trx) => {
       const newId = await insertScenario(trx, { ...input, inputHash: inputHash(input.input) }, actor.id);
-      await writeAudit(trx, {
-        actor,
-        action: 'scenario.created',
-        targetType: 'scenario',
-        targetId: newId,
-        detail: { name: input.name, workstationId: input.workstationId },
-      });
+      await auditScenario(trx, actor, 'scenario.created', newId, { name: input.name, workstationId: input.workstationId });
       return newId;
     });
     return getScenario(db, id);
@@ -119,13 +113,7 @@ export const scenariosService = {
         { ...fields, version: current.version + 1, inputHash: patch.input === undefined ? undefined : inputHash(patch.input) },
         actor.id,
       );
-      await writeAudit(trx, {
-        actor,
-        action: 'scenario.changed',
-        targetType: 'scenario',
-        targetId: id,
-        detail: { version: current.version + 1 },
-      });
+      await auditScenario(trx, actor, 'scenario.changed', id, { version: current.version + 1 });
     });
     return getScenario(db, id);
   },
@@ -150,7 +138,7 @@ export const scenariosService = {
       if (current.status === 'approved')
         throw new AppError(409, 'approved', 'An approved scenario cannot be deleted; approve another option first.');
       await softDeleteScenario(trx, id);
-      await writeAudit(trx, { actor, action: 'scenario.deleted', targetType: 'scenario', targetId: id });
+      await auditScenario(trx, actor, 'scenario.deleted', id);
     });
   },
 
@@ -182,12 +170,10 @@ export const scenariosService = {
         result,
         createdBy: actor.id,
       });
-      await writeAudit(trx, {
-        actor,
-        action: 'run.saved',
-        targetType: 'scenario',
-        targetId: id,
-        detail: { runId: newId, particles: run.result.engine.particles, seed: String(run.result.engine.seed) },
+      await auditScenario(trx, actor, 'run.saved', id, {
+        runId: newId,
+        particles: run.result.engine.particles,
+        seed: String(run.result.engine.seed),
       });
       return newId;
     });

@@ -6,13 +6,13 @@ import type {
   UploadFields,
 } from '../../shared/schemas/size-profiles';
 import { buildFromForm, buildFromUpload, type FormInput, type ProfileData } from '../../shared/size-profiles/index';
-import { writeAudit } from '../audit/audit.repo';
+import { auditOf, type Actor } from '../audit/audit.repo';
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { readCsvRecords } from './csv-records';
 import { findSizeProfile, insertSizeProfile, listSizeProfiles, softDeleteSizeProfile } from './size-profiles.repo';
 
-type Actor = { id: number; email: string };
+const auditSizeProfile = auditOf('size_profile');
 export type UploadedFile = { originalname: string; buffer: Buffer };
 
 export const listSizeProfilePage = (db: Db, q: SizeProfileListQuery): Promise<SizeProfileList> => listSizeProfiles(db, q);
@@ -26,13 +26,7 @@ export async function getSizeProfile(db: Db, id: number): Promise<SizeProfileDet
 async function store(db: Db, actor: Actor, name: string, data: ProfileData, detail: Record<string, unknown>): Promise<SizeProfileDetail> {
   const id = await withTransaction(db, async (trx) => {
     const newId = await insertSizeProfile(trx, name, data, actor.id);
-    await writeAudit(trx, {
-      actor,
-      action: 'size_profile.created',
-      targetType: 'size_profile',
-      targetId: newId,
-      detail: { name, kind: data.kind, ...detail },
-    });
+    await auditSizeProfile(trx, actor, 'size_profile.created', newId, { name, kind: data.kind, ...detail });
     return newId;
   });
   return (await findSizeProfile(db, id))!;
@@ -65,12 +59,6 @@ export async function deleteSizeProfile(db: Db, actor: Actor, id: number) {
   await withTransaction(db, async (trx) => {
     const found = await findSizeProfile(trx, id);
     if (!found || !(await softDeleteSizeProfile(trx, id))) throw notFound('Size profile');
-    await writeAudit(trx, {
-      actor,
-      action: 'size_profile.deleted',
-      targetType: 'size_profile',
-      targetId: id,
-      detail: { name: found.name },
-    });
+    await auditSizeProfile(trx, actor, 'size_profile.deleted', id, { name: found.name });
   });
 }

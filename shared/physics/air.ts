@@ -15,7 +15,7 @@ export interface AirProperties extends AirConditions {
 export const REFERENCE_AIR: AirConditions = { temperature_K: 293.15, pressure_Pa: 101325 };
 
 // Hinds App. A4: 0.066 µm at 20 °C and 1 atm, the λ that Hinds Eq. 3.20 was fitted with.
-const REFERENCE_MEAN_FREE_PATH_m = 0.066e-6;
+export const REFERENCE_MEAN_FREE_PATH_m = 0.066e-6;
 
 // Sutherland's law, constants from the US Standard Atmosphere 1976.
 export function sutherlandViscosity(temperature_K: number): number {

@@ -36,6 +36,7 @@ export { hoodFace } from './hood-face';
 export type { HoodFace } from './hood-face';
 export { jetCentrelineSpeed, jetHalfWidth, jetVelocity, jetVolumeFlux } from './round-jet';
 export { JET_DECAY_CONSTANT, JET_SPREADING_RATE } from './round-jet';
+export type { RoundJet } from './round-jet';
 export { JET_EDDY_VISCOSITY_RATIO, jetDiffusivityAndGradient, jetEddyDiffusivity } from './jet-diffusivity';
 export { depositionIntegral, depositionVelocities } from './surface-deposition';
 export type { DepositionVelocities } from './surface-deposition';

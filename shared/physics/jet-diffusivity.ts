@@ -1,4 +1,4 @@
-import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, NOZZLE_HALF_WIDTH_PER_DIAMETER, jetCentrelineSpeed, jetHalfWidth } from './round-jet';
+import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, jetCentrelineSpeed, jetFrame, jetHalfWidth, type RoundJet } from './round-jet';
 
 // ν_T ≈ 0.028·u_c·r½ across the self-similar round jet (Pope, Turbulent Flows, ch. 5, from memory).
 export const JET_EDDY_VISCOSITY_RATIO = 0.028;
@@ -12,62 +12,32 @@ export function jetEddyDiffusivity(axial_m: number, radial_m: number, speed_mPer
   return JET_EDDY_VISCOSITY_RATIO * jetCentrelineSpeed(axial_m, speed_mPerS, diameter_m) * halfWidth_m * Math.exp(-LN2 * eta * eta);
 }
 
+const FRAME = new Float64Array(6);
+
 // Writes the jet's eddy diffusivity into out[0] and its gradient ∇D into out[1..3] (the walk's drift
 // term); the same geometry and fade as jetEddyDiffusivity. Allocation-free, for the step loop.
-export function jetDiffusivityAndGradient(
-  px_m: number,
-  py_m: number,
-  pz_m: number,
-  ox_m: number,
-  oy_m: number,
-  oz_m: number,
-  ex: number,
-  ey: number,
-  ez: number,
-  speed_mPerS: number,
-  diameter_m: number,
-  out: Float64Array,
-): void {
-  const dx = px_m - ox_m;
-  const dy = py_m - oy_m;
-  const dz = pz_m - oz_m;
-  const x = dx * ex + dy * ey + dz * ez;
+export function jetDiffusivityAndGradient(jet: RoundJet, px_m: number, py_m: number, pz_m: number, out: Float64Array): void {
+  const x = jetFrame(jet, px_m, py_m, pz_m, FRAME);
   if (x <= 0) {
-    out[0] = 0;
-    out[1] = 0;
-    out[2] = 0;
-    out[3] = 0;
+    out.fill(0, 0, 4);
     return;
   }
-  const rx = dx - x * ex;
-  const ry = dy - x * ey;
-  const rz = dz - x * ez;
-  const rr = rx * rx + ry * ry + rz * rz;
-  const core_m = JET_DECAY_CONSTANT * diameter_m;
-  let scale: number;
-  let scaleSlope: number;
-  let halfWidth: number;
-  let halfWidthSlope: number;
-  if (x >= core_m) {
-    // u_c·r½ = B·S·u₀·d₀ is constant in the far field.
-    scale = JET_EDDY_VISCOSITY_RATIO * speed_mPerS * core_m * JET_SPREADING_RATE;
-    scaleSlope = 0;
-    halfWidth = JET_SPREADING_RATE * x;
-    halfWidthSlope = JET_SPREADING_RATE;
-  } else {
-    const nozzle_m = NOZZLE_HALF_WIDTH_PER_DIAMETER * diameter_m;
-    halfWidthSlope = (JET_SPREADING_RATE * core_m - nozzle_m) / core_m;
-    halfWidth = nozzle_m + halfWidthSlope * x;
-    scale = JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidth;
-    scaleSlope = JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidthSlope;
-  }
+  const rr = FRAME[3];
+  const halfWidth = FRAME[4];
+  const halfWidthSlope = FRAME[5];
+  const { speed_mPerS } = jet;
+  const core_m = JET_DECAY_CONSTANT * jet.diameter_m;
+  // u_c·r½ = B·S·u₀·d₀ is constant in the far field.
+  const scale =
+    x >= core_m ? JET_EDDY_VISCOSITY_RATIO * speed_mPerS * core_m * JET_SPREADING_RATE : JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidth;
+  const scaleSlope = x >= core_m ? 0 : JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidthSlope;
   const inverseSquare = 1 / (halfWidth * halfWidth);
   const g = Math.exp(-LN2 * rr * inverseSquare);
   const d = scale * g;
   const axial = scaleSlope * g + d * 2 * LN2 * rr * inverseSquare * (halfWidthSlope / halfWidth);
   const radial = -2 * LN2 * inverseSquare * d;
   out[0] = d;
-  out[1] = axial * ex + radial * rx;
-  out[2] = axial * ey + radial * ry;
-  out[3] = axial * ez + radial * rz;
+  out[1] = axial * jet.ex + radial * FRAME[0];
+  out[2] = axial * jet.ey + radial * FRAME[1];
+  out[3] = axial * jet.ez + radial * FRAME[2];
 }

@@ -1,14 +1,34 @@
 import { describe, it, expect } from 'vitest';
 import { bisect } from './root';
-import { jetCentrelineSpeed, jetDiffusivityAndGradient, jetEddyDiffusivity, jetHalfWidth, jetVelocity, jetVolumeFlux } from './index';
+import {
+  jetCentrelineSpeed,
+  jetDiffusivityAndGradient,
+  jetEddyDiffusivity,
+  jetHalfWidth,
+  jetVelocity,
+  jetVolumeFlux,
+  type RoundJet,
+} from './index';
 
 const out = new Float64Array(3);
 const U0 = 50;
 const D0 = 0.02;
 
+// The jet along +x from the origin, and the same jet from (ox, oy, oz) along the unit vector (ex, ey, ez).
+const ALONG_X: RoundJet = { ox_m: 0, oy_m: 0, oz_m: 0, ex: 1, ey: 0, ez: 0, speed_mPerS: U0, diameter_m: D0 };
+const aimed = (ox_m: number, oy_m: number, oz_m: number, ex: number, ey: number, ez: number): RoundJet => ({
+  ...ALONG_X,
+  ox_m,
+  oy_m,
+  oz_m,
+  ex,
+  ey,
+  ez,
+});
+
 // Axial speed of a jet along +x from the origin, at axial distance x and radius r off the axis.
 function axialSpeed(x_m: number, r_m: number): number {
-  jetVelocity(x_m, r_m, 0, 0, 0, 0, 1, 0, 0, U0, D0, out);
+  jetVelocity(ALONG_X, x_m, r_m, 0, out);
   return out[0];
 }
 
@@ -76,9 +96,9 @@ describe('round free jet', () => {
       const terms = [0, 1, 2].map((axis) => {
         const step = [0, 0, 0];
         step[axis] = h;
-        jetVelocity(x + step[0], y + step[1], z + step[2], 0, 0, 0, 1, 0, 0, U0, D0, out);
+        jetVelocity(ALONG_X, x + step[0], y + step[1], z + step[2], out);
         const ahead = out[axis];
-        jetVelocity(x - step[0], y - step[1], z - step[2], 0, 0, 0, 1, 0, 0, U0, D0, out);
+        jetVelocity(ALONG_X, x - step[0], y - step[1], z - step[2], out);
         return (ahead - out[axis]) / (2 * h);
       });
       expect(Math.abs(terms[0] + terms[1] + terms[2])).toBeLessThan(1e-4 * Math.max(...terms.map(Math.abs)));
@@ -88,7 +108,7 @@ describe('round free jet', () => {
   it('draws air in from the side at the entrainment rate: −2π·r·v → dQ/dx far from the axis ([C] continuity)', () => {
     const x_m = 40 * D0;
     const r_m = 5 * jetHalfWidth(x_m, D0);
-    jetVelocity(x_m, r_m, 0, 0, 0, 0, 1, 0, 0, U0, D0, out);
+    jetVelocity(ALONG_X, x_m, r_m, 0, out);
     const entrainment = -2 * Math.PI * r_m * out[1];
     const slope = (jetVolumeFlux(x_m + 1e-4, U0, D0) - jetVolumeFlux(x_m - 1e-4, U0, D0)) / 2e-4;
     expect(entrainment / slope).toBeCloseTo(1, 3);
@@ -97,11 +117,11 @@ describe('round free jet', () => {
   it('points along any unit direction: the same jet aimed along (1, 1, 0)/√2 from (1, 2, 3)', () => {
     const e = Math.SQRT1_2;
     const x_m = 30 * D0;
-    jetVelocity(1 + e * x_m, 2 + e * x_m, 3.01, 1, 2, 3, e, e, 0, U0, D0, out);
+    jetVelocity(aimed(1, 2, 3, e, e, 0), 1 + e * x_m, 2 + e * x_m, 3.01, out);
     const speed = Math.hypot(out[0], out[1], out[2]);
-    jetVelocity(x_m, 0, 0.01, 0, 0, 0, 1, 0, 0, U0, D0, out);
+    jetVelocity(ALONG_X, x_m, 0, 0.01, out);
     expect(speed).toBeCloseTo(Math.hypot(out[0], out[1], out[2]), 10);
-    jetVelocity(0.5, 2, 3, 1, 2, 3, e, e, 0, U0, D0, out);
+    jetVelocity(aimed(1, 2, 3, e, e, 0), 0.5, 2, 3, out);
     expect(Math.hypot(out[0], out[1], out[2])).toBe(0);
   });
 
@@ -115,7 +135,7 @@ describe('round free jet', () => {
     const e = [0.6, 0, 0.8];
     const field = new Float64Array(4);
     const d = (x: number, y: number, z: number) => {
-      jetDiffusivityAndGradient(x, y, z, 0.1, 0.2, 0.3, e[0], e[1], e[2], U0, D0, field);
+      jetDiffusivityAndGradient(aimed(0.1, 0.2, 0.3, e[0], e[1], e[2]), x, y, z, field);
       return field[0];
     };
     const h = 1e-6;

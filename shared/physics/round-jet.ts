@@ -29,60 +29,73 @@ export function jetVolumeFlux(axial_m: number, speed_mPerS: number, diameter_m: 
   return (Math.PI * jetCentrelineSpeed(axial_m, speed_mPerS, diameter_m) * halfWidth_m * halfWidth_m) / LN2;
 }
 
-// Writes the jet's air velocity (m/s) at point p into out[0..2] for a jet from origin o along the
-// unit vector e; zero behind the nozzle plane. Allocation-free, for the step loop.
-export function jetVelocity(
-  px_m: number,
-  py_m: number,
-  pz_m: number,
-  ox_m: number,
-  oy_m: number,
-  oz_m: number,
-  ex: number,
-  ey: number,
-  ez: number,
-  speed_mPerS: number,
-  diameter_m: number,
-  out: Float64Array,
-): void {
-  const dx = px_m - ox_m;
-  const dy = py_m - oy_m;
-  const dz = pz_m - oz_m;
+// A jet leaving a nozzle of diameter d₀ at speed u₀ from origin o along the unit vector e.
+export interface RoundJet {
+  readonly ox_m: number;
+  readonly oy_m: number;
+  readonly oz_m: number;
+  readonly ex: number;
+  readonly ey: number;
+  readonly ez: number;
+  readonly speed_mPerS: number;
+  readonly diameter_m: number;
+}
+
+// Puts point p in the jet's frame and returns its axial
+// distance (≤ 0 behind the nozzle plane, where frame is left alone). frame gets the radial vector
+// from the axis [0..2], its square length [3], r½ [4] and dr½/dx [5]. Allocation-free, for the
+// step-loop field functions that share this geometry.
+export function jetFrame(jet: RoundJet, px_m: number, py_m: number, pz_m: number, frame: Float64Array): number {
+  const { ex, ey, ez } = jet;
+  const dx = px_m - jet.ox_m;
+  const dy = py_m - jet.oy_m;
+  const dz = pz_m - jet.oz_m;
   const x = dx * ex + dy * ey + dz * ez;
-  if (x <= 0) {
-    out[0] = 0;
-    out[1] = 0;
-    out[2] = 0;
-    return;
-  }
+  if (x <= 0) return x;
   const rx = dx - x * ex;
   const ry = dy - x * ey;
   const rz = dz - x * ez;
-  const r = Math.sqrt(rx * rx + ry * ry + rz * rz);
-  const core_m = JET_DECAY_CONSTANT * diameter_m;
-  let uc: number;
-  let halfWidth: number;
-  let halfWidthSlope: number;
-  let fluxSlope: number;
+  frame[0] = rx;
+  frame[1] = ry;
+  frame[2] = rz;
+  frame[3] = rx * rx + ry * ry + rz * rz;
+  const core_m = JET_DECAY_CONSTANT * jet.diameter_m;
   if (x >= core_m) {
-    uc = (speed_mPerS * core_m) / x;
-    halfWidth = JET_SPREADING_RATE * x;
-    halfWidthSlope = JET_SPREADING_RATE;
-    fluxSlope = (uc * halfWidth * halfWidth) / x;
+    frame[4] = JET_SPREADING_RATE * x;
+    frame[5] = JET_SPREADING_RATE;
   } else {
-    const nozzle_m = NOZZLE_HALF_WIDTH_PER_DIAMETER * diameter_m;
-    uc = speed_mPerS;
-    halfWidthSlope = (JET_SPREADING_RATE * core_m - nozzle_m) / core_m;
-    halfWidth = nozzle_m + halfWidthSlope * x;
-    fluxSlope = 2 * uc * halfWidth * halfWidthSlope;
+    const nozzle_m = NOZZLE_HALF_WIDTH_PER_DIAMETER * jet.diameter_m;
+    const halfWidthSlope = (JET_SPREADING_RATE * core_m - nozzle_m) / core_m;
+    frame[4] = nozzle_m + halfWidthSlope * x;
+    frame[5] = halfWidthSlope;
   }
+  return x;
+}
+
+const FRAME = new Float64Array(6);
+
+// Writes the jet's air velocity (m/s) at point p into out[0..2]; zero behind the nozzle plane.
+// Allocation-free, for the step loop.
+export function jetVelocity(jet: RoundJet, px_m: number, py_m: number, pz_m: number, out: Float64Array): void {
+  const x = jetFrame(jet, px_m, py_m, pz_m, FRAME);
+  if (x <= 0) {
+    out.fill(0, 0, 3);
+    return;
+  }
+  const r = Math.sqrt(FRAME[3]);
+  const halfWidth = FRAME[4];
+  const halfWidthSlope = FRAME[5];
+  const { speed_mPerS } = jet;
+  const core_m = JET_DECAY_CONSTANT * jet.diameter_m;
+  const uc = x >= core_m ? (speed_mPerS * core_m) / x : speed_mPerS;
+  const fluxSlope = x >= core_m ? (uc * halfWidth * halfWidth) / x : 2 * uc * halfWidth * halfWidthSlope;
   const eta = r / halfWidth;
   const g = Math.exp(-LN2 * eta * eta);
   const u = uc * g;
   // (1 − g)/r → 0 on the axis, where the radial direction is undefined anyway.
   const v = r > 1e-12 * halfWidth ? (-fluxSlope * (1 - g)) / (2 * LN2 * r) + (uc * g * r * halfWidthSlope) / halfWidth : 0;
   const radial = r > 1e-12 * halfWidth ? v / r : 0;
-  out[0] = u * ex + radial * rx;
-  out[1] = u * ey + radial * ry;
-  out[2] = u * ez + radial * rz;
+  out[0] = u * jet.ex + radial * FRAME[0];
+  out[1] = u * jet.ey + radial * FRAME[1];
+  out[2] = u * jet.ez + radial * FRAME[2];
 }

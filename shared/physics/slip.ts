@@ -1,4 +1,4 @@
-import { type AirConditions, type AirProperties, STANDARD_AIR, scaleMeanFreePath } from './air';
+import { type AirConditions, type AirProperties, REFERENCE_AIR, REFERENCE_MEAN_FREE_PATH_m, STANDARD_AIR, scaleMeanFreePath } from './air';
 import { requirePositive } from './validate';
 
 // A coefficient set carries the λ it was fitted with, so it is never paired with another λ.
@@ -10,13 +10,13 @@ export interface SlipCoefficients {
   reference: AirConditions;
 }
 
-// Hinds Eq. 3.20, fitted with λ = 0.066 µm at 20 °C, 1 atm.
+// Hinds Eq. 3.20, fitted with Hinds's own λ = 0.066 µm at 20 °C, 1 atm: the air model's reference.
 export const HINDS_SLIP: SlipCoefficients = {
   a: 1.17,
   b: 0.525,
   c: 0.78,
-  referenceMeanFreePath_m: 0.066e-6,
-  reference: { temperature_K: 293.15, pressure_Pa: 101325 },
+  referenceMeanFreePath_m: REFERENCE_MEAN_FREE_PATH_m,
+  reference: REFERENCE_AIR,
 };
 
 // Allen & Raabe 1985 (solid particles), fitted with λ = 0.0673 µm at 23 °C, 1 atm (from memory).

@@ -1,22 +1,6 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { packHoods } from '../../../../workers/engine/hood-field';
-import {
-  HOOD_E1X,
-  HOOD_E1Y,
-  HOOD_E1Z,
-  HOOD_E2X,
-  HOOD_E2Y,
-  HOOD_E2Z,
-  HOOD_HALF_HEIGHT,
-  HOOD_HALF_WIDTH,
-  HOOD_NX,
-  HOOD_NY,
-  HOOD_NZ,
-  HOOD_STRIDE,
-  HOOD_X,
-  HOOD_Y,
-  HOOD_Z,
-} from '../../../../workers/engine/hood-slots';
+import * as slots from '../../../../workers/engine/hood-slots';
 
 export type ViewKind = 'plan' | 'elevation';
 
@@ -59,19 +43,19 @@ export interface HoodOutline {
 export function hoodOutlines(hoods: Scenario['hoods']): HoodOutline[] {
   const p = packHoods(hoods);
   return hoods.map((hood, h) => {
-    const o = h * HOOD_STRIDE;
-    const c: [number, number, number] = [p[o + HOOD_X], p[o + HOOD_Y], p[o + HOOD_Z]];
-    const e1 = [p[o + HOOD_E1X], p[o + HOOD_E1Y], p[o + HOOD_E1Z]];
-    const e2 = [p[o + HOOD_E2X], p[o + HOOD_E2Y], p[o + HOOD_E2Z]];
-    const hw = p[o + HOOD_HALF_WIDTH];
-    const hh = p[o + HOOD_HALF_HEIGHT];
+    const o = h * slots.HOOD_STRIDE;
+    const c: [number, number, number] = [p[o + slots.HOOD_X], p[o + slots.HOOD_Y], p[o + slots.HOOD_Z]];
+    const e1 = [p[o + slots.HOOD_E1X], p[o + slots.HOOD_E1Y], p[o + slots.HOOD_E1Z]];
+    const e2 = [p[o + slots.HOOD_E2X], p[o + slots.HOOD_E2Y], p[o + slots.HOOD_E2Z]];
+    const hw = p[o + slots.HOOD_HALF_WIDTH];
+    const hh = p[o + slots.HOOD_HALF_HEIGHT];
     const corner = (a: number, b: number): [number, number, number] =>
       [0, 1, 2].map((k) => c[k] + a * hw * e1[k] + b * hh * e2[k]) as [number, number, number];
     return {
       name: hood.name ?? `Hood ${h + 1}`,
       corners: [corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)],
       centre: c,
-      normal: [p[o + HOOD_NX], p[o + HOOD_NY], p[o + HOOD_NZ]],
+      normal: [p[o + slots.HOOD_NX], p[o + slots.HOOD_NY], p[o + slots.HOOD_NZ]],
     };
   });
 }

@@ -6,6 +6,9 @@ import { sig } from '@/lib/format';
 import type { Preferred } from './target-crossing';
 import type { SweepParameter } from './sweep-points';
 
+// Distances are entered in metres and face scales are plain ratios: nothing to convert.
+const AS_IS = { toSi: (v: number) => v, fromSi: (v: number) => v };
+
 /** The form's unit for each parameter; SI stays inside, the conversion happens here only. */
 export const PARAMETER: Record<
   SweepParameter,
@@ -16,8 +19,7 @@ export const PARAMETER: Record<
     unit: 'm',
     axis: 'Source distance along the hood axis (m)',
     preferred: 'largest',
-    toSi: (v) => v,
-    fromSi: (v) => v,
+    ...AS_IS,
   },
   airflow: {
     label: 'Hood airflow',
@@ -32,8 +34,7 @@ export const PARAMETER: Record<
     unit: '× current',
     axis: 'Face size (× current width and height)',
     preferred: 'smallest',
-    toSi: (v) => v,
-    fromSi: (v) => v,
+    ...AS_IS,
   },
 };
 
