@@ -1,15 +1,10 @@
-import {
-  cubicMetresPerHourToPerSecond,
-  cubicMetresPerSecondToPerHour,
-  metresToMillimetres,
-  millimetresToMetres,
-} from '../../../../shared/units';
 import { HOOD_KIND_LABEL, HOOD_KINDS } from '../../../../shared/vocabulary/index';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { hoodAngles, type HoodInput } from '@/features/scenario-editor/lib/hood-axis';
 import { isSlot } from '@/features/scenario-editor/lib/hood-hints';
 import { bindNumberFields } from '@/lib/bind-fields';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { DirectionFields } from './direction-fields';
 import { NumberField } from './number-field';
 import { FieldGrid } from './section';
@@ -28,7 +23,6 @@ export function HoodFields({ hood, index, onChange, onRemove, errors }: Props) {
   const at = (field: string) => errors[`hoods.${index}.${field}`];
   const field = bindNumberFields(hood, onChange, errors, `hoods.${index}`);
   const slot = isSlot(hood.kind);
-  const mm = { unit: 'mm', toDisplay: metresToMillimetres, fromDisplay: millimetresToMetres };
 
   return (
     <div className="flex flex-col gap-4">
@@ -62,15 +56,14 @@ export function HoodFields({ hood, index, onChange, onRemove, errors }: Props) {
           labels={{ toward: 'Faces toward', tilt: 'Tilt' }}
           tiltHint="−90° faces the floor"
         />
-        <NumberField label={slot ? 'Slot length' : 'Face width'} {...mm} {...field('faceWidth_m')} hint="Across, horizontal" />
-        <NumberField label={slot ? 'Slot width' : 'Face height'} {...mm} {...field('faceHeight_m')} />
         <NumberField
-          label="Airflow"
-          unit="m³/h"
-          {...field('airflow_m3PerS')}
-          toDisplay={cubicMetresPerSecondToPerHour}
-          fromDisplay={cubicMetresPerHourToPerSecond}
+          label={slot ? 'Slot length' : 'Face width'}
+          {...SHOWN_IN.millimetres}
+          {...field('faceWidth_m')}
+          hint="Across, horizontal"
         />
+        <NumberField label={slot ? 'Slot width' : 'Face height'} {...SHOWN_IN.millimetres} {...field('faceHeight_m')} />
+        <NumberField label="Airflow" {...SHOWN_IN.cubicMetresPerHour} {...field('airflow_m3PerS')} />
       </FieldGrid>
     </div>
   );

@@ -2,12 +2,13 @@ import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/
 import { defaultJet } from '../../../../shared/physics/release-jets';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { formatSig } from '../../../../shared/format/index';
-import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
+import { metresToMillimetres } from '../../../../shared/units';
 import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/release-types';
 import { SelectField } from '@/components/ui/field';
 import { hoodAngles } from '@/features/scenario-editor/lib/hood-axis';
 import { breathingZoneAngles, jetToEdit, withJet, withReleaseType, type JetInput } from '@/features/scenario-editor/lib/release-jet';
 import { bindNumberFields } from '@/lib/bind-fields';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { DirectionFields } from './direction-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
@@ -65,13 +66,7 @@ export function ReleaseFields({ value, onChange, errors }: SectionProps<Scenario
       {jetField && angles && (
         <FieldGrid>
           <NumberField label="Jet speed" unit="m/s" {...jetField('speed_mPerS')} hint="0 for no jet" />
-          <NumberField
-            label="Jet diameter"
-            unit="mm"
-            {...jetField('diameter_m')}
-            toDisplay={metresToMillimetres}
-            fromDisplay={millimetresToMetres}
-          />
+          <NumberField label="Jet diameter" {...SHOWN_IN.millimetres} {...jetField('diameter_m')} />
           <DirectionFields
             angles={angles}
             onDirection={(direction) => setJet({ direction })}

@@ -1,8 +1,8 @@
 import { formatSig } from '../../../../shared/format/index';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index';
-import { celsiusToKelvin, kelvinToCelsius } from '../../../../shared/units';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { withRoom } from '@/features/scenario-editor/lib/update';
 import { bindNumberFields } from '@/lib/bind-fields';
 import { NumberField } from './number-field';
@@ -43,13 +43,7 @@ export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioIn
           {...field('draftDirection_deg', DEFAULTS.draftDirection_deg)}
           hint="0° is +x, 90° is +y"
         />
-        <NumberField
-          label="Air temperature"
-          unit="°C"
-          {...field('temperature_K', DEFAULTS.temperature_K)}
-          toDisplay={kelvinToCelsius}
-          fromDisplay={celsiusToKelvin}
-        />
+        <NumberField label="Air temperature" {...SHOWN_IN.celsius} {...field('temperature_K', DEFAULTS.temperature_K)} />
       </FieldGrid>
       <div className="flex flex-col gap-3">
         <label className="inline-flex items-center gap-2 text-sm font-semibold">

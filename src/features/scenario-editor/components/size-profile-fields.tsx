@@ -5,6 +5,7 @@ import { SelectField } from '@/components/ui/field';
 import { IdSelectField } from '@/components/ui/id-select-field';
 import { withDust } from '@/features/scenario-editor/lib/update';
 import { bindNumberFields } from '@/lib/bind-fields';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
 
@@ -61,10 +62,8 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
             </SelectField>
             <NumberField
               label={profile.basis === 'mmad' ? 'MMAD' : 'CMD'}
-              unit="µm"
+              {...SHOWN_IN.micrometres}
               {...profileField(profile)('median_m')}
-              toDisplay={metresToMicrometres}
-              fromDisplay={micrometresToMetres}
             />
             <NumberField label="GSD" {...profileField(profile)('gsd')} hint="1 is a single size" />
           </>

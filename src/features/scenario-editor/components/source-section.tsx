@@ -1,7 +1,7 @@
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
-import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
 import { SelectField } from '@/components/ui/field';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { withSource } from '@/features/scenario-editor/lib/update';
 import { bindNumberFields } from '@/lib/bind-fields';
 import { EmissionFields } from './emission-fields';
@@ -29,15 +29,7 @@ export function SourceSection({ value, onChange, errors }: SectionProps<Scenario
           <option value="disc">Disc (flat, horizontal)</option>
           <option value="box">Box</option>
         </SelectField>
-        {shape !== 'point' && (
-          <NumberField
-            label={SIZE_LABEL[shape]}
-            unit="mm"
-            {...field('size_m', DEFAULTS.size_m)}
-            toDisplay={metresToMillimetres}
-            fromDisplay={millimetresToMetres}
-          />
-        )}
+        {shape !== 'point' && <NumberField label={SIZE_LABEL[shape]} {...SHOWN_IN.millimetres} {...field('size_m', DEFAULTS.size_m)} />}
       </FieldGrid>
       <Subheading>Release</Subheading>
       <ReleaseFields value={value} onChange={onChange} errors={errors} />
