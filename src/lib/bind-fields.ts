@@ -9,3 +9,13 @@ export function bindFields<T extends object>(values: T, setValues: (next: T) => 
     error: errors[errorPath],
   });
 }
+
+// The same for a control that reports a parsed number. Messages sit under the branch's path; a key the payload may
+// leave out shows the default the schema will fill in, so the field never looks blank when it is not.
+export function bindNumberFields<T extends object>(values: T, setValues: (next: T) => void, errors: Record<string, string>, path: string) {
+  return <K extends keyof T & string>(key: K, fallback?: T[K]) => ({
+    value: values[key] ?? fallback,
+    onValue: (v: T[K]) => setValues({ ...values, [key]: v }),
+    error: errors[`${path}.${key}`],
+  });
+}

@@ -3,6 +3,7 @@ import { IdSelectField } from '@/components/ui/id-select-field';
 import { applyAgent, type AgentOption } from '@/features/scenario-editor/lib/apply-agent';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withDust } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, Subheading, type SectionProps } from './section';
 import { SizeProfileFields, type SizeProfileOption } from './size-profile-fields';
@@ -22,6 +23,7 @@ const FRACTION: Record<string, string> = { total: 'total', inhalable: 'inhalable
 export function DustSection({ value, onChange, errors, agents, agentId, onAgentChange, ...profiles }: Props) {
   const dust = value.dust;
   const set = (patch: Partial<ScenarioInput['dust']>) => onChange(withDust(value, patch));
+  const field = bindNumberFields(dust, set, errors, 'dust');
 
   const chooseAgent = (id: number | null) => {
     onAgentChange(id);
@@ -40,20 +42,8 @@ export function DustSection({ value, onChange, errors, agents, agentId, onAgentC
           value={agentId}
           onChange={chooseAgent}
         />
-        <NumberField
-          label="Particle density"
-          unit="kg/m³"
-          value={dust.density_kgPerM3}
-          onValue={(v) => set({ density_kgPerM3: v })}
-          error={errors['dust.density_kgPerM3']}
-        />
-        <NumberField
-          label="Shape factor"
-          value={dust.shapeFactor ?? DEFAULTS.shapeFactor}
-          onValue={(v) => set({ shapeFactor: v })}
-          error={errors['dust.shapeFactor']}
-          hint="1 for spheres"
-        />
+        <NumberField label="Particle density" unit="kg/m³" {...field('density_kgPerM3')} />
+        <NumberField label="Shape factor" {...field('shapeFactor', DEFAULTS.shapeFactor)} hint="1 for spheres" />
       </FieldGrid>
       {value.limit && (
         <p className="text-sm text-muted" data-testid="agent-limit">

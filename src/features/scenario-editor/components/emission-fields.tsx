@@ -2,6 +2,7 @@ import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { SelectField } from '@/components/ui/field';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withSource } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
 
@@ -20,7 +21,9 @@ export function EmissionFields({ value, onChange, errors }: SectionProps<Scenari
   const source = value.source;
   const emission = source.emission;
   const setEmission = (next: Emission) => onChange(withSource(value, { emission: next }));
-  const at = (field: string) => errors[`source.emission.${field}`];
+  const sourceField = bindNumberFields(source, (next) => onChange(withSource(value, next)), errors, 'source');
+  // Bound after narrowing, so each kind offers only its own keys.
+  const emissionField = <E extends Emission>(e: E) => bindNumberFields(e, setEmission, errors, 'source.emission');
 
   return (
     <FieldGrid>
@@ -33,56 +36,23 @@ export function EmissionFields({ value, onChange, errors }: SectionProps<Scenari
         <option value="bursts">Bursts</option>
       </SelectField>
       {emission.kind === 'continuous' ? (
-        <NumberField
-          label="Emission rate"
-          unit="mg/min"
-          value={emission.rate_mgPerMin}
-          onValue={(v) => setEmission({ ...emission, rate_mgPerMin: v })}
-          error={at('rate_mgPerMin')}
-        />
+        <NumberField label="Emission rate" unit="mg/min" {...emissionField(emission)('rate_mgPerMin')} />
       ) : (
         <>
-          <NumberField
-            label="Mass per burst"
-            unit="mg"
-            value={emission.massPerEvent_mg}
-            onValue={(v) => setEmission({ ...emission, massPerEvent_mg: v })}
-            error={at('massPerEvent_mg')}
-          />
-          <NumberField
-            label="Bursts"
-            unit="per h"
-            value={emission.eventsPerHour}
-            onValue={(v) => setEmission({ ...emission, eventsPerHour: v })}
-            error={at('eventsPerHour')}
-          />
+          <NumberField label="Mass per burst" unit="mg" {...emissionField(emission)('massPerEvent_mg')} />
+          <NumberField label="Bursts" unit="per h" {...emissionField(emission)('eventsPerHour')} />
         </>
       )}
-      <NumberField
-        label="Task duration"
-        unit="min"
-        value={emission.taskDuration_min}
-        onValue={(v) => setEmission({ ...emission, taskDuration_min: v })}
-        error={at('taskDuration_min')}
-        hint="The simulated stretch"
-      />
+      <NumberField label="Task duration" unit="min" {...emissionField(emission)('taskDuration_min')} hint="The simulated stretch" />
       <NumberField
         label="Task time per shift"
         unit="min"
         optional
-        value={source.taskMinutesPerShift}
+        {...sourceField('taskMinutesPerShift')}
         placeholder={String(Math.min(480, emission.taskDuration_min))}
-        onValue={(v) => onChange(withSource(value, { taskMinutesPerShift: v }))}
-        error={errors['source.taskMinutesPerShift']}
         hint="Blank: the task duration; at most 480"
       />
-      <NumberField
-        label="Background, rest of shift"
-        unit="mg/m³"
-        value={source.background_mgPerM3 ?? DEFAULTS.background_mgPerM3}
-        onValue={(v) => onChange(withSource(value, { background_mgPerM3: v }))}
-        error={errors['source.background_mgPerM3']}
-      />
+      <NumberField label="Background, rest of shift" unit="mg/m³" {...sourceField('background_mgPerM3', DEFAULTS.background_mgPerM3)} />
     </FieldGrid>
   );
 }

@@ -2,11 +2,14 @@ import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/
 import { defaultJet } from '../../../../shared/physics/release-jets';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { formatSig } from '../../../../shared/format/index';
-import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
+import { metresToMillimetres } from '../../../../shared/units';
 import { RELEASE_TYPE_LABEL, RELEASE_TYPES } from '../../../../shared/vocabulary/release-types';
 import { SelectField } from '@/components/ui/field';
 import { hoodAngles } from '@/features/scenario-editor/lib/hood-axis';
 import { breathingZoneAngles, jetToEdit, withJet, withReleaseType, type JetInput } from '@/features/scenario-editor/lib/release-jet';
+import { bindNumberFields } from '@/lib/bind-fields';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
+import { DirectionFields } from './direction-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
 
@@ -30,7 +33,7 @@ export function ReleaseFields({ value, onChange, errors }: SectionProps<Scenario
   const setJet = (patch: Partial<JetInput>) => jet && onChange(withJet(value, { ...jet, ...patch }));
   // A jet written without a direction aims at the breathing zone; the fields show that aim.
   const angles = jet?.direction ? hoodAngles(jet.direction) : jet ? toAngles(breathingZoneAngles(value)) : null;
-  const at = (field: string) => errors[`source.jet.${field}`];
+  const jetField = jet && bindNumberFields(jet, setJet, errors, 'source.jet');
 
   return (
     <div className="flex flex-col gap-4">
@@ -60,40 +63,17 @@ export function ReleaseFields({ value, onChange, errors }: SectionProps<Scenario
           {defaultText(release)}
         </p>
       </div>
-      {jet && (
+      {jetField && angles && (
         <FieldGrid>
-          <NumberField
-            label="Jet speed"
-            unit="m/s"
-            value={jet.speed_mPerS}
-            onValue={(v) => setJet({ speed_mPerS: v })}
-            error={at('speed_mPerS')}
-            hint="0 for no jet"
-          />
-          <NumberField
-            label="Jet diameter"
-            unit="mm"
-            value={jet.diameter_m}
-            toDisplay={metresToMillimetres}
-            fromDisplay={millimetresToMetres}
-            onValue={(v) => setJet({ diameter_m: v })}
-            error={at('diameter_m')}
-          />
-          <NumberField
-            label="Jet aims toward"
-            unit="° in plan"
-            value={angles?.azimuth_deg}
-            onValue={(v) => setJet({ direction: { azimuth_deg: v, elevation_deg: angles?.tilt_deg ?? 0 } })}
-            error={at('direction') ?? at('direction.azimuth_deg')}
-            hint="0° is +x, 90° is +y"
-          />
-          <NumberField
-            label="Jet tilt"
-            unit="°"
-            value={angles?.tilt_deg}
-            onValue={(v) => setJet({ direction: { azimuth_deg: angles?.azimuth_deg ?? 0, elevation_deg: v } })}
-            error={at('direction.elevation_deg')}
-            hint="−90° blows at the floor"
+          <NumberField label="Jet speed" unit="m/s" {...jetField('speed_mPerS')} hint="0 for no jet" />
+          <NumberField label="Jet diameter" {...SHOWN_IN.millimetres} {...jetField('diameter_m')} />
+          <DirectionFields
+            angles={angles}
+            onDirection={(direction) => setJet({ direction })}
+            errors={errors}
+            path="source.jet"
+            labels={{ toward: 'Jet aims toward', tilt: 'Jet tilt' }}
+            tiltHint="−90° blows at the floor"
           />
         </FieldGrid>
       )}

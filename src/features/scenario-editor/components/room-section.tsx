@@ -1,9 +1,10 @@
 import { formatSig } from '../../../../shared/format/index';
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { eddyDiffusivityFromVentilation } from '../../../../shared/physics/index';
-import { celsiusToKelvin, kelvinToCelsius } from '../../../../shared/units';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { withRoom } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 
@@ -16,6 +17,7 @@ function estimatedEddy_m2PerS(room: ScenarioInput['room']): number | null {
 export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioInput>) {
   const room = value.room;
   const set = (patch: Partial<ScenarioInput['room']>) => onChange(withRoom(value, patch));
+  const field = bindNumberFields(room, set, errors, 'room');
   const estimate = estimatedEddy_m2PerS(room);
   const fromAch = room.eddyDiffusivity_m2PerS === undefined;
 
@@ -25,53 +27,23 @@ export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioIn
       intro="x runs along the length, y across the width, z up from the floor; the origin is the room's corner."
     >
       <FieldGrid>
-        <NumberField
-          label="Length (x)"
-          unit="m"
-          value={room.length_m}
-          onValue={(v) => set({ length_m: v })}
-          error={errors['room.length_m']}
-        />
-        <NumberField label="Width (y)" unit="m" value={room.width_m} onValue={(v) => set({ width_m: v })} error={errors['room.width_m']} />
-        <NumberField
-          label="Height (z)"
-          unit="m"
-          value={room.height_m}
-          onValue={(v) => set({ height_m: v })}
-          error={errors['room.height_m']}
-        />
-        <NumberField
-          label="Air changes"
-          unit="per h"
-          value={room.airChanges_perH ?? DEFAULTS.airChanges_perH}
-          onValue={(v) => set({ airChanges_perH: v })}
-          error={errors['room.airChanges_perH']}
-        />
+        <NumberField label="Length (x)" unit="m" {...field('length_m')} />
+        <NumberField label="Width (y)" unit="m" {...field('width_m')} />
+        <NumberField label="Height (z)" unit="m" {...field('height_m')} />
+        <NumberField label="Air changes" unit="per h" {...field('airChanges_perH', DEFAULTS.airChanges_perH)} />
         <NumberField
           label="Draft speed"
           unit="m/s"
-          value={room.draftSpeed_mPerS ?? DEFAULTS.draftSpeed_mPerS}
-          onValue={(v) => set({ draftSpeed_mPerS: v })}
-          error={errors['room.draftSpeed_mPerS']}
+          {...field('draftSpeed_mPerS', DEFAULTS.draftSpeed_mPerS)}
           hint="Rooms average about 0.3 m/s"
         />
         <NumberField
           label="Draft blows toward"
           unit="°"
-          value={room.draftDirection_deg ?? DEFAULTS.draftDirection_deg}
-          onValue={(v) => set({ draftDirection_deg: v })}
-          error={errors['room.draftDirection_deg']}
+          {...field('draftDirection_deg', DEFAULTS.draftDirection_deg)}
           hint="0° is +x, 90° is +y"
         />
-        <NumberField
-          label="Air temperature"
-          unit="°C"
-          value={room.temperature_K ?? DEFAULTS.temperature_K}
-          toDisplay={kelvinToCelsius}
-          fromDisplay={celsiusToKelvin}
-          onValue={(v) => set({ temperature_K: v })}
-          error={errors['room.temperature_K']}
-        />
+        <NumberField label="Air temperature" {...SHOWN_IN.celsius} {...field('temperature_K', DEFAULTS.temperature_K)} />
       </FieldGrid>
       <div className="flex flex-col gap-3">
         <label className="inline-flex items-center gap-2 text-sm font-semibold">
@@ -89,13 +61,7 @@ export function RoomSection({ value, onChange, errors }: SectionProps<ScenarioIn
           </p>
         ) : (
           <FieldGrid>
-            <NumberField
-              label="Eddy diffusivity"
-              unit="m²/s"
-              value={room.eddyDiffusivity_m2PerS}
-              onValue={(v) => set({ eddyDiffusivity_m2PerS: v })}
-              error={errors['room.eddyDiffusivity_m2PerS']}
-            />
+            <NumberField label="Eddy diffusivity" unit="m²/s" {...field('eddyDiffusivity_m2PerS')} />
           </FieldGrid>
         )}
       </div>

@@ -2,6 +2,7 @@ import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { TextField } from '@/components/ui/field';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withRun } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 
@@ -11,16 +12,12 @@ const readSeed = (text: string): string | number => (/^-?\d{1,15}$/.test(text.tr
 export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInput>) {
   const run = value.run ?? {};
   const set = (patch: Partial<NonNullable<ScenarioInput['run']>>) => onChange(withRun(value, patch));
+  const field = bindNumberFields(run, set, errors, 'run');
 
   return (
     <Section legend="Run settings" intro="More particles narrow the confidence band; the same seed gives the same result.">
       <FieldGrid>
-        <NumberField
-          label="Particles"
-          value={run.particles ?? DEFAULTS.particles}
-          onValue={(v) => set({ particles: v })}
-          error={errors['run.particles']}
-        />
+        <NumberField label="Particles" {...field('particles', DEFAULTS.particles)} />
         <TextField
           label="Seed"
           value={String(run.seed ?? DEFAULTS.seed)}
@@ -28,13 +25,7 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
           error={errors['run.seed']}
           autoComplete="off"
         />
-        <NumberField
-          label="Batches"
-          value={run.batches ?? DEFAULTS.batches}
-          onValue={(v) => set({ batches: v })}
-          error={errors['run.batches']}
-          hint="2 to 1000; they give the error bars"
-        />
+        <NumberField label="Batches" {...field('batches', DEFAULTS.batches)} hint="2 to 1000; they give the error bars" />
       </FieldGrid>
     </Section>
   );

@@ -4,6 +4,8 @@ import { metresToMicrometres, micrometresToMetres } from '../../../../shared/uni
 import { SelectField } from '@/components/ui/field';
 import { IdSelectField } from '@/components/ui/id-select-field';
 import { withDust } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { NumberField } from './number-field';
 import { FieldGrid, type SectionProps } from './section';
 
@@ -27,7 +29,7 @@ function describeProfile(p: Profile): string {
 export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeProfileId, onSizeProfileChange }: Props) {
   const profile = value.dust.sizeProfile;
   const setProfile = (next: Profile) => onChange(withDust(value, { sizeProfile: next }));
-  const at = (field: string) => errors[`dust.sizeProfile.${field}`];
+  const profileField = <P extends Profile>(p: P) => bindNumberFields(p, setProfile, errors, 'dust.sizeProfile');
 
   const choose = (id: number | null) => {
     onSizeProfileChange(id);
@@ -60,20 +62,10 @@ export function SizeProfileFields({ value, onChange, errors, sizeProfiles, sizeP
             </SelectField>
             <NumberField
               label={profile.basis === 'mmad' ? 'MMAD' : 'CMD'}
-              unit="µm"
-              value={profile.median_m}
-              toDisplay={metresToMicrometres}
-              fromDisplay={micrometresToMetres}
-              onValue={(v) => setProfile({ ...profile, median_m: v })}
-              error={at('median_m')}
+              {...SHOWN_IN.micrometres}
+              {...profileField(profile)('median_m')}
             />
-            <NumberField
-              label="GSD"
-              value={profile.gsd}
-              onValue={(v) => setProfile({ ...profile, gsd: v })}
-              error={at('gsd')}
-              hint="1 is a single size"
-            />
+            <NumberField label="GSD" {...profileField(profile)('gsd')} hint="1 is a single size" />
           </>
         )}
       </FieldGrid>

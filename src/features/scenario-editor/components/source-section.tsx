@@ -1,8 +1,9 @@
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
-import { metresToMillimetres, millimetresToMetres } from '../../../../shared/units';
 import { SelectField } from '@/components/ui/field';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
+import { SHOWN_IN } from '@/features/scenario-editor/lib/shown-units';
 import { withSource } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
 import { EmissionFields } from './emission-fields';
 import { NumberField } from './number-field';
 import { ReleaseFields } from './release-fields';
@@ -14,37 +15,21 @@ const SIZE_LABEL: Record<Shape, string> = { point: 'Size', disc: 'Disc diameter'
 export function SourceSection({ value, onChange, errors }: SectionProps<ScenarioInput>) {
   const source = value.source;
   const set = (patch: Partial<ScenarioInput['source']>) => onChange(withSource(value, patch));
+  const field = bindNumberFields(source, set, errors, 'source');
   const shape = source.shape ?? DEFAULTS.shape;
 
   return (
     <Section legend="Source and emission">
       <FieldGrid>
-        <NumberField label="Source x" unit="m" value={source.x_m} onValue={(v) => set({ x_m: v })} error={errors['source.x_m']} />
-        <NumberField label="Source y" unit="m" value={source.y_m} onValue={(v) => set({ y_m: v })} error={errors['source.y_m']} />
-        <NumberField
-          label="Release height"
-          unit="m"
-          value={source.z_m}
-          onValue={(v) => set({ z_m: v })}
-          error={errors['source.z_m']}
-          hint="Above the floor"
-        />
+        <NumberField label="Source x" unit="m" {...field('x_m')} />
+        <NumberField label="Source y" unit="m" {...field('y_m')} />
+        <NumberField label="Release height" unit="m" {...field('z_m')} hint="Above the floor" />
         <SelectField label="Shape" value={shape} onChange={(e) => set({ shape: e.target.value as Shape })} error={errors['source.shape']}>
           <option value="point">Point</option>
           <option value="disc">Disc (flat, horizontal)</option>
           <option value="box">Box</option>
         </SelectField>
-        {shape !== 'point' && (
-          <NumberField
-            label={SIZE_LABEL[shape]}
-            unit="mm"
-            value={source.size_m ?? DEFAULTS.size_m}
-            toDisplay={metresToMillimetres}
-            fromDisplay={millimetresToMetres}
-            onValue={(v) => set({ size_m: v })}
-            error={errors['source.size_m']}
-          />
-        )}
+        {shape !== 'point' && <NumberField label={SIZE_LABEL[shape]} {...SHOWN_IN.millimetres} {...field('size_m', DEFAULTS.size_m)} />}
       </FieldGrid>
       <Subheading>Release</Subheading>
       <ReleaseFields value={value} onChange={onChange} errors={errors} />

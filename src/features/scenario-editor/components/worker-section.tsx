@@ -2,6 +2,7 @@ import type { ScenarioInput } from '../../../../shared/schemas/scenario';
 import { SelectField } from '@/components/ui/field';
 import { DEFAULTS, POSTURE_HEIGHT_m } from '@/features/scenario-editor/lib/defaults';
 import { withWorker } from '@/features/scenario-editor/lib/update';
+import { bindNumberFields } from '@/lib/bind-fields';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 
@@ -10,6 +11,7 @@ type Posture = keyof typeof POSTURE_HEIGHT_m;
 export function WorkerSection({ value, onChange, errors }: SectionProps<ScenarioInput>) {
   const worker = value.worker;
   const set = (patch: Partial<ScenarioInput['worker']>) => onChange(withWorker(value, patch));
+  const field = bindNumberFields(worker, set, errors, 'worker');
   // Choosing a posture moves the nose to its usual height; typing a height keeps the posture as a label.
   const choosePosture = (posture: Posture | '') =>
     set(posture === '' ? { posture: undefined } : { posture, z_m: POSTURE_HEIGHT_m[posture] });
@@ -22,23 +24,10 @@ export function WorkerSection({ value, onChange, errors }: SectionProps<Scenario
           <option value="seated">Seated (1.1 m)</option>
           <option value="">Other height</option>
         </SelectField>
-        <NumberField label="Nose and mouth x" unit="m" value={worker.x_m} onValue={(v) => set({ x_m: v })} error={errors['worker.x_m']} />
-        <NumberField label="Nose and mouth y" unit="m" value={worker.y_m} onValue={(v) => set({ y_m: v })} error={errors['worker.y_m']} />
-        <NumberField
-          label="Nose and mouth height"
-          unit="m"
-          value={worker.z_m}
-          onValue={(v) => set({ z_m: v })}
-          error={errors['worker.z_m']}
-        />
-        <NumberField
-          label="Breathing-zone radius"
-          unit="m"
-          value={worker.radius_m ?? DEFAULTS.radius_m}
-          onValue={(v) => set({ radius_m: v })}
-          error={errors['worker.radius_m']}
-          hint="Usually 0.3 m"
-        />
+        <NumberField label="Nose and mouth x" unit="m" {...field('x_m')} />
+        <NumberField label="Nose and mouth y" unit="m" {...field('y_m')} />
+        <NumberField label="Nose and mouth height" unit="m" {...field('z_m')} />
+        <NumberField label="Breathing-zone radius" unit="m" {...field('radius_m', DEFAULTS.radius_m)} hint="Usually 0.3 m" />
       </FieldGrid>
     </Section>
   );
