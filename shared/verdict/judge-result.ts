@@ -18,34 +18,9 @@ export function judgeResult(result: Judged, limit: JudgeLimit, options?: JudgeOp
   );
 }
 
-/** The verdict in the result's own limit block. */
+/** The verdict in the result's own limit block: every field of the verdict, copied so the two never alias. */
 export function limitBlock(v: Verdict): ResultLimit {
-  const {
-    fraction,
-    value_mgPerM3,
-    percentOfLimit,
-    percentOfLimitUpper,
-    ratingCategory,
-    banner,
-    p95_mgPerM3,
-    decided,
-    reasons,
-    moreHistories,
-    gsd,
-  } = v;
-  return {
-    fraction,
-    value_mgPerM3,
-    percentOfLimit,
-    percentOfLimitUpper,
-    ratingCategory,
-    banner,
-    p95_mgPerM3,
-    decided,
-    reasons,
-    moreHistories,
-    gsd,
-  };
+  return { ...v, reasons: [...v.reasons] };
 }
 
 /** The result with its verdict re-judged against the given limit (or none). */
