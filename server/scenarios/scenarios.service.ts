@@ -1,3 +1,4 @@
+import { captureCheck } from '../../shared/physics/capture-verdict';
 import type { RunResult } from '../../shared/schemas/run-result';
 import type { RunCreate } from '../../shared/schemas/runs';
 import type { ScenarioCreate, ScenarioListQuery, ScenarioUpdate } from '../../shared/schemas/workspace';
@@ -149,7 +150,7 @@ export const scenariosService = {
       // Whatever verdict the client sent is dropped: the server judges from the numbers and today's limit.
       const source = await scenarioLimitSource(trx, id);
       const limit = currentLimit(source?.agentData ?? null, current.input);
-      const result = withVerdict(run.result, limit);
+      const result = withVerdict(run.result, limit, { captureVelocity: captureCheck(run.input)?.verdict });
       const verdict = result.limit ?? null;
       const summary = run.result.breathingZone.fractions[verdict?.fraction ?? 'respirable'];
       const newId = await insertRun(trx, {
@@ -165,7 +166,7 @@ export const scenariosService = {
         percentOfLimit: verdict?.percentOfLimit ?? null,
         ratingCategory: verdict?.ratingCategory ?? null,
         banner: verdict?.banner ?? null,
-        verdictNumbers: verdictNumbers(run.result),
+        verdictNumbers: verdictNumbers(run.result, run.input),
         input: run.input,
         result,
         createdBy: actor.id,
@@ -197,6 +198,6 @@ export async function getRun(db: Db, runId: number): Promise<SavedRun> {
     createdAt: run.createdAt,
     outOfDate: !scenario || scenario.inputHash !== run.inputHash,
     input: run.input,
-    result: withVerdict(run.result as RunResult, limit),
+    result: withVerdict(run.result as RunResult, limit, { captureVelocity: captureCheck(run.input)?.verdict }),
   };
 }

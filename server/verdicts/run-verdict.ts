@@ -33,6 +33,7 @@ export function judgeStored(numbersText: unknown, limit: JudgeLimit | null): Ver
       histories: numbers.histories,
     },
     limit,
+    { captureVelocity: numbers.captureVelocity },
   );
 }
 

@@ -1,9 +1,10 @@
+import { captureCheck, type CaptureVerdictWord } from '../../shared/physics/capture-verdict';
 import { FRACTIONS, type Fraction } from '../../shared/vocabulary/fractions';
 
 type FractionNumbers = { twa8h_mgPerM3: number; twa8hCi95_mgPerM3: [number, number]; zoneHistories?: number };
 
 /** What a verdict needs from a run, per fraction: kept beside the run so reading never parses its whole result. */
-export type VerdictNumbers = { histories: number; fractions: Record<Fraction, FractionNumbers> };
+export type VerdictNumbers = { histories: number; fractions: Record<Fraction, FractionNumbers>; captureVelocity?: CaptureVerdictWord };
 
 type ResultLike = {
   engine: { particles: number };
@@ -15,7 +16,7 @@ type ResultLike = {
   };
 };
 
-export function verdictNumbers(result: ResultLike): VerdictNumbers {
+export function verdictNumbers(result: ResultLike, input?: Parameters<typeof captureCheck>[0]): VerdictNumbers {
   const fractions = {} as VerdictNumbers['fractions'];
   for (const f of FRACTIONS) {
     const s = result.breathingZone.fractions[f];
@@ -25,5 +26,6 @@ export function verdictNumbers(result: ResultLike): VerdictNumbers {
       ...(typeof s.zoneHistories === 'number' ? { zoneHistories: s.zoneHistories } : {}),
     };
   }
-  return { histories: result.engine.particles, fractions };
+  const captureVelocity = input ? captureCheck(input)?.verdict : undefined;
+  return { histories: result.engine.particles, fractions, ...(captureVelocity ? { captureVelocity } : {}) };
 }

@@ -120,6 +120,6 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     sizeBins: { aerodynamic_m: Array.from(p.bins.aerodynamic_m), physical_m: Array.from(p.bins.physical_m) },
     performance: { particleSteps, wallTime_s, particleStepsPerS: wallTime_s > 0 ? particleSteps / wallTime_s : 0 },
   };
-  if (p.limit) results.limit = limitBlock(judgeResult(results, p.limit));
+  if (p.limit) results.limit = limitBlock(judgeResult(results, p.limit, { captureVelocity: p.captureVelocity }));
   return results;
 }

@@ -1,3 +1,4 @@
+import { captureCheck } from '../../shared/physics/capture-verdict';
 import type { Scenario } from '../../shared/schemas/scenario';
 import { airProperties, eddyDiffusivityFromVentilation } from '../../shared/physics/index';
 import { zoneVolume_m3 } from './breathing-zone';
@@ -65,6 +66,7 @@ export function prepareScenario(s: Scenario): PreparedScenario {
       frameInterval_s: Math.min(duration_s, 300) / TRAJECTORY_FRAMES,
     },
     limit: s.limit ? { fraction: s.limit.fraction, value_mgPerM3: s.limit.value_mgPerM3 } : undefined,
+    captureVelocity: captureCheck(s)?.verdict,
     crossCheck: {
       airflow_m3PerS: (s.room.airChanges_perH * volume_m3) / 3600,
       hoodAirflow_m3PerS: s.hoods.reduce((a, h) => a + h.airflow_m3PerS, 0),

@@ -1,3 +1,4 @@
+import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
 import type { RunResult } from '../../shared/schemas/run-result';
 import type { Fraction } from '../../shared/vocabulary/fractions';
 
@@ -42,6 +43,8 @@ export interface PreparedScenario {
   deposition: { nx: number; ny: number };
   trajectory: { particles: number; frames: number; frameInterval_s: number };
   limit?: { fraction: Fraction; value_mgPerM3: number };
+  /** The hood's hand-calculated speed at the source against the release type's range (shared/physics/capture-verdict). */
+  captureVelocity?: CaptureVerdictWord;
   /** Inputs of the analytic cross-checks, derived from the scenario in prepareScenario. */
   crossCheck: {
     airflow_m3PerS: number;

@@ -1,3 +1,4 @@
+import { captureCheck } from '../../../shared/physics/capture-verdict';
 import { useMemo, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { can } from '../../../shared/auth/permissions';
@@ -45,7 +46,11 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const dirty = JSON.stringify(fromDetail(base)) !== JSON.stringify(draft);
   const agent = agents.find((a) => a.id === draft.agentId);
   // Judged against the agent's current limit, as the server will judge it once saved.
-  const judged = useMemo(() => (fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data)) : null), [fresh, agent]);
+  const judged = useMemo(
+    () =>
+      fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data), { captureVelocity: captureCheck(fresh.input)?.verdict }) : null,
+    [fresh, agent],
+  );
 
   return (
     <Page
