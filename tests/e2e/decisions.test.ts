@@ -31,7 +31,9 @@ async function openScenario(page: Page, workstation: string, name: string) {
 }
 
 describe('approving a control and what the operator sees', () => {
-  it('turns the operator board from Act to Clear once an engineer approves the flanged hood', async () => {
+  // The flanged hood gives 0.47 m/s at the grinder against the 2.5–10 m/s a high-energy release needs (ACGIH table),
+  // so however low the simulated exposure, the approved option reads Watch, never Clear.
+  it('turns the operator board from Act to Watch once an engineer approves the flanged hood that falls short of its capture velocity', async () => {
     const operator = await as(second, 'operator');
     const banner = operator.getByTestId('station-banner');
     await expect.poll(() => banner.textContent()).toMatch(/Act/);
@@ -47,11 +49,11 @@ describe('approving a control and what the operator sees', () => {
     await shot(engineer, 'decisions-approved');
 
     await operator.reload();
-    await expect.poll(() => banner.textContent()).toMatch(/Clear/);
+    await expect.poll(() => banner.textContent()).toMatch(/Watch/);
     expect(await operator.getByText('Flanged hood', { exact: true }).count()).toBe(1);
     await expect.poll(() => operator.getByRole('listitem').filter({ hasText: 'Switch the hood on before you start' }).count()).toBe(1);
     await operator.setViewportSize({ width: 820, height: 1180 });
-    await shot(operator, 'decisions-board-clear-tablet');
+    await shot(operator, 'decisions-board-watch-tablet');
     await operator.close();
     await engineer.close();
   });

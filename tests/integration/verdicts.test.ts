@@ -123,7 +123,7 @@ describe('a limit change re-judges without a new run', () => {
       // active release needs, but not below half of it, so the capture guard does not cap a Clear (ACGIH table).
       // 200,000 particles bring over 300 histories into the breathing zone, enough to decide.
       const side = demo('joinery-sander-side-hood', 200_000);
-      const stronger = { ...side, hoods: side.hoods.map((h) => ({ ...h, airflow_m3PerS: 2.5 * h.airflow_m3PerS })) };
+      const stronger = { ...side, hoods: (side.hoods ?? []).map((h) => ({ ...h, airflow_m3PerS: 2.5 * h.airflow_m3PerS })) };
       const { scenarioId, res } = await scenarioWithRun('Side hood, stronger fan', woodId, stronger);
       expect(res.body.result.limit).toMatchObject({ banner: 'clear', decided: true });
       const eng = await t.signIn('engineer');

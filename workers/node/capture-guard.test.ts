@@ -1,10 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseScenario } from '../../shared/schemas/scenario';
-import { combineBatches } from './combine';
-import { runAll } from './engine.test-helper';
-import { prepareScenario } from './prepare';
+import { combineBatches } from '../engine/combine';
+import { runAll } from '../engine/engine.test-helper';
+import { prepareScenario } from '../engine/prepare';
 
+// The demo's own file, as a user would open it (lives in shared/, read from here where Node's fs is at hand).
 const demo = JSON.parse(readFileSync(new URL('../../shared/demo-scenarios/default.json', import.meta.url), 'utf8'));
 
 // The trade's capture-velocity table (ACGIH, Industrial Ventilation): grinding is a high-energy release, 2.5–10 m/s.
