@@ -31,6 +31,8 @@ export default defineConfig({
           ],
           exclude: ['**/*.property.test.ts', '**/*.component.test.tsx', '**/node_modules/**'],
           environment: 'node',
+          // Engine checks against analytic solutions run whole small scenarios (seconds each on two cores).
+          testTimeout: 30_000,
         },
       },
       {

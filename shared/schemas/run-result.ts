@@ -82,6 +82,24 @@ export const resultLimitSchema = z.object({
   gsd: z.number().finite().gte(1).optional(),
 });
 
+export const modelSchema = z.object({
+  roomDiffusivity_m2PerS: z.number().finite().gte(0),
+  /** The range measured in real rooms that an estimate is clamped to; null when the engineer gave the value. */
+  roomDiffusivityRange_m2PerS: z.tuple([z.number(), z.number()]).nullable(),
+  roomDiffusivityBasis: z.string().max(300),
+  lagrangianTime_s: z.number().finite().gte(0),
+  jet: z
+    .object({
+      speed_mPerS: z.number().finite().gt(0),
+      diameter_m: z.number().finite().gt(0),
+      direction: z.tuple([z.number(), z.number(), z.number()]),
+      fromDefault: z.boolean(),
+    })
+    .nullable(),
+  wallDeposition: z.boolean(),
+  frictionVelocity_mPerS: z.number().finite().gte(0),
+});
+
 /** A run's result in the shape the current engine writes; typed arrays or their JSON lists both read. */
 export const runResultSchema = z.object({
   engine: z.object({
@@ -98,7 +116,8 @@ export const runResultSchema = z.object({
     fractions: z.object(perFraction(fractionSummarySchema)),
     series: z.object({ time_s: numberList, ...perFraction(seriesBandSchema) }),
   }),
-  fate: z.object({ emitted_mg: conc, ...perFate(share) }),
+  // Results of engines before 2.0 had no wall deposition: their walls share reads 0.
+  fate: z.object({ emitted_mg: conc, ...perFate(share), walls: share.default(0) }),
   limit: resultLimitSchema.optional(),
   crossChecks: z.object({
     fraction: z.enum(FRACTIONS),
@@ -111,6 +130,8 @@ export const runResultSchema = z.object({
   trajectories: trajectoriesSchema,
   /** Diameter per size bin (index = trajectories.bins value); empty lists when the result predates them. */
   sizeBins: z.object({ aerodynamic_m: numberList, physical_m: numberList }),
+  /** What the engine assumed beyond the inputs; absent in results of engines before 2.0. */
+  model: modelSchema.optional(),
   performance: z.object({ particleSteps: count, wallTime_s: z.number().gte(0), particleStepsPerS: z.number().gte(0) }),
 });
 

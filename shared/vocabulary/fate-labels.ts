@@ -5,4 +5,5 @@ export const FATE_LABEL: Record<Fate, string> = {
   settled: 'Settled on the floor',
   exhausted: 'Exhausted with room air',
   airborne: 'Still airborne at the end',
+  walls: 'Deposited on walls and ceiling',
 };

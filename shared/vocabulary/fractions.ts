@@ -7,7 +7,7 @@ export const LIMIT_FRACTIONS = ['inhalable', 'thoracic', 'respirable'] as const;
 export type LimitFraction = (typeof LIMIT_FRACTIONS)[number];
 
 /** Where the emitted mass ends up, in the order the engine tallies it. */
-export const FATES = ['captured', 'settled', 'exhausted', 'airborne'] as const;
+export const FATES = ['captured', 'settled', 'exhausted', 'airborne', 'walls'] as const;
 export type Fate = (typeof FATES)[number];
 
 export const BANNERS = ['clear', 'watch', 'act'] as const;

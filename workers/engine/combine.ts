@@ -118,6 +118,7 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p) },
     trajectories: { ...p.trajectory, positions_m: first.trajectories, bins: first.trajectoryBins },
     sizeBins: { aerodynamic_m: Array.from(p.bins.aerodynamic_m), physical_m: Array.from(p.bins.physical_m) },
+    model: p.model,
     performance: { particleSteps, wallTime_s, particleStepsPerS: wallTime_s > 0 ? particleSteps / wallTime_s : 0 },
   };
   if (p.limit) results.limit = limitBlock(judgeResult(results, p.limit, { captureVelocity: p.captureVelocity }));

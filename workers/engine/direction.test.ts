@@ -49,8 +49,9 @@ describe('step rule', () => {
       expect(Math.abs(mean), what).toBeLessThan(tolerance);
     };
     check('total', batchTaskMeans(coarse.p, coarse.batches, 'total'), batchTaskMeans(fine.p, fine.batches, 'total'), 0.25);
-    check('respirable', batchTaskMeans(coarse.p, coarse.batches, 'respirable'), batchTaskMeans(fine.p, fine.batches, 'respirable'), 0.3);
+    // Engine 2.0's reflecting faces leave more respirable dust near the worker but also a noisier estimate: 0.4, not 0.3.
+    check('respirable', batchTaskMeans(coarse.p, coarse.batches, 'respirable'), batchTaskMeans(fine.p, fine.batches, 'respirable'), 0.4);
     const captured = (r: typeof coarse) => r.batches.map((x) => x.fateMass_mg[0] / r.p.emission.emitted_mg);
     check('captured', captured(coarse), captured(fine), 0.07);
-  });
+  }, 180_000);
 });

@@ -1,19 +1,30 @@
 import { describe, expect, it } from 'vitest';
+import { parseScenario } from '../../shared/schemas/scenario';
 import { combineBatches } from './combine';
-import { prepareTest, runAll } from './engine.test-helper';
+import { runAll, testScenario } from './engine.test-helper';
+import { prepareScenario } from './prepare';
 import { workstation } from './workstation.test-helper';
 
 // Seeded regression values (computed by this engine, not outside evidence). A change here means
 // results changed for the same scenario and seed: bump ENGINE_VERSION and say why in the commit.
+// Every part of the model is on: the release jet, young dust's growing diffusivity, collecting walls.
 describe('golden regression, seed 2024', () => {
   it('reproduces the stored results', () => {
-    const p = prepareTest({ ...workstation, run: { particles: 1000, batches: 4, seed: 2024 } });
+    const s = testScenario({
+      ...workstation,
+      room: { ...workstation.room, wallDeposition: true },
+      source: { ...workstation.source, releaseType: 'active' },
+      run: { particles: 1000, batches: 4, seed: 2024 },
+    });
+    const p = prepareScenario(parseScenario(s));
     const r = combineBatches(p, runAll(p));
-    expect(r.performance.particleSteps).toBe(292859);
-    expect(r.breathingZone.fractions.respirable.taskMean_mgPerM3).toBeCloseTo(0.0685035140919163, 12);
-    expect(r.breathingZone.fractions.total.taskMean_mgPerM3).toBeCloseTo(0.19700555915126225, 12);
-    expect(r.fate.captured).toBeCloseTo(0.5825999649132647, 12);
-    expect(r.fate.settled).toBeCloseTo(0.10782980115544805, 12);
-    expect(r.fate.exhausted).toBeCloseTo(0.16544075659427648, 12);
+    expect(r.performance.particleSteps).toBe(739887);
+    expect(r.breathingZone.fractions.respirable.taskMean_mgPerM3).toBeCloseTo(0.284166049874873, 12);
+    expect(r.breathingZone.fractions.total.taskMean_mgPerM3).toBeCloseTo(0.8726032209361483, 12);
+    expect(r.fate.captured).toBeCloseTo(0.3115093988844221, 12);
+    expect(r.fate.settled).toBeCloseTo(0.10892507018371177, 12);
+    expect(r.fate.exhausted).toBeCloseTo(0.28274533117740214, 12);
+    expect(r.fate.walls).toBeCloseTo(0, 12);
+    expect(r.fate.airborne).toBeCloseTo(0.29682019975446416, 12);
   });
 });

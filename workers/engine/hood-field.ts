@@ -1,17 +1,13 @@
 import type { Hood } from '../../shared/schemas/scenario';
 import { hoodAxis } from '../../shared/schemas/hood-axis';
-import * as fit from '../../shared/physics/hoods';
+import { sinkPanelVelocity } from '../../shared/physics/index';
 import * as slots from './hood-slots';
 
 // Module-level copies rather than the imported bindings: V8 folds a module's own constants into
-// the compiled loop, while each use of an import stays a load and a check (about twice the time
-// of a literal offset in a small loop under tsx).
-const { OPENING_DISTANCE_FACTOR } = fit;
+// the compiled loop, while each use of an import stays a load and a check.
 const {
   HOOD_AIRFLOW,
   HOOD_AREA,
-  HOOD_BOOTH_DEPTH,
-  HOOD_COEFFICIENT,
   HOOD_E1X,
   HOOD_E1Y,
   HOOD_E1Z,
@@ -19,6 +15,8 @@ const {
   HOOD_E2Y,
   HOOD_E2Z,
   HOOD_FACE_VELOCITY,
+  HOOD_FAR2,
+  HOOD_FRONT_SHARE,
   HOOD_HALF_HEIGHT,
   HOOD_HALF_WIDTH,
   HOOD_KIND,
@@ -27,22 +25,24 @@ const {
   HOOD_NZ,
   HOOD_REACH,
   HOOD_STRIDE,
-  HOOD_WIDTH,
   HOOD_X,
   HOOD_Y,
   HOOD_Z,
-  KIND_BOOTH,
-  KIND_FLANGED,
-  KIND_FLANGED_SLOT,
+  KIND_PLAIN,
   KIND_SLOT,
 } = slots;
 
 export { HOOD_STRIDE } from './hood-slots';
 export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
-/** A particle that crosses the face plane within the face outline and less than this behind it is captured. */
-export const CAPTURE_DEPTH_m = 0.1;
-// Beyond its straight-draw depth a booth acts as a flanged opening.
-const COEFFICIENT = HOOD_KINDS.map((kind) => fit.HOOD_FIT_COEFFICIENT[kind === 'booth' ? 'flanged' : kind]);
+/** The step rule's floor on the distance to a face: the field is resolved to within a few centimetres. */
+export const FACE_RESOLUTION_m = 0.05;
+// A flange saves a quarter of the airflow for the same centre-line speed (ACGIH hood-types figure),
+// so an unflanged face draws three quarters from the front (shared/physics/hood-face.ts).
+const UNFLANGED_FRONT_SHARE = 0.75;
+// The face rectangle's quadrupole term has fallen below 1 % of the point sink's at eight half-diagonals.
+const FAR_FIELD_HALF_DIAGONALS = 8;
+
+const local = new Float64Array(3);
 
 // Width runs horizontally across the face (along the slot for slots); height completes the frame.
 export function packHoods(hoods: readonly Hood[]): Float64Array {
@@ -58,6 +58,7 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
     else [e1x, e1y] = [e1x / l1, e1y / l1];
     const kind = HOOD_KINDS.indexOf(hood.kind);
     const area = hood.faceWidth_m * hood.faceHeight_m;
+    const reach = Math.hypot(hood.faceWidth_m, hood.faceHeight_m) / 2;
     p[o + HOOD_KIND] = kind;
     p[o + HOOD_X] = hood.x_m;
     p[o + HOOD_Y] = hood.y_m;
@@ -75,90 +76,139 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
     p[o + HOOD_HALF_HEIGHT] = hood.faceHeight_m / 2;
     p[o + HOOD_AIRFLOW] = hood.airflow_m3PerS;
     p[o + HOOD_AREA] = area;
-    p[o + HOOD_COEFFICIENT] = COEFFICIENT[kind];
+    p[o + HOOD_FRONT_SHARE] = kind === KIND_PLAIN || kind === KIND_SLOT ? UNFLANGED_FRONT_SHARE : 1;
     p[o + HOOD_FACE_VELOCITY] = hood.airflow_m3PerS / area;
-    p[o + HOOD_WIDTH] = hood.faceWidth_m;
-    p[o + HOOD_REACH] =
-      kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? hood.faceHeight_m / 2 : Math.hypot(hood.faceWidth_m, hood.faceHeight_m) / 2;
-    p[o + HOOD_BOOTH_DEPTH] = Math.min(hood.faceWidth_m, hood.faceHeight_m) / 2;
+    p[o + HOOD_REACH] = reach;
+    p[o + HOOD_FAR2] = (FAR_FIELD_HALF_DIAGONALS * reach) ** 2;
   });
   return p;
 }
 
 /**
- * Sink model (an engineering approximation): air moves toward the face centre (for slots, the
- * nearest point of the slot line) with the published centre-line speed at the particle's distance,
- * never above the face velocity Q/A. Flanged faces draw nothing from behind their plane; plain
- * openings and slots are scaled by (1 + cos θ)/2, which is 1 on the axis. A booth draws straight in
- * at face velocity within its outline up to half its smaller face dimension in front, and acts as a
- * flanged opening beyond. Adds the velocity into out[0..2], writes the distance to the nearest face
- * outline (a lower bound) into out[3], that hood's index into out[4] and the particle's height above its face plane
- * into out[5] (negative when outside the face outline), and returns the index of a hood whose face
- * the particle has reached, or −1.
+ * Every face draws uniformly over its rectangle: the constant-strength sink panel of
+ * shared/physics/sink-panel.ts (closed form), so the field carries the hood's airflow through any
+ * surface around the face and meets it at Q/A; beyond eight half-diagonals the panel is a point
+ * sink of the same strength per side. Adds the velocity into out[0..2] and writes a lower bound on
+ * the distance to the nearest face outline into out[3]. Allocation-free, for the step loop.
  */
-export function evaluateHoods(p: Float64Array, count: number, x: number, y: number, z: number, out: Float64Array): number {
+export function addHoodVelocity(p: Float64Array, count: number, x: number, y: number, z: number, out: Float64Array): void {
   let nearest = Infinity;
   for (let h = 0; h < count; h++) {
     const o = h * HOOD_STRIDE;
-    const kind = p[o + HOOD_KIND];
     const rx = x - p[o + HOOD_X];
     const ry = y - p[o + HOOD_Y];
     const rz = z - p[o + HOOD_Z];
     const a = rx * p[o + HOOD_NX] + ry * p[o + HOOD_NY] + rz * p[o + HOOD_NZ];
-    const u = rx * p[o + HOOD_E1X] + ry * p[o + HOOD_E1Y] + rz * p[o + HOOD_E1Z];
-    const v = rx * p[o + HOOD_E2X] + ry * p[o + HOOD_E2Y] + rz * p[o + HOOD_E2Z];
-    const hw = p[o + HOOD_HALF_WIDTH];
-    const hh = p[o + HOOD_HALF_HEIGHT];
-    const au = Math.abs(u);
-    const av = Math.abs(v);
-    const onFace = au <= hw && av <= hh;
-    if (onFace && a <= 0 && a > -CAPTURE_DEPTH_m) return h;
-    const slot = kind === KIND_SLOT || kind === KIND_FLANGED_SLOT;
-    let sx = rx;
-    let sy = ry;
-    let sz = rz;
-    if (slot) {
-      const along = u > hw ? hw : u < -hw ? -hw : u;
-      sx -= along * p[o + HOOD_E1X];
-      sy -= along * p[o + HOOD_E1Y];
-      sz -= along * p[o + HOOD_E1Z];
-    }
-    const s2 = sx * sx + sy * sy + sz * sz;
-    const r = Math.sqrt(s2);
-    // A lower bound on the distance to the face outline is all the step rule needs, and it
-    // reuses r: the outline lies within its half-diagonal (slot: half-width) of the centre (line).
+    const r2 = rx * rx + ry * ry + rz * rz;
+    const r = Math.sqrt(r2);
+    // The outline lies within its half-diagonal of the centre, and never nearer than the face plane.
     const aa = a < 0 ? -a : a;
     const bound = r - p[o + HOOD_REACH];
     const face = bound > aa ? bound : aa;
-    if (face < nearest) {
-      nearest = face;
-      out[4] = h;
-      out[5] = onFace ? a : -1;
-    }
+    if (face < nearest) nearest = face;
     const q = p[o + HOOD_AIRFLOW];
-    if (q === 0 || r === 0) continue;
-    if (kind === KIND_BOOTH && a >= 0 && onFace && a <= p[o + HOOD_BOOTH_DEPTH]) {
-      const vf = p[o + HOOD_FACE_VELOCITY];
-      out[0] -= vf * p[o + HOOD_NX];
-      out[1] -= vf * p[o + HOOD_NY];
-      out[2] -= vf * p[o + HOOD_NZ];
+    if (q === 0) continue;
+    const front = p[o + HOOD_FRONT_SHARE];
+    const side = a >= 0 ? front : 1 - front;
+    if (side === 0) continue;
+    if (r2 > p[o + HOOD_FAR2]) {
+      const k = (-side * q) / (2 * Math.PI * r2 * r);
+      out[0] += k * rx;
+      out[1] += k * ry;
+      out[2] += k * rz;
       continue;
     }
-    const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH;
-    if (flanged && a <= 0) continue;
-    const area = p[o + HOOD_AREA];
-    let resistance = slot
-      ? p[o + HOOD_COEFFICIENT] * p[o + HOOD_WIDTH] * r
-      : p[o + HOOD_COEFFICIENT] * (OPENING_DISTANCE_FACTOR * s2 + area);
-    if (resistance < area) resistance = area;
-    // q/(R·r), times (1 + cos θ)/2 = (r + a)/(2r) off a plain face, written as q·r/(R·r²) so the
-    // division does not wait for the square root.
-    const k2 = q / (resistance * s2);
-    const scale = flanged ? k2 * r : 0.5 * k2 * (r + a);
-    out[0] -= scale * sx;
-    out[1] -= scale * sy;
-    out[2] -= scale * sz;
+    const u = rx * p[o + HOOD_E1X] + ry * p[o + HOOD_E1Y] + rz * p[o + HOOD_E1Z];
+    const v = rx * p[o + HOOD_E2X] + ry * p[o + HOOD_E2Y] + rz * p[o + HOOD_E2Z];
+    sinkPanelVelocity(u, v, a, p[o + HOOD_HALF_WIDTH], p[o + HOOD_HALF_HEIGHT], q, front, local);
+    out[0] += local[0] * p[o + HOOD_E1X] + local[1] * p[o + HOOD_E2X] + local[2] * p[o + HOOD_NX];
+    out[1] += local[0] * p[o + HOOD_E1Y] + local[1] * p[o + HOOD_E2Y] + local[2] * p[o + HOOD_NY];
+    out[2] += local[0] * p[o + HOOD_E1Z] + local[1] * p[o + HOOD_E2Z] + local[2] * p[o + HOOD_NZ];
   }
   out[3] = nearest;
+}
+
+/**
+ * The hood whose face the segment from (x, y, z) by (dx, dy, dz) passes through inside its outline
+ * in the direction the face draws (from the front always; from behind too where an unflanged face
+ * draws part of its air), or −1. The walk asks it of the drift alone: only moving air carries a
+ * particle into a hood, so a face that draws nothing captures nothing.
+ */
+export function faceEntered(p: Float64Array, count: number, x: number, y: number, z: number, dx: number, dy: number, dz: number): number {
+  for (let h = 0; h < count; h++) {
+    const o = h * HOOD_STRIDE;
+    if (p[o + HOOD_AIRFLOW] === 0) continue;
+    const nx = p[o + HOOD_NX];
+    const ny = p[o + HOOD_NY];
+    const nz = p[o + HOOD_NZ];
+    const a0 = (x - p[o + HOOD_X]) * nx + (y - p[o + HOOD_Y]) * ny + (z - p[o + HOOD_Z]) * nz;
+    const a1 = a0 + dx * nx + dy * ny + dz * nz;
+    const fromFront = a0 > 0 && a1 <= 0;
+    const fromBehind = a0 < 0 && a1 >= 0 && p[o + HOOD_FRONT_SHARE] < 1;
+    if ((fromFront || fromBehind) && throughOutline(p, o, x, y, z, dx, dy, dz, a0 / (a0 - a1))) return h;
+  }
   return -1;
+}
+
+/**
+ * Reflects the random part of a step at every face it passes through inside the outline, as the
+ * walk reflects it at the floor: diffusion alone never takes a particle into a hood. Moves the end
+ * point (x1, y1, z1) in out[0..2] and returns 1 when a face reflected it.
+ */
+export function reflectAtFaces(
+  p: Float64Array,
+  count: number,
+  x0: number,
+  y0: number,
+  z0: number,
+  x1: number,
+  y1: number,
+  z1: number,
+  out: Float64Array,
+): number {
+  let reflected = 0;
+  for (let h = 0; h < count; h++) {
+    const o = h * HOOD_STRIDE;
+    const nx = p[o + HOOD_NX];
+    const ny = p[o + HOOD_NY];
+    const nz = p[o + HOOD_NZ];
+    const a0 = (x0 - p[o + HOOD_X]) * nx + (y0 - p[o + HOOD_Y]) * ny + (z0 - p[o + HOOD_Z]) * nz;
+    const a1 = (x1 - p[o + HOOD_X]) * nx + (y1 - p[o + HOOD_Y]) * ny + (z1 - p[o + HOOD_Z]) * nz;
+    if (a0 === 0 || a0 * a1 > 0) continue;
+    if (!throughOutline(p, o, x0, y0, z0, x1 - x0, y1 - y0, z1 - z0, a0 / (a0 - a1))) continue;
+    // Mirror the end point in the face plane, leaving it a hair on the starting side.
+    const shift = -2 * a1 + (a0 > 0 ? 1e-9 : -1e-9);
+    x1 += shift * nx;
+    y1 += shift * ny;
+    z1 += shift * nz;
+    reflected = 1;
+  }
+  out[0] = x1;
+  out[1] = y1;
+  out[2] = z1;
+  return reflected;
+}
+
+function throughOutline(
+  p: Float64Array,
+  o: number,
+  x: number,
+  y: number,
+  z: number,
+  dx: number,
+  dy: number,
+  dz: number,
+  f: number,
+): boolean {
+  const cx = x + f * dx - p[o + HOOD_X];
+  const cy = y + f * dy - p[o + HOOD_Y];
+  const cz = z + f * dz - p[o + HOOD_Z];
+  const u = cx * p[o + HOOD_E1X] + cy * p[o + HOOD_E1Y] + cz * p[o + HOOD_E1Z];
+  const v = cx * p[o + HOOD_E2X] + cy * p[o + HOOD_E2Y] + cz * p[o + HOOD_E2Z];
+  return (u < 0 ? -u : u) <= p[o + HOOD_HALF_WIDTH] && (v < 0 ? -v : v) <= p[o + HOOD_HALF_HEIGHT];
+}
+
+/** Face velocity Q/A of hood h, for maps that show a face by what it draws. */
+export function faceVelocity(p: Float64Array, h: number): number {
+  return p[h * HOOD_STRIDE + HOOD_FACE_VELOCITY];
 }

@@ -24,16 +24,14 @@ export const HOOD_HALF_WIDTH = 13;
 export const HOOD_HALF_HEIGHT = 14;
 export const HOOD_AIRFLOW = 15;
 export const HOOD_AREA = 16;
-/** The fitted equation's coefficient C (HOOD_FIT_COEFFICIENT; a booth beyond its depth is a flanged opening). */
-export const HOOD_COEFFICIENT = 17;
+/** Share of the airflow drawn from in front of the face (1 flanged, 0.75 plain: shared/physics/hood-face.ts). */
+export const HOOD_FRONT_SHARE = 17;
 export const HOOD_FACE_VELOCITY = 18;
-/** Face width: a slot's length L. */
-export const HOOD_WIDTH = 19;
-/** The face outline's farthest point from the centre (slot: from the centre line). */
-export const HOOD_REACH = 20;
-/** How far in front of a booth's face it draws straight in. */
-export const HOOD_BOOTH_DEPTH = 21;
-export const HOOD_STRIDE = 22;
+/** The face outline's farthest point from the centre. */
+export const HOOD_REACH = 19;
+/** Beyond this squared distance from the centre the face draws as a point sink. */
+export const HOOD_FAR2 = 20;
+export const HOOD_STRIDE = 21;
 
 /** Codes for HOOD_KIND, in HOOD_KINDS order. */
 export const KIND_PLAIN = 0;

@@ -1,4 +1,5 @@
-import { HOOD_STRIDE } from './hood-slots';
+import type { RoundJet } from '../../shared/physics/round-jet';
+import { FATES } from '../../shared/vocabulary/fractions';
 import type { ParticleArrays } from './release';
 import type { Xoshiro128 } from './rng';
 import { stepRule } from './step-rule';
@@ -33,23 +34,27 @@ export const SCALAR = {
   wrapY: 17,
   R: 18,
   duration: 19,
+  roomDiffusivity: 20,
+  lagrangianTime: 21,
+  jet: 22,
+  wallDeposition: 23,
 } as const;
-const SCALAR_COUNT = 20;
+const SCALAR_COUNT = 24;
 // Steps whose hood drift uses under a fifth of the drift limit keep Euler: their lag is negligible.
 const MIDPOINT_SHARE = 0.2;
 
 /** Everything one walk needs, in one fixed-shape object so V8 keeps its loads monomorphic. */
 export class Kernel {
   readonly normals = new Float64Array(NORMAL_BLOCK);
-  readonly field = new Float64Array(6);
+  readonly field = new Float64Array(8);
   readonly settling: Float64Array;
-  readonly sqrt2D: Float64Array;
-  readonly diffusionFactor: Float64Array;
-  /** √(2D·diffusionFactor): the random step's spread per metre of feature distance on a diffusion-bound step (f/3; 0 without diffusion). */
-  readonly sigmaPerNear: Float64Array;
-  /** √(2D·dt) at the longest and the shortest step. */
-  readonly sigmaMax: Float64Array;
-  readonly sigmaMin: Float64Array;
+  /** Brownian diffusivity per bin; the room's eddy diffusivity grows with age on top (SCALAR.roomDiffusivity). */
+  readonly brownian: Float64Array;
+  /** Deposition velocity on walls, the extra on the floor beyond settling, and on the ceiling (Lai & Nazaroff), per bin. */
+  readonly wallVelocity: Float64Array;
+  readonly floorExtraVelocity: Float64Array;
+  readonly ceilingVelocity: Float64Array;
+  readonly jet: RoundJet;
   readonly zoneResidence_s: Float64Array;
   /** 1 for a particle (by release id) that spent any time in the breathing zone: its history counts towards the verdict. */
   readonly zoneVisited: Uint8Array;
@@ -57,8 +62,6 @@ export class Kernel {
   readonly nextFrame: Int32Array;
   readonly hoods: Float64Array;
   readonly hoodCount: number;
-  /** Hood 0's parameters in packHoods' layout (zeros without hoods), so the common single-hood case runs on locals. */
-  readonly hood0: Float64Array;
   /** The walk's numeric settings, at the indices of SCALAR. */
   readonly scalars = new Float64Array(SCALAR_COUNT);
   readonly lastBin: number;
@@ -67,7 +70,7 @@ export class Kernel {
   readonly frameInterval_s: number;
   readonly ids: Int32Array;
   readonly fate: Int8Array;
-  readonly fateMass_mg = new Float64Array(4);
+  readonly fateMass_mg = new Float64Array(FATES.length);
   readonly deposition_mg: Float64Array;
   readonly particleMass_mg: Float64Array;
   readonly depositionNx: number;
@@ -83,11 +86,11 @@ export class Kernel {
   ) {
     const rule = stepRule(p);
     this.settling = p.bins.settling_mPerS;
-    this.sqrt2D = p.bins.diffusivity_m2PerS.map((d) => Math.sqrt(2 * d));
-    this.diffusionFactor = rule.diffusionFactor;
-    this.sigmaPerNear = this.sqrt2D.map((s, b) => (s > 0 ? s * Math.sqrt(rule.diffusionFactor[b]) : 0));
-    this.sigmaMax = this.sqrt2D.map((s) => s * Math.sqrt(rule.maxStep_s));
-    this.sigmaMin = this.sqrt2D.map((s) => s * Math.sqrt(rule.minStep_s));
+    this.brownian = p.bins.brownianDiffusivity_m2PerS;
+    this.wallVelocity = p.surfaces.wall_mPerS;
+    this.floorExtraVelocity = p.surfaces.floorExtra_mPerS;
+    this.ceilingVelocity = p.surfaces.ceiling_mPerS;
+    this.jet = p.jet ?? NO_JET;
     this.nBins = p.bins.count;
     this.zoneResidence_s = new Float64Array(p.timeBins * p.bins.count);
     this.frames = p.trajectory.frames;
@@ -96,7 +99,6 @@ export class Kernel {
     this.nextFrame = new Int32Array(p.trajectory.particles);
     this.hoods = p.hoods.params;
     this.hoodCount = p.hoods.count;
-    this.hood0 = p.hoods.count > 0 ? p.hoods.params.slice(0, HOOD_STRIDE) : new Float64Array(HOOD_STRIDE);
     const [draftX, draftY] = p.draft_mPerS;
     const s = this.scalars;
     s[SCALAR.draftX] = draftX;
@@ -122,6 +124,10 @@ export class Kernel {
     s[SCALAR.wrapY] = Math.abs(draftY) > 1e-9 ? 1 : 0;
     s[SCALAR.R] = p.zone.radius_m;
     s[SCALAR.duration] = p.duration_s;
+    s[SCALAR.roomDiffusivity] = p.eddyDiffusivity_m2PerS;
+    s[SCALAR.lagrangianTime] = p.lagrangianTime_s;
+    s[SCALAR.jet] = p.jet ? 1 : 0;
+    s[SCALAR.wallDeposition] = p.surfaces.enabled ? 1 : 0;
     this.lastBin = p.timeBins - 1;
     this.ids = Int32Array.from({ length: a.count }, (_, i) => i);
     this.fate = new Int8Array(a.count).fill(-1);
@@ -141,6 +147,9 @@ export class Kernel {
     }
   }
 }
+
+// A jet of zero speed keeps the kernel's shape the same with and without one.
+const NO_JET: RoundJet = { ox_m: 0, oy_m: 0, oz_m: 0, ex: 0, ey: 0, ez: 1, speed_mPerS: 0, diameter_m: 1 };
 
 function swap(arr: Float64Array | Int32Array, i: number, j: number): void {
   const v = arr[i];
@@ -169,6 +178,7 @@ export function retire(k: Kernel, i: number, f: number): void {
   swap(a.t, i, last);
   swap(a.release, i, last);
   swap(a.exhaustAt, i, last);
+  swap(a.wallAt, i, last);
   swap(a.bin, i, last);
   swap(a.slot, i, last);
   swap(k.ids, i, last);

@@ -1,5 +1,4 @@
-import { evaluateHoods } from './hood-field';
-import { HOOD_FACE_VELOCITY, HOOD_STRIDE } from './hood-slots';
+import { addHoodVelocity } from './hood-field';
 import type { BatchResult, Grid, PreparedScenario, Results } from './types';
 
 const MAP_CELLS = 40;
@@ -14,7 +13,7 @@ export function depositionMap(p: PreparedScenario, batches: readonly BatchResult
   return { nx, ny, cell_m: cell, origin_m: [0, 0], values };
 }
 
-// Air speed (hoods plus draft, no settling) on a horizontal plane at source height; faces read as face velocity.
+// Air speed (hoods plus draft, no settling, no release jet) on a horizontal plane at source height.
 export function captureVelocityMap(p: PreparedScenario): Results['maps']['captureVelocity_mPerS'] {
   const nx = MAP_CELLS;
   const ny = MAP_CELLS;
@@ -27,8 +26,8 @@ export function captureVelocityMap(p: PreparedScenario): Results['maps']['captur
       field[0] = p.draft_mPerS[0];
       field[1] = p.draft_mPerS[1];
       field[2] = 0;
-      const hit = evaluateHoods(p.hoods.params, p.hoods.count, (ix + 0.5) * cell[0], (iy + 0.5) * cell[1], z, field);
-      values[ix * ny + iy] = hit >= 0 ? p.hoods.params[hit * HOOD_STRIDE + HOOD_FACE_VELOCITY] : Math.hypot(field[0], field[1], field[2]);
+      addHoodVelocity(p.hoods.params, p.hoods.count, (ix + 0.5) * cell[0], (iy + 0.5) * cell[1], z, field);
+      values[ix * ny + iy] = Math.hypot(field[0], field[1], field[2]);
     }
   }
   return { nx, ny, cell_m: cell, origin_m: [0, 0], values, height_m: z };

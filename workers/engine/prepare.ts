@@ -1,12 +1,17 @@
 import { captureCheck } from '../../shared/physics/capture-verdict';
 import type { Scenario } from '../../shared/schemas/scenario';
-import { airProperties, eddyDiffusivityFromVentilation } from '../../shared/physics/index';
+import { airProperties, roomEddyDiffusivity } from '../../shared/physics/index';
+import { resolveJet } from '../../shared/physics/release-jets';
+import { releaseJet } from './release-jet';
+import { surfaceDeposition } from './surfaces';
 import { zoneVolume_m3 } from './breathing-zone';
 import { packHoods } from './hood-field';
 import { buildSizeBins } from './size-bins';
 import type { PreparedScenario } from './types';
 
 export const TIME_BINS = 120;
+// Taylor's D = σ_u²·T_L with σ_u ≈ 0.1 m/s, a typical turbulent speed in a ventilated workroom [P] common practice.
+export const ROOM_TURBULENT_SPEED_mPerS = 0.1;
 const TRAJECTORY_PARTICLES = 64;
 const TRAJECTORY_FRAMES = 150;
 
@@ -28,13 +33,20 @@ export function prepareScenario(s: Scenario): PreparedScenario {
   const air = airProperties({ temperature_K: s.room.temperature_K, pressure_Pa: s.room.pressure_Pa });
   const volume_m3 = s.room.length_m * s.room.width_m * s.room.height_m;
   const room = { length_m: s.room.length_m, width_m: s.room.width_m, height_m: s.room.height_m, volume_m3 };
-  const eddy = s.room.eddyDiffusivity_m2PerS ?? eddyDiffusivityFromVentilation(s.room.airChanges_perH, volume_m3);
+  const estimate = roomEddyDiffusivity(s.room.airChanges_perH, volume_m3);
+  const given = s.room.eddyDiffusivity_m2PerS;
+  const eddy = given ?? estimate.value_m2PerS;
   const duration_s = s.run.duration_s ?? s.source.emission.taskDuration_min * 60;
   const emission = emissionPlan(s.source, duration_s);
   const particlesPerBatch = Math.max(1, Math.ceil(s.run.particles / s.run.batches));
   const bins = buildSizeBins(s.dust, air, particlesPerBatch, emission.emitted_mg, eddy);
-  const timeBin_s = duration_s / TIME_BINS;
   const direction = (s.room.draftDirection_deg * Math.PI) / 180;
+  const draft_mPerS: [number, number] = [s.room.draftSpeed_mPerS * Math.cos(direction), s.room.draftSpeed_mPerS * Math.sin(direction)];
+  const surfaces = surfaceDeposition(s, bins, air, draft_mPerS);
+  const timeBin_s = duration_s / TIME_BINS;
+  const jet = releaseJet(s);
+  const resolved = resolveJet(s.source, s.worker);
+  const lagrangianTime_s = eddy / ROOM_TURBULENT_SPEED_mPerS ** 2;
   const w = s.worker;
   return {
     seed: s.run.seed,
@@ -42,8 +54,11 @@ export function prepareScenario(s: Scenario): PreparedScenario {
     particlesPerBatch,
     room,
     exhaustRate_perS: s.room.airChanges_perH / 3600,
-    draft_mPerS: [s.room.draftSpeed_mPerS * Math.cos(direction), s.room.draftSpeed_mPerS * Math.sin(direction)],
+    draft_mPerS,
     eddyDiffusivity_m2PerS: eddy,
+    lagrangianTime_s,
+    jet,
+    surfaces,
     bins,
     source: { x_m: s.source.x_m, y_m: s.source.y_m, z_m: s.source.z_m, shape: s.source.shape, size_m: s.source.size_m },
     emission,
@@ -74,6 +89,20 @@ export function prepareScenario(s: Scenario): PreparedScenario {
       // The near-field boundary sees at least the draft; 0.05 m/s stands in for still air (common practice).
       randomAirSpeed_mPerS: Math.max(s.room.draftSpeed_mPerS, 0.05),
       sourceOnFloor: s.source.z_m <= 0.05,
+    },
+    model: {
+      roomDiffusivity_m2PerS: eddy,
+      roomDiffusivityRange_m2PerS: given === undefined ? [estimate.range[0], estimate.range[1]] : null,
+      roomDiffusivityBasis: given === undefined ? estimate.basis : 'given by the engineer',
+      lagrangianTime_s,
+      jet: resolved && {
+        speed_mPerS: resolved.speed_mPerS,
+        diameter_m: resolved.diameter_m,
+        direction: resolved.direction,
+        fromDefault: resolved.fromDefault,
+      },
+      wallDeposition: s.room.wallDeposition,
+      frictionVelocity_mPerS: surfaces.frictionVelocity_mPerS,
     },
     keepParticles: false,
   };

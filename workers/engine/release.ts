@@ -9,6 +9,8 @@ export interface ParticleArrays {
   t: Float64Array;
   release: Float64Array;
   exhaustAt: Float64Array;
+  /** When a particle meets a wall that a draft wraps through (a loss per volume), Infinity without. */
+  wallAt: Float64Array;
   bin: Int32Array;
   slot: Int32Array;
 }
@@ -20,6 +22,7 @@ function clamp(v: number, hi: number): number {
 // Release times are stratified within each bin so a small batch still covers the whole task.
 // General ventilation removes particles at rate k, so each gets an exponential exhaust time at
 // release: exactly the limit of a per-step removal probability k·dt, and it costs no draw per step.
+// Walls that a draft wraps through (periodic sides) collect as such a loss per volume too.
 export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): ParticleArrays {
   const n = p.bins.particlesPerBatch.reduce((a, v) => a + v, 0);
   const a: ParticleArrays = {
@@ -30,6 +33,7 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
     t: new Float64Array(n),
     release: new Float64Array(n),
     exhaustAt: new Float64Array(n),
+    wallAt: new Float64Array(n).fill(Infinity),
     bin: new Int32Array(n),
     slot: new Int32Array(n).fill(-1),
   };
@@ -61,6 +65,8 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
       a.t[i] = t0;
       a.release[i] = t0;
       a.exhaustAt[i] = p.exhaustRate_perS > 0 ? t0 - Math.log(rng.nextUniform()) / p.exhaustRate_perS : Infinity;
+      const wallRate = p.surfaces.wrappedWallRate_perS[b];
+      if (wallRate > 0) a.wallAt[i] = t0 - Math.log(rng.nextUniform()) / wallRate;
       a.bin[i] = b;
     }
   }

@@ -105,6 +105,7 @@ export function buildSizeBins(dust: Dust, air: AirProperties, particles: number,
     massFraction: new Float64Array(n),
     settling_mPerS: new Float64Array(n),
     diffusivity_m2PerS: new Float64Array(n),
+    brownianDiffusivity_m2PerS: new Float64Array(n),
     particleMass_mg: new Float64Array(n),
     particlesPerBatch: counts,
     conventionWeight: new Float64Array(FRACTIONS.length * n),
@@ -119,7 +120,8 @@ export function buildSizeBins(dust: Dust, air: AirProperties, particles: number,
     // Settling of a unit-density sphere of diameter d_a is the aerodynamic diameter's definition,
     // so the shape factor enters through it; Brownian mobility divides by χ.
     bins.settling_mPerS[b] = settlingVelocity(da, 1000, air);
-    bins.diffusivity_m2PerS[b] = eddy_m2PerS + diffusionCoefficient(dp, air) / dust.shapeFactor;
+    bins.brownianDiffusivity_m2PerS[b] = diffusionCoefficient(dp, air) / dust.shapeFactor;
+    bins.diffusivity_m2PerS[b] = eddy_m2PerS + bins.brownianDiffusivity_m2PerS[b];
     bins.particleMass_mg[b] = counts[b] > 0 ? (emitted_mg * bins.massFraction[b]) / counts[b] : 0;
     conventions.forEach((f, k) => (bins.conventionWeight[k * n + b] = f(da)));
   }

@@ -1,5 +1,8 @@
+import type { RoundJet } from '../../shared/physics/round-jet';
 import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
 import type { RunResult } from '../../shared/schemas/run-result';
+import type { modelSchema } from '../../shared/schemas/run-result';
+import type { z } from 'zod';
 import type { Fraction } from '../../shared/vocabulary/fractions';
 
 export { FATES, FRACTIONS, type Fate, type Fraction } from '../../shared/vocabulary/fractions';
@@ -12,6 +15,8 @@ export interface SizeBins {
   massFraction: Float64Array;
   settling_mPerS: Float64Array;
   diffusivity_m2PerS: Float64Array;
+  /** Brownian diffusivity alone (Stokes–Einstein with slip, divided by the shape factor). */
+  brownianDiffusivity_m2PerS: Float64Array;
   /** Mass carried by one simulated particle of the bin, mg. */
   particleMass_mg: Float64Array;
   particlesPerBatch: Int32Array;
@@ -27,7 +32,22 @@ export interface PreparedScenario {
   room: { length_m: number; width_m: number; height_m: number; volume_m3: number };
   exhaustRate_perS: number;
   draft_mPerS: [number, number];
+  /** The room's eddy diffusivity once dust has met the room's large eddies (clamped to measured values). */
   eddyDiffusivity_m2PerS: number;
+  /** Lagrangian time T_L over which young dust's room diffusivity grows to eddyDiffusivity_m2PerS. */
+  lagrangianTime_s: number;
+  /** The release jet (nozzle just behind the source), if the release has one. */
+  jet?: RoundJet;
+  /** Deposition on room surfaces (Lai & Nazaroff 2000) per size bin; zeros when room.wallDeposition is off. */
+  surfaces: {
+    enabled: boolean;
+    wall_mPerS: Float64Array;
+    floorExtra_mPerS: Float64Array;
+    ceiling_mPerS: Float64Array;
+    /** Loss rate to walls that a draft wraps through (periodic sides), per bin, 1/s. */
+    wrappedWallRate_perS: Float64Array;
+    frictionVelocity_mPerS: number;
+  };
   bins: SizeBins;
   source: { x_m: number; y_m: number; z_m: number; shape: 'point' | 'disc' | 'box'; size_m: number };
   /** Release schedule: continuous over [0, release_s], or events at eventTimes_s. */
@@ -53,6 +73,8 @@ export interface PreparedScenario {
     randomAirSpeed_mPerS: number;
     sourceOnFloor: boolean;
   };
+  /** What the engine assumed beyond the inputs, reported with the result. */
+  model: z.output<typeof modelSchema>;
   /** Tests ask for the final particle states; normal runs leave it off. */
   keepParticles: boolean;
 }

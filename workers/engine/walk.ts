@@ -1,61 +1,31 @@
-import * as fit from '../../shared/physics/hoods';
-import { CAPTURE_DEPTH_m, evaluateHoods } from './hood-field';
-import * as slots from './hood-slots';
+import { jetDiffusivityAndGradient } from '../../shared/physics/jet-diffusivity';
+import { JET_SPREADING_RATE, jetVelocity } from '../../shared/physics/round-jet';
+import { addHoodVelocity, faceEntered, reflectAtFaces } from './hood-field';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
 import { fillNormals } from './ziggurat';
 
-// Module-level copies of imported numbers, which V8 compiles as literals (see hood-field.ts).
-const { OPENING_DISTANCE_FACTOR } = fit;
-const {
-  HOOD_AIRFLOW,
-  HOOD_AREA,
-  HOOD_BOOTH_DEPTH,
-  HOOD_COEFFICIENT,
-  HOOD_E1X,
-  HOOD_E1Y,
-  HOOD_E1Z,
-  HOOD_E2X,
-  HOOD_E2Y,
-  HOOD_E2Z,
-  HOOD_FACE_VELOCITY,
-  HOOD_HALF_HEIGHT,
-  HOOD_HALF_WIDTH,
-  HOOD_KIND,
-  HOOD_NX,
-  HOOD_NY,
-  HOOD_NZ,
-  HOOD_REACH,
-  HOOD_WIDTH,
-  HOOD_X,
-  HOOD_Y,
-  HOOD_Z,
-  KIND_BOOTH,
-  KIND_FLANGED,
-  KIND_FLANGED_SLOT,
-  KIND_SLOT,
-} = slots;
-// The fit's 10·X² and the 20·X of its derivative, from shared/physics so the engine and the hand calculation cannot drift apart.
-const GROWTH_FACTOR = 2 * OPENING_DISTANCE_FACTOR;
-
-// Long enough that a visit's set-up (some fifty loads) is small beside its steps, short enough
-// that a pass over the live particles still reports progress within a batch. The bridge test
-// below starts afresh with each visit (its first step has no previous height).
+// Long enough that a visit's set-up is small beside its steps, short enough that a pass over the
+// live particles still reports progress within a batch.
 const STEPS_PER_VISIT = 256;
+// Young dust's room diffusivity D·(1 − e^(−age/T_L)) is integrated exactly while it still grows.
+const YOUNG_AGE_TIMES = 10;
+const FATE_CAPTURED = 0;
+const FATE_SETTLED = 1;
+const FATE_EXHAUSTED = 2;
+const FATE_AIRBORNE = 3;
+const FATE_WALLS = 4;
+const JET_WIDTH_GROWTH = +JET_SPREADING_RATE;
 
 /**
- * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (0 captured, 1 settled,
- * 2 exhausted, 3 airborne at the end) or −1 while it lives. Allocation-free arithmetic only.
+ * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (FATES order) or −1 while it
+ * lives. Allocation-free arithmetic only.
  *
- * One function on purpose (over 150 lines): V8 does not inline a call this size, and a call
- * per hood evaluation cost a third of the time. A single hood, the common case, is evaluated
- * inline on locals with the operations of evaluateHoods, so both give bit-identical fields;
- * several hoods take the general function, as does a slot's midpoint field (a call on the
- * fewer steps that need it, rather than a second inline copy).
- *
- * The step waits on a chain of roots and divisions, so the loop keeps them off that chain where
- * the arithmetic allows: the random step's spread comes with the bound that set dt (no root of dt),
- * and a single plain or flanged hood's midpoint field is its first-order expansion (no second root
- * and division after dt). Flags are 0/1 integers and minima are ternaries (see below).
+ * One step (Itô, operator splitting): the drift (draft, hood sink panels, release jet, the jet's
+ * ∇D and settling) moves the particle and is the only thing that can carry it through a hood face
+ * or onto the floor; then the random part √(2D·dt)·ξ moves it and is reflected at faces, walls,
+ * ceiling and floor, where surfaces that collect (room.wallDeposition) absorb a hit with
+ * P = v_d·√(π·dt/D) (Erban & Chapman 2007). D is Brownian plus the room's eddy diffusivity, which
+ * grows with the dust's age over the Lagrangian time T_L, plus the jet's own.
  */
 export function walk(k: Kernel, i: number): number {
   const a = k.a;
@@ -64,23 +34,31 @@ export function walk(k: Kernel, i: number): number {
   let z = a.z[i];
   let t = a.t[i];
   const b = a.bin[i];
-  // Settings come from Float64Arrays (see SCALAR): always doubles, so the compiled loop suits every
-  // scenario. A loop variable started from an object field (vx, vy, d, dh) would also stay tagged
-  // and box a heap number on every step.
+  const born = a.release[i];
+  // Settings come from Float64Arrays (see SCALAR): always doubles, so the compiled loop suits every scenario.
   const sc = k.scalars;
   const duration = sc[SCALAR.duration];
-  const end = a.exhaustAt[i] < duration ? a.exhaustAt[i] : duration;
+  const exhaustAt = a.exhaustAt[i];
+  const wallAt = a.wallAt[i];
+  const lossAt = exhaustAt < wallAt ? exhaustAt : wallAt;
+  const end = lossAt < duration ? lossAt : duration;
   const vs = k.settling[b];
-  const s2D = k.sqrt2D[b];
-  const dFactor = k.diffusionFactor[b];
-  const sl = a.slot[i];
+  const brownian = k.brownian[b];
+  const roomD = sc[SCALAR.roomDiffusivity];
+  const lagrangian = sc[SCALAR.lagrangianTime];
+  const youngUntil = born + YOUNG_AGE_TIMES * lagrangian;
+  const hasJet = sc[SCALAR.jet] > 0 ? 1 : 0;
+  const collects = sc[SCALAR.wallDeposition] > 0 ? 1 : 0;
+  const wallV = k.wallVelocity[b],
+    floorV = k.floorExtraVelocity[b],
+    ceilingV = k.ceilingVelocity[b];
   const field = k.field;
   const normals = k.normals;
   const R = sc[SCALAR.R];
   const R2 = R * R;
   const nh = k.hoodCount;
-  const single = nh === 1 ? 1 : 0;
   const hoods = k.hoods;
+  const jet = k.jet;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
   const draftX = sc[SCALAR.draftX],
@@ -98,57 +76,18 @@ export function walk(k: Kernel, i: number): number {
   const invBin = sc[SCALAR.invBin],
     lastBin = k.lastBin | 0,
     nBins = k.nBins | 0;
-  // Flags as 0/1 integers: a boolean read from an object is tested as an unknown value (several
-  // compares per use); an integer is one test.
   const L = sc[SCALAR.L],
     W = sc[SCALAR.W],
     H = sc[SCALAR.H],
     wrapX = sc[SCALAR.wrapX] > 0 ? 1 : 0,
     wrapY = sc[SCALAR.wrapY] > 0 ? 1 : 0;
-  // Hood 0 in packHoods' layout.
-  const h0 = k.hood0;
-  const kind = h0[HOOD_KIND];
-  const hx = h0[HOOD_X],
-    hy = h0[HOOD_Y],
-    hz = h0[HOOD_Z],
-    nx = h0[HOOD_NX],
-    ny = h0[HOOD_NY],
-    nz = h0[HOOD_NZ];
-  const e1x = h0[HOOD_E1X],
-    e1y = h0[HOOD_E1Y],
-    e1z = h0[HOOD_E1Z],
-    e2x = h0[HOOD_E2X],
-    e2y = h0[HOOD_E2Y],
-    e2z = h0[HOOD_E2Z];
-  const halfWidth = h0[HOOD_HALF_WIDTH],
-    halfHeight = h0[HOOD_HALF_HEIGHT],
-    airflow = h0[HOOD_AIRFLOW],
-    area = h0[HOOD_AREA],
-    coefficient = h0[HOOD_COEFFICIENT];
-  const faceVelocity = h0[HOOD_FACE_VELOCITY],
-    slotCoefficient = coefficient * h0[HOOD_WIDTH],
-    reach = h0[HOOD_REACH],
-    boothDepth = h0[HOOD_BOOTH_DEPTH];
-  const slot = kind === KIND_SLOT || kind === KIND_FLANGED_SLOT ? 1 : 0;
-  const flanged = kind === KIND_FLANGED || kind === KIND_FLANGED_SLOT || kind === KIND_BOOTH ? 1 : 0,
-    booth = kind === KIND_BOOTH ? 1 : 0;
-  const captureDepth_m = +CAPTURE_DEPTH_m,
-    normalBlock = NORMAL_BLOCK | 0;
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
-  const still = airflow === 0 ? 1 : 0;
-  const perAirflow = airflow > 0 ? 1 / airflow : 0;
+  const normalBlock = NORMAL_BLOCK | 0;
+  const sqrtPi = Math.sqrt(Math.PI);
   let n = k.normalIndex;
-  const diffusivity = 0.5 * s2D * s2D;
-  // Loaded, not computed here: TurboFan would move a pure s2D·√maxStep into the loop.
-  const sigmaPerNear = k.sigmaPerNear[b],
-    sigmaMax = k.sigmaMax[b],
-    sigmaMin = k.sigmaMin[b];
   let fate = -1;
   let steps = 0;
-  let lastHood = -1;
-  let lastHeight = 0;
-  let lastDt = 0;
   while (steps < STEPS_PER_VISIT) {
     const ex = x - cx;
     const ey = y - cy;
@@ -161,174 +100,75 @@ export function walk(k: Kernel, i: number): number {
       if (d < 0) d = -d;
       if (d < zoneFloor_m) d = zoneFloor_m;
     }
-    let dh = Infinity;
-    let jPhi = 0,
-      jB = 0,
-      jC = 0,
-      jSx = 0,
-      jSy = 0,
-      jSz = 0;
-    let vx = draftX;
-    let vy = draftY;
-    let vz = 0;
-    if (single) {
-      const rx = x - hx;
-      const ry = y - hy;
-      const rz = z - hz;
-      const ah = rx * nx + ry * ny + rz * nz;
-      const u = rx * e1x + ry * e1y + rz * e1z;
-      const v = rx * e2x + ry * e2y + rz * e2z;
-      const onFace = Math.abs(u) <= halfWidth && Math.abs(v) <= halfHeight;
-      if (onFace && ah <= 0 && ah > -captureDepth_m) {
-        fate = 0;
-        break;
-      }
-      let sx = rx;
-      let sy = ry;
-      let sz = rz;
-      if (slot) {
-        const along = u > halfWidth ? halfWidth : u < -halfWidth ? -halfWidth : u;
-        sx -= along * e1x;
-        sy -= along * e1y;
-        sz -= along * e1z;
-      }
-      const s2 = sx * sx + sy * sy + sz * sz;
-      const r = Math.sqrt(s2);
-      const aa = ah < 0 ? -ah : ah;
-      const bound = r - reach;
-      const face = bound > aa ? bound : aa;
-      // Brownian bridge: a walk that starts and ends in front of a face may have touched it in
-      // between, with probability exp(−a₀a₁/(D·dt)); sampling it removes the O(√dt) capture deficit.
-      const height = onFace ? ah : -1;
-      if (height > 0 && lastHeight > 0) {
-        const scale_m2 = diffusivity * lastDt;
-        const product_m2 = height * lastHeight;
-        if (product_m2 < 20 * scale_m2 && bridgeCrossed(rng.nextUniform(), product_m2 / scale_m2)) {
-          fate = 0;
-          break;
-        }
-      }
-      lastHeight = height;
-      dh = face < hoodFloor_m ? hoodFloor_m : face;
-      if (!still && r !== 0) {
-        if (booth && ah >= 0 && onFace && ah <= boothDepth) {
-          vx -= faceVelocity * nx;
-          vy -= faceVelocity * ny;
-          vz -= faceVelocity * nz;
-        } else if (!flanged || ah > 0) {
-          let resistance = slot ? slotCoefficient * r : coefficient * (OPENING_DISTANCE_FACTOR * s2 + area);
-          let growth = GROWTH_FACTOR * coefficient;
-          if (resistance < area) {
-            resistance = area;
-            growth = 0;
-          }
-          const k2 = airflow / (resistance * s2);
-          const scale = flanged ? k2 * r : 0.5 * k2 * (r + ah);
-          vx -= scale * sx;
-          vy -= scale * sy;
-          vz -= scale * sz;
-          // The field's derivative along a displacement u for the midpoint below, without a
-          // division: 1/s² and 1/R come from k2 = Q/(R·s²). With res' = dR/dr / r = 20·C (0 where R is
-          // held at A): flanged, J·u = −φ·u + φ·(s·u)·(res'/R + 1/s²)·s with φ = k2·r; plain, φ = k2·(r + a)/2
-          // and J·u = −φ·u − [k2/2·((s·u)·(1/r − (r + a)·(res'/R + 2/s²)) + n·u)]·s.
-          const perS2 = resistance * k2 * perAirflow;
-          const perResistance = s2 * k2 * perAirflow;
-          jPhi = scale;
-          jSx = sx;
-          jSy = sy;
-          jSz = sz;
-          if (flanged) {
-            jB = scale * (growth * perResistance + perS2);
-            jC = 0;
-          } else {
-            jB = -0.5 * k2 * (r * perS2 - (r + ah) * (growth * perResistance + 2 * perS2));
-            jC = -0.5 * k2;
-          }
-        }
-      }
-    } else if (nh > 1) {
-      field[0] = vx;
-      field[1] = vy;
+    field[0] = draftX;
+    field[1] = draftY;
+    field[2] = 0;
+    field[3] = Infinity;
+    if (nh > 0) addHoodVelocity(hoods, nh, x, y, z, field);
+    let vx = field[0];
+    let vy = field[1];
+    let vz = field[2];
+    const dh = field[3] < hoodFloor_m ? hoodFloor_m : field[3];
+    let jetD = 0;
+    let dj = Infinity;
+    if (hasJet) {
+      jetVelocity(jet, x, y, z, field);
+      vx += field[0];
+      vy += field[1];
+      vz += field[2];
+      jetD = jetSpread(jet, x, y, z, field);
+      vx += field[1];
+      vy += field[2];
+      vz += field[3];
+      dj = field[4];
+    }
+    const dMax = brownian + roomD + jetD;
+    const speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vz - vs);
+    const zoneLimit_m = stepFraction * d;
+    const hoodLimit_m = driftFraction * dh;
+    const jetLimit_m = stepFraction * dj;
+    let driftLimit_m = zoneLimit_m < hoodLimit_m ? zoneLimit_m : hoodLimit_m;
+    if (jetLimit_m < driftLimit_m) driftLimit_m = jetLimit_m;
+    let near = dh < d ? dh : d;
+    if (dj < near) near = dj;
+    let dt = maxStep_s;
+    const diffusive = dMax > 0 ? (stepFraction * stepFraction * near * near) / (18 * dMax) : Infinity;
+    if (diffusive < dt) dt = diffusive;
+    const drift = driftLimit_m / speed;
+    if (drift < dt) dt = drift;
+    if (dt < minStep_s) dt = minStep_s;
+    if (t + dt > end) dt = end - t;
+    const shift = (Math.abs(vx - draftX) + Math.abs(vy - draftY) + Math.abs(vz)) * dt;
+    const local = dh < dj ? dh : dj;
+    // Air speeds up toward a face, so a start-of-step drift that already enters one is a capture;
+    // otherwise the midpoint's (which may lie behind the face, where a flanged face draws nothing).
+    if (nh > 0 && faceEntered(hoods, nh, x, y, z, vx * dt, vy * dt, (vz - vs) * dt) >= 0) {
+      fate = FATE_CAPTURED;
+      break;
+    }
+    if (shift > midpointLimit * local) {
+      // Midpoint drift: the hood and jet fields change along the step, and a start-of-step velocity
+      // would lag behind them (Euler), biasing capture low by a few per cent at the default step.
+      const half = 0.5 * dt;
+      const mx = x + half * vx;
+      const my = y + half * vy;
+      const mz = z + half * vz;
+      field[0] = draftX;
+      field[1] = draftY;
       field[2] = 0;
-      if (evaluateHoods(hoods, nh, x, y, z, field) >= 0) {
-        fate = 0;
-        break;
-      }
-      const hood = field[4];
-      const height = field[5];
-      if (hood === lastHood && height > 0 && lastHeight > 0) {
-        const scale_m2 = diffusivity * lastDt;
-        const product_m2 = height * lastHeight;
-        if (product_m2 < 20 * scale_m2 && bridgeCrossed(rng.nextUniform(), product_m2 / scale_m2)) {
-          fate = 0;
-          break;
-        }
-      }
-      lastHood = hood;
-      lastHeight = height;
-      dh = field[3] < hoodFloor_m ? hoodFloor_m : field[3];
+      if (nh > 0) addHoodVelocity(hoods, nh, mx, my, mz, field);
       vx = field[0];
       vy = field[1];
       vz = field[2];
-    }
-    const vzs = vz - vs;
-    const speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vzs);
-    // Ternaries, not Math.min/max: those also order −0 and NaN (several branches each), which
-    // cannot occur here.
-    const near = dh < d ? dh : d;
-    const zoneLimit_m = stepFraction * d;
-    const hoodLimit_m = driftFraction * dh;
-    const driftLimit_m = zoneLimit_m < hoodLimit_m ? zoneLimit_m : hoodLimit_m;
-    // The random step's spread s2D·√dt comes with its bound, so no root waits for dt: the diffusive
-    // bound's root is known (sigmaPerNear·near) and the drift bound's runs beside its division.
-    const perSpeed = 1 / speed;
-    const drift = driftLimit_m * perSpeed;
-    const diffusive = dFactor * near * near;
-    let dt = maxStep_s;
-    let sigma = sigmaMax;
-    if (diffusive < maxStep_s) {
-      dt = diffusive;
-      sigma = sigmaPerNear * near;
-    }
-    if (drift < dt) {
-      dt = drift;
-      sigma = s2D * Math.sqrt(driftLimit_m * speed) * perSpeed;
-    }
-    if (dt < minStep_s) {
-      dt = minStep_s;
-      sigma = sigmaMin;
-    }
-    if (t + dt > end) {
-      dt = end - t;
-      sigma = s2D * Math.sqrt(dt);
-    }
-    const hoodShift = (Math.abs(vx - draftX) + Math.abs(vy - draftY) + Math.abs(vz)) * dt;
-    if (hoodShift > midpointLimit * dh) {
-      // Midpoint drift: the hood field grows toward the face, and a start-of-step velocity would
-      // lag behind it (Euler), biasing capture low by a few per cent at the default step.
-      const half = 0.5 * dt;
-      if (single && !slot) {
-        // The field at the midpoint to first order, v + (dt/2)·J·u: second order like the full
-        // evaluation, without its root and division after dt (slots take the full evaluation).
-        const su = jSx * vx + jSy * vy + jSz * vz;
-        const g = jB * su + jC * (nx * vx + ny * vy + nz * vz);
-        const dvx = half * (g * jSx - jPhi * vx);
-        const dvy = half * (g * jSy - jPhi * vy);
-        const dvz = half * (g * jSz - jPhi * vz);
-        vx += dvx;
-        vy += dvy;
-        vz += dvz;
-      } else {
-        // Slots and several hoods: the field again at the midpoint (for one hood evaluateHoods
-        // gives the inline field above bit for bit); reaching a face there keeps the step's drift.
-        field[0] = draftX;
-        field[1] = draftY;
-        field[2] = 0;
-        if (evaluateHoods(hoods, nh, x + half * vx, y + half * vy, z + half * vz, field) < 0) {
-          vx = field[0];
-          vy = field[1];
-          vz = field[2];
-        }
+      if (hasJet) {
+        jetVelocity(jet, mx, my, mz, field);
+        vx += field[0];
+        vy += field[1];
+        vz += field[2];
+        jetD = jetSpread(jet, mx, my, mz, field);
+        vx += field[1];
+        vy += field[2];
+        vz += field[3];
       }
     }
     if (r2 < R2) {
@@ -337,47 +177,87 @@ export function walk(k: Kernel, i: number): number {
       if (tb > lastBin) tb = lastBin;
       residence[tb * nBins + b] += dt;
     }
-    if (sl >= 0) recordFrames(k, sl, t, x, y, z);
+    if (a.slot[i] >= 0) recordFrames(k, a.slot[i], t, x, y, z);
+    const dx = vx * dt;
+    const dy = vy * dt;
+    const dz = (vz - vs) * dt;
+    if (nh > 0 && faceEntered(hoods, nh, x, y, z, dx, dy, dz) >= 0) {
+      fate = FATE_CAPTURED;
+      break;
+    }
+    const xd = x + dx;
+    const yd = y + dy;
+    const zd = z + dz;
+    if (zd < 0) {
+      // Settling (or a downward drift) carries it onto the floor within this step.
+      t += (dt * z) / (z - zd);
+      x += (dx * z) / (z - zd);
+      y += (dy * z) / (z - zd);
+      z = 0;
+      fate = FATE_SETTLED;
+      break;
+    }
+    let variance = 2 * (brownian + jetD) * dt;
+    if (t < youngUntil && lagrangian > 0) {
+      const fade = Math.exp(-(t - born) / lagrangian) * -Math.expm1(-dt / lagrangian);
+      variance += 2 * roomD * (dt - lagrangian * fade);
+    } else {
+      variance += 2 * roomD * dt;
+    }
+    const sigma = Math.sqrt(variance);
+    // Hit probability per reflection, v_d·√(π·dt/D) = v_d·√(2π)·dt/σ.
+    const hitScale = sigma > 0 ? (sqrtPi * Math.SQRT2 * dt) / sigma : 0;
     if (n === normalBlock) {
       fillNormals(rng, normals);
       n = 0;
     }
-    lastDt = dt;
-    x += vx * dt + sigma * normals[n];
-    y += vy * dt + sigma * normals[n + 1];
-    let zz = z + vz * dt + sigma * normals[n + 2];
+    let x1 = xd + sigma * normals[n];
+    let y1 = yd + sigma * normals[n + 1];
+    let z1 = zd + sigma * normals[n + 2];
     n += 3;
+    if (nh > 0 && reflectAtFaces(hoods, nh, xd, yd, zd, x1, y1, z1, field) > 0) {
+      x1 = field[0];
+      y1 = field[1];
+      z1 = field[2];
+    }
+    let absorbed = 0;
     // Walls inline: a call here would box x, y and z on every step, not just at the wall.
-    if (x < 0 || x > L) {
+    if (x1 < 0 || x1 > L) {
       if (wrapX) {
-        while (x < 0) x += L;
-        while (x > L) x -= L;
+        while (x1 < 0) x1 += L;
+        while (x1 > L) x1 -= L;
       } else {
-        while (x < 0 || x > L) x = x < 0 ? -x : 2 * L - x;
+        while (x1 < 0 || x1 > L) x1 = x1 < 0 ? -x1 : 2 * L - x1;
+        if (collects && rng.nextUniform() < wallV * hitScale) absorbed = 1;
       }
     }
-    if (y < 0 || y > W) {
+    if (y1 < 0 || y1 > W) {
       if (wrapY) {
-        while (y < 0) y += W;
-        while (y > W) y -= W;
+        while (y1 < 0) y1 += W;
+        while (y1 > W) y1 -= W;
       } else {
-        while (y < 0 || y > W) y = y < 0 ? -y : 2 * W - y;
+        while (y1 < 0 || y1 > W) y1 = y1 < 0 ? -y1 : 2 * W - y1;
+        if (collects && rng.nextUniform() < wallV * hitScale) absorbed = 1;
       }
     }
-    while (zz < 0 || zz > H) zz = zz < 0 ? -zz : 2 * H - zz;
-    // Diffusion reflects at the floor; only settling carries a particle onto it, so the
-    // deposition flux is V_TS·C at the floor, as in the well-mixed settling loss V_TS/H.
-    z = zz - vs * dt;
+    if (z1 < 0 || z1 > H) {
+      const floorHit = z1 < 0 ? 1 : 0;
+      while (z1 < 0 || z1 > H) z1 = z1 < 0 ? -z1 : 2 * H - z1;
+      // Settling already carries V_TS·C onto the floor; it collects only the rest of v_du.
+      if (collects && rng.nextUniform() < (floorHit ? floorV : ceilingV) * hitScale) absorbed = floorHit ? 2 : 1;
+    }
+    x = x1;
+    y = y1;
+    z = z1;
     t += dt;
     steps++;
-    if (z < 0) {
-      t += z / vs;
-      z = 0;
-      fate = 1;
+    if (absorbed) {
+      fate = absorbed === 2 ? FATE_SETTLED : FATE_WALLS;
+      if (absorbed === 2) z = 0;
       break;
     }
     if (t >= end) {
-      fate = end < duration ? 2 : 3;
+      fate = end >= duration ? FATE_AIRBORNE : wallAt <= exhaustAt ? FATE_WALLS : FATE_EXHAUSTED;
       break;
     }
   }
@@ -391,13 +271,31 @@ export function walk(k: Kernel, i: number): number {
 }
 
 /**
- * u < exp(−q) decided mostly without exp: 1 − q ≤ exp(−q) ≤ 1/(1 + q), so u below the first is a
- * crossing and u at or above the second is not; only draws in between need the exponential.
+ * The jet's eddy diffusivity (returned) and its gradient in out[1..3], which the walk adds to the
+ * drift (without it particles would pile up where D is small); out[4] is the length over which the
+ * jet changes at this point (its half-width there), for the step rule.
  */
-function bridgeCrossed(u: number, q: number): boolean {
-  if (u < 1 - q) return true;
-  if (u * (1 + q) >= 1) return false;
-  return u < Math.exp(-q);
+function jetSpread(jet: Kernel['jet'], x: number, y: number, z: number, out: Float64Array): number {
+  jetDiffusivityAndGradient(jet, x, y, z, out);
+  const d = out[0];
+  const ax = x - jet.ox_m;
+  const ay = y - jet.oy_m;
+  const az = z - jet.oz_m;
+  const along = ax * jet.ex + ay * jet.ey + az * jet.ez;
+  const nozzle = 0.5 * jet.diameter_m;
+  if (along <= 0) {
+    // Behind the nozzle the jet's nearest feature is the nozzle itself.
+    out[4] = Math.sqrt(ax * ax + ay * ay + az * az) + nozzle;
+    return d;
+  }
+  // The jet changes over its half-width inside it, and over the distance to its edge outside.
+  const halfWidth = JET_WIDTH_GROWTH * along + nozzle;
+  const rx = ax - along * jet.ex;
+  const ry = ay - along * jet.ey;
+  const rz = az - along * jet.ez;
+  const outside = Math.sqrt(rx * rx + ry * ry + rz * rz) - halfWidth;
+  out[4] = outside > halfWidth ? outside : halfWidth;
+  return d;
 }
 
 function recordFrames(k: Kernel, sl: number, t: number, x: number, y: number, z: number): void {

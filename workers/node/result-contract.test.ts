@@ -71,7 +71,8 @@ describe('parseRunResult on stored results of older engines', () => {
       expect(r.engine.version).toBe(stored.engine.version);
       expect(r.sizeBins).toEqual(stored.sizeBins);
       expect(r.breathingZone.fractions).toEqual(stored.breathingZone.fractions);
-      expect(r.fate).toEqual(stored.fate);
+      // Engines before 2.0 had no wall deposition: their walls share reads 0.
+      expect(r.fate).toEqual({ ...stored.fate, walls: 0 });
       expect(Array.from(r.maps.captureVelocity_mPerS.values)).toEqual(stored.maps.captureVelocity_mPerS.values.map(Math.fround));
     }
     expect(parseRunResult(v100).limit).toBeUndefined();

@@ -29,7 +29,7 @@ export function column(
             outOfDate: false,
             fractions: { total: fraction, inhalable: fraction, thoracic: fraction, respirable: fraction },
             series: { time_s: [0, 60], bands: { total: band, inhalable: band, thoracic: band, respirable: band } },
-            fate: { emitted_mg: 100, shares: { captured: 0.5, settled: 0.2, exhausted: 0.2, airborne: 0.1 } },
+            fate: { emitted_mg: 100, shares: { captured: 0.5, settled: 0.2, exhausted: 0.2, airborne: 0.1, walls: 0 } },
             limit: {
               fraction: 'respirable',
               value_mgPerM3: 0.025,

@@ -4,7 +4,13 @@ import type { RunResult } from '../../../../shared/schemas/run-result';
 import { Section } from './section';
 
 // Fate colours are our own; each segment also carries its word in the list, never colour alone.
-const FATE_COLOUR: Record<Fate, string> = { captured: '#1f6f6a', settled: '#a07a3c', exhausted: '#7d8796', airborne: '#c9b98f' };
+const FATE_COLOUR: Record<Fate, string> = {
+  captured: '#1f6f6a',
+  settled: '#a07a3c',
+  exhausted: '#7d8796',
+  airborne: '#c9b98f',
+  walls: '#5b4a6e',
+};
 
 export function FateSection({ view }: { view: RunResult }) {
   const { emitted_mg, ...shares } = view.fate;

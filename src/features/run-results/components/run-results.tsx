@@ -10,6 +10,7 @@ import { FateSection } from './fate-section';
 import { FractionTable } from './fraction-table';
 import { Headline } from './headline';
 import { MapsSection } from './maps-section';
+import { ModelSection } from './model-section';
 import { ParticleViews } from './particle-views';
 import { Section } from './section';
 
@@ -55,6 +56,7 @@ export function RunResults({ result, scenario, agentName, limitSource }: RunResu
       <ParticleViews view={view} scenario={scenario} />
       <MapsSection view={view} scenario={scenario} />
       <CrossChecks view={view} />
+      <ModelSection view={view} />
       <Cautions />
     </div>
   );
