@@ -82,6 +82,18 @@ export const resultLimitSchema = z.object({
   gsd: z.number().finite().gte(1).optional(),
 });
 
+/**
+ * Emitted mass outside the simulated sizes (1 nm physical to 100 µm aerodynamic diameter), as shares
+ * of the emission. It is never renormalised into the simulated sizes: fates plus share make one.
+ */
+export const massLeftOutSchema = z.object({
+  share,
+  below: share,
+  above: share,
+  lowerPhysical_m: z.number().positive(),
+  upperAerodynamic_m: z.number().positive(),
+});
+
 /** A run's result in the shape the current engine writes; typed arrays or their JSON lists both read. */
 export const runResultSchema = z.object({
   engine: z.object({
@@ -99,6 +111,8 @@ export const runResultSchema = z.object({
     series: z.object({ time_s: numberList, ...perFraction(seriesBandSchema) }),
   }),
   fate: z.object({ emitted_mg: conc, ...perFate(share) }),
+  /** Absent in results of engines before 1.4.0, whose bins renormalised it away (unknown). */
+  massLeftOut: massLeftOutSchema.optional(),
   limit: resultLimitSchema.optional(),
   crossChecks: z.object({
     fraction: z.enum(FRACTIONS),
@@ -118,6 +132,7 @@ export type RunResult = z.output<typeof runResultSchema>;
 export type FractionSummary = RunResult['breathingZone']['fractions'][Fraction];
 export type SeriesBand = RunResult['breathingZone']['series'][Fraction];
 export type Grid = z.output<typeof gridSchema>;
+export type MassLeftOut = z.output<typeof massLeftOutSchema>;
 export type ResultLimit = z.output<typeof resultLimitSchema>;
 export type Trajectories = RunResult['trajectories'];
 export type Ci = FractionSummary['twa8hCi95_mgPerM3'];

@@ -1,5 +1,5 @@
 import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
-import type { RunResult } from '../../shared/schemas/run-result';
+import type { MassLeftOut, RunResult } from '../../shared/schemas/run-result';
 import type { Fraction } from '../../shared/vocabulary/fractions';
 
 export { FATES, FRACTIONS, type Fate, type Fraction } from '../../shared/vocabulary/fractions';
@@ -9,14 +9,22 @@ export interface SizeBins {
   count: number;
   aerodynamic_m: Float64Array;
   physical_m: Float64Array;
+  /** Share of the emitted mass each simulated particle's bin carries; bins without particles carry none. */
   massFraction: Float64Array;
+  /** Share of the emitted mass in each bin from the size profile itself, whatever the particle count. */
+  profileMassFraction: Float64Array;
   settling_mPerS: Float64Array;
+  /** Eddy plus Brownian. */
   diffusivity_m2PerS: Float64Array;
+  /** Brownian only, already divided by the shape factor. */
+  brownianDiffusivity_m2PerS: Float64Array;
   /** Mass carried by one simulated particle of the bin, mg. */
   particleMass_mg: Float64Array;
   particlesPerBatch: Int32Array;
   /** Convention efficiency per fraction, row-major [fraction][bin]. */
   conventionWeight: Float64Array;
+  /** Emitted mass outside the simulated sizes, as shares of the emission. */
+  massLeftOut: MassLeftOut;
 }
 
 /** Plain data (typed arrays and numbers) so it can be structured-cloned into a worker. */

@@ -1,2 +1,2 @@
 // Bump when a change alters results for the same scenario and seed.
-export const ENGINE_VERSION = '1.3.0';
+export const ENGINE_VERSION = '1.4.0';
