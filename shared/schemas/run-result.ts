@@ -100,6 +100,18 @@ export const modelSchema = z.object({
   frictionVelocity_mPerS: z.number().finite().gte(0),
 });
 
+/**
+ * Emitted mass outside the simulated sizes (1 nm physical to 100 µm aerodynamic diameter), as shares
+ * of the emission. It is never renormalised into the simulated sizes: fates plus share make one.
+ */
+export const massLeftOutSchema = z.object({
+  share,
+  below: share,
+  above: share,
+  lowerPhysical_m: z.number().positive(),
+  upperAerodynamic_m: z.number().positive(),
+});
+
 /** A run's result in the shape the current engine writes; typed arrays or their JSON lists both read. */
 export const runResultSchema = z.object({
   engine: z.object({
@@ -118,6 +130,8 @@ export const runResultSchema = z.object({
   }),
   // Results of engines before 2.0 had no wall deposition: their walls share reads 0.
   fate: z.object({ emitted_mg: conc, ...perFate(share), walls: share.default(0) }),
+  /** Absent in results of engines before 1.4.0, whose bins renormalised it away (unknown). */
+  massLeftOut: massLeftOutSchema.optional(),
   limit: resultLimitSchema.optional(),
   crossChecks: z.object({
     fraction: z.enum(FRACTIONS),
@@ -139,6 +153,7 @@ export type RunResult = z.output<typeof runResultSchema>;
 export type FractionSummary = RunResult['breathingZone']['fractions'][Fraction];
 export type SeriesBand = RunResult['breathingZone']['series'][Fraction];
 export type Grid = z.output<typeof gridSchema>;
+export type MassLeftOut = z.output<typeof massLeftOutSchema>;
 export type ResultLimit = z.output<typeof resultLimitSchema>;
 export type Trajectories = RunResult['trajectories'];
 export type Ci = FractionSummary['twa8hCi95_mgPerM3'];

@@ -56,7 +56,7 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 describe('the server judges saved runs', () => {
-  it('stores and answers Act for a run at over 600 % of the limit that the client sent as Clear with −5 %', async () => {
+  it('stores and answers Act for a run at over 400 % of the limit that the client sent as Clear with −5 %', async () => {
     const forged = (r: Result): Result => ({
       ...r,
       limit: { ...r.limit, banner: 'clear', percentOfLimit: -5, percentOfLimitUpper: -5, ratingCategory: 0 },
@@ -65,7 +65,8 @@ describe('the server judges saved runs', () => {
     expect(res.status).toBe(201);
     // The percentage is the TWA over the agent's limit, 0.025 mg/m³ respirable, whatever the client claimed.
     const percent = (100 * result.breathingZone.fractions.respirable.twa8h_mgPerM3) / 0.025;
-    expect(percent).toBeGreaterThan(600);
+    // About 530–630 % by seed at 2000 particles (95 % CI ±20 %): the claim is only that it is far above the limit.
+    expect(percent).toBeGreaterThan(400);
     expect(res.body.result.limit).toMatchObject({ banner: 'act', ratingCategory: 4, decided: true });
     expect(res.body.result.limit.percentOfLimit).toBeCloseTo(percent, 9);
     const row = await t.db('runs').where({ id: res.body.id }).first();

@@ -95,6 +95,7 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     series[fraction] = band;
   }
   const emitted = p.emission.emitted_mg;
+  // Shares of the whole emission: particles carry only the simulated sizes, massLeftOut the rest.
   const fate = { emitted_mg: emitted } as Results['fate'];
   FATES.forEach((name: Fate, i) => {
     fate[name] = emitted > 0 ? batches.reduce((a, b) => a + b.fateMass_mg[i], 0) / (batches.length * emitted) : 0;
@@ -114,6 +115,7 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     },
     breathingZone: { volume_m3: p.zone.volume_m3, fractions, series },
     fate,
+    massLeftOut: { ...p.bins.massLeftOut },
     crossChecks: crossChecks(p, p.limit?.fraction ?? 'respirable'),
     maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p) },
     trajectories: { ...p.trajectory, positions_m: first.trajectories, bins: first.trajectoryBins },

@@ -11,7 +11,10 @@ function timeAverage(duration_s: number, at: (t: number) => number): number {
 }
 
 /**
- * Box models evaluated bin by bin with the simulated fraction's mass: generation = emitted mass
+ * Box models evaluated bin by bin from the size profile's own mass shares (profileMassFraction, not
+ * the particles' bins, so a run of 20 particles gets the same figures as one of 20 000), over the
+ * simulated sizes only, as the Monte-Carlo figure is: mass left out of the size range is in
+ * neither. Generation = emitted mass
  * over the release time (bursts averaged), removal = general ventilation plus hood airflow (both
  * take air out of the room), settling loss V_TS/H per bin, averaged over the simulated window.
  * Near field: a sphere (hemisphere on the floor) of radius max(source-to-zone distance, zone
@@ -32,7 +35,7 @@ export function crossChecks(p: PreparedScenario, fraction: Fraction): Results['c
   let far = 0;
   let eddy = 0;
   for (let b = 0; b < bins.count; b++) {
-    const g = (p.emission.emitted_mg * bins.massFraction[b] * bins.conventionWeight[f * bins.count + b]) / release_s;
+    const g = (p.emission.emitted_mg * bins.profileMassFraction[b] * bins.conventionWeight[f * bins.count + b]) / release_s;
     if (g === 0) continue;
     const settle = bins.settling_mPerS[b] / room.height_m;
     // Linear models: switching the source off at T is the source minus itself delayed by T.

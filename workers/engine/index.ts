@@ -2,6 +2,6 @@ export { ENGINE_VERSION } from './version';
 export { prepareScenario } from './prepare';
 export { runBatch, transferables } from './run-batch';
 export { combineBatches } from './combine';
-export { SIZE_BIN_COUNT } from './size-bins';
+export { BINS_PER_DECADE, SIZE_MAX_AERODYNAMIC_m, SIZE_MIN_PHYSICAL_m } from './size-grid';
 export type { BatchResult, Fraction, PreparedScenario, Results } from './types';
 export { FATES, FRACTIONS } from './types';

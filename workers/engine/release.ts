@@ -42,6 +42,8 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
   let i = 0;
   for (let b = 0; b < p.bins.count; b++) {
     const nb = p.bins.particlesPerBatch[b];
+    // Bins without particles draw nothing, so a wider size grid does not shift the others' streams.
+    if (nb === 0) continue;
     const eventOffset = Math.floor(rng.nextUniform() * Math.max(1, events.length));
     for (let j = 0; j < nb; j++, i++) {
       const t0 =

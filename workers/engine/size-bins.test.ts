@@ -1,25 +1,48 @@
 import { describe, expect, it } from 'vitest';
-import { STANDARD_AIR, normalCdf, respirableFraction } from '../../shared/physics/index';
+import { STANDARD_AIR, aerodynamicDiameter, conventionMassFraction, normalCdf, respirableFraction } from '../../shared/physics/index';
 import { prepareTest } from './engine.test-helper';
-import { SIZE_BIN_COUNT, binEdges_m, massShares } from './size-bins';
+import { profileShares } from './profile-shares';
+import { BINS_PER_DECADE, binEdges_m } from './size-bins';
 
-const dust = (sizeProfile: object) => ({ density_kgPerM3: 2650, shapeFactor: 1, sizeProfile }) as never;
+const dust = (sizeProfile: object, density_kgPerM3 = 2650) => ({ density_kgPerM3, shapeFactor: 1, sizeProfile }) as never;
+const quartz = { density_kgPerM3: 2650, shapeFactor: 1 };
 
 describe('size bins', () => {
-  it('are 36 log-spaced aerodynamic bins from 0.1 to 100 µm', () => {
-    const e = binEdges_m();
-    expect(e.length).toBe(SIZE_BIN_COUNT + 1);
-    expect(e[0]).toBeCloseTo(0.1e-6, 15);
-    expect(e[SIZE_BIN_COUNT]).toBeCloseTo(100e-6, 12);
+  it('run from 1 nm physical to 100 µm aerodynamic, 12 per decade on the aerodynamic axis ([C] the layout in size-grid.ts)', () => {
+    const unit = binEdges_m({ density_kgPerM3: 1000, shapeFactor: 1 }, STANDARD_AIR);
+    // Unit-density spheres: d_a = d_p at every size (Hinds Eq. 3.26 with ρ = ρ₀, χ = 1), so five whole decades.
+    expect(unit.length).toBe(5 * BINS_PER_DECADE + 1);
+    expect(unit[0] / 1e-9).toBeCloseTo(1, 9);
+    const e = binEdges_m(quartz, STANDARD_AIR);
+    expect(e[0]).toBeCloseTo(aerodynamicDiameter(1e-9, 2650), 20);
+    expect(e[e.length - 1]).toBeCloseTo(100e-6, 15);
+    for (let i = 2; i < e.length; i++) expect(Math.log10(e[i] / e[i - 1])).toBeCloseTo(1 / 12, 12);
+    // The bottom bin is between half and one and a half of a regular one.
+    const bottom = Math.log10(e[1] / e[0]) * 12;
+    expect(bottom).toBeGreaterThanOrEqual(0.5);
+    expect(bottom).toBeLessThan(1.5);
   });
 
-  it('give particle weights that sum to the emitted mass in every bin set-up', () => {
+  it('keep the 0.1–100 µm edges of the earlier 36-bin grid, 0.1 µm·10^(k/12) ([C] engine 1.3.0 layout)', () => {
+    const e = binEdges_m(quartz, STANDARD_AIR);
+    const top = e.length - 1;
+    for (let k = 0; k <= 36; k++) expect(e[top - 36 + k] / (0.1e-6 * 10 ** (k / 12))).toBeCloseTo(1, 12);
+  });
+
+  it('resolve the ISO 7708 respirable curve: binned respirable share of MMAD 3 µm, σg 1.5 within 1 % of the integral ([C] Simpson over the lognormal)', () => {
+    const p = prepareTest({ dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 3e-6, gsd: 1.5 } } });
+    const binned = p.bins.profileMassFraction.reduce((a, m, b) => a + m * respirableFraction(p.bins.aerodynamic_m[b]), 0);
+    expect(Math.abs(binned / conventionMassFraction(3e-6, 1.5, 'respirable') - 1)).toBeLessThan(0.01);
+  });
+
+  it('give particle weights that sum to the simulated share of the emitted mass', () => {
     const p = prepareTest({
       dust: { density_kgPerM3: 2650, sizeProfile: { kind: 'lognormal', basis: 'mmad', median_m: 12e-6, gsd: 2.4 } },
       run: { particles: 3000, batches: 3 },
     });
     const sum = p.bins.particleMass_mg.reduce((a, m, b) => a + m * p.bins.particlesPerBatch[b], 0);
-    expect(sum).toBeCloseTo(p.emission.emitted_mg, 12);
+    expect(p.bins.massLeftOut.share).toBeGreaterThan(0.005);
+    expect(sum).toBeCloseTo(p.emission.emitted_mg * (1 - p.bins.massLeftOut.share), 12);
   });
 
   it('do not starve the respirable bins when coarse dust carries the mass', () => {
@@ -35,25 +58,24 @@ describe('size bins', () => {
     expect(respirableParticles / 1000).toBeGreaterThan(5 * respirableMass);
   });
 
-  it('hold the lognormal mass below each edge, Φ(ln(d/MMAD)/ln σg) (Hinds ch. 4)', () => {
-    const shares = massShares(dust({ kind: 'lognormal', basis: 'mmad', median_m: 5e-6, gsd: 2 }), binEdges_m(), STANDARD_AIR);
-    const e = binEdges_m();
-    const inRange = normalCdf(Math.log(e[SIZE_BIN_COUNT] / 5e-6) / Math.LN2) - normalCdf(Math.log(e[0] / 5e-6) / Math.LN2);
+  it('hold the lognormal mass below each edge, Φ(ln(d/MMAD)/ln σg) − Φ(ln(d₀/MMAD)/ln σg), not renormalised (Hinds ch. 4)', () => {
+    const e = binEdges_m(quartz, STANDARD_AIR);
+    const { shares } = profileShares(dust({ kind: 'lognormal', basis: 'mmad', median_m: 5e-6, gsd: 2 }), e, STANDARD_AIR);
+    const cdf = (d: number) => normalCdf(Math.log(d / 5e-6) / Math.LN2);
     let below = 0;
-    for (let b = 0; b < SIZE_BIN_COUNT; b += 1) {
+    for (let b = 0; b < shares.length; b += 1) {
       below += shares[b];
-      const expected = (normalCdf(Math.log(e[b + 1] / 5e-6) / Math.LN2) - normalCdf(Math.log(e[0] / 5e-6) / Math.LN2)) / inRange;
-      expect(below).toBeCloseTo(expected, 10);
+      expect(below).toBeCloseTo(cdf(e[b + 1]) - cdf(e[0]), 10);
     }
   });
 
   it('convert counts to mass with d³ for count-basis bins', () => {
-    const shares = massShares(
+    const e = binEdges_m(quartz, STANDARD_AIR);
+    const { shares } = profileShares(
       dust({ kind: 'bins', basis: 'count', diameter: 'aerodynamic', edges_m: [1e-6, 1.2e-6, 10e-6, 12e-6], amounts: [1000, 0, 1] }),
-      binEdges_m(),
+      e,
       STANDARD_AIR,
     );
-    const e = binEdges_m();
     const small = shares.reduce((a, m, b) => a + (e[b + 1] <= 2e-6 ? m : 0), 0);
     // 1000 particles near 1.1 µm against one near 11 µm: equal mass within the d³ of their mid-points.
     expect(small).toBeGreaterThan(0.4);

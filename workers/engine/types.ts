@@ -1,6 +1,6 @@
 import type { RoundJet } from '../../shared/physics/round-jet';
 import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
-import type { RunResult } from '../../shared/schemas/run-result';
+import type { MassLeftOut, RunResult } from '../../shared/schemas/run-result';
 import type { modelSchema } from '../../shared/schemas/run-result';
 import type { z } from 'zod';
 import type { Fraction } from '../../shared/vocabulary/fractions';
@@ -12,8 +12,12 @@ export interface SizeBins {
   count: number;
   aerodynamic_m: Float64Array;
   physical_m: Float64Array;
+  /** Share of the emitted mass each simulated particle's bin carries; bins without particles carry none. */
   massFraction: Float64Array;
+  /** Share of the emitted mass in each bin from the size profile itself, whatever the particle count. */
+  profileMassFraction: Float64Array;
   settling_mPerS: Float64Array;
+  /** Eddy plus Brownian. */
   diffusivity_m2PerS: Float64Array;
   /** Brownian diffusivity alone (Stokes–Einstein with slip, divided by the shape factor). */
   brownianDiffusivity_m2PerS: Float64Array;
@@ -22,6 +26,8 @@ export interface SizeBins {
   particlesPerBatch: Int32Array;
   /** Convention efficiency per fraction, row-major [fraction][bin]. */
   conventionWeight: Float64Array;
+  /** Emitted mass outside the simulated sizes, as shares of the emission. */
+  massLeftOut: MassLeftOut;
 }
 
 /** Plain data (typed arrays and numbers) so it can be structured-cloned into a worker. */

@@ -1,6 +1,7 @@
 import { readableNumber } from '../../../../shared/format/index';
 import { FATE_LABEL, FATES, type Fate } from '../../../../shared/vocabulary/index';
 import type { RunResult } from '../../../../shared/schemas/run-result';
+import { MassLeftOutNote } from './mass-left-out-note';
 import { Section } from './section';
 
 // Fate colours are our own; each segment also carries its word in the list, never colour alone.
@@ -85,6 +86,7 @@ export function FateSection({ view }: { view: RunResult }) {
           </tr>
         </tbody>
       </table>
+      <MassLeftOutNote view={view} />
     </Section>
   );
 }
