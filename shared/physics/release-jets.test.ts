@@ -8,6 +8,7 @@ import {
   jetCentrelineSpeed_mPerS,
   resolveJet,
   towardBreathingZone,
+  withJetSpeedScaled,
 } from './release-jets';
 
 // [S] ACGIH Industrial Ventilation, capture-velocity table (physics.md §8), typed here rather than read from the code.
@@ -128,5 +129,18 @@ describe("the demo scenarios' releases", () => {
     expect(resolveJet(bakery.source, bakery.worker)!.direction).toEqual([0, 0, -1]);
     const stone = demos.find((d) => d.f.startsWith('stone'))!.s;
     expect(stone.source.jet!.direction).toBeUndefined();
+  });
+});
+
+describe('withJetSpeedScaled', () => {
+  const worker = { x_m: 1, y_m: 0, z_m: 1 };
+  it('makes the default jet explicit at the scaled speed, same nozzle and direction (for the ±2× sensitivity)', () => {
+    const scaled = withJetSpeedScaled({ source: { x_m: 0, y_m: 0, z_m: 1, releaseType: 'high' as const }, worker }, 2);
+    expect(scaled.source.jet).toEqual({ speed_mPerS: 10, diameter_m: 0.05, direction: { x: 1, y: 0, z: 0 } });
+  });
+  it('leaves a quiet release alone and refuses a factor of zero', () => {
+    const quiet = { source: { x_m: 0, y_m: 0, z_m: 1, releaseType: 'quiet' as const }, worker };
+    expect(withJetSpeedScaled(quiet, 2)).toBe(quiet);
+    expect(() => withJetSpeedScaled(quiet, 0)).toThrow(/factor/);
   });
 });

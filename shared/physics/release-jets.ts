@@ -82,3 +82,18 @@ export function resolveJet(
     fromDefault: !source.jet,
   };
 }
+
+/**
+ * The same scenario with its release jet's speed times factor (the default jet made explicit), for
+ * the ±2× sensitivity the jet's common-practice defaults call for; a scenario without a jet is returned as it is.
+ */
+export function withJetSpeedScaled<S extends { source: Parameters<typeof resolveJet>[0]; worker: Point }>(scenario: S, factor: number): S {
+  if (!(factor > 0)) throw new RangeError(`factor must be above zero, got ${factor}`);
+  const jet = resolveJet(scenario.source, scenario.worker);
+  if (!jet) return scenario;
+  const [x, y, z] = jet.direction;
+  return {
+    ...scenario,
+    source: { ...scenario.source, jet: { speed_mPerS: jet.speed_mPerS * factor, diameter_m: jet.diameter_m, direction: { x, y, z } } },
+  };
+}

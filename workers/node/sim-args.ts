@@ -6,9 +6,11 @@ export interface SimArgs {
   seed?: number | string;
   workers?: number;
   json: boolean;
+  /** Run at ½×, 1× and 2× the release jet's speed and print the three verdicts side by side. */
+  jetSensitivity: boolean;
 }
 
-export const USAGE = 'usage: npm run sim -- <scenario.json> [--particles N] [--seed S] [--workers K] [--json]';
+export const USAGE = 'usage: npm run sim -- <scenario.json> [--particles N] [--seed S] [--workers K] [--json] [--jet-sensitivity]';
 
 function positiveInt(name: string, text: string | undefined): number | undefined {
   if (text === undefined) return undefined;
@@ -26,6 +28,7 @@ export function parseSimArgs(argv: string[]): SimArgs {
       seed: { type: 'string' },
       workers: { type: 'string' },
       json: { type: 'boolean', default: false },
+      'jet-sensitivity': { type: 'boolean', default: false },
     },
   });
   if (positionals.length !== 1) throw new Error(`expected one scenario file, got ${positionals.length}`);
@@ -37,5 +40,6 @@ export function parseSimArgs(argv: string[]): SimArgs {
     seed,
     workers: positiveInt('workers', values.workers),
     json: values.json ?? false,
+    jetSensitivity: values['jet-sensitivity'] ?? false,
   };
 }

@@ -1,6 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
-import { ScenarioError, parseScenario } from '../../shared/schemas/scenario';
+import { withJetSpeedScaled } from '../../shared/physics/release-jets';
+import { ScenarioError, parseScenario, type Scenario } from '../../shared/schemas/scenario';
 import { combineBatches, prepareScenario } from '../engine/index';
 import { resultsToJson, summary } from './format-results';
 import { USAGE, parseSimArgs } from './sim-args';
@@ -29,6 +30,7 @@ async function main(): Promise<void> {
   if (args.particles !== undefined) run.particles = args.particles;
   if (args.seed !== undefined) run.seed = args.seed;
   const scenario = parseScenario({ ...raw, run });
+  if (args.jetSensitivity) return jetSensitivity(scenario, args.workers ?? availableParallelism());
   const prepared = prepareScenario(scenario);
   const started = Date.now();
   const progress = args.json ? undefined : (fraction: number) => process.stderr.write(`\r${(100 * fraction).toFixed(0).padStart(3)} %`);
@@ -36,6 +38,19 @@ async function main(): Promise<void> {
   if (progress) process.stderr.write('\r');
   const results = combineBatches(prepared, batches, (Date.now() - started) / 1000);
   process.stdout.write(`${args.json ? resultsToJson(results) : summary(scenario.name ?? args.file, results)}\n`);
+}
+
+// The jet defaults are common practice, not measured: the verdict should not hang on them unseen.
+async function jetSensitivity(scenario: Scenario, workers: number): Promise<void> {
+  for (const factor of [0.5, 1, 2]) {
+    const prepared = prepareScenario(parseScenario(withJetSpeedScaled(scenario, factor)));
+    const r = combineBatches(prepared, await runOnThreads(prepared, workers));
+    const jet = r.model?.jet;
+    const limit = r.limit;
+    process.stdout.write(
+      `${factor}× jet (${jet ? `${jet.speed_mPerS.toPrecision(3)} m/s` : 'none'}): ${limit ? `${limit.banner}, ${limit.percentOfLimit.toPrecision(3)} % of the limit (upper ${limit.percentOfLimitUpper.toPrecision(3)} %)` : 'no limit'}, captured ${(100 * r.fate.captured).toPrecision(3)} %\n`,
+    );
+  }
 }
 
 main().catch((error: unknown) => {
