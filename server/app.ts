@@ -7,6 +7,10 @@ import type { Db } from './db/knex';
 import type { Mailer } from './mail/mailer';
 import { configurePassport } from './auth/passport';
 import { SessionStore } from './auth/session-store';
+import { absoluteLifetime, SESSION_IDLE_MS } from './auth/session-lifetime';
+import type { DelayPolicy } from './auth/account-delay';
+import type { PublicUrl } from './lib/base-url';
+import { jsonBody } from './middleware/json-body';
 import { authRoutes } from './auth/auth.routes';
 import { peopleRoutes } from './people/people.routes';
 import { outboxRoutes } from './mail/outbox.routes';
@@ -28,7 +32,11 @@ export type AppOptions = {
   mailer: Mailer;
   sessionSecret: string;
   production?: boolean;
-  publicUrl?: string;
+  /** Base of every e-mailed link; a function when only known once the server listens. */
+  publicUrl: PublicUrl;
+  /** Reverse-proxy hops whose X-Forwarded-* headers are believed (0: none, the default). */
+  trustProxy?: number;
+  loginDelay?: DelayPolicy;
   clientDir?: string;
   logRequests?: boolean;
 };
@@ -37,12 +45,18 @@ export function createApp(opts: AppOptions): Express {
   const { db, mailer } = opts;
   const app = express();
   app.disable('x-powered-by');
-  // In production TLS ends at a proxy; trusting its X-Forwarded-Proto lets Secure cookies be set.
-  if (opts.production) app.set('trust proxy', 1);
+  // Only an operator knows whether a proxy sits in front; believing forwarded headers without one
+  // would let any caller pick the address the rate limits count.
+  app.set('trust proxy', opts.trustProxy ?? 0);
   app.use(
     helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'worker-src': ["'self'", 'blob:'] } } }),
   );
-  const json = express.json({ limit: '1mb' });
+  // Set first, so even a body the parser refuses is answered uncacheable.
+  app.use('/api', (_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  const json = jsonBody({ limit: '1mb' });
   // Saved runs carry large result arrays; their route parses its own body with a larger limit.
   app.use((req, res, next) => (RUN_UPLOAD.test(req.path) ? next() : json(req, res, next)));
   app.use(
@@ -53,16 +67,17 @@ export function createApp(opts: AppOptions): Express {
       saveUninitialized: false,
       rolling: true,
       store: new SessionStore({ knex: db, tableName: 'sessions', createTable: false, cleanupInterval: 0 }),
-      cookie: { httpOnly: true, sameSite: 'lax', secure: opts.production === true, maxAge: 8 * 3600 * 1000 },
+      cookie: { httpOnly: true, sameSite: 'lax', secure: opts.production === true, maxAge: SESSION_IDLE_MS },
     }),
   );
+  app.use(absoluteLifetime());
   const pp = configurePassport(db);
   app.use(pp.session());
   app.use(requestLog(opts.logRequests ?? false));
 
   const api = express.Router();
   api.use(sameOriginWrites);
-  api.use('/auth', authRoutes(db, pp));
+  api.use('/auth', authRoutes(db, pp, opts.loginDelay));
   api.use('/people', peopleRoutes(db, mailer, opts.publicUrl));
   api.use('/outbox', outboxRoutes(db));
   api.use('/audit', auditRoutes(db));

@@ -15,6 +15,8 @@ declare global {
 declare module 'express-session' {
   interface SessionData {
     csrfToken?: string;
+    signedInAt?: number;
+    passport?: { user?: number };
   }
 }
 

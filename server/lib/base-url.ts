@@ -1,8 +1,7 @@
-import type { Request } from 'express';
+// A function when the address is only known once the server listens (development and tests).
+export type PublicUrl = string | (() => string);
 
-export function baseUrl(req: Request, configured?: string): string {
-  if (configured) return configured.replace(/\/$/, '');
-  const origin = req.get('origin');
-  if (origin) return origin;
-  return `${req.protocol}://${req.get('host')}`;
+// Links are built only from configuration, never from a request's Origin or Host header.
+export function baseUrl(configured: PublicUrl): string {
+  return (typeof configured === 'function' ? configured() : configured).replace(/\/+$/, '');
 }

@@ -16,8 +16,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (status < 500) {
-    const message = err?.type === 'entity.parse.failed' ? 'The request body is not valid JSON' : 'The request could not be read';
-    res.status(status).json({ code: 'bad_request', message });
+    res.status(status).json({ code: 'bad_request', message: readFailure(err) });
     return;
   }
   if (isDiskOrReadOnly(err)) {
@@ -28,7 +27,18 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   res.status(500).json({ code: 'internal', message: 'Something went wrong on the server' });
 };
 
-function isDiskOrReadOnly(err: unknown): boolean {
-  const code = (err as { code?: string })?.code ?? '';
-  return code === 'SQLITE_FULL' || code.startsWith('SQLITE_READONLY') || code === 'SQLITE_IOERR' || code === 'ENOSPC';
+function readFailure(err: { type?: string; message?: string }): string {
+  if (err?.type === 'entity.parse.failed') return 'The request body is not valid JSON';
+  if (err?.type === 'entity.too.deep') return `The request body is not valid: ${err.message}`;
+  return 'The request could not be read';
+}
+
+// SQLite's extended codes (SQLITE_IOERR_WRITE, SQLITE_READONLY_DBMOVED ...) share their family's prefix.
+const STORAGE_FAMILIES = ['SQLITE_FULL', 'SQLITE_IOERR', 'SQLITE_READONLY', 'SQLITE_CANTOPEN'];
+const STORAGE_ERRNOS = new Set(['ENOSPC', 'EROFS', 'EIO', 'EDQUOT']);
+
+export function isDiskOrReadOnly(err: unknown): boolean {
+  const code = (err as { code?: unknown })?.code;
+  if (typeof code !== 'string') return false;
+  return STORAGE_ERRNOS.has(code) || STORAGE_FAMILIES.some((family) => code === family || code.startsWith(`${family}_`));
 }

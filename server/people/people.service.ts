@@ -5,6 +5,7 @@ import type { Mailer } from '../mail/mailer';
 import { AppError, notFound } from '../lib/app-error';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { hashPassword } from '../auth/password';
+import { endSessionsOf } from '../auth/sessions.repo';
 import { findByEmail, findPerson, insertPerson, listPeople, updatePerson, type PeopleQuery } from './people.repo';
 import { findUsableToken, issueToken, markTokenUsed } from './tokens.repo';
 import { passwordLinkMail } from './people.mails';
@@ -81,20 +82,27 @@ async function sendOrExplain(mailer: Mailer, mail: Parameters<Mailer['send']>[0]
   }
 }
 
+const unusableLink = () =>
+  new AppError(400, 'invalid_token', 'This link has expired or was already used. Ask an admin for a new one.', [
+    { path: 'body.token', message: 'Expired or used' },
+  ]);
+
+// The token is checked before the costly hash, so made-up tokens cost the server nothing; the
+// transaction checks it again because another request may have used it meanwhile.
 export async function setPasswordWithToken(db: Db, token: string, password: string) {
+  if (!(await findUsableToken(db, token))) throw unusableLink();
   const passwordHash = await hashPassword(password);
   return withTransaction(db, async (trx) => {
     const found = await findUsableToken(trx, token);
-    if (!found)
-      throw new AppError(400, 'invalid_token', 'This link has expired or was already used. Ask an admin for a new one.', [
-        { path: 'body.token', message: 'Expired or used' },
-      ]);
+    if (!found) throw unusableLink();
     const person = await findPerson(trx, found.personId);
     if (!person || person.status === 'deactivated')
       throw new AppError(400, 'invalid_token', 'This account is not active', [{ path: 'body.token', message: 'Account not active' }]);
     await updatePerson(trx, person.id, { passwordHash, status: 'active' });
     await markTokenUsed(trx, found.id);
-    await auditPerson(trx, { id: person.id, email: person.email }, 'person.password_set', person.id);
+    // Whoever knew the old password may still be signed in somewhere: a new password ends every session.
+    const ended = await endSessionsOf(trx, person.id);
+    await auditPerson(trx, { id: person.id, email: person.email }, 'person.password_set', person.id, { sessionsEnded: ended });
     return person.email;
   });
 }

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import express from 'express';
 import { z } from 'zod';
 import { idParamSchema } from '../../shared/schemas/auth';
 import { runCreateSchema } from '../../shared/schemas/runs';
@@ -7,12 +6,13 @@ import { scenarioCreateSchema, scenarioListQuerySchema, scenarioUpdateSchema } f
 import type { Db } from '../db/knex';
 import { requirePermission } from '../middleware/require-permission';
 import { validate } from '../middleware/validate';
+import { jsonBody } from '../middleware/json-body';
 import { scenariosController } from './scenarios.controller';
 
 const duplicateSchema = z.object({ name: z.string().trim().min(1).max(120).optional() }).strict();
 
 // A saved run carries its series, maps and a trajectory sample: allow more than the default body limit.
-const largeJson = express.json({ limit: '12mb' });
+const largeJson = jsonBody({ limit: '12mb' });
 
 export function scenariosRoutes(db: Db): Router {
   const c = scenariosController(db);

@@ -1,7 +1,9 @@
 import path from 'node:path';
 import { parse } from 'csv-parse/sync';
 import type { CsvRecord } from '../../shared/size-profiles/index';
-import { AppError } from '../lib/app-error';
+import { AppError, type Issue } from '../lib/app-error';
+
+export const MAX_CSV_COLUMNS = 50;
 
 function refuse(message: string, row: number | null = null): AppError {
   const issue = { path: 'file', row, column: null, message };
@@ -27,8 +29,15 @@ export function readCsvRecords(file: { originalname: string; buffer: Buffer }): 
       record: string[];
       info: { lines: number };
     }[];
+    const wide = parsed.find(({ record }) => record.length > MAX_CSV_COLUMNS);
+    // Refused before any per-column message is built, so a hostile header cannot inflate the answer.
+    if (wide) {
+      const message = `Line ${wide.info.lines} has ${wide.record.length} columns; a size-profile file has at most ${MAX_CSV_COLUMNS}`;
+      throw new AppError(400, 'too_many_columns', message, [{ path: 'file', row: wide.info.lines, column: null, message } as Issue]);
+    }
     return parsed.map(({ record, info }) => ({ line: info.lines, cells: record }));
   } catch (err) {
+    if (err instanceof AppError) throw err;
     const line = (err as { lines?: number }).lines ?? null;
     throw refuse(`The file could not be read as CSV: ${(err as Error).message}`, line);
   }

@@ -14,7 +14,13 @@ export const loginSchema = z.object({
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
-export const passwordSchema = z.string().min(10, 'Use at least 10 characters').max(200, 'Use at most 200 characters');
+export const PASSWORD_MIN_LENGTH = 12;
+
+export const passwordSchema = z
+  .string()
+  .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters`)
+  .max(200, 'Use at most 200 characters')
+  .refine((p) => p.trim().length > 0, 'Use more than spaces');
 
 export const setPasswordSchema = z.object({
   token: z.string().min(20).max(200),

@@ -127,3 +127,39 @@ describe('scenario schema', () => {
     expect(parseScenario(old).source.releaseType).toBeUndefined();
   });
 });
+
+// Bounds from the hardening issue: what one browser run, the server and a reader can handle (common practice, not physics).
+describe('scenario bounds', () => {
+  it('accepts a scenario exactly at every bound', () => {
+    const s = valid();
+    const input = {
+      ...s,
+      name: 'n'.repeat(200),
+      description: 'd'.repeat(200),
+      source: { ...s.source, emission: { kind: 'bursts', massPerEvent_mg: 1, eventsPerHour: 2, taskDuration_min: 1440 } },
+      hoods: [{ ...s.hoods[0], name: 'h'.repeat(200) }],
+      run: { particles: 5_000_000, duration_s: 86_400, seed: 's'.repeat(200) },
+    };
+    expect(parseScenario(input).run.particles).toBe(5_000_000);
+  });
+
+  it('names each field one step past its bound, with the bound in the message', () => {
+    const s = valid();
+    const input = {
+      ...s,
+      name: 'n'.repeat(201),
+      source: { ...s.source, emission: { kind: 'continuous', rate_mgPerMin: 5, taskDuration_min: 1441 } },
+      dust: { ...s.dust, name: 'x'.repeat(201) },
+      hoods: [{ ...s.hoods[0], name: 'h'.repeat(201) }],
+      limit: { fraction: 'respirable', value_mgPerM3: 0.1, source: 'l'.repeat(201) },
+      run: { particles: 5_000_001, duration_s: 86_401 },
+    };
+    const issues = issuesOf(input);
+    expect(issues.map((i) => i.path).sort()).toEqual(
+      ['dust.name', 'hoods.0.name', 'limit.source', 'name', 'run.duration_s', 'run.particles', 'source.emission.taskDuration_min'].sort(),
+    );
+    expect(issues.find((i) => i.path === 'run.particles')!.message).toMatch(/at most 5,000,000/);
+    expect(issues.find((i) => i.path === 'run.duration_s')!.message).toMatch(/at most 24 h/);
+    expect(issues.find((i) => i.path === 'name')!.message).toMatch(/at most 200 characters/);
+  });
+});

@@ -11,6 +11,11 @@ const finite = (min?: { gt?: number; gte?: number }) => {
 const positive = () => finite({ gt: 0 });
 const nonNegative = () => finite({ gte: 0 });
 
+// Bounds that keep one scenario within what a browser, the server and a reader can handle.
+export const SCENARIO_BOUNDS = { particles: 5_000_000, duration_s: 24 * 3600, text: 200 } as const;
+const text = () => z.string().max(SCENARIO_BOUNDS.text, `must be at most ${SCENARIO_BOUNDS.text} characters`);
+const taskDuration = () => positive().max(SCENARIO_BOUNDS.duration_s / 60, 'must be at most 24 h (1440 min)');
+
 const roomSchema = z.object({
   length_m: positive(),
   width_m: positive(),
@@ -25,12 +30,12 @@ const roomSchema = z.object({
 });
 
 const emissionSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('continuous'), rate_mgPerMin: nonNegative(), taskDuration_min: positive() }),
+  z.object({ kind: z.literal('continuous'), rate_mgPerMin: nonNegative(), taskDuration_min: taskDuration() }),
   z.object({
     kind: z.literal('bursts'),
     massPerEvent_mg: nonNegative(),
     eventsPerHour: positive(),
-    taskDuration_min: positive(),
+    taskDuration_min: taskDuration(),
   }),
 ]);
 
@@ -78,14 +83,14 @@ const sizeProfileSchema = z.discriminatedUnion('kind', [
 ]);
 
 const dustSchema = z.object({
-  name: z.string().optional(),
+  name: text().optional(),
   density_kgPerM3: positive(),
   shapeFactor: finite({ gte: 1 }).default(1),
   sizeProfile: sizeProfileSchema,
 });
 
 const hoodSchema = z.object({
-  name: z.string().optional(),
+  name: text().optional(),
   kind: z.enum(HOOD_KINDS),
   x_m: finite(),
   y_m: finite(),
@@ -108,21 +113,21 @@ const limitSchema = z.object({
   fraction: z.enum(['total', 'inhalable', 'thoracic', 'respirable']),
   value_mgPerM3: positive(),
   shortTerm_mgPerM3: positive().optional(),
-  source: z.string().optional(),
+  source: text().optional(),
 });
 
 const runSchema = z.object({
-  particles: z.number().int().gte(1).default(20000),
-  seed: z.union([z.number().int(), z.string().min(1)]).default(1),
+  particles: z.number().int().gte(1).lte(SCENARIO_BOUNDS.particles, 'must be at most 5,000,000 particles per run').default(20000),
+  seed: z.union([z.number().int(), text().min(1)]).default(1),
   batches: z.number().int().gte(2).lte(1000).default(10),
-  duration_s: positive().optional(),
+  duration_s: positive().max(SCENARIO_BOUNDS.duration_s, 'must be at most 24 h (86400 s)').optional(),
   maxTimeStep_s: positive().default(2),
   stepFraction: finite({ gt: 0 }).lte(1).default(0.5),
 });
 
 const baseSchema = z.object({
-  name: z.string().optional(),
-  description: z.string().optional(),
+  name: text().optional(),
+  description: text().optional(),
   room: roomSchema,
   source: sourceSchema,
   dust: dustSchema,

@@ -12,7 +12,12 @@ export async function createTestApp(opts: { demoWorkspace?: boolean; particles?:
   const db: Db = createDb(':memory:');
   await migrateLatest(db);
   await seedDemo(db, { workspace: opts.demoWorkspace ?? false, particles: opts.particles ?? 2000 });
-  const app = createApp({ db, mailer: createOutboxMailer(db, 'test@motewalk.local'), sessionSecret: 'test-secret-0123456789' });
+  const app = createApp({
+    db,
+    mailer: createOutboxMailer(db, 'test@motewalk.local'),
+    sessionSecret: 'test-secret-0123456789',
+    publicUrl: ORIGIN,
+  });
 
   // Every request carries our own origin, as a browser on a Motewalk page would.
   const anonymous = () => request.agent(app).set('Host', HOST).set('Origin', ORIGIN);

@@ -83,6 +83,7 @@ describe('access to every API route', () => {
         const refused = res.status === 401 || res.status === 403;
         if (allowed(rule, role) === refused) mismatches.push(`${key} → ${res.status}`);
         if (res.status >= 500) mismatches.push(`${key} → ${res.status} (server error)`);
+        if (res.headers['cache-control'] !== 'no-store') mismatches.push(`${key} → Cache-Control ${res.headers['cache-control']}`);
         if (res.headers['content-type']?.includes('json') && res.status >= 400)
           expect(Object.keys(res.body)).toEqual(expect.arrayContaining(['code', 'message']));
       }

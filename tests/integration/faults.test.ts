@@ -85,7 +85,7 @@ describe('storage that cannot be written', () => {
     await rw.raw('PRAGMA wal_checkpoint(TRUNCATE)');
     await rw.destroy();
     const db = createDb(file, { readonly: true });
-    const app = createApp({ db, mailer: createOutboxMailer(db, 'x@y.z'), sessionSecret: 'read-only-test-secret' });
+    const app = createApp({ db, mailer: createOutboxMailer(db, 'x@y.z'), sessionSecret: 'read-only-test-secret', publicUrl: ORIGIN });
     const res = await request(app)
       .post('/api/auth/login')
       .set('Host', HOST)
@@ -132,6 +132,7 @@ describe('an error inside one request', () => {
       db: t.db,
       mailer: { send: async () => Promise.reject(new Error('SMTP down')) },
       sessionSecret: 'mail-failure-secret-1',
+      publicUrl: ORIGIN,
     });
     const agent = request.agent(app).set('Host', HOST).set('Origin', ORIGIN);
     await agent.post('/api/auth/login').send({ email: 'admin@motewalk.local', password: 'demo-admin-pass' });

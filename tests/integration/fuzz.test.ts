@@ -80,6 +80,9 @@ const RAW = [
   '[]',
   '"text"',
   '{"input": ' + '['.repeat(5000) + ']'.repeat(5000) + '}',
+  // One level past the parser's depth limit, and deep nesting hidden behind brackets inside a string.
+  '['.repeat(65) + ']'.repeat(65),
+  '{"name": "' + '['.repeat(100) + '", "x": ' + '{"a":'.repeat(70) + '1' + '}'.repeat(70) + '}',
 ];
 
 function bodyFor(validShape: Record<string, unknown>) {
@@ -114,11 +117,14 @@ const TARGETS: Target[] = [
   { method: 'post', url: () => '/api/size-profiles', valid: { kind: 'lognormal', name: 'P', basis: 'mmad', median_m: 5e-6, gsd: 2 } },
 ];
 
-async function expectRefusedCleanly(send: () => Promise<{ status: number; body: Record<string, unknown> }>) {
+async function expectRefusedCleanly(
+  send: () => Promise<{ status: number; body: Record<string, unknown>; headers: Record<string, string> }>,
+) {
   const before = await snapshot();
   const res = await send();
   sent += 1;
   expect(res.status, JSON.stringify(res.body).slice(0, 200)).toBeLessThan(500);
+  expect(res.headers['cache-control']).toBe('no-store');
   if (res.status >= 400) {
     expect(typeof res.body.code).toBe('string');
     expect(typeof res.body.message).toBe('string');

@@ -36,4 +36,16 @@ describe('set-password form', () => {
     expect(mutate).toHaveBeenCalledTimes(1);
     expect(mutate.mock.calls[0][0]).toEqual({ token: TOKEN, password: 'correct horse battery' });
   });
+
+  it('sends nothing for a password of twelve spaces or one under 12 characters, and says why', async () => {
+    await typeBoth(' '.repeat(12), ' '.repeat(12));
+    expect(mutate).not.toHaveBeenCalled();
+    expect(screen.getByLabelText('New password').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText('Use more than spaces')).toBeTruthy();
+  });
+
+  it('shows the minimum length the shared rule sets', () => {
+    render(<SetPasswordForm token={TOKEN} onDone={() => {}} />);
+    expect(screen.getByText('At least 12 characters.')).toBeTruthy();
+  });
 });

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { setPasswordSchema } from '../../../../shared/schemas/auth';
+import { PASSWORD_MIN_LENGTH, setPasswordSchema } from '../../../../shared/schemas/auth';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorMessage } from '@/components/ui/status';
@@ -22,7 +22,7 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
         type="password"
         autoComplete="new-password"
         {...field('password')}
-        hint="At least 10 characters."
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
         // eslint-disable-next-line jsx-a11y/no-autofocus -- this page has one job, so the cursor starts in its first field
         autoFocus
       />
