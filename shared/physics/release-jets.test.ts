@@ -136,7 +136,7 @@ describe('withJetSpeedScaled', () => {
   const worker = { x_m: 1, y_m: 0, z_m: 1 };
   it('makes the default jet explicit at the scaled speed, same nozzle and direction (for the ±2× sensitivity)', () => {
     const scaled = withJetSpeedScaled({ source: { x_m: 0, y_m: 0, z_m: 1, releaseType: 'high' as const }, worker }, 2);
-    expect(scaled.source.jet).toEqual({ speed_mPerS: 10, diameter_m: 0.05, direction: { x: 1, y: 0, z: 0 } });
+    expect((scaled.source as { jet?: unknown }).jet).toEqual({ speed_mPerS: 10, diameter_m: 0.05, direction: { x: 1, y: 0, z: 0 } });
   });
   it('leaves a quiet release alone and refuses a factor of zero', () => {
     const quiet = { source: { x_m: 0, y_m: 0, z_m: 1, releaseType: 'quiet' as const }, worker };
