@@ -9,7 +9,8 @@ export type RunningServer = { url: string; dbFile: string; proc: ChildProcess; o
 export async function startServer(env: Record<string, string> = {}, reuseDbFile?: string): Promise<RunningServer> {
   const dbFile = reuseDbFile ?? path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'motewalk-e2e-')), 'motewalk.sqlite');
   const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: { ...process.env, PORT: '0', DATABASE_FILE: dbFile, LOG_REQUESTS: '0', NODE_ENV: 'test', ...env },
+    // 10,000 particles per demo run keep seeding to seconds with engine 2.0 and still decide the no-control options.
+    env: { ...process.env, PORT: '0', DATABASE_FILE: dbFile, LOG_REQUESTS: '0', NODE_ENV: 'test', DEMO_PARTICLES: '10000', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
