@@ -1,5 +1,6 @@
 import type { RoundJet } from '../../shared/physics/round-jet';
 import { FATES } from '../../shared/vocabulary/fractions';
+import { GRAVITY_MPerS2 } from '../../shared/physics/constants';
 import type { ParticleArrays } from './release';
 import type { Xoshiro128 } from './rng';
 import { stepRule } from './step-rule';
@@ -48,6 +49,8 @@ export class Kernel {
   readonly normals = new Float64Array(NORMAL_BLOCK);
   readonly field = new Float64Array(8);
   readonly settling: Float64Array;
+  /** Relaxation time τ = V_TS/g per bin; bins with τ above the shortest step carry a velocity. */
+  readonly relaxation: Float64Array;
   /** Brownian diffusivity per bin; the room's eddy diffusivity grows with age on top (SCALAR.roomDiffusivity). */
   readonly brownian: Float64Array;
   /** Deposition velocity on walls, the extra on the floor beyond settling, and on the ceiling (Lai & Nazaroff), per bin. */
@@ -86,6 +89,8 @@ export class Kernel {
   ) {
     const rule = stepRule(p);
     this.settling = p.bins.settling_mPerS;
+    // The drag-corrected terminal speed is g·τ, so τ = V_TS/g keeps the two consistent (Hinds Eq. 3.20).
+    this.relaxation = p.bins.settling_mPerS.map((v) => v / GRAVITY_MPerS2);
     this.brownian = p.bins.brownianDiffusivity_m2PerS;
     this.wallVelocity = p.surfaces.wall_mPerS;
     this.floorExtraVelocity = p.surfaces.floorExtra_mPerS;
@@ -179,6 +184,9 @@ export function retire(k: Kernel, i: number, f: number): void {
   swap(a.release, i, last);
   swap(a.exhaustAt, i, last);
   swap(a.wallAt, i, last);
+  swap(a.ux, i, last);
+  swap(a.uy, i, last);
+  swap(a.uz, i, last);
   swap(a.bin, i, last);
   swap(a.slot, i, last);
   swap(k.ids, i, last);

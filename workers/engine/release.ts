@@ -11,6 +11,10 @@ export interface ParticleArrays {
   exhaustAt: Float64Array;
   /** When a particle meets a wall that a draft wraps through (a loss per volume), Infinity without. */
   wallAt: Float64Array;
+  /** Velocity of particles in bins that carry one (relaxation time above the shortest step); NaN until their first step. */
+  ux: Float64Array;
+  uy: Float64Array;
+  uz: Float64Array;
   bin: Int32Array;
   slot: Int32Array;
 }
@@ -34,6 +38,9 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
     release: new Float64Array(n),
     exhaustAt: new Float64Array(n),
     wallAt: new Float64Array(n).fill(Infinity),
+    ux: new Float64Array(n).fill(NaN),
+    uy: new Float64Array(n).fill(NaN),
+    uz: new Float64Array(n).fill(NaN),
     bin: new Int32Array(n),
     slot: new Int32Array(n).fill(-1),
   };

@@ -43,6 +43,10 @@ export function walk(k: Kernel, i: number): number {
   const lossAt = exhaustAt < wallAt ? exhaustAt : wallAt;
   const end = lossAt < duration ? lossAt : duration;
   const vs = k.settling[b];
+  const tau = k.relaxation[b];
+  let ux = a.ux[i];
+  let uy = a.uy[i];
+  let uz = a.uz[i];
   const brownian = k.brownian[b];
   const roomD = sc[SCALAR.roomDiffusivity];
   const lagrangian = sc[SCALAR.lagrangianTime];
@@ -84,6 +88,7 @@ export function walk(k: Kernel, i: number): number {
   const outerR2 = (R + zoneFloor_m) * (R + zoneFloor_m);
   const innerR2 = zoneFloor_m < R ? (R - zoneFloor_m) * (R - zoneFloor_m) : -1;
   const normalBlock = NORMAL_BLOCK | 0;
+  const inertial = tau > minStep_s ? 1 : 0;
   const sqrtPi = Math.sqrt(Math.PI);
   let n = k.normalIndex;
   let fate = -1;
@@ -123,7 +128,17 @@ export function walk(k: Kernel, i: number): number {
       dj = field[4];
     }
     const dMax = brownian + roomD + jetD;
-    const speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vz - vs);
+    let speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vz - vs);
+    if (inertial) {
+      // Released moving with the air it is thrown in: its own stop distance V·τ is what inertia adds.
+      if (ux !== ux) {
+        ux = vx;
+        uy = vy;
+        uz = vz - vs;
+      }
+      const own = Math.abs(ux) + Math.abs(uy) + Math.abs(uz);
+      if (own > speed) speed = own;
+    }
     const zoneLimit_m = stepFraction * d;
     const hoodLimit_m = driftFraction * dh;
     const jetLimit_m = stepFraction * dj;
@@ -142,7 +157,7 @@ export function walk(k: Kernel, i: number): number {
     const local = dh < dj ? dh : dj;
     // Air speeds up toward a face, so a start-of-step drift that already enters one is a capture;
     // otherwise the midpoint's (which may lie behind the face, where a flanged face draws nothing).
-    if (nh > 0 && faceEntered(hoods, nh, x, y, z, vx * dt, vy * dt, (vz - vs) * dt) >= 0) {
+    if (!inertial && nh > 0 && faceEntered(hoods, nh, x, y, z, vx * dt, vy * dt, (vz - vs) * dt) >= 0) {
       fate = FATE_CAPTURED;
       break;
     }
@@ -178,9 +193,24 @@ export function walk(k: Kernel, i: number): number {
       residence[tb * nBins + b] += dt;
     }
     if (a.slot[i] >= 0) recordFrames(k, a.slot[i], t, x, y, z);
-    const dx = vx * dt;
-    const dy = vy * dt;
-    const dz = (vz - vs) * dt;
+    let dx = vx * dt;
+    let dy = vy * dt;
+    let dz = (vz - vs) * dt;
+    if (inertial) {
+      // dv/dt = (u − v)/τ + g integrated exactly over the step with the air velocity u held at its
+      // midpoint value: v relaxes toward u − V_TS·ẑ (Hinds ch. 5), so large particles overshoot.
+      const decay = Math.exp(-dt / tau);
+      const lag = tau * (1 - decay);
+      const tx = vx;
+      const ty = vy;
+      const tz = vz - vs;
+      dx = tx * dt + (ux - tx) * lag;
+      dy = ty * dt + (uy - ty) * lag;
+      dz = tz * dt + (uz - tz) * lag;
+      ux = tx + (ux - tx) * decay;
+      uy = ty + (uy - ty) * decay;
+      uz = tz + (uz - tz) * decay;
+    }
     if (nh > 0 && faceEntered(hoods, nh, x, y, z, dx, dy, dz) >= 0) {
       fate = FATE_CAPTURED;
       break;
@@ -267,6 +297,9 @@ export function walk(k: Kernel, i: number): number {
   a.y[i] = y;
   a.z[i] = z;
   a.t[i] = t;
+  a.ux[i] = ux;
+  a.uy[i] = uy;
+  a.uz[i] = uz;
   return fate;
 }
 
