@@ -9,6 +9,19 @@ import { paths } from '@/config/paths';
 import { downloadCsv, toCsv } from '@/lib/csv';
 import { dateTime, sig } from '@/lib/format';
 import { useScenarios, type ScenarioFilters } from '@/features/scenarios/api/get-scenarios';
+import { fractionWord } from '@/features/scenarios/lib/fraction-word';
+
+// Both figures are of the limit's own fraction, named under each, so a respirable TWA never sits beside a % of an inhalable limit.
+function FractionFigure({ run, figure }: { run: ScenarioSummary['lastRun']; figure: string }) {
+  if (!run) return <span className="text-muted">not run</span>;
+  if (!run.limitFraction) return <span className="text-muted">no limit set</span>;
+  return (
+    <>
+      {figure}
+      <span className="block text-xs text-muted">{fractionWord(run.limitFraction)}</span>
+    </>
+  );
+}
 
 const COLUMNS: Column<ScenarioSummary>[] = [
   {
@@ -45,18 +58,18 @@ const COLUMNS: Column<ScenarioSummary>[] = [
       ),
   },
   {
-    key: 'respirableTwa',
-    header: 'Respirable 8-h TWA (mg/m³)',
+    key: 'twa',
+    header: "8-h TWA of the limit's fraction (mg/m³)",
     align: 'right',
     sortValue: () => 0,
-    render: (s) => sig(s.lastRun?.respirableTwa8h_mgPerM3),
+    render: (s) => <FractionFigure run={s.lastRun} figure={sig(s.lastRun?.twa8h_mgPerM3)} />,
   },
   {
     key: 'percentOfLimit',
     header: '% of limit',
     align: 'right',
     sortValue: () => 0,
-    render: (s) => percentText(s.lastRun?.percentOfLimit),
+    render: (s) => <FractionFigure run={s.lastRun} figure={percentText(s.lastRun?.percentOfLimit)} />,
   },
   {
     key: 'banner',
