@@ -42,7 +42,12 @@ describe('the scenario page after saving and approving, on a 390 px phone', () =
     await page.getByText('The latest saved run is out of date').waitFor();
 
     await page.getByRole('button', { name: /^▶ Run/ }).click();
-    await page.getByRole('button', { name: 'Save this run' }).click({ timeout: 120_000 });
+    // Focus follows the run: to its progress, then to what it produced.
+    const focused = () => page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? null);
+    await expect.poll(focused).toBe('Run progress');
+    await page.getByRole('button', { name: 'Save this run' }).waitFor({ timeout: 120_000 });
+    await expect.poll(focused).toBe('Results of this run');
+    await page.getByRole('button', { name: 'Save this run' }).click();
     await page.getByText('✓ Run saved').waitFor();
     await expect.poll(() => savedRunRows(page).count()).toBe(before + 1);
     expect(await page.getByText('The latest saved run is out of date').count()).toBe(0);

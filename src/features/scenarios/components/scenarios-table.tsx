@@ -128,7 +128,14 @@ function exportCsv(rows: ScenarioSummary[]) {
   downloadCsv('motewalk-scenarios.csv', toCsv(header, body));
 }
 
-export function ScenariosTable({ filters, onSortChange }: { filters: ScenarioFilters; onSortChange: (s: TableSort) => void }) {
+type Props = {
+  filters: ScenarioFilters;
+  onSortChange: (s: TableSort) => void;
+  /** What an empty list says: the page knows whether it offers filters and how a scenario is added there. */
+  empty: { title: string; hint: string };
+};
+
+export function ScenariosTable({ filters, onSortChange, empty }: Props) {
   const query = useScenarios({ pageSize: 200, ...filters });
   if (query.isPending) return <Spinner label="Loading scenarios…" />;
   if (query.error) return <ErrorMessage error={query.error} />;
@@ -154,7 +161,7 @@ export function ScenariosTable({ filters, onSortChange }: { filters: ScenarioFil
           onSortChange={onSortChange}
         />
       ) : (
-        <EmptyState title="No scenario matches these filters">Clear a filter, or open a workstation and add a scenario.</EmptyState>
+        <EmptyState title={empty.title}>{empty.hint}</EmptyState>
       )}
     </div>
   );
