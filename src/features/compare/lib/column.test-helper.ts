@@ -50,7 +50,7 @@ export function column(id: number, opts: Opts = {}): CompareColumn {
             series: { time_s: [0, 60], bands: { total: band, inhalable: band, thoracic: band, respirable: band } },
             fate: { emitted_mg: 100, shares: { captured: 0.5, settled: 0.2, exhausted: 0.2, airborne: 0.1 } },
             limit: verdict,
-            ratingName: 'Well controlled',
+            ratingName: 'Under half the limit',
           },
   };
 }
