@@ -1,4 +1,4 @@
-import { formatSig, readableNumber } from '../../../../shared/format/index';
+import { readableNumber } from '../../../../shared/format/index';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { decadeColumns, decadeRows, decadeTableCsv, decadeTableTsv } from '@/features/calculators/lib/decade-table';
@@ -71,7 +71,7 @@ export function DecadeTableView({ medium }: { medium: ParticleMedium }) {
                 </th>
                 {columns.map((c) => (
                   <td key={c.key} className="whitespace-nowrap px-2 py-2 text-right tabular-nums">
-                    {c.header.endsWith('(%)') ? formatSig(c.value(row), 3) : readableNumber(c.value(row))}
+                    {readableNumber(c.value(row))}
                   </td>
                 ))}
               </tr>
