@@ -3,6 +3,8 @@ import type { Conn } from '../db/knex';
 import type { ApprovalRow } from '../db/tables';
 import { approvalReview } from './review-rule';
 import { currentLimit, judgeStored } from '../verdicts/run-verdict';
+import type { VerdictNumbers } from '../verdicts/verdict-numbers';
+import { watchCause } from './watch-cause';
 
 export type CurrentApproval = Approval;
 
@@ -50,6 +52,7 @@ export async function currentApproval(db: Conn, workstationId: number, currentEn
   const review = approvalReview({ expired, outOfDate, runEngineVersion: a.run_engine_version }, currentEngineVersion);
   const limit = currentLimit(a.agent_data, a.scenario_input);
   const verdict = judgeStored(a.verdict_numbers, limit);
+  const numbers = a.verdict_numbers ? (JSON.parse(a.verdict_numbers) as VerdictNumbers) : null;
   const limitChanged = a.limit_mgPerM3 != null && (limit?.value_mgPerM3 !== a.limit_mgPerM3 || limit?.fraction !== a.limit_fraction);
   return {
     id: a.id,
@@ -79,6 +82,7 @@ export async function currentApproval(db: Conn, workstationId: number, currentEn
       ]
         .filter(Boolean)
         .join('; ') || null,
+    watchCause: watchCause(verdict, numbers?.captureVelocity),
   };
 }
 

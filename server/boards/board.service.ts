@@ -1,9 +1,10 @@
-import type { Banner, StationBoard } from '../../shared/schemas/workspace-views';
+import type { Banner, StationBoard, WatchCause } from '../../shared/schemas/workspace-views';
 import type { Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
 import { currentApproval } from '../approvals/approvals.repo';
 import { workstations } from '../places/places.repo';
 import { findScenario } from '../scenarios/scenarios.repo';
+import { boardAdvice } from './board-advice';
 
 // Operators get a banner they can act on: no valid assessment counts as Act, a stale one at least as Watch.
 function boardBanner(a: Awaited<ReturnType<typeof currentApproval>>): Banner {
@@ -12,37 +13,18 @@ function boardBanner(a: Awaited<ReturnType<typeof currentApproval>>): Banner {
   return a.banner;
 }
 
+// A Clear held at Watch because the assessment went stale says so, not that exposure is near the limit.
+function boardWatchCause(a: Awaited<ReturnType<typeof currentApproval>>, banner: Banner): WatchCause | null {
+  if (banner !== 'watch' || !a) return null;
+  return a.banner === 'clear' ? 'out-of-date' : (a.watchCause ?? 'near-limit');
+}
+
 function hoodDistance_m(input: {
   source: { x_m: number; y_m: number; z_m: number };
   hoods: { x_m: number; y_m: number; z_m: number }[];
 }): number | null {
   const d = input.hoods.map((h) => Math.hypot(h.x_m - input.source.x_m, h.y_m - input.source.y_m, h.z_m - input.source.z_m));
   return d.length ? Math.min(...d) : null;
-}
-
-function advice(banner: Banner, distance_cm: number | null, reason: string | null): string[] {
-  const distance = distance_cm
-    ? `Keep the work within ${distance_cm} cm of the hood face (the marked zone).`
-    : 'Keep the work where the assessment assumed it.';
-  if (banner === 'act') {
-    return [
-      reason ?? 'The dust controls here are not confirmed to work.',
-      'Do not start dusty work at this station until your supervisor says the controls are fixed or re-assessed.',
-      'Wear the respiratory protection you were issued if you are told to continue.',
-      'Report it to your supervisor now.',
-    ];
-  }
-  const base = [
-    'Switch the hood on before you start, and leave it on until the dust has cleared.',
-    distance,
-    'If the airflow indicator shows low or no flow, stop and report it.',
-  ];
-  return banner === 'watch'
-    ? [
-        ...base,
-        'Exposure here is close to the limit: follow these rules exactly and report any change in the job, the material or the layout.',
-      ]
-    : base;
 }
 
 export async function stationBoard(db: Db, workstationId: number): Promise<StationBoard> {
@@ -71,7 +53,8 @@ export async function stationBoard(db: Db, workstationId: number): Promise<Stati
     reviewDate: approval?.reviewDate ?? null,
     control: approval?.scenarioName ?? null,
     approvedAt: approval?.approvedAt ?? null,
-    advice: advice(banner, distance_cm, reason),
+    advice: boardAdvice(banner, distance_cm, reason, boardWatchCause(approval, banner)),
+    watchCause: boardWatchCause(approval, banner),
     checkedAt: new Date().toISOString(),
   };
 }

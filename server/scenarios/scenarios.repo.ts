@@ -13,6 +13,8 @@ const SORT: Record<ScenarioListQuery['sort'], string> = {
   status: 's.status',
   updatedAt: 's.updated_at',
   respirableTwa: 'lr.respirable_twa8h_mgPerM3',
+  // The TWA of the fraction the limit was judged on when the run was saved.
+  twa: 'lr.twa8h_mgPerM3',
   percentOfLimit: 'lr.percent_of_limit',
   banner: 'lr.banner',
 };

@@ -50,7 +50,7 @@ export async function uploadSizeProfile(
   if (!built.ok) {
     const count = built.issues.length;
     const issues = built.issues.map((i) => ({ path: 'file', ...i }));
-    throw new AppError(422, 'invalid_file', `The file was not stored: ${count} problem${count === 1 ? '' : 's'} found`, issues);
+    throw new AppError(422, 'invalid_file', `${count} problem${count === 1 ? '' : 's'} found in the file`, issues);
   }
   return store(db, actor, fields.name, built.value, { format: fields.format, fileName: file.originalname });
 }

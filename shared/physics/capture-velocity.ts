@@ -10,30 +10,31 @@ export interface CaptureVelocityRange {
 }
 
 // Use the lower end for quiet rooms, low toxicity, intermittent work and large hoods; the upper end otherwise.
+// The speed ranges are the published ones; the descriptions and examples are our own words.
 const RANGES: Record<ReleaseCondition, CaptureVelocityRange> = {
   quiet: {
     min_mPerS: 0.25,
     max_mPerS: 0.5,
-    description: 'Released with practically no velocity into quiet air',
-    examples: ['evaporation from tanks', 'degreasing'],
+    description: 'Leaves the source with next to no speed of its own, into still air',
+    examples: ['vapour rising off an open tank', 'parts drying after a solvent wash'],
   },
   low: {
     min_mPerS: 0.5,
     max_mPerS: 1.0,
-    description: 'Released at low velocity into moderately still air',
-    examples: ['container filling', 'slow conveyor transfer', 'welding'],
+    description: 'Leaves the source gently, into air that barely moves',
+    examples: ['scooping powder into a bin', 'a slow belt handing material on', 'welding fume'],
   },
   active: {
     min_mPerS: 1.0,
     max_mPerS: 2.5,
-    description: 'Active generation into a zone of rapid air motion',
-    examples: ['barrel filling', 'conveyor loading', 'crushing'],
+    description: 'Thrown out briskly, into air that moves quickly',
+    examples: ['tipping sacks into a hopper', 'the feed point of a loading belt', 'breaking lumps in a crusher'],
   },
   high: {
     min_mPerS: 2.5,
     max_mPerS: 10,
-    description: 'Released at high initial velocity into a zone of very rapid air motion',
-    examples: ['grinding', 'abrasive blasting'],
+    description: 'Flung out fast, into air that moves very quickly',
+    examples: ['grinding', 'blast-cleaning with grit'],
   },
 };
 

@@ -42,6 +42,9 @@ export type ScenarioSummary = {
   needsReview?: boolean;
 };
 
+/** Why a banner reads Watch, so the words can say it: near the limit, not decided yet, a hood too slow, or a stale assessment. */
+export type WatchCause = 'near-limit' | 'undecided' | 'capture-short' | 'out-of-date';
+
 export type Approval = {
   id: number;
   scenarioId: number;
@@ -62,6 +65,8 @@ export type Approval = {
   needsReview: boolean;
   /** Why it needs review, in words ("the engine has changed since this approval"); null when it does not. */
   reviewReason: string | null;
+  /** Why the approved run's verdict is Watch; null when it is not Watch. */
+  watchCause: WatchCause | null;
 };
 
 export type StationBoard = {
@@ -73,6 +78,8 @@ export type StationBoard = {
   control: string | null;
   approvedAt: string | null;
   advice: string[];
+  /** Why the banner reads Watch; null for Clear and Act. */
+  watchCause: WatchCause | null;
   checkedAt: string;
 };
 

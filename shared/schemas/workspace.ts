@@ -103,7 +103,7 @@ export const scenarioListQuerySchema = z.object({
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
   sort: z
-    .enum(['name', 'workstation', 'site', 'agent', 'status', 'updatedAt', 'respirableTwa', 'percentOfLimit', 'banner'])
+    .enum(['name', 'workstation', 'site', 'agent', 'status', 'updatedAt', 'respirableTwa', 'twa', 'percentOfLimit', 'banner'])
     .default('updatedAt'),
   order: z.enum(['asc', 'desc']).default('desc'),
   siteId: z.coerce.number().int().positive().optional(),

@@ -20,7 +20,8 @@ export const FORMATS: Record<UploadFormat, FormatInfo> = {
       'The last row is the backup filter: leave cut_point_um empty or write 0.',
       'Assumed: the top stage collects up to 2× its cut-point; the backup filter collects down to 0.1× the last cut-point.',
     ],
-    template: 'cut_point_um,mass_mg\n21.3,0.12\n14.8,0.31\n9.8,0.55\n6.0,0.72\n3.5,0.61\n1.55,0.33\n0.93,0.12\n,0.05\n',
+    // Cut-points halve from stage to stage: a generic set, not any one instrument's.
+    template: 'cut_point_um,mass_mg\n20,0.10\n10,0.30\n5,0.62\n2.5,0.70\n1.25,0.45\n0.63,0.18\n,0.06\n',
   },
   counter: {
     label: 'Optical counter bins',

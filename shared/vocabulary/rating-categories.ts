@@ -1,10 +1,14 @@
 import type { ExposureRating } from '../physics/exposure';
 
-// AIHA exposure rating category names and bands, on the 95th percentile as a share of the OEL.
+/**
+ * Exposure rating categories 0–4 and their bands on the 95th percentile as a share of the OEL, from AIHA,
+ * "A Strategy for Assessing and Managing Occupational Exposures", 4th ed. (band edges from memory). The short
+ * names are our own plain words, not the book's.
+ */
 export const RATING_LABEL: Record<ExposureRating, { name: string; band: string }> = {
-  0: { name: 'Trivial', band: 'below 1 % of the limit' },
-  1: { name: 'Highly controlled', band: '1–10 % of the limit' },
-  2: { name: 'Well controlled', band: '10–50 % of the limit' },
-  3: { name: 'Controlled', band: '50–100 % of the limit' },
-  4: { name: 'Poorly controlled', band: 'above the limit' },
+  0: { name: 'Far below the limit', band: 'below 1 % of the limit' },
+  1: { name: 'Well below the limit', band: '1–10 % of the limit' },
+  2: { name: 'Under half the limit', band: '10–50 % of the limit' },
+  3: { name: 'Near the limit', band: '50–100 % of the limit' },
+  4: { name: 'Over the limit', band: 'above the limit' },
 };

@@ -54,6 +54,16 @@ describe('the particle calculator', () => {
     await shot(page, 'calculators-particle');
   });
 
+  it('shows the whole decade table at 1440 px without scrolling it sideways', async () => {
+    await page.setViewportSize({ width: 1440, height: 900 });
+    const region = page.getByRole('region', { name: 'Decade table, scrolls sideways' });
+    await region.waitFor();
+    const { scroll, client } = await region.evaluate((el) => ({ scroll: el.scrollWidth, client: el.clientWidth }));
+    expect(scroll).toBeLessThanOrEqual(client);
+    await shot(page, 'calculators-decade-table-1440');
+    await page.setViewportSize({ width: 1280, height: 860 });
+  });
+
   it('copies the decade table and downloads it as CSV with units in the headers', async () => {
     await page.getByRole('button', { name: 'Copy table' }).click();
     await expect.poll(() => page.getByTestId('copy-status').textContent()).toMatch(/Copied|did not allow/);

@@ -52,6 +52,15 @@ describe('approving a control and what the operator sees', () => {
     await expect.poll(() => banner.textContent()).toMatch(/Watch/);
     expect(await operator.getByText('Flanged hood', { exact: true }).count()).toBe(1);
     await expect.poll(() => operator.getByRole('listitem').filter({ hasText: 'Switch the hood on before you start' }).count()).toBe(1);
+    // Watch here is the capture-velocity shortfall, not exposure near the limit, and the board says which.
+    await expect.poll(() => operator.getByText('The hood may be too weak here: follow the rules exactly').count()).toBe(1);
+    expect(
+      await operator
+        .getByRole('listitem')
+        .filter({ hasText: /draws less air at the work than this kind of dust release needs/ })
+        .count(),
+    ).toBe(1);
+    expect(await operator.getByText(/close to the limit/i).count()).toBe(0);
     await operator.setViewportSize({ width: 820, height: 1180 });
     await shot(operator, 'decisions-board-watch-tablet');
     await operator.close();

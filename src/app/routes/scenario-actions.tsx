@@ -39,6 +39,8 @@ export function ScenarioActions({ scenario, draft, dirty, valid, onSaved, onRelo
           name: draft.name,
           agentId: draft.agentId,
           sizeProfileId: draft.sizeProfileId,
+          controlTier: draft.controlTier,
+          controlDescription: draft.controlDescription,
           input: scenarioSchema.parse(draft.input),
         },
       },

@@ -1,8 +1,15 @@
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
 import { Can } from '@/components/can';
+import { auditKeys } from '@/features/audit/api/get-audit';
 import { ApproveForm } from '@/features/decisions/components/approve-form';
 import { ShareForm } from '@/features/decisions/components/share-form';
+import { boardKeys } from '@/features/station-board/api/get-boards';
+import { placeKeys } from '@/features/places/api/get-sites';
+import { scenarioKeys } from '@/features/scenarios/api/get-scenarios';
 import { SavedRuns } from '@/features/scenarios/components/saved-runs';
+
+// The scenario and every list of scenarios, the workstation pages, the operators' boards and the audit trail.
+const AFTER_APPROVAL = [scenarioKeys.all, placeKeys.all, boardKeys.all, auditKeys.all] as const;
 
 export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
   const latest = scenario.runs[0];
@@ -23,7 +30,10 @@ export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
               ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${scenario.approval.reviewDate}.`
               : 'Nothing is approved at this station yet.'}
           </p>
+          {/* Keyed by run: a newly saved run brings its own suggested review date. */}
           <ApproveForm
+            key={latest?.id ?? 'no run'}
+            refresh={AFTER_APPROVAL}
             scenarioId={scenario.id}
             run={latest ? { id: latest.id, banner: latest.banner, outOfDate: latest.outOfDate } : null}
           />

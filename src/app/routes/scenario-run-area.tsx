@@ -3,8 +3,11 @@ import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
 import { Button } from '@/components/ui/button';
 import { ErrorMessage, Notice } from '@/components/ui/status';
 import type { RunResult } from '../../../shared/schemas/run-result';
+import { auditKeys } from '@/features/audit/api/get-audit';
 import { useSaveRun } from '@/features/scenarios/api/save-run';
 import { RunPanel } from '@/features/scenarios/components/run-panel';
+
+const AUDIT = [auditKeys.all] as const;
 
 type Fresh = { result: RunResult; input: Scenario } | null;
 
@@ -21,7 +24,8 @@ export function ScenarioRunArea({
   fresh: Fresh;
   onFresh: (f: Fresh) => void;
 }) {
-  const save = useSaveRun();
+  // "Run by" on the report comes from the audit trail.
+  const save = useSaveRun(AUDIT);
   return (
     <section aria-labelledby="run-heading" className="mt-8 space-y-3">
       <h2 id="run-heading">Run</h2>

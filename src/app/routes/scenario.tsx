@@ -1,5 +1,5 @@
 import { captureCheck } from '../../../shared/physics/capture-verdict';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { can } from '../../../shared/auth/permissions';
 import { scenarioSchema, type Scenario, type ScenarioInput } from '../../../shared/schemas/scenario';
@@ -12,18 +12,36 @@ import { paths } from '@/config/paths';
 import { useAgents } from '@/features/agents/api/get-agents';
 import { useScenario } from '@/features/scenarios/api/get-scenario';
 import { RunResults } from '@/features/run-results/components/run-results';
+import { ControlFields } from '@/features/scenario-editor/components/control-fields';
 import { ScenarioEditor } from '@/features/scenario-editor/components/scenario-editor';
+import { UnsavedChangesGuard } from '@/features/scenario-editor/components/unsaved-changes-guard';
+import { tierAfterEdit, tierOf } from '@/features/scenario-editor/lib/control-tier';
 import { useSizeProfileOptions } from '@/features/size-profiles/api/use-size-profile-options';
 import { useUser } from '@/lib/auth';
 import type { RunResult } from '../../../shared/schemas/run-result';
+import type { ControlTier } from '../../../shared/vocabulary/control-tiers';
 import { agentLimit, withVerdict } from '../../../shared/verdict/index';
 import { ScenarioActions } from './scenario-actions';
 import { ScenarioRecords } from './scenario-records';
 import { ScenarioRunArea } from './scenario-run-area';
 
-export type Draft = { input: ScenarioInput; name: string; agentId: number | null; sizeProfileId: number | null };
+export type Draft = {
+  input: ScenarioInput;
+  name: string;
+  agentId: number | null;
+  sizeProfileId: number | null;
+  controlTier: ControlTier;
+  controlDescription: string;
+};
 
-const fromDetail = (s: ScenarioDetail): Draft => ({ input: s.input, name: s.name, agentId: s.agentId, sizeProfileId: s.sizeProfileId });
+const fromDetail = (s: ScenarioDetail): Draft => ({
+  input: s.input,
+  name: s.name,
+  agentId: s.agentId,
+  sizeProfileId: s.sizeProfileId,
+  controlTier: tierOf(s.controlTier),
+  controlDescription: s.controlDescription,
+});
 
 export function ScenarioRoute() {
   const id = Number(useParams().id);
@@ -35,12 +53,17 @@ export function ScenarioRoute() {
 }
 
 function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
+  // The draft edits against `base`; runs, status and approval are the server's and follow the live query, so a
+  // saved run or an approval shows at once without touching the draft.
+  const live = useScenario(initial.id).data ?? initial;
   const user = useUser().data;
   const agents = useAgents().data?.items ?? [];
   const profiles = useSizeProfileOptions();
   const [draft, setDraft] = useState<Draft>(() => fromDetail(initial));
   const [base, setBase] = useState<ScenarioDetail>(initial);
   const [fresh, setFresh] = useState<{ result: RunResult; input: Scenario } | null>(null);
+  const results = useRef<HTMLDivElement>(null);
+  const shown: ScenarioDetail = { ...base, runs: live.runs, status: live.status, approval: live.approval, lastRun: live.lastRun };
   const parsed = useMemo(() => scenarioSchema.safeParse(draft.input), [draft]);
   const readOnly = !can(user?.role, 'scenarios:write');
   const dirty = JSON.stringify(fromDetail(base)) !== JSON.stringify(draft);
@@ -51,6 +74,10 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
       fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data), { captureVelocity: captureCheck(fresh.input)?.verdict }) : null,
     [fresh, agent],
   );
+  // After a run the reader's place moves to what it produced.
+  useEffect(() => {
+    if (fresh) results.current?.focus();
+  }, [fresh]);
 
   return (
     <Page
@@ -60,18 +87,20 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
           <Link className="underline" to={paths.workstation(base.workstationId)}>
             {base.workstationName}
           </Link>{' '}
-          · {base.siteName} · {base.status === 'approved' ? '★ approved as the current control' : 'draft'} · version {base.version}
-          {base.lastRun && (
+          · {base.siteName} ·{' '}
+          <span data-testid="scenario-status">{shown.status === 'approved' ? '★ approved as the current control' : 'draft'}</span> · version{' '}
+          {base.version}
+          {shown.lastRun && (
             <>
               {' '}
-              · last run <BannerBadge banner={base.lastRun.banner} />
+              · last run <BannerBadge banner={shown.lastRun.banner} />
             </>
           )}
         </>
       }
       actions={
         <ScenarioActions
-          scenario={base}
+          scenario={shown}
           draft={draft}
           dirty={dirty}
           valid={parsed.success}
@@ -86,25 +115,33 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
         />
       }
     >
-      {base.approval?.needsReview && (
+      <UnsavedChangesGuard dirty={dirty && !readOnly} />
+      {shown.approval?.needsReview && (
         <p role="status" className="mb-4 rounded-md border-2 border-watch bg-watch-soft p-3 text-sm font-semibold text-watch">
-          ⟳ Needs review: {base.approval.reviewReason ?? "the station's approval is due for a look"}.
+          ⟳ Needs review: {shown.approval.reviewReason ?? "the station's approval is due for a look"}.
         </p>
       )}
       {!readOnly && (
-        <label className="mb-4 block max-w-md text-sm font-semibold">
-          Scenario name
-          <input
-            className="mt-1 w-full rounded-md border border-line bg-white px-3 py-2"
-            value={draft.name}
-            onChange={(e) => setDraft({ ...draft, name: e.target.value })}
+        <div className="mb-6 flex max-w-3xl flex-col gap-4">
+          <label className="block max-w-md text-sm font-semibold">
+            Scenario name
+            <input
+              className="mt-1 w-full rounded-md border border-line bg-white px-3 py-2"
+              value={draft.name}
+              onChange={(e) => setDraft({ ...draft, name: e.target.value })}
+            />
+          </label>
+          <ControlFields
+            tier={draft.controlTier}
+            description={draft.controlDescription}
+            onChange={({ tier, description }) => setDraft((d) => ({ ...d, controlTier: tier, controlDescription: description }))}
           />
-        </label>
+        </div>
       )}
       {readOnly && <Notice>You can read this scenario and its saved runs; only engineers change or run it.</Notice>}
       <ScenarioEditor
         value={draft.input}
-        onChange={(input) => setDraft((d) => ({ ...d, input }))}
+        onChange={(input) => setDraft((d) => ({ ...d, input, controlTier: tierAfterEdit(d.controlTier, d.input, input) }))}
         agents={agents}
         agentId={draft.agentId}
         onAgentChange={(agentId) => setDraft((d) => ({ ...d, agentId }))}
@@ -117,14 +154,21 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
         <ScenarioRunArea scenario={base} input={parsed.success ? parsed.data : null} dirty={dirty} fresh={fresh} onFresh={setFresh} />
       </Can>
       {fresh && (
-        <RunResults
-          result={judged ?? fresh.result}
-          scenario={fresh.input}
-          agentName={agent?.name}
-          limitSource={fresh.input.limit?.source}
-        />
+        <div
+          ref={results}
+          tabIndex={-1}
+          aria-label="Results of this run"
+          className="outline-none focus-visible:ring-2 focus-visible:ring-accent"
+        >
+          <RunResults
+            result={judged ?? fresh.result}
+            scenario={fresh.input}
+            agentName={agent?.name}
+            limitSource={fresh.input.limit?.source}
+          />
+        </div>
       )}
-      <ScenarioRecords scenario={base} />
+      <ScenarioRecords scenario={shown} />
     </Page>
   );
 }

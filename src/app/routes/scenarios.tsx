@@ -21,6 +21,10 @@ export function ScenariosRoute() {
 
   const value: FilterValue = { q: params.get('q') ?? undefined, status: (params.get('status') as FilterValue['status']) ?? undefined };
   for (const k of NUMERIC) if (params.get(k)) value[k] = Number(params.get(k));
+  const filtered = Object.values(value).some((v) => v !== undefined && v !== '');
+  const empty = filtered
+    ? { title: 'No scenario matches these filters', hint: 'Clear a filter to see more.' }
+    : { title: 'No scenarios yet', hint: 'Open a workstation and add an option there.' };
   const sort = params.get('sort') ?? 'updatedAt';
   const order = (params.get('order') as 'asc' | 'desc') ?? 'desc';
 
@@ -36,7 +40,7 @@ export function ScenariosRoute() {
   return (
     <Page
       title="Scenarios"
-      intro="Each scenario is one workstation with its controls and dust. The last saved run gives the respirable 8-h TWA and the banner; a run made before the scenario changed is marked out of date."
+      intro="Each scenario is one workstation with its controls and dust. The last saved run gives the 8-h TWA and % of limit of the limit's own fraction, and the banner; a run made before the scenario changed is marked out of date."
       actions={
         <Can permission="scenarios:write">
           <Link to={paths.places} className="rounded-md bg-accent px-4 py-2 text-sm font-semibold text-white hover:bg-accent-strong">
@@ -52,7 +56,7 @@ export function ScenariosRoute() {
         value={value}
         onChange={(v) => update({ q: v.q, status: v.status, siteId: v.siteId, workstationId: v.workstationId, agentId: v.agentId })}
       />
-      <ScenariosTable filters={{ ...value, sort, order }} onSortChange={(s) => update({ sort: s.key, order: s.dir })} />
+      <ScenariosTable filters={{ ...value, sort, order }} empty={empty} onSortChange={(s) => update({ sort: s.key, order: s.dir })} />
       <Cautions />
     </Page>
   );

@@ -33,7 +33,15 @@ export function WorkstationRoute() {
   const addOption = () => {
     const input = scenarioSchema.parse(defaultScenario(workstationGeometry(w)));
     create.mutate(
-      { workstationId: w.id, agentId: null, sizeProfileId: null, name: 'New option', controlDescription: '', controlTier: 'none', input },
+      {
+        workstationId: w.id,
+        agentId: null,
+        sizeProfileId: null,
+        name: 'New option',
+        controlDescription: '',
+        controlTier: input.hoods.length ? 'engineering' : 'none',
+        input,
+      },
       { onSuccess: (s) => navigate(paths.scenario(s.id)) },
     );
   };
@@ -73,7 +81,11 @@ export function WorkstationRoute() {
       )}
       {create.error && <ErrorMessage error={create.error} />}
       <h2 className="mb-2">Options at this workstation</h2>
-      <ScenariosTable filters={{ workstationId: w.id, sort: sort.key, order: sort.dir }} onSortChange={setSort} />
+      <ScenariosTable
+        filters={{ workstationId: w.id, sort: sort.key, order: sort.dir }}
+        onSortChange={setSort}
+        empty={{ title: 'No options at this workstation yet', hint: 'Add an option to describe its controls and run it.' }}
+      />
       <Cautions />
     </Page>
   );

@@ -12,7 +12,9 @@ export function getAudit(f: AuditFilters) {
   return apiFetch<Page<AuditEntry>>(`${api.audit}?${p}`);
 }
 
+export const auditKeys = { all: ['audit'] as const, list: (f: AuditFilters) => ['audit', f] as const };
+
 export const auditQueryOptions = (f: AuditFilters) =>
-  queryOptions({ queryKey: ['audit', f], queryFn: () => getAudit(f), placeholderData: keepPreviousData });
+  queryOptions({ queryKey: auditKeys.list(f), queryFn: () => getAudit(f), placeholderData: keepPreviousData });
 
 export const useAudit = (f: AuditFilters) => useQuery(auditQueryOptions(f));

@@ -16,12 +16,15 @@ export function CalculatorLayout({
   formColumn,
   form,
   results,
+  wide,
 }: {
   title: string;
   intro: string;
   formColumn: keyof typeof FORM_COLUMN;
   form: ReactNode;
   results: ReactNode;
+  /** Below form and results at the page's full width: for tables too wide for the results column. */
+  wide?: ReactNode;
 }) {
   return (
     <Page title={title} intro={intro}>
@@ -29,6 +32,7 @@ export function CalculatorLayout({
         {form}
         <div className="min-w-0 space-y-6">{results ?? <InvalidInputs />}</div>
       </div>
+      {wide && <div className="mt-8 min-w-0">{wide}</div>}
       <Cautions />
     </Page>
   );

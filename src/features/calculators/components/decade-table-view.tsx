@@ -1,4 +1,4 @@
-import { formatSig, readableNumber } from '../../../../shared/format/index';
+import { readableNumber } from '../../../../shared/format/index';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { decadeColumns, decadeRows, decadeTableCsv, decadeTableTsv } from '@/features/calculators/lib/decade-table';
@@ -53,11 +53,11 @@ export function DecadeTableView({ medium }: { medium: ParticleMedium }) {
           <caption className="sr-only">Particle properties at each decade of diameter, same air and density as above</caption>
           <thead className="bg-paper-deep text-left">
             <tr>
-              <th scope="col" className="px-3 py-2 font-semibold">
+              <th scope="col" className="px-2 py-2 font-semibold">
                 Diameter
               </th>
               {columns.map((c) => (
-                <th key={c.key} scope="col" className="px-3 py-2 text-right align-bottom font-semibold">
+                <th key={c.key} scope="col" className="px-2 py-2 text-right align-bottom font-semibold">
                   {c.header}
                 </th>
               ))}
@@ -66,12 +66,12 @@ export function DecadeTableView({ medium }: { medium: ParticleMedium }) {
           <tbody>
             {rows.map((row) => (
               <tr key={row.diameter_m} className="border-t border-line">
-                <th scope="row" className="whitespace-nowrap px-3 py-2 text-left font-semibold">
+                <th scope="row" className="whitespace-nowrap px-2 py-2 text-left font-semibold">
                   {diameterTick(row.diameter_m)}
                 </th>
                 {columns.map((c) => (
-                  <td key={c.key} className="whitespace-nowrap px-3 py-2 text-right tabular-nums">
-                    {c.header.endsWith('(%)') ? formatSig(c.value(row), 3) : readableNumber(c.value(row))}
+                  <td key={c.key} className="whitespace-nowrap px-2 py-2 text-right tabular-nums">
+                    {readableNumber(c.value(row))}
                   </td>
                 ))}
               </tr>

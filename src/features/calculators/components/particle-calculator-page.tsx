@@ -53,10 +53,10 @@ export function ParticleCalculatorPage() {
             <Suspense fallback={<Spinner label="Drawing the chart…" />}>
               <ParticleChart medium={results.medium} crossover_m={results.crossover_m} diameter_m={results.particle.diameter_m} />
             </Suspense>
-            <DecadeTableView medium={results.medium} />
           </>
         ) : null
       }
+      wide={results ? <DecadeTableView medium={results.medium} /> : null}
     />
   );
 }

@@ -43,9 +43,17 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
             {Math.round(airflow_m3PerH(best.totalAirflow_m3PerS))} m³/h.
           </>
         ) : (
-          <>None of these options meets the target on the upper 95 % bound of its 8-h TWA.</>
+          <>None of these options meets the target on its verdict.</>
         )}
       </p>
+      {best?.controlTier === 'none' && (
+        <p role="note" data-testid="no-control-meets" className="mb-3 rounded-md border border-watch bg-watch-soft p-3 text-sm text-ink">
+          <span aria-hidden="true">! </span>
+          <strong>{best.name}</strong> has no control, and it is the option that meets the target: as entered, the task reaches it without
+          local exhaust. The columns still follow the hierarchy of controls, so it stands last. Check the emission and the room before
+          deciding against a control, and confirm with personal air sampling.
+        </p>
+      )}
       <ComparisonTable columns={columns} fraction={fraction} target={target} bestId={bestId} />
       <ul className="mt-3 list-disc space-y-1 pl-5 text-xs text-muted">
         <li>
@@ -58,8 +66,9 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
           √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own.
         </li>
         <li>
-          The target is judged on the upper 95 % bound of the 8-h TWA of the limit's fraction; among options that meet it, the one with the
-          least total hood airflow is marked.
+          The target is judged as the banner is, on the verdict: the daily 95th percentile (from the upper 95 % bound of the 8-h TWA of the
+          limit's fraction) must lie below it. A run that has not decided, or a hood below half its capture velocity, meets no target. Among
+          options that meet it, the one with the least total hood airflow is marked.
         </li>
       </ul>
       <section aria-labelledby="chart-heading" className="mt-8">

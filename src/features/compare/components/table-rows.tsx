@@ -6,7 +6,7 @@ import { compareMeans } from '@/features/compare/lib/differ';
 import { roughFanPower_W } from '@/features/compare/lib/fan-power';
 import { airflow_m3PerH, fanPowerText, hoodText, plain, share } from '@/features/compare/lib/labels';
 import { estimateOf } from '@/features/compare/lib/reference';
-import { meetsTarget, type Target } from '@/features/compare/lib/target';
+import { meetsTarget, shortfall, type Target } from '@/features/compare/lib/target';
 import { TABLE_FRACTIONS, type CompareColumn } from '@/features/compare/lib/types';
 
 export interface RowSpec {
@@ -199,7 +199,7 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
           </span>
         ) : (
           <span>
-            <span aria-hidden="true">✕ </span>No
+            <span aria-hidden="true">✕ </span>No<Sub>{shortfall(c, target)}</Sub>
           </span>
         ),
     },

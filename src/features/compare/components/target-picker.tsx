@@ -6,7 +6,7 @@ export function TargetPicker({ value, onChange }: { value: Target; onChange: (id
   const name = useId();
   return (
     <fieldset className="flex flex-wrap items-center gap-2 text-sm">
-      <legend className="mb-1 font-semibold">Target for the upper 95 % bound of the 8-h TWA</legend>
+      <legend className="mb-1 font-semibold">Target for the daily 95th percentile (as the banner judges it)</legend>
       {TARGETS.map((t) => (
         <label
           key={t.id}

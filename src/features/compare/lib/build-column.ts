@@ -21,10 +21,10 @@ export interface RunLike {
 }
 
 // Stored inputs are parsed scenarios, so a source and hoods that are there are whole.
-function captureSentence(input: { hoods?: HoodFigures[]; source?: object }): string | null {
-  if (!input.source || !input.hoods?.length) return null;
+function capture(input: { hoods?: HoodFigures[]; source?: object }): Pick<CompareColumn, 'capture' | 'captureVelocity'> {
+  if (!input.source || !input.hoods?.length) return { capture: null, captureVelocity: null };
   const check = captureCheck(input as unknown as { source: Scenario['source']; hoods: CaptureHood[] });
-  return check?.sentence ?? 'No release type is given for the source.';
+  return { capture: check?.sentence ?? 'No release type is given for the source.', captureVelocity: check?.verdict ?? null };
 }
 
 // The hoods the run simulated, when there is one, so airflow and exposure describe the same set-up.
@@ -46,7 +46,7 @@ export function buildColumn(scenario: ScenarioLike, run: RunLike | null, figures
       faceHeight_m,
     })),
     totalAirflow_m3PerS: hoods.reduce((sum, h) => sum + h.airflow_m3PerS, 0),
-    capture: captureSentence(setup),
+    ...capture(setup),
     run: run && figures ? { ...figures, id: run.id, createdAt: run.createdAt, outOfDate: run.outOfDate } : null,
   };
 }

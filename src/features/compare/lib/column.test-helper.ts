@@ -1,14 +1,32 @@
+import { judgeRun } from '../../../../shared/verdict/index';
+import type { CaptureVerdictWord } from '../../../../shared/physics/capture-verdict';
 import type { CompareColumn, Ci } from './types';
 
 const band = { mean: [0, 1], lo: [0, 0.5], hi: [0, 1.5] };
 
-/** A column whose every fraction has the given respirable 8-h TWA and 95 % interval; limit 0.025 mg/m³ respirable. */
-export function column(
-  id: number,
-  opts: { name?: string; tier?: CompareColumn['controlTier']; airflow_m3PerS?: number; twa?: number; ci?: Ci; run?: boolean } = {},
-): CompareColumn {
+type Opts = {
+  name?: string;
+  tier?: CompareColumn['controlTier'];
+  airflow_m3PerS?: number;
+  twa?: number;
+  ci?: Ci;
+  run?: boolean;
+  captureVelocity?: CaptureVerdictWord;
+  zoneHistories?: number;
+};
+
+/**
+ * A column whose every fraction has the given respirable 8-h TWA and 95 % interval; limit 0.025 mg/m³ respirable
+ * (ACGIH TLV for respirable crystalline silica), judged by the shared verdict as the server judges a stored run.
+ */
+export function column(id: number, opts: Opts = {}): CompareColumn {
   const twa = opts.twa ?? 0.01;
   const ci = opts.ci ?? [twa * 0.9, twa * 1.1];
+  const verdict = judgeRun(
+    { twa8h_mgPerM3: twa, twa8hCi95_mgPerM3: ci, zoneHistories: opts.zoneHistories ?? 5000, histories: 40000 },
+    { fraction: 'respirable', value_mgPerM3: 0.025 },
+    { captureVelocity: opts.captureVelocity },
+  );
   const fraction = { twa8h_mgPerM3: twa, twa8hCi95_mgPerM3: ci, peak15min_mgPerM3: 2 * twa };
   const airflow = opts.airflow_m3PerS ?? 0;
   return {
@@ -20,6 +38,7 @@ export function column(
     controlDescription: airflow > 0 ? 'Hood' : 'No local exhaust',
     hoods: airflow > 0 ? [{ kind: 'flanged', airflow_m3PerS: airflow, faceWidth_m: 0.4, faceHeight_m: 0.3 }] : [],
     totalAirflow_m3PerS: airflow,
+    captureVelocity: opts.captureVelocity ?? null,
     run:
       opts.run === false
         ? null
@@ -30,15 +49,8 @@ export function column(
             fractions: { total: fraction, inhalable: fraction, thoracic: fraction, respirable: fraction },
             series: { time_s: [0, 60], bands: { total: band, inhalable: band, thoracic: band, respirable: band } },
             fate: { emitted_mg: 100, shares: { captured: 0.5, settled: 0.2, exhausted: 0.2, airborne: 0.1, walls: 0 } },
-            limit: {
-              fraction: 'respirable',
-              value_mgPerM3: 0.025,
-              percentOfLimit: (100 * twa) / 0.025,
-              percentOfLimitUpper: (100 * ci[1]) / 0.025,
-              ratingCategory: 2,
-              banner: 'clear',
-            },
-            ratingName: 'Well controlled',
+            limit: verdict,
+            ratingName: 'Under half the limit',
           },
   };
 }

@@ -1,3 +1,4 @@
+import type { CaptureVerdictWord } from '../../../../shared/physics/capture-verdict';
 import type { Banner, ExposureRating } from '../../../../shared/physics/index';
 import type { ControlTier } from '../../../../shared/schemas/workspace';
 import type { Fate, Fraction } from '../../../../shared/vocabulary/fractions';
@@ -16,6 +17,10 @@ export interface RunFigures {
     percentOfLimitUpper: number;
     ratingCategory: ExposureRating;
     banner: Banner;
+    /** The verdict's daily 95th percentile (from the interval's upper bound) and whether the run has decided (shared/verdict). */
+    p95_mgPerM3?: number;
+    decided?: boolean;
+    reasons?: string[];
   };
   /** Words for the rating category, supplied by whoever computed the figures. */
   ratingName?: string;
@@ -40,6 +45,8 @@ export interface CompareColumn {
   totalAirflow_m3PerS: number;
   /** The hand-calculated capture speed at the source against the release type's range, in words; null without a hood. */
   capture?: string | null;
+  /** The same check as one word; "below-half" keeps the verdict from Clear. */
+  captureVelocity?: CaptureVerdictWord | null;
   run: (RunFigures & { id: number; createdAt: string; outOfDate: boolean }) | null;
 }
 

@@ -1,3 +1,4 @@
+import type { QueryKey } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { reviewDueDate, reviewMonthsFor } from '../../../../shared/approval/review-date';
 import type { Banner } from '../../../../shared/schemas/workspace-views';
@@ -10,13 +11,16 @@ import { useApprove } from '@/features/decisions/api/approve';
 export function ApproveForm({
   scenarioId,
   run,
+  refresh,
 }: {
   scenarioId: number;
   run: { id: number; banner: Banner | null; outOfDate: boolean } | null;
+  /** Queries an approval makes stale. */
+  refresh: readonly QueryKey[];
 }) {
   const [note, setNote] = useState('');
   const [reviewDate, setReviewDate] = useState(() => reviewDueDate(run?.banner ?? null, new Date()));
-  const approve = useApprove();
+  const approve = useApprove(refresh);
   if (!run) return <p className="text-sm text-muted">Save a run of this scenario before approving it.</p>;
   if (run.outOfDate)
     return <p className="text-sm text-watch">⟳ The latest saved run is out of date: run and save again before approving.</p>;

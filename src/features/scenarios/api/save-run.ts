@@ -1,4 +1,4 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { toJsonFriendly } from '../../../../shared/schemas/runs';
 import type { SavedRun } from '../../../../shared/schemas/workspace-views';
@@ -19,7 +19,11 @@ export const saveRun = ({
 }) =>
   apiFetch<SavedRun>(api.scenarioRuns(scenarioId), { method: 'POST', body: { scenarioVersion, input, result: toJsonFriendly(result) } });
 
-export function useSaveRun() {
+/** A saved run changes the scenario's detail and lists; \`also\` names other features' queries it makes stale (the audit trail). */
+export function useSaveRun(also: readonly QueryKey[] = []) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: saveRun, onSuccess: () => qc.invalidateQueries({ queryKey: scenarioKeys.all }) });
+  return useMutation({
+    mutationFn: saveRun,
+    onSuccess: () => Promise.all([scenarioKeys.all, ...also].map((queryKey) => qc.invalidateQueries({ queryKey }))),
+  });
 }

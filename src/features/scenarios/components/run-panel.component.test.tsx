@@ -82,6 +82,12 @@ describe('run panel', () => {
     await waitFor(() => expect(progressBar()?.getAttribute('aria-valuenow')).toBe('42'));
   });
 
+  it('moves focus from the disabled Run button to the progress while running', async () => {
+    await startRun();
+    await waitFor(() => expect(document.activeElement?.getAttribute('aria-label')).toBe('Run progress'));
+    expect(document.activeElement?.contains(progressBar())).toBe(true);
+  });
+
   it('when done hands the result on and is ready to run again', async () => {
     const { onResult } = await startRun();
     await act(async () => lastRun().resolve(fakeResult));

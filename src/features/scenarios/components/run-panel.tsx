@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { RunResult } from '../../../../shared/schemas/run-result';
 import { Button } from '@/components/ui/button';
@@ -9,6 +10,12 @@ import { runSimulation } from '@/lib/simulation-bridge';
 export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: RunResult, input: Scenario) => void }) {
   const run = useEngineRun<RunResult>(RUN_START);
   const state = run.state;
+  const progress = useRef<HTMLDivElement>(null);
+  const running = state.phase === 'running';
+  // The Run button is disabled while running, so focus would fall to the page: it goes to the progress instead.
+  useEffect(() => {
+    if (running) progress.current?.focus();
+  }, [running]);
 
   async function start() {
     if (!scenario) return;
@@ -16,7 +23,6 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
     if (result) onResult(result, scenario);
   }
 
-  const running = state.phase === 'running';
   const pct = running ? Math.round(state.progress.fraction * 100) : 0;
   return (
     <section aria-label="Run the simulation" className="rounded-lg border border-line bg-white p-4">
@@ -37,7 +43,12 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
         )}
       </div>
       {running && (
-        <div className="mt-3">
+        <div
+          ref={progress}
+          tabIndex={-1}
+          aria-label="Run progress"
+          className="mt-3 outline-none focus-visible:ring-2 focus-visible:ring-accent"
+        >
           <ProgressBar label="Simulation progress" percent={pct} />
           <p className="mt-1 text-sm text-muted" aria-live="polite">
             {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {timeLeft(state.progress.secondsLeft)}{' '}

@@ -6,6 +6,7 @@ import { DataTable, type Column } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/status';
 import { paths } from '@/config/paths';
 import { dateTime, sig } from '@/lib/format';
+import { fractionWord } from '@/features/scenarios/lib/fraction-word';
 
 const COLUMNS: Column<RunListItem>[] = [
   {
@@ -20,18 +21,30 @@ const COLUMNS: Column<RunListItem>[] = [
   },
   {
     key: 'twa',
-    header: '8-h TWA [95 % CI] (mg/m³)',
+    header: "8-h TWA of the limit's fraction [95 % CI] (mg/m³)",
     align: 'right',
     sortValue: (r) => r.twa8h_mgPerM3,
-    render: (r) => `${sig(r.twa8h_mgPerM3)} [${sig(r.twa8h_lo_mgPerM3)}, ${sig(r.twa8h_hi_mgPerM3)}]`,
+    render: (r) => (
+      <>
+        {`${sig(r.twa8h_mgPerM3)} [${sig(r.twa8h_lo_mgPerM3)}, ${sig(r.twa8h_hi_mgPerM3)}]`}
+        <span className="block text-xs text-muted">{r.limit_fraction ? fractionWord(r.limit_fraction) : 'no limit set'}</span>
+      </>
+    ),
   },
-  { key: 'fraction', header: 'Fraction', render: (r) => r.limit_fraction ?? '—' },
   {
     key: 'pct',
     header: '% of limit',
     align: 'right',
     sortValue: (r) => r.percent_of_limit,
-    render: (r) => percentText(r.percent_of_limit),
+    render: (r) =>
+      r.limit_fraction ? (
+        <>
+          {percentText(r.percent_of_limit)}
+          <span className="block text-xs text-muted">{fractionWord(r.limit_fraction)}</span>
+        </>
+      ) : (
+        <span className="text-muted">no limit set</span>
+      ),
   },
   { key: 'banner', header: 'Banner', render: (r) => <BannerBadge banner={r.banner} /> },
   { key: 'particles', header: 'Particles', align: 'right', sortValue: (r) => r.particles, render: (r) => countText(r.particles) },

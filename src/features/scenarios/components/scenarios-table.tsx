@@ -9,6 +9,19 @@ import { paths } from '@/config/paths';
 import { downloadCsv, toCsv } from '@/lib/csv';
 import { dateTime, sig } from '@/lib/format';
 import { useScenarios, type ScenarioFilters } from '@/features/scenarios/api/get-scenarios';
+import { fractionWord } from '@/features/scenarios/lib/fraction-word';
+
+// Both figures are of the limit's own fraction, named under each, so a respirable TWA never sits beside a % of an inhalable limit.
+function FractionFigure({ run, figure }: { run: ScenarioSummary['lastRun']; figure: string }) {
+  if (!run) return <span className="text-muted">not run</span>;
+  if (!run.limitFraction) return <span className="text-muted">no limit set</span>;
+  return (
+    <>
+      {figure}
+      <span className="block text-xs text-muted">{fractionWord(run.limitFraction)}</span>
+    </>
+  );
+}
 
 const COLUMNS: Column<ScenarioSummary>[] = [
   {
@@ -45,18 +58,18 @@ const COLUMNS: Column<ScenarioSummary>[] = [
       ),
   },
   {
-    key: 'respirableTwa',
-    header: 'Respirable 8-h TWA (mg/m³)',
+    key: 'twa',
+    header: "8-h TWA of the limit's fraction (mg/m³)",
     align: 'right',
     sortValue: () => 0,
-    render: (s) => sig(s.lastRun?.respirableTwa8h_mgPerM3),
+    render: (s) => <FractionFigure run={s.lastRun} figure={sig(s.lastRun?.twa8h_mgPerM3)} />,
   },
   {
     key: 'percentOfLimit',
     header: '% of limit',
     align: 'right',
     sortValue: () => 0,
-    render: (s) => percentText(s.lastRun?.percentOfLimit),
+    render: (s) => <FractionFigure run={s.lastRun} figure={percentText(s.lastRun?.percentOfLimit)} />,
   },
   {
     key: 'banner',
@@ -115,7 +128,14 @@ function exportCsv(rows: ScenarioSummary[]) {
   downloadCsv('motewalk-scenarios.csv', toCsv(header, body));
 }
 
-export function ScenariosTable({ filters, onSortChange }: { filters: ScenarioFilters; onSortChange: (s: TableSort) => void }) {
+type Props = {
+  filters: ScenarioFilters;
+  onSortChange: (s: TableSort) => void;
+  /** What an empty list says: the page knows whether it offers filters and how a scenario is added there. */
+  empty: { title: string; hint: string };
+};
+
+export function ScenariosTable({ filters, onSortChange, empty }: Props) {
   const query = useScenarios({ pageSize: 200, ...filters });
   if (query.isPending) return <Spinner label="Loading scenarios…" />;
   if (query.error) return <ErrorMessage error={query.error} />;
@@ -141,7 +161,7 @@ export function ScenariosTable({ filters, onSortChange }: { filters: ScenarioFil
           onSortChange={onSortChange}
         />
       ) : (
-        <EmptyState title="No scenario matches these filters">Clear a filter, or open a workstation and add a scenario.</EmptyState>
+        <EmptyState title={empty.title}>{empty.hint}</EmptyState>
       )}
     </div>
   );

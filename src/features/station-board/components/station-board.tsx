@@ -1,14 +1,24 @@
-import type { StationBoard as Board } from '../../../../shared/schemas/workspace-views';
+import type { StationBoard as Board, WatchCause } from '../../../../shared/schemas/workspace-views';
 import { BANNER_LABEL, type Banner } from '../../../../shared/vocabulary/index';
 import { BANNER_CLASSES } from '@/components/banner-badge';
 import { Cautions } from '@/components/cautions';
 
 // The operator's board says what the state means at the bench, not how it was computed.
-const FOR_OPERATOR: Record<Banner, string> = {
+const FOR_OPERATOR: Record<Exclude<Banner, 'watch'>, string> = {
   clear: 'Controls are working as assessed',
-  watch: 'Close to the limit: follow the rules exactly',
   act: 'Stop: the controls are not confirmed',
 };
+
+// Watch has several causes; only one of them is exposure near the limit.
+const WATCH_FOR_OPERATOR: Record<WatchCause, string> = {
+  'near-limit': 'Close to the limit: follow the rules exactly',
+  undecided: 'Not yet confirmed: follow the rules exactly',
+  'capture-short': 'The hood may be too weak here: follow the rules exactly',
+  'out-of-date': 'Being checked again: follow the rules exactly',
+};
+
+export const operatorHeadline = (board: Pick<Board, 'banner' | 'watchCause'>) =>
+  board.banner === 'watch' ? WATCH_FOR_OPERATOR[board.watchCause ?? 'near-limit'] : FOR_OPERATOR[board.banner];
 
 export function StationBoard({ board }: { board: Board }) {
   const look = BANNER_LABEL[board.banner];
@@ -31,7 +41,7 @@ export function StationBoard({ board }: { board: Board }) {
         </span>
         <div>
           <p className="text-5xl font-bold">{look.word}</p>
-          <p className="mt-1 text-xl font-semibold">{FOR_OPERATOR[board.banner]}</p>
+          <p className="mt-1 text-xl font-semibold">{operatorHeadline(board)}</p>
         </div>
       </div>
       {board.needsReview && (

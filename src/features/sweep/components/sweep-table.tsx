@@ -1,4 +1,5 @@
 import { percentText } from '../../../../shared/format/index';
+import { FRACTION_LABEL } from '../../../../shared/vocabulary/fraction-labels';
 import { Link } from 'react-router-dom';
 import { BannerBadge } from '@/components/banner-badge';
 import { Button } from '@/components/ui/button';
@@ -60,17 +61,19 @@ export function SweepTable({
   onSave: (row: TableRow) => void;
   canSave: boolean;
 }) {
+  // Every point is judged on the limit's fraction; the headers name it so TWA and % of limit read as one fraction.
+  const fraction = rows[0] ? ` (${FRACTION_LABEL[rows[0].result.fraction].toLowerCase()})` : '';
   const columns: Column<TableRow>[] = [
     figureColumn({ key: 'index', header: 'Point', value: (r) => r.index, show: (i) => i + 1 }),
     figureColumn({ key: 'value', header: PARAMETER[parameter].label, value: (r) => r.value, show: (v) => formatValue(parameter, v) }),
-    figureColumn({ key: 'twa', header: '8-h TWA (mg/m³)', value: (r) => r.result.twa8h_mgPerM3, show: sig }),
+    figureColumn({ key: 'twa', header: `8-h TWA${fraction} (mg/m³)`, value: (r) => r.result.twa8h_mgPerM3, show: sig }),
     {
       key: 'ci',
       header: '95 % CI (mg/m³)',
       render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`,
       align: 'right',
     },
-    figureColumn({ key: 'pct', header: '% of limit', value: (r) => r.result.percentOfLimit, show: percentText }),
+    figureColumn({ key: 'pct', header: `% of limit${fraction}`, value: (r) => r.result.percentOfLimit, show: percentText }),
     figureColumn({ key: 'upper', header: 'Upper 95 % (% of limit)', value: (r) => r.result.percentOfLimitUpper, show: percentText }),
     {
       key: 'banner',
