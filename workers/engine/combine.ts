@@ -2,6 +2,7 @@ import { judgeResult, limitBlock } from '../../shared/verdict/index';
 import { crossChecks } from './cross-checks';
 import { captureVelocityMap, depositionMap } from './maps';
 import { batchEstimate } from './statistics';
+import { mergeTrajectories } from './trajectory-sample';
 import {
   type BatchResult,
   type Fate,
@@ -101,7 +102,6 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
   });
   const particleSteps = batches.reduce((a, b) => a + b.particleSteps, 0);
   const wallTime_s = elapsed_s ?? batches.reduce((a, b) => a + b.wallTime_s, 0);
-  const first = batches[0];
   const results: Results = {
     engine: {
       version: ENGINE_VERSION,
@@ -116,7 +116,7 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     fate,
     crossChecks: crossChecks(p, p.limit?.fraction ?? 'respirable'),
     maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p) },
-    trajectories: { ...p.trajectory, positions_m: first.trajectories, bins: first.trajectoryBins },
+    trajectories: mergeTrajectories(p, batches),
     sizeBins: { aerodynamic_m: Array.from(p.bins.aerodynamic_m), physical_m: Array.from(p.bins.physical_m) },
     performance: { particleSteps, wallTime_s, particleStepsPerS: wallTime_s > 0 ? particleSteps / wallTime_s : 0 },
   };
