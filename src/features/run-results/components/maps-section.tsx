@@ -17,7 +17,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
   return (
     <Section
       title="Floor deposition and capture velocity"
-      intro="Both maps are plans of the room, drawn to the same scale as above, with the source, hood faces and breathing zone on top."
+      intro="Both maps are plans of the room with the source, hood faces and breathing zone on top; each opens zoomed on the workstation."
     >
       <div className="grid gap-4 lg:grid-cols-2">
         <figure className="rounded-lg border border-line bg-white p-3">
@@ -29,6 +29,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 scale={depScale}
                 scenario={scenario}
                 skipZero
+                what="deposition map"
                 label={`Floor deposition map, up to ${readableNumber(Math.max(...dep.values))} mg/m²`}
               />
               <ColourLegend scale={depScale} unit="mg/m²" title="Deposited mass per floor area" />
@@ -48,6 +49,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 grid={cap}
                 scale={capScale}
                 scenario={scenario}
+                what="capture-velocity map"
                 label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`}
               />
               <ColourLegend
