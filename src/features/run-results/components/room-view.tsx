@@ -110,8 +110,10 @@ export function RoomView({
         viewBox={`0 0 ${w + M.left + M.right} ${h + M.top + M.bottom}`}
         className={`h-auto w-full rounded-sm focus-visible:outline-3 focus-visible:outline-accent ${zoomed ? 'cursor-move' : ''}`}
         style={{ touchAction: 'pan-y' }}
-        role="img"
-        aria-label={zoomed ? `${label}; zoomed ${trimSig(zoom.zoom.k, 2)}× on x ${trimSig(win.a0_m, 3)}–${trimSig(win.a1_m, 3)} m` : label}
+        role="group"
+        tabIndex={0}
+        onKeyDown={gestures.onKeyDown}
+        aria-label={`${zoomed ? `${label}; zoomed ${trimSig(zoom.zoom.k, 2)}× on x ${trimSig(win.a0_m, 3)}–${trimSig(win.a1_m, 3)} m` : label}. Plus and minus keys zoom, arrow keys pan.`}
         data-zoom={trimSig(zoom.zoom.k, 3)}
         {...gestures.svg}
       >
