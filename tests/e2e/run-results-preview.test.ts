@@ -112,11 +112,17 @@ describe('the run results preview', () => {
 
   it('colours the particles by fate or by size, with the matching legend', async () => {
     expect(await page.getByRole('list', { name: 'Particle fates' }).count()).toBe(1);
-    const fateColours = await page.getByTestId('dots-plan').locator('circle').evaluateAll((cs) => cs.map((c) => c.getAttribute('fill')));
+    const fateColours = await page
+      .getByTestId('dots-plan')
+      .locator('circle')
+      .evaluateAll((cs) => cs.map((c) => c.getAttribute('fill')));
     await page.locator('label', { hasText: /^Size$/ }).click();
     await expect.poll(() => page.getByRole('list', { name: 'Particle size classes' }).count()).toBe(1);
     expect(await page.getByRole('list', { name: 'Particle fates' }).count()).toBe(0);
-    const sizeColours = await page.getByTestId('dots-plan').locator('circle').evaluateAll((cs) => cs.map((c) => c.getAttribute('fill')));
+    const sizeColours = await page
+      .getByTestId('dots-plan')
+      .locator('circle')
+      .evaluateAll((cs) => cs.map((c) => c.getAttribute('fill')));
     expect(sizeColours).toHaveLength(fateColours.length);
     expect(sizeColours).not.toEqual(fateColours);
     await page.locator('label', { hasText: 'Where it ends up' }).click();
