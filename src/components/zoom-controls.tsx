@@ -1,5 +1,5 @@
 import type { ViewZoom } from '@/hooks/use-view-zoom';
-import { formatSig } from '../../shared/format/index';
+import { trimSig } from '../../shared/format/index';
 import { MAX_ZOOM } from '@/lib/view-zoom';
 
 const BUTTON =
@@ -23,7 +23,7 @@ export function ZoomControls({ v, what }: { v: ViewZoom; what: string }) {
         Whole room
       </button>
       <output className="ml-1 text-xs text-muted tabular-nums" aria-live="polite" data-testid="zoom-level">
-        {formatSig(k, 2)}×
+        {trimSig(k, 2)}×
       </output>
     </div>
   );
