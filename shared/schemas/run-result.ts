@@ -125,7 +125,12 @@ export const runResultSchema = z.object({
     farField_mgPerM3: measured,
     eddySteady_mgPerM3: measured,
   }),
-  maps: z.object({ deposition_mgPerM2: gridSchema, captureVelocity_mPerS: captureGridSchema }),
+  maps: z.object({
+    deposition_mgPerM2: gridSchema,
+    captureVelocity_mPerS: captureGridSchema,
+    /** The capture-velocity map over the workstation only, finer; absent without hoods and in older results. */
+    captureVelocityNear_mPerS: captureGridSchema.optional(),
+  }),
   trajectories: trajectoriesSchema,
   /** Diameter per size bin (index = trajectories.bins value); empty lists when the result predates them. */
   sizeBins: z.object({ aerodynamic_m: numberList, physical_m: numberList }),

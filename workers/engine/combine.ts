@@ -1,6 +1,6 @@
 import { judgeResult, limitBlock } from '../../shared/verdict/index';
 import { crossChecks } from './cross-checks';
-import { captureVelocityMap, depositionMap } from './maps';
+import { captureVelocityMap, captureVelocityNearMap, depositionMap } from './maps';
 import { batchEstimate } from './statistics';
 import { mergeTrajectories } from './trajectory-sample';
 import {
@@ -85,6 +85,11 @@ function summarise(p: PreparedScenario, batches: readonly BatchResult[], fractio
   return { summary, band };
 }
 
+function nearMap(p: PreparedScenario) {
+  const near = captureVelocityNearMap(p);
+  return near ? { captureVelocityNear_mPerS: near } : {};
+}
+
 /** Merge batch results (any order, any worker) into the results object; batch order is fixed first. */
 export function combineBatches(p: PreparedScenario, unordered: readonly BatchResult[], elapsed_s?: number): Results {
   const batches = [...unordered].sort((a, b) => a.batchIndex - b.batchIndex);
@@ -115,7 +120,7 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     breathingZone: { volume_m3: p.zone.volume_m3, fractions, series },
     fate,
     crossChecks: crossChecks(p, p.limit?.fraction ?? 'respirable'),
-    maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p) },
+    maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p), ...nearMap(p) },
     trajectories: mergeTrajectories(p, batches),
     sizeBins: { aerodynamic_m: Array.from(p.bins.aerodynamic_m), physical_m: Array.from(p.bins.physical_m) },
     performance: { particleSteps, wallTime_s, particleStepsPerS: wallTime_s > 0 ? particleSteps / wallTime_s : 0 },

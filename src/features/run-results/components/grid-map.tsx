@@ -1,28 +1,11 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import type { SequentialScale } from '@/features/run-results/lib/colour-scale';
 import type { Grid } from '../../../../shared/schemas/run-result';
-import { focusPoints, projection, viewSpan } from '@/features/run-results/lib/room-projection';
+import { focusPoints, type Projection, projection, viewSpan } from '@/features/run-results/lib/room-projection';
 import { useViewZoom } from '@/hooks/use-view-zoom';
 import { DRAWING_WIDTH, RoomView } from './room-view';
 
-/** A floor-plane grid ([ix][iy]) painted under the plan, with the source, hoods and breathing zone on top. */
-export function GridMap({
-  grid,
-  scale,
-  scenario,
-  label,
-  what,
-  skipZero = false,
-}: {
-  grid: Grid;
-  scale: SequentialScale;
-  scenario: Scenario;
-  label: string;
-  what: string;
-  skipZero?: boolean;
-}) {
-  const zoom = useViewZoom(viewSpan(scenario.room, 'plan'), focusPoints(scenario, 'plan'));
-  const p = projection(scenario.room, 'plan', DRAWING_WIDTH, zoom.window);
+function gridCells(grid: Grid, p: Projection, scale: SequentialScale, skipZero: boolean, prefix: string) {
   const win = p.window;
   const cells = [];
   for (let ix = 0; ix < grid.nx; ix++) {
@@ -36,7 +19,7 @@ export function GridMap({
       // Half a pixel of overlap hides the hairline seams anti-aliasing leaves between cells.
       cells.push(
         <rect
-          key={`${ix}-${iy}`}
+          key={`${prefix}${ix}-${iy}`}
           x={sx}
           y={sy}
           width={grid.cell_m[0] * p.scale + 0.5}
@@ -46,6 +29,32 @@ export function GridMap({
       );
     }
   }
+  return cells;
+}
+
+/**
+ * A floor-plane grid ([ix][iy]) painted under the plan, with the source, hoods and breathing zone on top;
+ * a finer grid over part of the room (the workstation) is painted over it where given.
+ */
+export function GridMap({
+  grid,
+  detail,
+  scale,
+  scenario,
+  label,
+  what,
+  skipZero = false,
+}: {
+  grid: Grid;
+  detail?: Grid;
+  scale: SequentialScale;
+  scenario: Scenario;
+  label: string;
+  what: string;
+  skipZero?: boolean;
+}) {
+  const zoom = useViewZoom(viewSpan(scenario.room, 'plan'), focusPoints(scenario, 'plan'));
+  const p = projection(scenario.room, 'plan', DRAWING_WIDTH, zoom.window);
   return (
     <RoomView
       scenario={scenario}
@@ -54,7 +63,12 @@ export function GridMap({
       textScale={1.4}
       zoom={zoom}
       what={what}
-      under={<g data-testid="map-cells">{cells}</g>}
+      under={
+        <g data-testid="map-cells">
+          {gridCells(grid, p, scale, skipZero, '')}
+          {detail && <g data-testid="map-detail-cells">{gridCells(detail, p, scale, skipZero, 'd')}</g>}
+        </g>
+      }
     />
   );
 }

@@ -13,7 +13,9 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
   const release = scenario.source.releaseType;
   const range = release ? captureVelocityRange(release) : undefined;
   const depScale = dep && sequentialScale(dep.values);
-  const capScale = cap && sequentialScale(cap.values);
+  const near = view.maps.captureVelocityNear_mPerS;
+  // One colour scale over both capture maps, so the close-up and the room agree where they overlap.
+  const capScale = cap && sequentialScale(near ? Float32Array.from([...cap.values, ...near.values]) : cap.values);
   return (
     <Section
       title="Floor deposition and capture velocity"
@@ -50,7 +52,8 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 scale={capScale}
                 scenario={scenario}
                 what="capture-velocity map"
-                label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`}
+                detail={near}
+                label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(capScale.max)} m/s`}
               />
               <ColourLegend
                 scale={capScale}
@@ -65,6 +68,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 }
               />
               <p className="mt-1 text-xs text-muted">
+                {near ? 'Finer cells cover the workstation. ' : ''}
                 {range
                   ? `Published capture velocity for ${release} release (${range.description.toLowerCase()}): ${range.min_mPerS}–${range.max_mPerS} m/s (ACGIH Industrial Ventilation). The source should sit where the map reaches this range.`
                   : 'No release type is given for the source, so no published capture-velocity range is shown.'}
