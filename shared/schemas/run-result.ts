@@ -55,8 +55,26 @@ export const trajectoriesSchema = z
     positions_m: float32List,
     /** Size bin per sampled particle, −1 for an unused slot. */
     bins: int32List,
+    /** Where each sampled particle ended up (FATES index), −1 for an unused slot; absent in results recorded before it. */
+    fates: int32List.optional(),
+    /** Per sampled particle [released_s, x, y, z, ended_s, x, y, z] (m); absent in results recorded before it. */
+    ends: float32List.optional(),
   })
   .superRefine((t, ctx) => {
+    if (t.fates && t.fates.length !== t.bins.length)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['fates'],
+        message: `must hold one fate per sampled particle (${t.bins.length}), got ${t.fates.length}`,
+        input: t.fates,
+      });
+    if (t.ends && t.ends.length !== t.bins.length * 8)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ends'],
+        message: `must hold 8 numbers per sampled particle (${t.bins.length * 8}), got ${t.ends.length}`,
+        input: t.ends,
+      });
     const expected = t.particles * t.frames * 3;
     if (t.positions_m.length !== expected)
       ctx.addIssue({
@@ -140,7 +158,12 @@ export const runResultSchema = z.object({
     farField_mgPerM3: measured,
     eddySteady_mgPerM3: measured,
   }),
-  maps: z.object({ deposition_mgPerM2: gridSchema, captureVelocity_mPerS: captureGridSchema }),
+  maps: z.object({
+    deposition_mgPerM2: gridSchema,
+    captureVelocity_mPerS: captureGridSchema,
+    /** The capture-velocity map over the workstation only, finer; absent without hoods and in older results. */
+    captureVelocityNear_mPerS: captureGridSchema.optional(),
+  }),
   trajectories: trajectoriesSchema,
   /** Diameter per size bin (index = trajectories.bins value); empty lists when the result predates them. */
   sizeBins: z.object({ aerodynamic_m: numberList, physical_m: numberList }),

@@ -13,8 +13,19 @@ export const runCreateSchema = z
   .strict();
 export type RunCreate = z.infer<typeof runCreateSchema>;
 
+// A float32 widened to a double prints up to 17 digits (0.31 as 0.3100000023841858); the fewest digits
+// that read back to the same float32 keep a saved trajectory sample a third of the size.
+function shortestFloat32(v: number): number {
+  for (let digits = 6; digits < 9; digits++) {
+    const short = Number(v.toPrecision(digits));
+    if (Math.fround(short) === v) return short;
+  }
+  return v;
+}
+
 // Typed arrays do not survive JSON.stringify as arrays; turn them into plain lists first.
 export function toJsonFriendly<T>(value: T): unknown {
+  if (value instanceof Float32Array) return Array.from(value, (v) => (Number.isFinite(v) ? shortestFloat32(v) : null));
   if (ArrayBuffer.isView(value) && !(value instanceof DataView))
     return Array.from(value as unknown as ArrayLike<number>, (v) => (Number.isFinite(v) ? v : null));
   if (Array.isArray(value)) return value.map(toJsonFriendly);

@@ -84,29 +84,63 @@ describe('the run results preview', () => {
     expect(text.trim().split('\r\n')).toHaveLength(5);
   });
 
-  it('moves the particles when the scrubber is moved from the keyboard', async () => {
-    // Sampled particles are airborne for seconds to minutes, so which frames show dots depends on
-    // the run: take the engine's own count at the first frame from 10 on that has any.
+  it('moves the particles when the scrubber is moved from the keyboard, showing the paths alive at that time', async () => {
+    // A path is on screen from its release to its end (captured, settled, exhausted or the end of the run): count them from the
+    // engine's own sample at the first frame from 10 on that has any.
     const { result } = runEngine(PREVIEW_SCENARIO);
-    const t = (result as { trajectories: { particles: number; frames: number; frameInterval_s: number; positions_m: (number | null)[] } })
-      .trajectories;
-    const airborne = (f: number) =>
-      Array.from({ length: t.particles }, (_, slot) => t.positions_m[(slot * t.frames + f) * 3]).filter((x) => x !== null).length;
+    const t = (result as { trajectories: { particles: number; frameInterval_s: number; ends: number[] } }).trajectories;
+    const alive = (time_s: number) =>
+      Array.from({ length: t.particles }, (_, k) => t.ends[k * 8] <= time_s && time_s <= t.ends[k * 8 + 4]).filter(Boolean).length;
+    expect(t.particles).toBeGreaterThanOrEqual(500);
     let target = 10;
-    while (target < t.frames - 1 && airborne(target) === 0) target++;
-    expect(airborne(target)).toBeGreaterThan(0);
+    while (alive(target * t.frameInterval_s) === 0) target++;
     const scrubber = page.getByTestId('scrubber');
     await scrubber.focus();
     await page.keyboard.press('Home');
     const before = await dotPositions('plan');
     for (let i = 0; i < target; i++) await page.keyboard.press('ArrowRight');
-    await expect.poll(() => scrubber.inputValue()).toBe(String(target));
-    expect(await page.getByTestId('frame-time').textContent()).toContain(`t = ${target * t.frameInterval_s} s`);
+    const time_s = target * t.frameInterval_s;
+    await expect.poll(async () => Number(await scrubber.inputValue())).toBeCloseTo(time_s, 6);
+    expect(await page.getByTestId('frame-time').textContent()).toContain(`t = ${Math.round(time_s)} s`);
+    expect(Number(await page.getByTestId('airborne-count').textContent())).toBe(alive(time_s));
     const after = await dotPositions('plan');
-    expect(after).toHaveLength(airborne(target));
+    expect(after).toHaveLength(alive(time_s));
     expect(after).not.toEqual(before);
     await page.getByRole('heading', { name: 'Particle paths, plan and elevation' }).scrollIntoViewIfNeeded();
     await shot(page, 'run-results-scrubbed');
+  });
+
+  it('colours the particles by fate or by size, with the matching legend', async () => {
+    expect(await page.getByRole('list', { name: 'Particle fates' }).count()).toBe(1);
+    const fateColours = await page
+      .getByTestId('dots-plan')
+      .locator('circle')
+      .evaluateAll((cs) => cs.map((c) => c.getAttribute('fill')));
+    await page.locator('label', { hasText: /^Size$/ }).click();
+    await expect.poll(() => page.getByRole('list', { name: 'Particle size classes' }).count()).toBe(1);
+    expect(await page.getByRole('list', { name: 'Particle fates' }).count()).toBe(0);
+    const sizeColours = await page
+      .getByTestId('dots-plan')
+      .locator('circle')
+      .evaluateAll((cs) => cs.map((c) => c.getAttribute('fill')));
+    expect(sizeColours).toHaveLength(fateColours.length);
+    expect(sizeColours).not.toEqual(fateColours);
+    await page.locator('label', { hasText: 'Where it ends up' }).click();
+  });
+
+  it('opens the plan on the workstation and zooms out to the whole room and back from the keyboard', async () => {
+    const plan = page.getByRole('group', { name: /^Plan view of the/ });
+    const zoom = async () => Number(await plan.getAttribute('data-zoom'));
+    const opened = await zoom();
+    expect(opened).toBeGreaterThan(1);
+    await page.getByRole('group', { name: 'Zoom of the plan' }).getByRole('button', { name: 'Whole room' }).focus();
+    await page.keyboard.press('Enter');
+    await expect.poll(zoom).toBe(1);
+    await plan.focus();
+    await page.keyboard.press('+');
+    await expect.poll(zoom).toBeCloseTo(1.5, 6);
+    await page.getByRole('button', { name: 'Workstation' }).first().click();
+    await expect.poll(zoom).toBeCloseTo(opened, 2);
   });
 
   it('plays and pauses the animation', async () => {

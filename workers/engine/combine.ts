@@ -1,7 +1,8 @@
 import { judgeResult, limitBlock } from '../../shared/verdict/index';
 import { crossChecks } from './cross-checks';
-import { captureVelocityMap, depositionMap } from './maps';
+import { captureVelocityMap, captureVelocityNearMap, depositionMap } from './maps';
 import { batchEstimate } from './statistics';
+import { mergeTrajectories } from './trajectory-sample';
 import {
   type BatchResult,
   type Fate,
@@ -84,6 +85,11 @@ function summarise(p: PreparedScenario, batches: readonly BatchResult[], fractio
   return { summary, band };
 }
 
+function nearMap(p: PreparedScenario) {
+  const near = captureVelocityNearMap(p);
+  return near ? { captureVelocityNear_mPerS: near } : {};
+}
+
 /** Merge batch results (any order, any worker) into the results object; batch order is fixed first. */
 export function combineBatches(p: PreparedScenario, unordered: readonly BatchResult[], elapsed_s?: number): Results {
   const batches = [...unordered].sort((a, b) => a.batchIndex - b.batchIndex);
@@ -102,7 +108,6 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
   });
   const particleSteps = batches.reduce((a, b) => a + b.particleSteps, 0);
   const wallTime_s = elapsed_s ?? batches.reduce((a, b) => a + b.wallTime_s, 0);
-  const first = batches[0];
   const results: Results = {
     engine: {
       version: ENGINE_VERSION,
@@ -117,8 +122,8 @@ export function combineBatches(p: PreparedScenario, unordered: readonly BatchRes
     fate,
     massLeftOut: { ...p.bins.massLeftOut },
     crossChecks: crossChecks(p, p.limit?.fraction ?? 'respirable'),
-    maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p) },
-    trajectories: { ...p.trajectory, positions_m: first.trajectories, bins: first.trajectoryBins },
+    maps: { deposition_mgPerM2: depositionMap(p, batches), captureVelocity_mPerS: captureVelocityMap(p), ...nearMap(p) },
+    trajectories: mergeTrajectories(p, batches),
     sizeBins: { aerodynamic_m: Array.from(p.bins.aerodynamic_m), physical_m: Array.from(p.bins.physical_m) },
     model: p.model,
     performance: { particleSteps, wallTime_s, particleStepsPerS: wallTime_s > 0 ? particleSteps / wallTime_s : 0 },

@@ -12,8 +12,9 @@ import type { PreparedScenario } from './types';
 export const TIME_BINS = 120;
 // Taylor's D = σ_u²·T_L with σ_u ≈ 0.1 m/s, a typical turbulent speed in a ventilated workroom [P] common practice.
 export const ROOM_TURBULENT_SPEED_mPerS = 0.1;
-const TRAJECTORY_PARTICLES = 64;
-const TRAJECTORY_FRAMES = 150;
+// At least 500 paths over the whole run, shared out over the batches; 120 frames keep a saved run small.
+const TRAJECTORY_PATHS = 512;
+const TRAJECTORY_FRAMES = 120;
 
 // Only what is released inside the simulated window counts as emitted.
 function emissionPlan(source: Scenario['source'], duration_s: number) {
@@ -76,9 +77,9 @@ export function prepareScenario(s: Scenario): PreparedScenario {
     },
     deposition: { nx: 40, ny: 40 },
     trajectory: {
-      particles: TRAJECTORY_PARTICLES,
+      particles: Math.ceil(TRAJECTORY_PATHS / s.run.batches),
       frames: TRAJECTORY_FRAMES,
-      frameInterval_s: Math.min(duration_s, 300) / TRAJECTORY_FRAMES,
+      frameInterval_s: duration_s / TRAJECTORY_FRAMES,
     },
     limit: s.limit ? { fraction: s.limit.fraction, value_mgPerM3: s.limit.value_mgPerM3 } : undefined,
     captureVelocity: captureCheck(s)?.verdict,

@@ -83,9 +83,9 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
   return a;
 }
 
-// Spread the animated sample evenly over the particles released early enough to be seen moving.
+// Spread the animated sample evenly over the particles released while frames are recorded.
 function pickTrajectorySample(p: PreparedScenario, a: ParticleArrays): void {
-  const window_s = 0.8 * p.trajectory.frames * p.trajectory.frameInterval_s;
+  const window_s = (p.trajectory.frames - 1) * p.trajectory.frameInterval_s;
   const candidates: number[] = [];
   for (let i = 0; i < a.count; i++) if (a.release[i] <= window_s) candidates.push(i);
   const k = Math.min(p.trajectory.particles, candidates.length);

@@ -1,6 +1,7 @@
 import { releaseParticles } from './release';
 import { batchStream } from './rng';
 import { type StepProgress, stepParticles } from './step-loop';
+import { END_STRIDE, quantisePositions, recordPathEnds, sampledParticles } from './trajectory-sample';
 import type { BatchResult, PreparedScenario } from './types';
 
 /** One independent batch; depends only on (prepared, batchIndex), never on which worker runs it. */
@@ -10,7 +11,11 @@ export function runBatch(p: PreparedScenario, batchIndex: number, onProgress?: S
   const particles = releaseParticles(p, rng);
   const trajectoryBins = new Int32Array(p.trajectory.particles).fill(-1);
   for (let i = 0; i < particles.count; i++) if (particles.slot[i] >= 0) trajectoryBins[particles.slot[i]] = particles.bin[i];
+  const sampled = sampledParticles(p, particles.slot, particles.count);
+  const trajectoryEnds = new Float32Array(p.trajectory.particles * END_STRIDE).fill(NaN);
+  recordPathEnds(trajectoryEnds, sampled, particles, 'release');
   const tallies = stepParticles(p, particles, rng, onProgress);
+  recordPathEnds(trajectoryEnds, sampled, particles, 'end');
   const zoneHistories = new Int32Array(p.bins.count);
   for (let i = 0; i < particles.count; i++) if (tallies.zoneVisited[i]) zoneHistories[particles.bin[i]]++;
   const result: BatchResult = {
@@ -19,8 +24,10 @@ export function runBatch(p: PreparedScenario, batchIndex: number, onProgress?: S
     fateMass_mg: tallies.fateMass_mg,
     zoneHistories,
     deposition_mg: tallies.deposition_mg,
-    trajectories: tallies.trajectories,
+    trajectories: quantisePositions(tallies.trajectories),
     trajectoryBins,
+    trajectoryFates: Int8Array.from(sampled, (i) => (i >= 0 ? tallies.fate[i] : -1)),
+    trajectoryEnds,
     particleSteps: tallies.particleSteps,
     wallTime_s: (Date.now() - started) / 1000,
   };
@@ -32,7 +39,16 @@ export function runBatch(p: PreparedScenario, batchIndex: number, onProgress?: S
 
 /** The buffers to hand to postMessage's transfer list. */
 export function transferables(r: BatchResult): ArrayBuffer[] {
-  const arrays: ArrayBufferView[] = [r.zoneResidence_s, r.fateMass_mg, r.zoneHistories, r.deposition_mg, r.trajectories, r.trajectoryBins];
+  const arrays: ArrayBufferView[] = [
+    r.zoneResidence_s,
+    r.fateMass_mg,
+    r.zoneHistories,
+    r.deposition_mg,
+    r.trajectories,
+    r.trajectoryBins,
+    r.trajectoryFates,
+    r.trajectoryEnds,
+  ];
   if (r.particles) arrays.push(r.particles.x, r.particles.y, r.particles.z, r.particles.t, r.particles.bin, r.particles.fate);
   return arrays.map((a) => a.buffer as ArrayBuffer);
 }

@@ -107,6 +107,10 @@ export interface BatchResult {
   /** x, y, z per frame per sampled particle, NaN when not airborne. */
   trajectories: Float32Array;
   trajectoryBins: Int32Array;
+  /** Fate (FATES index) each sampled particle met, −1 for an unused slot. */
+  trajectoryFates: Int8Array;
+  /** Per sampled particle: release time (s) and point (m), end time and point; NaN for an unused slot. */
+  trajectoryEnds: Float32Array;
   particleSteps: number;
   wallTime_s: number;
   particles?: ParticleStates;

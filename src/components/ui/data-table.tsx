@@ -32,6 +32,9 @@ type Props<T> = Keyed<T> & {
 
 export type { Sort as TableSort };
 
+// The first column names the row: it stays in view while a narrow screen scrolls the table sideways.
+const STICKY = 'sticky left-0 z-[1] shadow-[1px_0_0_var(--color-line)]';
+
 const byId = <T,>(row: T) => (row as { id: string | number }).id;
 
 export function DataTable<T>({ rows, columns, rowKey = byId, caption, initialSort, sort: controlled, onSortChange }: Props<T>) {
@@ -64,14 +67,14 @@ export function DataTable<T>({ rows, columns, rowKey = byId, caption, initialSor
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-deep text-left">
           <tr>
-            {columns.map((c) => {
+            {columns.map((c, i) => {
               const active = sort?.key === c.key;
               return (
                 <th
                   key={c.key}
                   scope="col"
                   aria-sort={active ? (sort.dir === 'asc' ? 'ascending' : 'descending') : undefined}
-                  className={`px-3 py-2 font-semibold ${c.align === 'right' ? 'text-right' : ''}`}
+                  className={`px-3 py-2 font-semibold ${c.align === 'right' ? 'text-right' : ''} ${i === 0 ? `${STICKY} bg-paper-deep` : ''}`}
                 >
                   {c.sortValue ? (
                     <button type="button" onClick={() => toggle(c.key)} className="inline-flex items-center gap-1 hover:text-accent">
@@ -91,8 +94,11 @@ export function DataTable<T>({ rows, columns, rowKey = byId, caption, initialSor
         <tbody>
           {sorted.map((row) => (
             <tr key={rowKey(row)} className="border-t border-line">
-              {columns.map((c) => (
-                <td key={c.key} className={`px-3 py-2 align-top ${c.align === 'right' ? 'text-right tabular-nums' : ''}`}>
+              {columns.map((c, i) => (
+                <td
+                  key={c.key}
+                  className={`px-3 py-2 align-top ${c.align === 'right' ? 'text-right tabular-nums' : ''} ${i === 0 ? `${STICKY} bg-white` : ''}`}
+                >
                   {c.render(row)}
                 </td>
               ))}

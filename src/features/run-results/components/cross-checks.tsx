@@ -37,6 +37,9 @@ function rows(view: RunResult): Row[] {
   ];
 }
 
+// The model's name stays in view while a narrow screen scrolls the table sideways.
+const STICKY = 'sticky left-0 z-[1] shadow-[1px_0_0_var(--color-line)]';
+
 const ratio = (mc: number, model: number) => (model > 0 && Number.isFinite(mc) ? `${readableNumber(mc / model, 2)}×` : '—');
 
 export function CrossChecks({ view }: { view: RunResult }) {
@@ -53,7 +56,7 @@ export function CrossChecks({ view }: { view: RunResult }) {
           <caption className="sr-only">Monte-Carlo breathing-zone concentration beside the analytic models</caption>
           <thead className="bg-paper-deep text-left">
             <tr>
-              <th scope="col" className="px-3 py-2 font-semibold">
+              <th scope="col" className={`px-3 py-2 font-semibold ${STICKY} bg-paper-deep`}>
                 Model
               </th>
               <th scope="col" className="px-3 py-2 text-right font-semibold">
@@ -69,7 +72,10 @@ export function CrossChecks({ view }: { view: RunResult }) {
           </thead>
           <tbody>
             <tr className="border-t border-line bg-accent-soft/50">
-              <th scope="row" className="px-3 py-2 text-left font-semibold">
+              <th
+                scope="row"
+                className={`px-3 py-2 text-left font-semibold ${STICKY} [background:color-mix(in_oklab,var(--color-accent-soft)_50%,white)]`}
+              >
                 Monte-Carlo, breathing zone
               </th>
               <td className="px-3 py-2 text-right font-semibold tabular-nums" data-testid="cross-check-mc">
@@ -83,7 +89,7 @@ export function CrossChecks({ view }: { view: RunResult }) {
             </tr>
             {rows(view).map((r) => (
               <tr key={r.key} className="border-t border-line">
-                <th scope="row" className="px-3 py-2 text-left font-normal">
+                <th scope="row" className={`px-3 py-2 text-left font-normal ${STICKY} bg-white`}>
                   {r.model}
                 </th>
                 <td className="px-3 py-2 text-right tabular-nums">{readableNumber(r.value)}</td>

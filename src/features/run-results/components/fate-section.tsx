@@ -1,17 +1,9 @@
 import { readableNumber } from '../../../../shared/format/index';
-import { FATE_LABEL, FATES, type Fate } from '../../../../shared/vocabulary/index';
+import { FATE_LABEL, FATES } from '../../../../shared/vocabulary/index';
+import { FATE_COLOUR } from '@/features/run-results/lib/fate-colours';
 import type { RunResult } from '../../../../shared/schemas/run-result';
 import { MassLeftOutNote } from './mass-left-out-note';
 import { Section } from './section';
-
-// Fate colours are our own; each segment also carries its word in the list, never colour alone.
-const FATE_COLOUR: Record<Fate, string> = {
-  captured: '#1f6f6a',
-  settled: '#a07a3c',
-  exhausted: '#7d8796',
-  airborne: '#c9b98f',
-  walls: '#5b4a6e',
-};
 
 export function FateSection({ view }: { view: RunResult }) {
   const { emitted_mg, ...shares } = view.fate;

@@ -13,11 +13,13 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
   const release = scenario.source.releaseType;
   const range = release ? captureVelocityRange(release) : undefined;
   const depScale = dep && sequentialScale(dep.values);
-  const capScale = cap && sequentialScale(cap.values);
+  const near = view.maps.captureVelocityNear_mPerS;
+  // One colour scale over both capture maps, so the close-up and the room agree where they overlap.
+  const capScale = cap && sequentialScale(near ? Float32Array.from([...cap.values, ...near.values]) : cap.values);
   return (
     <Section
       title="Floor deposition and capture velocity"
-      intro="Both maps are plans of the room, drawn to the same scale as above, with the source, hood faces and breathing zone on top."
+      intro="Both maps are plans of the room with the source, hood faces and breathing zone on top; each opens zoomed on the workstation."
     >
       <div className="grid gap-4 lg:grid-cols-2">
         <figure className="rounded-lg border border-line bg-white p-3">
@@ -29,6 +31,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 scale={depScale}
                 scenario={scenario}
                 skipZero
+                what="deposition map"
                 label={`Floor deposition map, up to ${readableNumber(Math.max(...dep.values))} mg/m²`}
               />
               <ColourLegend scale={depScale} unit="mg/m²" title="Deposited mass per floor area" />
@@ -48,7 +51,9 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 grid={cap}
                 scale={capScale}
                 scenario={scenario}
-                label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(Math.max(...cap.values))} m/s`}
+                what="capture-velocity map"
+                detail={near}
+                label={`Capture-velocity map, ${readableNumber(Math.min(...cap.values))} to ${readableNumber(capScale.max)} m/s`}
               />
               <ColourLegend
                 scale={capScale}
@@ -63,6 +68,7 @@ export function MapsSection({ view, scenario }: { view: RunResult; scenario: Sce
                 }
               />
               <p className="mt-1 text-xs text-muted">
+                {near ? 'Finer cells cover the workstation. ' : ''}
                 {range
                   ? `Published capture velocity for ${release} release (${range.description.toLowerCase()}): ${range.min_mPerS}–${range.max_mPerS} m/s (ACGIH Industrial Ventilation). The source should sit where the map reaches this range.`
                   : 'No release type is given for the source, so no published capture-velocity range is shown.'}

@@ -1,51 +1,56 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
+import { type Path, pathBetween, positionAt } from '@/features/run-results/lib/path-sample';
 import type { Projection } from '@/features/run-results/lib/room-projection';
-import type { SizeClasses } from '@/features/run-results/lib/size-classes';
-import { type Dot, splitAtWrap, trail } from '@/features/run-results/lib/trajectory-frames';
-import type { Trajectories } from '../../../../shared/schemas/run-result';
+import { splitAtWrap } from '@/features/run-results/lib/trajectory-frames';
 
-export const TAIL_FRAMES = 8;
+export interface DotStyle {
+  colour: string;
+  radius: number;
+}
 
-// A short fading tail turns a cloud of dots into visible paths without drawing 150 frames per particle.
+// A short fading tail turns a cloud of dots into visible paths, and keeps dust a hood takes within
+// a second on screen for a moment after it has gone.
 export function ParticleLayer({
-  dots,
+  paths,
   p,
-  t,
-  frame,
-  from,
-  sizes,
+  time_s,
+  tail_s,
+  styleOf,
   room,
 }: {
-  dots: Dot[];
+  paths: readonly Path[];
   p: Projection;
-  t: Trajectories;
-  frame: number;
-  from: Int32Array;
-  sizes: SizeClasses;
+  time_s: number;
+  tail_s: number;
+  styleOf: (path: Path) => DotStyle | undefined;
   room: Scenario['room'];
 }) {
   return (
     <g data-testid={`dots-${p.kind}`}>
-      {dots.map((d) => {
-        const c = sizes.classes[sizes.classOfBin(d.bin)];
-        if (!c) return null;
-        const tails = splitAtWrap(trail(t, d.slot, frame, TAIL_FRAMES, from), room.length_m, room.width_m).map((part) =>
+      {paths.map((path) => {
+        const style = styleOf(path);
+        if (!style) return null;
+        const tails = splitAtWrap(pathBetween(path, time_s - tail_s, time_s), room.length_m, room.width_m).map((part) =>
           part.map(([x, y, z]) => p.toSvg(x, y, z)),
         );
-        const [cx, cy] = p.toSvg(d.x_m, d.y_m, d.z_m);
+        const at = positionAt(path, time_s);
+        if (!at && tails.length === 0) return null;
+        const dot = at && p.toSvg(...at);
         return (
-          <g key={d.slot}>
+          <g key={path.slot}>
             {tails.map((tail, k) => (
               <polyline
                 key={k}
                 points={tail.map((q) => q.join(',')).join(' ')}
                 fill="none"
-                stroke={c.colour}
-                strokeOpacity={0.4}
+                stroke={style.colour}
+                strokeOpacity={dot ? 0.45 : 0.25}
                 strokeWidth={1.2}
               />
             ))}
-            <circle cx={cx} cy={cy} r={c.radius} fill={c.colour} stroke="white" strokeWidth={0.6} data-slot={d.slot} />
+            {dot && (
+              <circle cx={dot[0]} cy={dot[1]} r={style.radius} fill={style.colour} stroke="white" strokeWidth={0.6} data-slot={path.slot} />
+            )}
           </g>
         );
       })}

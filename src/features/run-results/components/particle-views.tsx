@@ -1,121 +1,133 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
+import { FATES } from '../../../../shared/vocabulary/index';
 import type { Scenario } from '../../../../shared/schemas/scenario';
+import type { RunResult } from '../../../../shared/schemas/run-result';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { useViewZoom } from '@/hooks/use-view-zoom';
 import { usePlayback } from '@/features/run-results/hooks/use-playback';
-import type { RunResult, Trajectories } from '../../../../shared/schemas/run-result';
-import { projection } from '@/features/run-results/lib/room-projection';
+import { FATE_COLOUR } from '@/features/run-results/lib/fate-colours';
+import { buildPaths, fateCounts, type Path, positionAt } from '@/features/run-results/lib/path-sample';
+import { focusPoints, projection, viewSpan } from '@/features/run-results/lib/room-projection';
 import { sizeClasses } from '@/features/run-results/lib/size-classes';
-import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '@/features/run-results/lib/trajectory-frames';
-import { ParticleLayer, TAIL_FRAMES } from './particle-layer';
+import { baseRate_sPerS } from '@/features/run-results/lib/trajectory-frames';
+import { type DotStyle, ParticleLayer } from './particle-layer';
 import { PlaybackControls } from './playback-controls';
 import { DRAWING_WIDTH, RoomView } from './room-view';
 import { Section } from './section';
+import { FateLegend, MarkerLegend, SizeLegend } from './particle-legends';
 
-export function SizeLegend({ sizes }: { sizes: ReturnType<typeof sizeClasses> }) {
-  return (
-    <ul className="space-y-1" aria-label="Particle size classes">
-      {sizes.classes.map((c) => (
-        <li key={c.label} className="flex items-center gap-2">
-          <svg width={14} height={14} aria-hidden="true">
-            <circle cx={7} cy={7} r={c.radius + 1} fill={c.colour} />
-          </svg>
-          {c.label}
-        </li>
-      ))}
-    </ul>
-  );
-}
-
-const TAIL_SECONDS = (t: Trajectories) => Math.round(TAIL_FRAMES * t.frameInterval_s);
+export const TAIL_FRAMES = 4;
+type ColourBy = 'fate' | 'size';
+const COLOUR_WORD: Record<ColourBy, string> = { fate: 'Where it ends up', size: 'Size' };
 
 export function ParticleViews({ view, scenario }: { view: RunResult; scenario: Scenario }) {
   const t = view.trajectories;
-  const play = usePlayback(t.frames, t.frameInterval_s);
+  // Results with path ends record frames over the whole run; older ones stop at their last frame.
+  const end_s = (t.ends ? t.frames : Math.max(0, t.frames - 1)) * t.frameInterval_s;
+  const rate = baseRate_sPerS(end_s);
+  const play = usePlayback(end_s, rate);
+  const hasFates = !!t.fates;
+  const [colourBy, setColourBy] = useState<ColourBy>(hasFates ? 'fate' : 'size');
   const sizes = useMemo(
     () => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, view.sizeBins.aerodynamic_m),
     [view.engine.sizeBins, t.bins, view.sizeBins.aerodynamic_m],
   );
-  const from = useMemo(() => visibleFrom(t), [t]);
-  const dots = useMemo(() => frameDots(t, play.frame, from), [t, play.frame, from]);
-  const plan = projection(scenario.room, 'plan', DRAWING_WIDTH);
-  const elevation = projection(scenario.room, 'elevation', DRAWING_WIDTH);
-  const sampled = t.bins.filter((b) => b >= 0).length;
-  if (t.frames === 0 || sampled === 0) {
+  const paths = useMemo(() => buildPaths(t), [t]);
+  const counts = useMemo(() => fateCounts(paths), [paths]);
+  const planZoom = useViewZoom(viewSpan(scenario.room, 'plan'), focusPoints(scenario, 'plan'));
+  const elevationZoom = useViewZoom(viewSpan(scenario.room, 'elevation'), focusPoints(scenario, 'elevation'));
+  const plan = projection(scenario.room, 'plan', DRAWING_WIDTH, planZoom.window);
+  const elevation = projection(scenario.room, 'elevation', DRAWING_WIDTH, elevationZoom.window);
+  if (paths.length === 0) {
     return (
       <Section title="Particle paths, plan and elevation">
         <p className="text-sm text-muted">This run holds no sampled particle paths.</p>
       </Section>
     );
   }
-  const intro = `A sample of the simulated particles, drawn to scale; dots are sized and coloured by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${BASE_RATE_sPerS} simulated seconds per second.`;
+  const by = hasFates ? colourBy : 'size';
+  const styleOf = (path: Path): DotStyle | undefined => {
+    const c = sizes.classes[sizes.classOfBin(path.bin)];
+    if (!c) return undefined;
+    if (by === 'size') return c;
+    const fate = FATES[path.fate];
+    return fate ? { colour: FATE_COLOUR[fate], radius: c.radius } : undefined;
+  };
+  const airborne = paths.filter((p) => positionAt(p, play.time_s)).length;
+  const tail_s = TAIL_FRAMES * t.frameInterval_s;
+  const intro = `${paths.length} simulated particles sampled over the whole run, drawn to scale and sized by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${rate} simulated seconds per second. Both views open zoomed on the workstation.`;
+  const layer = (p: typeof plan) => (
+    <ParticleLayer paths={paths} p={p} time_s={play.time_s} tail_s={tail_s} styleOf={styleOf} room={scenario.room} />
+  );
   return (
     <Section title="Particle paths, plan and elevation" intro={intro}>
       <PlaybackControls
-        frame={play.frame}
-        frames={t.frames}
-        time_s={frameTime_s(t, play.frame)}
-        end_s={frameTime_s(t, t.frames - 1)}
+        time_s={play.time_s}
+        end_s={end_s}
+        step_s={t.frameInterval_s}
         playing={play.playing}
         speed={play.speed}
         onToggle={play.toggle}
         onSeek={play.seek}
         onSpeed={play.setSpeed}
       />
+      {hasFates && (
+        <div className="no-print mt-3">
+          <ChoiceChips
+            legend="Colour the particles by"
+            caption="Colour by"
+            options={['fate', 'size'] as const}
+            value={colourBy}
+            onChange={setColourBy}
+            label={(c) => COLOUR_WORD[c]}
+          />
+        </div>
+      )}
       <div className="mt-3 grid gap-4 lg:grid-cols-[minmax(0,48rem)_minmax(0,1fr)]">
-        <div className="grid gap-4">
-          <figure className="rounded-lg border border-line bg-white p-3">
+        <div className="grid min-w-0 gap-4">
+          <figure className="min-w-0 rounded-lg border border-line bg-white p-3">
             <figcaption className="mb-1 text-sm font-semibold">Plan (seen from above)</figcaption>
             <RoomView
               scenario={scenario}
               p={plan}
-              label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`}
-              over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />}
+              zoom={planZoom}
+              what="plan"
+              label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${airborne} airborne particles`}
+              over={layer(plan)}
             />
           </figure>
-          <figure className="rounded-lg border border-line bg-white p-3">
+          <figure className="min-w-0 rounded-lg border border-line bg-white p-3">
             <figcaption className="mb-1 text-sm font-semibold">Elevation (side view, looking along y)</figcaption>
             <RoomView
               scenario={scenario}
               p={elevation}
-              label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`}
-              over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />}
+              zoom={elevationZoom}
+              what="elevation"
+              label={`Elevation of the room, ${scenario.room.height_m} m high, with ${airborne} airborne particles`}
+              over={layer(elevation)}
             />
           </figure>
         </div>
         <aside aria-label="Key to the particle views" className="space-y-4 text-sm lg:sticky lg:top-4 lg:self-start">
           <p className="rounded-lg border border-line bg-white p-3">
             <span className="block text-2xl font-semibold tabular-nums" data-testid="airborne-count">
-              {dots.length}
+              {airborne}
             </span>
-            of {sampled} sampled particles airborne at t = {frameTime_s(t, play.frame).toFixed(0)} s
+            of {paths.length} sampled particles airborne at t = {Math.round(play.time_s)} s
           </p>
-          <div>
-            <h3 className="mb-1 font-semibold">Particle size</h3>
-            <SizeLegend sizes={sizes} />
-          </div>
-          <div>
-            <h3 className="mb-1 font-semibold">Markers</h3>
-            <ul className="space-y-1 text-muted">
-              <li>
-                <span aria-hidden="true" className="text-ink">
-                  ◇
-                </span>{' '}
-                dust source
-              </li>
-              <li>
-                <span aria-hidden="true" className="font-bold text-act">
-                  ▕
-                </span>{' '}
-                hood face, arrow: air drawn in
-              </li>
-              <li>
-                <span aria-hidden="true" className="text-ink">
-                  ◌
-                </span>{' '}
-                breathing zone, radius {scenario.worker.radius_m} m
-              </li>
-              <li>Faint lines: each particle&apos;s last {TAIL_SECONDS(t)} s</li>
-            </ul>
-          </div>
+          {by === 'fate' ? (
+            <div>
+              <h3 className="mb-1 font-semibold">Where each particle ends up</h3>
+              <FateLegend counts={counts} />
+            </div>
+          ) : (
+            <div>
+              <h3 className="mb-1 font-semibold">Particle size</h3>
+              <SizeLegend sizes={sizes} />
+            </div>
+          )}
+          {!hasFates && <p className="text-muted">This result was recorded before particle fates were kept, so colours show size only.</p>}
+          <MarkerLegend radius_m={scenario.worker.radius_m} tail_s={Math.round(tail_s)} />
         </aside>
       </div>
     </Section>

@@ -1,7 +1,12 @@
-import { useId, type ReactNode } from 'react';
+import { useId, useRef, type ReactNode } from 'react';
+import { trimSig } from '../../../../shared/format/index';
 import type { Scenario } from '../../../../shared/schemas/scenario';
-import { gridStep_m, hoodOutlines, type Projection } from '@/features/run-results/lib/room-projection';
+import { hoodOutlines, type Projection } from '@/features/run-results/lib/room-projection';
 import { ACT, INK, LINE, MUTED } from '@/components/chart-style';
+import { ZoomControls } from '@/components/zoom-controls';
+import type { ViewZoom } from '@/hooks/use-view-zoom';
+import { useZoomGestures } from '@/hooks/use-zoom-gestures';
+import { gridSpacing_m, stepsWithin } from '@/lib/view-zoom';
 
 // Type is sized in drawing units; views shown narrower (side by side) pass a larger textScale so
 // labels still come out near 11–13 px on screen.
@@ -10,8 +15,6 @@ const axisLabel = (k: number) => ({ fill: INK, fontSize: 14 * k, fontWeight: 600
 
 export const DRAWING_WIDTH = 640;
 const margins = (k: number) => ({ top: 14 * k, right: 16, bottom: 66 * k, left: 58 * k });
-
-const range = (step: number, max: number) => Array.from({ length: Math.floor(max / step + 1e-9) + 1 }, (_, i) => i * step);
 
 function Markers({ scenario, p, arrow, k }: { scenario: Scenario; p: Projection; arrow: string; k: number }) {
   const [sx, sy] = p.toSvg(scenario.source.x_m, scenario.source.y_m, scenario.source.z_m);
@@ -71,6 +74,8 @@ export function RoomView({
   under,
   over,
   textScale: k = 1,
+  zoom,
+  what,
 }: {
   scenario: Scenario;
   p: Projection;
@@ -78,57 +83,90 @@ export function RoomView({
   under?: ReactNode;
   over?: ReactNode;
   textScale?: number;
+  zoom: ViewZoom;
+  /** Names the drawing in the zoom buttons' labels. */
+  what: string;
 }) {
   const M = margins(k);
-  const w = p.width_m * p.scale;
-  const h = p.height_m * p.scale;
-  const step = gridStep_m(Math.max(p.width_m, p.height_m));
+  const w = p.plotWidth;
+  const h = p.plotHeight;
+  const win = p.window;
+  const step = gridSpacing_m(p.scale, Math.max(w, h) / 12);
   const bar = step * p.scale;
-  // Several views share a page; marker ids must be unique and safe inside url(#…).
-  const arrow = `arrow-${useId().replace(/[^\w-]/g, '')}`;
+  const svgRef = useRef<SVGSVGElement>(null);
+  const gestures = useZoomGestures(svgRef, zoom, p.scale, (x, y) => p.fromSvg(x - M.left, y - M.top));
+  // Several views share a page; marker and clip ids must be unique and safe inside url(#…).
+  const uid = useId().replace(/[^\w-]/g, '');
+  const arrow = `arrow-${uid}`;
+  const clip = `clip-${uid}`;
+  const [rx0, ry0] = p.toSvg(0, p.height_m, p.height_m);
+  const [rx1, ry1] = p.toSvg(p.width_m, 0, 0);
+  const zoomed = zoom.zoom.k > 1.0001;
   return (
-    <svg viewBox={`0 0 ${w + M.left + M.right} ${h + M.top + M.bottom}`} className="h-auto w-full" role="img" aria-label={label}>
-      <defs>
-        <marker id={arrow} viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
-          <path d="M0 0 L10 5 L0 10 Z" fill={ACT} />
-        </marker>
-      </defs>
-      <g transform={`translate(${M.left} ${M.top})`}>
-        <rect width={w} height={h} fill="white" />
-        {under}
-        {range(step, p.width_m).map((x) => (
-          <line key={`x${x}`} x1={x * p.scale} x2={x * p.scale} y1={0} y2={h} stroke={LINE} strokeWidth={0.75} />
-        ))}
-        {range(step, p.height_m).map((y) => (
-          <line key={`y${y}`} x1={0} x2={w} y1={h - y * p.scale} y2={h - y * p.scale} stroke={LINE} strokeWidth={0.75} />
-        ))}
-        <rect width={w} height={h} fill="none" stroke={INK} strokeWidth={2} />
-        {range(step, p.width_m).map((x) => (
-          <text key={`tx${x}`} x={x * p.scale} y={h + 14} textAnchor="middle" {...tickLabel(k)}>
-            {x}
+    <div className="grid gap-2">
+      <ZoomControls v={zoom} what={what} />
+      <svg
+        ref={svgRef}
+        viewBox={`0 0 ${w + M.left + M.right} ${h + M.top + M.bottom}`}
+        className={`h-auto w-full rounded-sm focus-visible:outline-3 focus-visible:outline-accent ${zoomed ? 'cursor-move' : ''}`}
+        style={{ touchAction: 'pan-y' }}
+        role="group"
+        tabIndex={0}
+        onKeyDown={gestures.onKeyDown}
+        aria-label={`${zoomed ? `${label}; zoomed ${trimSig(zoom.zoom.k, 2)}× on x ${trimSig(win.a0_m, 3)}–${trimSig(win.a1_m, 3)} m` : label}. Plus and minus keys zoom, arrow keys pan.`}
+        data-zoom={trimSig(zoom.zoom.k, 3)}
+        {...gestures.svg}
+      >
+        <defs>
+          <marker id={arrow} viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
+            <path d="M0 0 L10 5 L0 10 Z" fill={ACT} />
+          </marker>
+          <clipPath id={clip}>
+            <rect width={w} height={h} />
+          </clipPath>
+        </defs>
+        <g transform={`translate(${M.left} ${M.top})`}>
+          <g clipPath={`url(#${clip})`}>
+            <rect width={w} height={h} fill="white" />
+            {under}
+            {stepsWithin(win.a0_m, win.a1_m, step).map((x) => {
+              const [sx] = p.toSvg(x, 0, 0);
+              return <line key={`x${x}`} x1={sx} x2={sx} y1={0} y2={h} stroke={LINE} strokeWidth={0.75} />;
+            })}
+            {stepsWithin(win.b0_m, win.b1_m, step).map((y) => {
+              const [, sy] = p.toSvg(0, y, y);
+              return <line key={`y${y}`} x1={0} x2={w} y1={sy} y2={sy} stroke={LINE} strokeWidth={0.75} />;
+            })}
+            <rect x={rx0} y={ry0} width={rx1 - rx0} height={ry1 - ry0} fill="none" stroke={INK} strokeWidth={zoomed ? 4 : 2} />
+            <Markers scenario={scenario} p={p} arrow={arrow} k={k} />
+            {over}
+          </g>
+          <rect width={w} height={h} fill="none" stroke={zoomed ? LINE : INK} strokeWidth={zoomed ? 1 : 2} />
+          {stepsWithin(win.a0_m, win.a1_m, step).map((x) => (
+            <text key={`tx${x}`} x={p.toSvg(x, 0, 0)[0]} y={h + 14} textAnchor="middle" {...tickLabel(k)}>
+              {x}
+            </text>
+          ))}
+          {stepsWithin(win.b0_m, win.b1_m, step).map((y) => (
+            <text key={`ty${y}`} x={-6} y={p.toSvg(0, y, y)[1] + 4} textAnchor="end" {...tickLabel(k)}>
+              {y}
+            </text>
+          ))}
+          <text x={w / 2} y={h + 36 * k} textAnchor="middle" {...axisLabel(k)}>
+            {p.horizontalLabel}
           </text>
-        ))}
-        {range(step, p.height_m).map((y) => (
-          <text key={`ty${y}`} x={-6} y={h - y * p.scale + 4} textAnchor="end" {...tickLabel(k)}>
-            {y}
+          <text transform={`translate(${-38 * k} ${h / 2}) rotate(-90)`} textAnchor="middle" {...axisLabel(k)}>
+            {p.verticalLabel}
           </text>
-        ))}
-        <text x={w / 2} y={h + 36 * k} textAnchor="middle" {...axisLabel(k)}>
-          {p.horizontalLabel}
-        </text>
-        <text transform={`translate(${-38 * k} ${h / 2}) rotate(-90)`} textAnchor="middle" {...axisLabel(k)}>
-          {p.verticalLabel}
-        </text>
-        <g transform={`translate(${w - bar} ${h + 48 * k})`} data-testid="scale-bar">
-          <rect width={bar} height={5 * k} fill={INK} />
-          <rect width={bar / 2} height={5 * k} fill="white" stroke={INK} />
-          <text x={-6} y={5 * k + 1} textAnchor="end" fontSize={13 * k} fill={INK}>
-            {step} m
-          </text>
+          <g transform={`translate(${w - bar} ${h + 48 * k})`} data-testid="scale-bar">
+            <rect width={bar} height={5 * k} fill={INK} />
+            <rect width={bar / 2} height={5 * k} fill="white" stroke={INK} />
+            <text x={-6} y={5 * k + 1} textAnchor="end" fontSize={13 * k} fill={INK}>
+              {step} m
+            </text>
+          </g>
         </g>
-        <Markers scenario={scenario} p={p} arrow={arrow} k={k} />
-        {over}
-      </g>
-    </svg>
+      </svg>
+    </div>
   );
 }

@@ -1,9 +1,9 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { advanceFrames } from '@/features/run-results/lib/trajectory-frames';
+import { advanceTime_s } from '@/features/run-results/lib/trajectory-frames';
 
-/** Frame clock on requestAnimationFrame; stops at the last frame and whenever the view unmounts. */
-export function usePlayback(frames: number, frameInterval_s: number) {
-  const [frame, setFrame] = useState(0);
+/** Simulated-time clock on requestAnimationFrame; stops at the end and whenever the view unmounts. */
+export function usePlayback(end_s: number, rate_sPerS: number) {
+  const [time_s, setTime] = useState(0);
   const [playing, setPlaying] = useState(false);
   const [speed, setSpeed] = useState(1);
   const position = useRef(0);
@@ -12,25 +12,25 @@ export function usePlayback(frames: number, frameInterval_s: number) {
     if (!playing) return;
     let last = performance.now();
     let handle = requestAnimationFrame(function tick(now) {
-      position.current = Math.min(frames - 1, position.current + advanceFrames(frameInterval_s, now - last, speed));
+      position.current = Math.min(end_s, position.current + advanceTime_s(rate_sPerS, now - last, speed));
       last = now;
-      setFrame(Math.floor(position.current));
-      if (position.current >= frames - 1) setPlaying(false);
+      setTime(position.current);
+      if (position.current >= end_s) setPlaying(false);
       else handle = requestAnimationFrame(tick);
     });
     return () => cancelAnimationFrame(handle);
-  }, [playing, speed, frames, frameInterval_s]);
+  }, [playing, speed, end_s, rate_sPerS]);
 
-  const seek = useCallback((f: number) => {
-    position.current = f;
-    setFrame(f);
+  const seek = useCallback((t: number) => {
+    position.current = t;
+    setTime(t);
   }, []);
 
   const toggle = useCallback(() => {
     // Play from the end starts over; anything else resumes where the scrubber is.
-    if (!playing && position.current >= frames - 1) seek(0);
+    if (!playing && position.current >= end_s) seek(0);
     setPlaying((p) => !p);
-  }, [playing, frames, seek]);
+  }, [playing, end_s, seek]);
 
-  return { frame, playing, speed, setSpeed, seek, toggle };
+  return { time_s, playing, speed, setSpeed, seek, toggle };
 }

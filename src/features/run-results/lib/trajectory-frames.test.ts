@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { advanceFrames, frameDots, frameTime_s, splitAtWrap, trail, visibleFrom } from './trajectory-frames';
+import { advanceTime_s, baseRate_sPerS, splitAtWrap, visibleFrom } from './trajectory-frames';
 import { sizeClasses } from './size-classes';
 
 // Three slots (the last unused), three frames, laid out [particle][frame][xyz] as the engine's kernel writes them.
@@ -12,29 +12,6 @@ const t = {
 };
 
 describe('trajectory frames', () => {
-  it('pick each airborne particle at the frame and skip NaN frames and unused slots', () => {
-    expect(frameDots(t, 0)).toEqual([{ slot: 0, bin: 3, x_m: 1, y_m: 2, z_m: 3 }]);
-    expect(frameDots(t, 1).map((d) => [d.slot, d.x_m, d.z_m])).toEqual([
-      [0, 1.5, 3],
-      [1, 4, 0.5],
-    ]);
-    expect(frameDots(t, 2).map((d) => d.slot)).toEqual([1]);
-  });
-
-  it('clamp and round the frame, and give its time in seconds', () => {
-    expect(frameDots(t, 7).map((d) => d.slot)).toEqual([1]);
-    expect(frameDots(t, 0.6)).toEqual(frameDots(t, 1));
-    expect(frameTime_s(t, 2)).toBe(4);
-  });
-
-  it('give a tail of the airborne positions up to the frame, oldest first', () => {
-    expect(trail(t, 1, 2, 5)).toEqual([
-      [4, 5, 0.5],
-      [4.5, 5, 0.375],
-    ]);
-    expect(trail(t, 0, 2, 2)).toEqual([[1.5, 2, 3]]);
-  });
-
   it('hide the frames the engine fills with the release point before a particle is released', () => {
     const waiting = {
       ...t,
@@ -42,14 +19,7 @@ describe('trajectory frames', () => {
       positions_m: Float32Array.from([2, 3, 0.875, 2, 3, 0.875, 2.25, 3, 1]),
       bins: Int32Array.from([5]),
     };
-    const from = visibleFrom(waiting);
-    expect(Array.from(from)).toEqual([1]);
-    expect(frameDots(waiting, 0, from)).toEqual([]);
-    expect(frameDots(waiting, 1, from)).toHaveLength(1);
-    expect(trail(waiting, 0, 2, 5, from)).toEqual([
-      [2, 3, 0.875],
-      [2.25, 3, 1],
-    ]);
+    expect(Array.from(visibleFrom(waiting))).toEqual([1]);
     // A particle that moves from its first frame is shown from the start.
     expect(Array.from(visibleFrom(t)).slice(0, 2)).toEqual([0, 0]);
   });
@@ -89,9 +59,13 @@ describe('trajectory frames', () => {
     ).toHaveLength(1);
   });
 
-  it('advance 20 simulated seconds per wall second at 1×', () => {
-    expect(advanceFrames(2, 1000, 1)).toBe(10);
-    expect(advanceFrames(2, 500, 4)).toBe(20);
+  it('play a whole run in about a minute at 1×, at a plain rate, and scale with the speed', () => {
+    expect(baseRate_sPerS(3600)).toBe(60);
+    expect(baseRate_sPerS(1200)).toBe(20);
+    expect(baseRate_sPerS(300)).toBe(5);
+    expect(baseRate_sPerS(8 * 3600)).toBe(600);
+    expect(advanceTime_s(60, 1000, 1)).toBe(60);
+    expect(advanceTime_s(60, 500, 4)).toBe(120);
   });
 });
 

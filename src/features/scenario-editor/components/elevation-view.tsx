@@ -5,17 +5,20 @@ export function ElevationView(props: RoomViewProps) {
     <RoomView
       view="elevation"
       {...props}
-      overlay={(frame) => (
-        <line
-          x1={frame.toX(0)}
-          x2={frame.toX(frame.span_m.a)}
-          y1={frame.toY(0)}
-          y2={frame.toY(0)}
-          className="stroke-ink"
-          strokeWidth={4}
-          aria-hidden="true"
-        />
-      )}
+      overlay={(frame) =>
+        // The floor, only while the zoom window reaches down to it.
+        frame.toY(0) <= frame.plot.y0 + 0.5 ? (
+          <line
+            x1={Math.max(frame.toX(0), frame.plot.x0)}
+            x2={Math.min(frame.toX(frame.span_m.a), frame.plot.x1)}
+            y1={frame.toY(0)}
+            y2={frame.toY(0)}
+            className="stroke-ink"
+            strokeWidth={4}
+            aria-hidden="true"
+          />
+        ) : null
+      }
     />
   );
 }

@@ -30,7 +30,7 @@ export function ScenarioEditor(props: ScenarioEditorProps) {
   const section = { value, onChange, errors };
 
   return (
-    <div className="grid items-start gap-8 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-8 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
       {/* Sticky beside the form so a typed hood position shows in the drawing at once. */}
       <div
         className="flex flex-col gap-4 xl:sticky xl:top-4 xl:col-start-2 xl:row-start-1 xl:max-h-[calc(100vh-2rem)] xl:overflow-y-auto"

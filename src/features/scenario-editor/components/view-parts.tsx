@@ -1,47 +1,70 @@
 import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
+import { gridSpacing_m, stepsWithin } from '@/lib/view-zoom';
 
-const range = (n: number) => Array.from({ length: Math.floor(n + 1e-9) + 1 }, (_, i) => i);
+// Labelled lines where they stay readable, unlabelled finer lines where the zoom leaves room for them.
+export function gridSteps(frame: ViewFrame) {
+  const major = gridSpacing_m(frame.scale_pxPerM, 60);
+  const minor = gridSpacing_m(frame.scale_pxPerM, 14);
+  return { major, minor: minor < major ? minor : undefined };
+}
 
-// Metre grid with labelled ticks; half-metre lines only where the scale leaves room to see them.
-export function RoomGrid({ frame, labelA, labelB }: { frame: ViewFrame; labelA: string; labelB: string }) {
+export function RoomGrid({ frame, labelA, labelB, clipId }: { frame: ViewFrame; labelA: string; labelB: string; clipId: string }) {
   const { a, b } = frame.span_m;
-  const x0 = frame.toX(0);
-  const x1 = frame.toX(a);
-  const y0 = frame.toY(0);
-  const y1 = frame.toY(b);
-  const halves = frame.scale_pxPerM > 60;
+  const w = frame.window;
+  const { plot } = frame;
+  const { major, minor } = gridSteps(frame);
+  const zoomed = w.a1_m - w.a0_m < a - 1e-9;
   return (
     <g aria-hidden="true">
-      <rect x={x0} y={y1} width={x1 - x0} height={y0 - y1} className="fill-paper" />
-      {halves &&
-        range(a * 2).map((i) => (
-          <line key={`ha${i}`} x1={frame.toX(i / 2)} x2={frame.toX(i / 2)} y1={y0} y2={y1} className="stroke-paper-deep" />
+      <rect x={plot.x0} y={plot.y1} width={plot.x1 - plot.x0} height={plot.y0 - plot.y1} className="fill-paper" />
+      <g clipPath={`url(#${clipId})`}>
+        {minor &&
+          stepsWithin(w.a0_m, w.a1_m, minor).map((v) => (
+            <line key={`ma${v}`} x1={frame.toX(v)} x2={frame.toX(v)} y1={plot.y0} y2={plot.y1} className="stroke-paper-deep" />
+          ))}
+        {minor &&
+          stepsWithin(w.b0_m, w.b1_m, minor).map((v) => (
+            <line key={`mb${v}`} x1={plot.x0} x2={plot.x1} y1={frame.toY(v)} y2={frame.toY(v)} className="stroke-paper-deep" />
+          ))}
+        {stepsWithin(w.a0_m, w.a1_m, major).map((v) => (
+          <line key={`a${v}`} x1={frame.toX(v)} x2={frame.toX(v)} y1={plot.y0} y2={plot.y1} className="stroke-line" />
         ))}
-      {halves &&
-        range(b * 2).map((i) => (
-          <line key={`hb${i}`} x1={x0} x2={x1} y1={frame.toY(i / 2)} y2={frame.toY(i / 2)} className="stroke-paper-deep" />
+        {stepsWithin(w.b0_m, w.b1_m, major).map((v) => (
+          <line key={`b${v}`} x1={plot.x0} x2={plot.x1} y1={frame.toY(v)} y2={frame.toY(v)} className="stroke-line" />
         ))}
-      {range(a).map((i) => (
-        <g key={`a${i}`}>
-          <line x1={frame.toX(i)} x2={frame.toX(i)} y1={y0} y2={y1} className="stroke-line" />
-          <text x={frame.toX(i)} y={y0 + 16} textAnchor="middle" className="fill-muted text-[11px]">
-            {i}
-          </text>
-        </g>
+        <rect
+          x={frame.toX(0)}
+          y={frame.toY(b)}
+          width={frame.toX(a) - frame.toX(0)}
+          height={frame.toY(0) - frame.toY(b)}
+          className="fill-none stroke-ink"
+          strokeWidth={zoomed ? 5 : 2}
+        />
+      </g>
+      {zoomed && (
+        <rect
+          x={plot.x0}
+          y={plot.y1}
+          width={plot.x1 - plot.x0}
+          height={plot.y0 - plot.y1}
+          className="fill-none stroke-line"
+          strokeWidth={1}
+        />
+      )}
+      {stepsWithin(w.a0_m, w.a1_m, major).map((v) => (
+        <text key={`ta${v}`} x={frame.toX(v)} y={plot.y0 + 16} textAnchor="middle" className="fill-muted text-[11px]">
+          {v}
+        </text>
       ))}
-      {range(b).map((i) => (
-        <g key={`b${i}`}>
-          <line x1={x0} x2={x1} y1={frame.toY(i)} y2={frame.toY(i)} className="stroke-line" />
-          <text x={x0 - 8} y={frame.toY(i) + 4} textAnchor="end" className="fill-muted text-[11px]">
-            {i}
-          </text>
-        </g>
+      {stepsWithin(w.b0_m, w.b1_m, major).map((v) => (
+        <text key={`tb${v}`} x={plot.x0 - 8} y={frame.toY(v) + 4} textAnchor="end" className="fill-muted text-[11px]">
+          {v}
+        </text>
       ))}
-      <rect x={x0} y={y1} width={x1 - x0} height={y0 - y1} className="fill-none stroke-ink" strokeWidth={2} />
-      <text x={x1 + 6} y={y0 + 16} className="fill-ink text-[12px] font-semibold">
+      <text x={plot.x1 + 6} y={plot.y0 + 16} className="fill-ink text-[12px] font-semibold">
         {labelA} →
       </text>
-      <text x={x0 - 8} y={y1 - 12} textAnchor="middle" className="fill-ink text-[12px] font-semibold">
+      <text x={plot.x0 - 8} y={plot.y1 - 12} textAnchor="middle" className="fill-ink text-[12px] font-semibold">
         ↑ {labelB}
       </text>
     </g>
@@ -49,16 +72,17 @@ export function RoomGrid({ frame, labelA, labelB }: { frame: ViewFrame; labelA: 
 }
 
 export function ScaleBar({ frame }: { frame: ViewFrame }) {
-  const x1 = frame.toX(frame.span_m.a);
-  const x0 = x1 - frame.scale_pxPerM;
+  const { major } = gridSteps(frame);
+  const x1 = frame.plot.x1;
+  const x0 = x1 - major * frame.scale_pxPerM;
   const y = frame.height - 12;
   return (
-    <g aria-hidden="true" className="stroke-ink">
+    <g aria-hidden="true" className="stroke-ink" data-testid="editor-scale-bar">
       <line x1={x0} x2={x1} y1={y} y2={y} strokeWidth={2} />
       <line x1={x0} x2={x0} y1={y - 5} y2={y + 1} strokeWidth={2} />
       <line x1={x1} x2={x1} y1={y - 5} y2={y + 1} strokeWidth={2} />
       <text x={x0 - 6} y={y + 4} textAnchor="end" className="fill-ink stroke-none text-[11px]">
-        1 m
+        {major} m
       </text>
     </g>
   );

@@ -1,5 +1,5 @@
 import { useRef, type KeyboardEvent, type PointerEvent, type RefObject } from 'react';
-import { nudgeFor, nudgeInside, snapInside } from '@/features/scenario-editor/lib/snap';
+import { nudgeFor, nudgeInside, snapFor, snapInside } from '@/features/scenario-editor/lib/snap';
 import type { ViewFrame } from '@/features/scenario-editor/lib/view-frame';
 
 type Args = {
@@ -10,7 +10,7 @@ type Args = {
   disabled?: boolean;
 };
 
-// Pointer drags snap to the 5 cm grid; keys nudge by exact steps so a typed 1.72 m becomes 1.77 m, not 1.75 m.
+// Pointer drags snap to the 5 cm grid (1 cm when zoomed in); keys nudge by exact steps so a typed 1.72 m becomes 1.77 m, not 1.75 m.
 export function useDrag({ svgRef, frame, at, onMove, disabled }: Args) {
   const grab = useRef<{ da: number; db: number; last: string } | null>(null);
 
@@ -35,8 +35,9 @@ export function useDrag({ svgRef, frame, at, onMove, disabled }: Args) {
       const g = grab.current;
       const r = g && toRoom(e);
       if (!g || !r) return;
-      const a = snapInside(r.a_m - g.da, frame.span_m.a);
-      const b = snapInside(r.b_m - g.db, frame.span_m.b);
+      const step = snapFor(frame.scale_pxPerM);
+      const a = snapInside(r.a_m - g.da, frame.span_m.a, step);
+      const b = snapInside(r.b_m - g.db, frame.span_m.b, step);
       const key = `${a},${b}`;
       if (key === g.last) return;
       g.last = key;

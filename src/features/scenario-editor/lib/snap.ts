@@ -2,6 +2,9 @@ export const SNAP_m = 0.05;
 export const NUDGE_m = 0.05;
 export const BIG_NUDGE_m = 0.5;
 
+/** Drag snap for the drawing's scale: whole centimetres once a 5 cm step would jump more than 12 px. */
+export const snapFor = (scale_pxPerM: number) => (SNAP_m * scale_pxPerM > 12 ? 0.01 : SNAP_m);
+
 export const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
 
 // Rounding to whole millimetres keeps 1.7 + 0.05 from showing as 1.7500000000000002.
