@@ -1,3 +1,4 @@
+import { dateText } from '../../../shared/format/index';
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
 import { Can } from '@/components/can';
 import { ApproveForm } from '@/features/decisions/components/approve-form';
@@ -20,7 +21,7 @@ export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
           <p className="mb-3 text-sm text-muted">
             Uses the latest saved run.{' '}
             {scenario.approval
-              ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${scenario.approval.reviewDate}.`
+              ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${dateText(scenario.approval.reviewDate)}.`
               : 'Nothing is approved at this station yet.'}
           </p>
           <ApproveForm

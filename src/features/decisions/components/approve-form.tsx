@@ -1,3 +1,4 @@
+import { dateText } from '../../../../shared/format/index';
 import { useState, type FormEvent } from 'react';
 import { reviewDueDate, reviewMonthsFor } from '../../../../shared/approval/review-date';
 import type { Banner } from '../../../../shared/schemas/workspace-views';
@@ -48,7 +49,7 @@ export function ApproveForm({
       </Button>
       <div className="sm:col-span-3">
         {approve.isSuccess && (
-          <Notice>Approved. The station board now shows this control, to be reviewed by {approve.data.reviewDate}.</Notice>
+          <Notice>Approved. The station board now shows this control, to be reviewed by {dateText(approve.data.reviewDate)}.</Notice>
         )}
         {approve.error && <ErrorMessage title="Not approved" error={approve.error} />}
       </div>

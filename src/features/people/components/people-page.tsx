@@ -1,3 +1,4 @@
+import { dateTimeText } from '../../../../shared/format/index';
 import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/auth/permissions';
 import type { Person } from '../../../../shared/schemas/auth';
 import { Button } from '@/components/ui/button';
@@ -45,7 +46,7 @@ export function PeoplePage() {
     {
       key: 'last',
       header: 'Last sign-in',
-      render: (p) => (p.lastSignInAt ? new Date(p.lastSignInAt).toLocaleString() : '—'),
+      render: (p) => dateTimeText(p.lastSignInAt),
       sortValue: (p) => p.lastSignInAt ?? '',
     },
     {
