@@ -32,7 +32,7 @@ function Report({ detail }: { detail: ScenarioDetail }) {
   const profile = useSizeProfile(detail.sizeProfileId ?? 0);
   // Who ran it lives in the audit trail; a reader without it sees "not recorded" rather than an error.
   const audit = useAudit({ action: 'run.saved', workstationId: detail.workstationId });
-  const ranBy = audit.data?.items.find((e) => e.detail?.runId === runId)?.actorEmail ?? null;
+  const ranBy = audit.data?.items.find((e) => e.detail?.runId === runId)?.actorName ?? null;
   const current = useMemo(() => parseScenario(detail.input), [detail.input]);
 
   if (runId && run.isPending) return <Spinner label="Loading the saved run…" />;
