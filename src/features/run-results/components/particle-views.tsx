@@ -6,6 +6,7 @@ import { projection } from '@/features/run-results/lib/room-projection';
 import { sizeClasses } from '@/features/run-results/lib/size-classes';
 import { BASE_RATE_sPerS, frameDots, frameTime_s, visibleFrom } from '@/features/run-results/lib/trajectory-frames';
 import { ParticleLayer, TAIL_FRAMES } from './particle-layer';
+import { PathTraces, tracedCount } from './path-traces';
 import { PlaybackControls } from './playback-controls';
 import { DRAWING_WIDTH, RoomView } from './room-view';
 import { Section } from './section';
@@ -46,6 +47,17 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
       </Section>
     );
   }
+  // On screen the animation's current frame; on paper every sampled path over the recorded window.
+  const layers = (p: typeof plan) => (
+    <>
+      <g className="print:hidden">
+        <ParticleLayer dots={dots} p={p} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />
+      </g>
+      <g className="hidden print:inline">
+        <PathTraces p={p} t={t} from={from} sizes={sizes} room={scenario.room} />
+      </g>
+    </>
+  );
   const intro = `A sample of the simulated particles, drawn to scale; dots are sized and coloured by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${BASE_RATE_sPerS} simulated seconds per second.`;
   return (
     <Section title="Particle paths, plan and elevation" intro={intro}>
@@ -61,14 +73,14 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
         onSpeed={play.setSpeed}
       />
       <div className="mt-3 grid gap-4 lg:grid-cols-[minmax(0,48rem)_minmax(0,1fr)]">
-        <div className="grid gap-4">
+        <div className="grid gap-4 print:grid-cols-2">
           <figure className="rounded-lg border border-line bg-white p-3">
             <figcaption className="mb-1 text-sm font-semibold">Plan (seen from above)</figcaption>
             <RoomView
               scenario={scenario}
               p={plan}
               label={`Plan view of the ${scenario.room.length_m} by ${scenario.room.width_m} m room with ${dots.length} airborne particles`}
-              over={<ParticleLayer dots={dots} p={plan} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />}
+              over={layers(plan)}
             />
           </figure>
           <figure className="rounded-lg border border-line bg-white p-3">
@@ -77,12 +89,16 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
               scenario={scenario}
               p={elevation}
               label={`Elevation of the room, ${scenario.room.height_m} m high, with ${dots.length} airborne particles`}
-              over={<ParticleLayer dots={dots} p={elevation} t={t} frame={play.frame} from={from} sizes={sizes} room={scenario.room} />}
+              over={layers(elevation)}
             />
           </figure>
         </div>
         <aside aria-label="Key to the particle views" className="space-y-4 text-sm lg:sticky lg:top-4 lg:self-start">
-          <p className="rounded-lg border border-line bg-white p-3">
+          <p className="hidden rounded-lg border border-line bg-white p-3 print:block">
+            On paper: the whole recorded paths over the first {Math.round(frameTime_s(t, t.frames - 1) / 60)} min, a dot at each recorded
+            position; {tracedCount(t, from)} of the {sampled} sampled particles were airborne at one frame at least.
+          </p>
+          <p className="rounded-lg border border-line bg-white p-3 print:hidden">
             <span className="block text-2xl font-semibold tabular-nums" data-testid="airborne-count">
               {dots.length}
             </span>
