@@ -88,7 +88,9 @@ function Report({ detail }: { detail: ScenarioDetail }) {
       approval={detail.approval}
       runPicker={picker}
     >
-      {r && <RunResults result={r.result} scenario={r.input} agentName={agent?.name} limitSource={r.input.limit?.source} />}
+      {r && (
+        <RunResults result={r.result} scenario={r.input} agentName={agent?.name} limitSource={r.input.limit?.source} title={detail.name} />
+      )}
     </ReportDocument>
   );
 }

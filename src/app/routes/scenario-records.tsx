@@ -12,7 +12,7 @@ export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
       <div>
         <h2 id="records-heading">Saved runs</h2>
         <div className="mt-3">
-          <SavedRuns runs={scenario.runs} />
+          <SavedRuns runs={scenario.runs} scenarioName={scenario.name} />
         </div>
       </div>
       <Can permission="scenarios:approve">

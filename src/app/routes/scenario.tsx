@@ -122,6 +122,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
           scenario={fresh.input}
           agentName={agent?.name}
           limitSource={fresh.input.limit?.source}
+          title={draft.name}
         />
       )}
       <ScenarioRecords scenario={base} />
