@@ -3,6 +3,7 @@ import type { AgentRecord } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
 import { auditOf, type Actor } from '../audit/audit.repo';
+import { changesOf } from '../audit/changes';
 import { agents } from './agents.repo';
 import { rejudgeAgentRuns } from '../verdicts/rejudge-agent-runs';
 
@@ -31,13 +32,10 @@ export const agentsService = {
       await agents.update(trx, id, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
       const scenariosRejudged = await rejudgeAgentRuns(trx, id, input.data);
-      await auditAgent(
-        trx,
-        actor,
-        overridden ? 'agent.limit_overridden' : 'agent.changed',
-        id,
-        overridden ? { override: input.data.override, scenariosRejudged } : undefined,
-      );
+      await auditAgent(trx, actor, overridden ? 'agent.limit_overridden' : 'agent.changed', id, {
+        ...(overridden ? { override: input.data.override, scenariosRejudged } : {}),
+        changes: changesOf({ name: before.name, ...before.data }, { name: input.name, ...input.data }),
+      });
       return (await agents.get(trx, id))!;
     });
   },

@@ -33,8 +33,14 @@ export function auditOf(targetType: string) {
     writeAudit(db, { actor, action, targetType, targetId, detail });
 }
 
-const toView = (a: AuditLogRow): AuditView => ({
+export type AuditRecord = Omit<AuditView, 'actorName' | 'actorEmail' | 'targetName'> & {
+  actorId: number | null;
+  actorEmail: string | null;
+};
+
+const toRecord = (a: AuditLogRow): AuditRecord => ({
   id: a.id,
+  actorId: a.actor_id,
   actorEmail: a.actor_email,
   action: a.action,
   targetType: a.target_type,
@@ -43,10 +49,46 @@ const toView = (a: AuditLogRow): AuditView => ({
   createdAt: a.created_at,
 });
 
-export async function listAudit(db: Conn, q: AuditQuery): Promise<Page<AuditView>> {
+// Every kind of record the trail names, and its table; deleted records keep their names.
+const NAMED_TABLES = {
+  person: 'people',
+  site: 'sites',
+  room: 'rooms',
+  workstation: 'workstations',
+  agent: 'dust_agents',
+  size_profile: 'size_profiles',
+  scenario: 'scenarios',
+} as const;
+
+export type NameBook = {
+  people: { id: number; name: string; email: string }[];
+  targets: Map<string, string>;
+};
+
+/** Names of the people and records a page of entries mentions, keyed "type:id" for records. */
+export async function namesFor(db: Conn, records: AuditRecord[]): Promise<NameBook> {
+  const people = await db('people').select('id', 'name', 'email');
+  const targets = new Map<string, string>();
+  for (const [type, table] of Object.entries(NAMED_TABLES)) {
+    const ids = [...new Set(records.filter((r) => r.targetType === type && r.targetId).map((r) => Number(r.targetId)))];
+    if (ids.length === 0) continue;
+    const rows: { id: number; name: string }[] = await db(table).whereIn('id', ids).select('id', 'name');
+    for (const row of rows) targets.set(`${type}:${row.id}`, row.name);
+  }
+  return { people, targets };
+}
+
+export async function listAudit(db: Conn, q: AuditQuery & { emails: boolean }): Promise<Page<AuditRecord>> {
   const base = db('audit_log').modify((b) => {
     if (q.action) b.where('action', q.action);
-    if (q.actor) b.where('actor_email', q.actor.toLowerCase());
+    // Anyone finds a person by name; only readers who see addresses may look one up by address.
+    if (q.actor) {
+      const text = q.actor.trim().toLowerCase();
+      b.where((w) => {
+        w.whereIn('actor_id', db('people').whereRaw('instr(lower(name), ?) > 0', [text]).select('id'));
+        if (q.emails) w.orWhere('actor_email', text);
+      });
+    }
     // A workstation's trail includes what happened to its scenarios.
     if (q.workstationId) {
       const id = q.workstationId;
@@ -67,5 +109,5 @@ export async function listAudit(db: Conn, q: AuditQuery): Promise<Page<AuditView
     .orderBy('id', 'desc')
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  return { items: rows.map(toView), total: Number(count), page: q.page, pageSize: q.pageSize };
+  return { items: rows.map(toRecord), total: Number(count), page: q.page, pageSize: q.pageSize };
 }

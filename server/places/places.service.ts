@@ -3,6 +3,7 @@ import type { RoomRecord, SiteRecord, SiteTree, WorkstationDetail, WorkstationRe
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { auditOf, type Actor } from '../audit/audit.repo';
+import { changesOf } from '../audit/changes';
 import { currentApproval } from '../approvals/approvals.repo';
 import { operatorIds, placesTree, rooms, sites, workstations } from './places.repo';
 
@@ -68,7 +69,9 @@ export const placesService = {
     await insideRoom(db, current.roomId, input.data);
     return withTransaction(db, async (trx) => {
       await workstations.update(trx, id, input);
-      await auditWorkstation(trx, actor, 'workstation.changed', id);
+      await auditWorkstation(trx, actor, 'workstation.changed', id, {
+        changes: changesOf({ name: current.name, ...current.data }, { name: input.name, ...input.data }),
+      });
       return (await workstations.get(trx, id))!;
     });
   },

@@ -7,6 +7,7 @@ import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { inputHash } from '../lib/hash';
 import { auditOf, type Actor } from '../audit/audit.repo';
+import { changesOfPatch } from '../audit/changes';
 import { agents } from '../agents/agents.repo';
 import { workstations } from '../places/places.repo';
 import { currentApproval } from '../approvals/approvals.repo';
@@ -114,7 +115,7 @@ export const scenariosService = {
         { ...fields, version: current.version + 1, inputHash: patch.input === undefined ? undefined : inputHash(patch.input) },
         actor.id,
       );
-      await auditScenario(trx, actor, 'scenario.changed', id, { version: current.version + 1 });
+      await auditScenario(trx, actor, 'scenario.changed', id, { version: current.version + 1, changes: changesOfPatch(current, fields) });
     });
     return getScenario(db, id);
   },

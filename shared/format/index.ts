@@ -1,3 +1,4 @@
+export { dateText, dateTimeText, fileDate, timeText } from './dates';
 export { countText, percentText } from './figures';
 export { decimalOrNaN, parseDecimal } from './parse-decimal';
 export { powerOfTen, readableNumber, superscript } from './readable';

@@ -145,12 +145,19 @@ export type SiteTree = SiteRecord & { rooms: (RoomRecord & { workstations: Works
 export type WorkstationDetail = WorkstationRecord & { room: RoomRecord; approval: Approval | null; operatorIds: number[] };
 export type OperatorAssignment = { workstationId: number; personIds: number[] };
 
+/** One field an edit changed, as recorded under `detail.changes`. */
+export type AuditChange = { field: string; from: unknown; to: unknown };
 export type AuditEntry = {
   id: number;
+  /** Who acted, by name; null where the address belongs to nobody in Motewalk (a failed sign-in). */
+  actorName: string | null;
+  /** Only for readers who manage people; null for everyone else, who see names only. */
   actorEmail: string | null;
   action: string;
   targetType: string | null;
   targetId: string | null;
+  /** The record's name as it stands now (deleted records keep theirs). */
+  targetName: string | null;
   detail: Record<string, unknown> | null;
   createdAt: string;
 };

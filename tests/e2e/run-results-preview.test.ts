@@ -78,7 +78,7 @@ describe('the run results preview', () => {
     const download = page.waitForEvent('download');
     await page.getByRole('button', { name: 'Download CSV', exact: true }).click();
     const file = await download;
-    expect(file.suggestedFilename()).toBe('motewalk-run-seed-7-fractions.csv');
+    expect(file.suggestedFilename()).toMatch(/^motewalk-seed-7-fractions-\d{4}-\d{2}-\d{2}\.csv$/);
     const text = fs.readFileSync((await file.path())!, 'utf8');
     expect(text).toMatch(/^\uFEFFFraction,Task mean \(mg\/m³\),/);
     expect(text.trim().split('\r\n')).toHaveLength(5);

@@ -32,7 +32,7 @@ function Report({ detail }: { detail: ScenarioDetail }) {
   const profile = useSizeProfile(detail.sizeProfileId ?? 0);
   // Who ran it lives in the audit trail; a reader without it sees "not recorded" rather than an error.
   const audit = useAudit({ action: 'run.saved', workstationId: detail.workstationId });
-  const ranBy = audit.data?.items.find((e) => e.detail?.runId === runId)?.actorEmail ?? null;
+  const ranBy = audit.data?.items.find((e) => e.detail?.runId === runId)?.actorName ?? null;
   const current = useMemo(() => parseScenario(detail.input), [detail.input]);
 
   if (runId && run.isPending) return <Spinner label="Loading the saved run…" />;
@@ -88,7 +88,9 @@ function Report({ detail }: { detail: ScenarioDetail }) {
       approval={detail.approval}
       runPicker={picker}
     >
-      {r && <RunResults result={r.result} scenario={r.input} agentName={agent?.name} limitSource={r.input.limit?.source} />}
+      {r && (
+        <RunResults result={r.result} scenario={r.input} agentName={agent?.name} limitSource={r.input.limit?.source} title={detail.name} />
+      )}
     </ReportDocument>
   );
 }

@@ -35,7 +35,7 @@ export function RunRoute() {
           ⟳ Out of date: the scenario has changed since this run. These results describe the inputs as they were then.
         </p>
       )}
-      <RunResults result={r.result} scenario={r.input} limitSource={r.input.limit?.source} />
+      <RunResults result={r.result} scenario={r.input} limitSource={r.input.limit?.source} title={r.scenarioName} />
     </Page>
   );
 }

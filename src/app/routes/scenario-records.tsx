@@ -1,3 +1,4 @@
+import { dateText } from '../../../shared/format/index';
 import type { ScenarioDetail } from '../../../shared/schemas/workspace-views';
 import { Can } from '@/components/can';
 import { auditKeys } from '@/features/audit/api/get-audit';
@@ -18,7 +19,7 @@ export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
       <div>
         <h2 id="records-heading">Saved runs</h2>
         <div className="mt-3">
-          <SavedRuns runs={scenario.runs} />
+          <SavedRuns runs={scenario.runs} scenarioName={scenario.name} />
         </div>
       </div>
       <Can permission="scenarios:approve">
@@ -27,7 +28,7 @@ export function ScenarioRecords({ scenario }: { scenario: ScenarioDetail }) {
           <p className="mb-3 text-sm text-muted">
             Uses the latest saved run.{' '}
             {scenario.approval
-              ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${scenario.approval.reviewDate}.`
+              ? `Currently approved at this station: “${scenario.approval.scenarioName}”, review by ${dateText(scenario.approval.reviewDate)}.`
               : 'Nothing is approved at this station yet.'}
           </p>
           {/* Keyed by run: a newly saved run brings its own suggested review date. */}

@@ -165,6 +165,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
             scenario={fresh.input}
             agentName={agent?.name}
             limitSource={fresh.input.limit?.source}
+            title={draft.name}
           />
         </div>
       )}

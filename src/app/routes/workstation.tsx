@@ -1,3 +1,4 @@
+import { dateText } from '../../../shared/format/index';
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import { scenarioSchema } from '../../../shared/schemas/scenario';
@@ -62,7 +63,7 @@ export function WorkstationRoute() {
         <h2>Current control</h2>
         {a ? (
           <p className="mt-1 text-sm">
-            <strong>{a.scenarioName}</strong> approved by {a.approvedBy} on {a.approvedAt.slice(0, 10)}, review by {a.reviewDate} ·{' '}
+            <strong>{a.scenarioName}</strong> approved by {a.approvedBy} on {dateText(a.approvedAt)}, review by {dateText(a.reviewDate)} ·{' '}
             <BannerBadge banner={a.banner} />
             {a.needsReview && (
               <span className="ml-2 font-semibold text-watch">⟳ needs review{a.reviewReason ? ` (${a.reviewReason})` : ''}</span>

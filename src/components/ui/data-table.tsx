@@ -77,12 +77,22 @@ export function DataTable<T>({ rows, columns, rowKey = byId, caption, initialSor
                   className={`px-3 py-2 font-semibold ${c.align === 'right' ? 'text-right' : ''} ${i === 0 ? `${STICKY} bg-paper-deep` : ''}`}
                 >
                   {c.sortValue ? (
-                    <button type="button" onClick={() => toggle(c.key)} className="inline-flex items-center gap-1 hover:text-accent">
-                      {c.header}
-                      <span aria-hidden="true" className="text-xs text-muted">
-                        {active ? (sort.dir === 'asc' ? '▲' : '▼') : '↕'}
+                    <>
+                      <button
+                        type="button"
+                        onClick={() => toggle(c.key)}
+                        className="inline-flex items-center gap-1 hover:text-accent print:hidden"
+                      >
+                        {c.header}
+                        <span aria-hidden="true" className="text-xs text-muted">
+                          {active ? (sort.dir === 'asc' ? '▲' : '▼') : '↕'}
+                        </span>
+                      </button>
+                      {/* Paper has nothing to sort, and Chromium leaves a button blank in the headings it repeats on a new page. */}
+                      <span aria-hidden="true" className="hidden print:inline">
+                        {c.header}
                       </span>
-                    </button>
+                    </>
                   ) : (
                     c.header
                   )}

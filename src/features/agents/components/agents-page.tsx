@@ -3,7 +3,9 @@ import type { AgentRecord } from '../../../../shared/schemas/workspace-views';
 import { Can } from '@/components/can';
 import { Button } from '@/components/ui/button';
 import { DataTable, type Column } from '@/components/ui/data-table';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
 import { Page } from '@/components/ui/page';
+import { AGENTS_HEADER, agentRow } from '@/features/agents/lib/agents-csv';
 import { ErrorMessage, Spinner } from '@/components/ui/status';
 import { sig } from '@/lib/format';
 import { useAgents } from '@/features/agents/api/get-agents';
@@ -70,6 +72,11 @@ export function AgentsPage() {
       {agents.error && <ErrorMessage error={agents.error} />}
       {agents.data && (
         <DataTable caption="Dust agents" rows={agents.data.items} columns={columns} initialSort={{ key: 'name', dir: 'asc' }} />
+      )}
+      {agents.data && (
+        <div className="mt-2">
+          <DownloadCsvButton name={['dust agents']} header={AGENTS_HEADER} rows={() => agents.data.items.map(agentRow)} />
+        </div>
       )}
       <p className="mt-2 text-xs text-muted">
         Limits differ by country and change over time: confirm the one in force where the work is done.

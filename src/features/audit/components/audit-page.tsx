@@ -4,52 +4,46 @@ import { DataTable, type Column } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Page } from '@/components/ui/page';
 import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
-import { downloadCsv, toCsv } from '@/lib/csv';
-import { dateTime } from '@/lib/format';
+import { dateTimeText } from '../../../../shared/format/index';
+import { downloadTable } from '@/lib/csv';
 import { useAudit, type AuditEntry, type AuditFilters } from '@/features/audit/api/get-audit';
+import { ACTION_LABEL, actionLabel, actorWords, auditSentence, changesOf, deedWords } from '@/features/audit/lib/audit-sentence';
 
-const ACTIONS = [
-  'auth.signed_in',
-  'auth.sign_in_failed',
-  'person.invited',
-  'person.role_changed',
-  'person.deactivated',
-  'site.created',
-  'room.created',
-  'workstation.created',
-  'workstation.changed',
-  'workstation.operators_assigned',
-  'agent.created',
-  'agent.changed',
-  'agent.limit_overridden',
-  'size_profile.created',
-  'size_profile.deleted',
-  'scenario.created',
-  'scenario.changed',
-  'scenario.deleted',
-  'run.saved',
-  'scenario.approved',
-  'report.shared',
-];
-
-const detail = (d: AuditEntry['detail']) =>
-  d
-    ? Object.entries(d)
-        .map(([k, v]) => `${k}: ${typeof v === 'object' ? JSON.stringify(v) : String(v)}`)
-        .join('; ')
-    : '';
+const ACTIONS = Object.keys(ACTION_LABEL);
 
 const COLUMNS: Column<AuditEntry>[] = [
-  { key: 'when', header: 'When', render: (a) => dateTime(a.createdAt), sortValue: (a) => a.createdAt },
-  { key: 'who', header: 'Who', render: (a) => a.actorEmail ?? '—', sortValue: (a) => a.actorEmail ?? '' },
-  { key: 'action', header: 'What', render: (a) => <code className="text-xs">{a.action}</code>, sortValue: (a) => a.action },
+  { key: 'when', header: 'When', render: (a) => dateTimeText(a.createdAt), sortValue: (a) => a.createdAt },
   {
-    key: 'target',
-    header: 'On',
-    render: (a) => (a.targetType ? `${a.targetType} ${a.targetId}` : '—'),
-    sortValue: (a) => `${a.targetType}${a.targetId}`,
+    key: 'who',
+    header: 'Who',
+    render: (a) => (
+      <>
+        {actorWords(a)}
+        {a.actorEmail && a.actorName && <span className="block text-xs text-muted">{a.actorEmail}</span>}
+      </>
+    ),
+    sortValue: (a) => actorWords(a).toLowerCase(),
   },
-  { key: 'detail', header: 'Detail', render: (a) => <span className="text-xs text-muted">{detail(a.detail)}</span> },
+  {
+    key: 'what',
+    header: 'What happened',
+    render: (a) => {
+      const changes = changesOf(a);
+      return (
+        <>
+          <span className="first-letter:uppercase">{deedWords(a)}</span>
+          {changes.length > 0 && (
+            <ul aria-label="What changed" className="mt-1 list-disc pl-5 text-xs text-muted">
+              {changes.map((c) => (
+                <li key={c}>{c}</li>
+              ))}
+            </ul>
+          )}
+        </>
+      );
+    },
+    sortValue: (a) => actionLabel(a.action),
+  },
 ];
 
 export function AuditPage({ workstations }: { workstations: { id: number; name: string }[] }) {
@@ -57,18 +51,16 @@ export function AuditPage({ workstations }: { workstations: { id: number; name: 
   const audit = useAudit(f);
   const rows = audit.data?.items ?? [];
   const exportCsv = () =>
-    downloadCsv(
-      'motewalk-audit.csv',
-      toCsv(
-        ['when', 'who', 'action', 'target_type', 'target_id', 'detail'],
-        rows.map((a) => [a.createdAt, a.actorEmail, a.action, a.targetType, a.targetId, detail(a.detail)]),
-      ),
+    downloadTable(
+      ['audit trail'],
+      ['When (ISO 8601, UTC)', 'Who', 'E-mail', 'Action', 'What happened', 'What changed'],
+      rows.map((a) => [a.createdAt, actorWords(a), a.actorEmail, actionLabel(a.action), auditSentence(a), changesOf(a).join('; ')]),
     );
   return (
     <Page title="Audit trail" intro="Who created, changed, ran, approved and shared what, and when. Newest first.">
       <div role="search" aria-label="Filter the audit trail" className="mb-4 grid gap-3 sm:grid-cols-4">
         <TextField
-          label="Person (e-mail)"
+          label="Person (name)"
           value={f.actor ?? ''}
           onChange={(e) => setF({ ...f, actor: e.target.value.trim() || undefined })}
         />
@@ -76,7 +68,7 @@ export function AuditPage({ workstations }: { workstations: { id: number; name: 
           <option value="">Any action</option>
           {ACTIONS.map((a) => (
             <option key={a} value={a}>
-              {a}
+              {ACTION_LABEL[a]}
             </option>
           ))}
         </SelectField>

@@ -43,7 +43,7 @@ function table(medium: ParticleMedium): { header: string[]; rows: number[][] } {
 
 export function decadeTableCsv(medium: ParticleMedium): string {
   const { header, rows } = table(medium);
-  return toCsv(header, rows);
+  return toCsv(header, rows, 6);
 }
 
 // Tab-separated text pastes into spreadsheet cells directly.

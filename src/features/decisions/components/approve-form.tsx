@@ -1,4 +1,5 @@
 import type { QueryKey } from '@tanstack/react-query';
+import { dateText } from '../../../../shared/format/index';
 import { useState, type FormEvent } from 'react';
 import { reviewDueDate, reviewMonthsFor } from '../../../../shared/approval/review-date';
 import type { Banner } from '../../../../shared/schemas/workspace-views';
@@ -52,7 +53,7 @@ export function ApproveForm({
       </Button>
       <div className="sm:col-span-3">
         {approve.isSuccess && (
-          <Notice>Approved. The station board now shows this control, to be reviewed by {approve.data.reviewDate}.</Notice>
+          <Notice>Approved. The station board now shows this control, to be reviewed by {dateText(approve.data.reviewDate)}.</Notice>
         )}
         {approve.error && <ErrorMessage title="Not approved" error={approve.error} />}
       </div>

@@ -1,3 +1,4 @@
+import { dateTimeText } from '../../../../shared/format/index';
 import { Page } from '@/components/ui/page';
 import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
 import { useOutbox } from '@/features/outbox/api/get-outbox';
@@ -30,7 +31,7 @@ export function OutboxPage() {
                 To <strong>{m.to}</strong>
               </span>
               <time className="text-muted" dateTime={m.createdAt}>
-                {new Date(m.createdAt).toLocaleString()}
+                {dateTimeText(m.createdAt)}
               </time>
             </div>
             <h2 className="mt-1">{m.subject}</h2>

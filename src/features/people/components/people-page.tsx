@@ -1,8 +1,11 @@
+import { dateTimeText } from '../../../../shared/format/index';
 import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/auth/permissions';
 import type { Person } from '../../../../shared/schemas/auth';
 import { Button } from '@/components/ui/button';
 import { DataTable, type Column } from '@/components/ui/data-table';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
 import { Page } from '@/components/ui/page';
+import { PEOPLE_HEADER, personRow } from '@/features/people/lib/people-csv';
 import { EmptyState, ErrorMessage, Notice, Spinner } from '@/components/ui/status';
 import { useUser } from '@/lib/auth';
 import { usePeople } from '@/features/people/api/get-people';
@@ -45,7 +48,7 @@ export function PeoplePage() {
     {
       key: 'last',
       header: 'Last sign-in',
-      render: (p) => (p.lastSignInAt ? new Date(p.lastSignInAt).toLocaleString() : '—'),
+      render: (p) => dateTimeText(p.lastSignInAt),
       sortValue: (p) => p.lastSignInAt ?? '',
     },
     {
@@ -96,7 +99,10 @@ export function PeoplePage() {
         {people.error && <ErrorMessage error={people.error} />}
         {people.data &&
           (people.data.items.length ? (
-            <DataTable caption="People" rows={people.data.items} columns={columns} initialSort={{ key: 'name', dir: 'asc' }} />
+            <>
+              <DataTable caption="People" rows={people.data.items} columns={columns} initialSort={{ key: 'name', dir: 'asc' }} />
+              <DownloadCsvButton name={['people']} header={PEOPLE_HEADER} rows={() => people.data.items.map(personRow)} />
+            </>
           ) : (
             <EmptyState title="Nobody here yet" />
           ))}

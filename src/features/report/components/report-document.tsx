@@ -103,7 +103,7 @@ export function ReportDocument({
           </div>
         </dl>
       </header>
-      <ReportInputs scenario={input} agent={agent} sizeProfileName={sizeProfileName} />
+      <ReportInputs scenario={input} agent={agent} sizeProfileName={sizeProfileName} title={title} />
       <ReportModel />
       <section aria-labelledby="report-results" className="report-section mt-8">
         <h2 id="report-results">3. Results</h2>

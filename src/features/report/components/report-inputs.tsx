@@ -1,9 +1,11 @@
 import type { Scenario } from '../../../../shared/schemas/scenario';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
+import { HOODS_HEADER, hoodCsvRows } from '@/features/report/lib/hoods-csv';
 import { hoodRows, inputSections, type AgentInfo } from '@/features/report/lib/input-sections';
 
-type Props = { scenario: Scenario; agent?: AgentInfo; sizeProfileName?: string };
+type Props = { scenario: Scenario; agent?: AgentInfo; sizeProfileName?: string; title?: string };
 
-export function ReportInputs({ scenario, agent, sizeProfileName }: Props) {
+export function ReportInputs({ scenario, agent, sizeProfileName, title }: Props) {
   const sections = inputSections(scenario, { agent, sizeProfileName });
   const hoods = hoodRows(scenario);
   return (
@@ -24,7 +26,10 @@ export function ReportInputs({ scenario, agent, sizeProfileName }: Props) {
           </div>
         ))}
       </div>
-      <h3 className="mt-4 mb-1 text-sm font-semibold">Hoods</h3>
+      <div className="mt-4 mb-1 flex flex-wrap items-end justify-between gap-2">
+        <h3 className="text-sm font-semibold">Hoods</h3>
+        {hoods.length > 0 && <DownloadCsvButton name={[title, 'hoods']} header={HOODS_HEADER} rows={() => hoodCsvRows(scenario)} />}
+      </div>
       {hoods.length === 0 ? (
         <p className="text-sm">No local exhaust: the scenario has no hood.</p>
       ) : (

@@ -1,6 +1,6 @@
+import { dateText } from '../../../../shared/format/index';
 import type { Approval } from '../../../../shared/schemas/workspace-views';
 
-const dateOnly = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { dateStyle: 'medium' });
 const FIELDS = ['Assessed by', 'Reviewed by', 'Date', 'Signature'];
 
 export function ReportSignOff({ approval, scenarioId }: { approval: Approval | null; scenarioId: number }) {
@@ -13,7 +13,7 @@ export function ReportSignOff({ approval, scenarioId }: { approval: Approval | n
         {approval && (
           <p>
             {ours ? 'This scenario is' : `“${approval.scenarioName}” is`} the station’s current approved control: approved by{' '}
-            {approval.approvedBy} on {dateOnly(approval.approvedAt)}, review by {dateOnly(approval.reviewDate)}
+            {approval.approvedBy} on {dateText(approval.approvedAt)}, review by {dateText(approval.reviewDate)}
             {approval.needsReview ? ` — needs review (${approval.reviewReason ?? 'due for a look'})` : ''}.
             {approval.note && <> Note: “{approval.note}”</>}
           </p>

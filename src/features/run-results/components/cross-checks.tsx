@@ -2,6 +2,8 @@ import { readableNumber } from '../../../../shared/format/index';
 import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import type { RunResult } from '../../../../shared/schemas/run-result';
 import { Section } from './section';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
+import { crossChecksTable } from '@/features/run-results/lib/section-csv';
 
 type Row = { key: string; model: string; value: number; assumes: string };
 
@@ -42,13 +44,20 @@ const STICKY = 'sticky left-0 z-[1] shadow-[1px_0_0_var(--color-line)]';
 
 const ratio = (mc: number, model: number) => (model > 0 && Number.isFinite(mc) ? `${readableNumber(mc / model, 2)}×` : '—');
 
-export function CrossChecks({ view }: { view: RunResult }) {
+export function CrossChecks({ view, fileName }: { view: RunResult; fileName: (what: string) => (string | undefined)[] }) {
   const fraction = view.crossChecks.fraction;
   const mc = view.breathingZone.fractions[fraction].taskMean_mgPerM3;
   const hoods = view.fate.captured > 0;
   return (
     <Section
       title="Analytic cross-checks"
+      actions={
+        <DownloadCsvButton
+          name={fileName('cross-checks')}
+          header={crossChecksTable(view).header}
+          rows={() => crossChecksTable(view).rows}
+        />
+      }
       intro={`Box and diffusion models for the same source, room and airflow, ${FRACTION_LABEL[fraction].toLowerCase()} fraction, averaged over the simulated window; compared with the Monte-Carlo task mean in the breathing zone.`}
     >
       <div className="overflow-x-auto rounded-lg border border-line bg-white">

@@ -18,17 +18,17 @@ const withProfile = (median_m: number, gsd: number) =>
 
 describe('where the dust went', () => {
   it('says how much of the emission lies above 100 µm and is not simulated: MMAD 50 µm, σg 2 leaves Φ(−1) = 16 % ([S] standard normal table)', () => {
-    render(<FateSection view={withProfile(50e-6, 2)} />);
+    render(<FateSection view={withProfile(50e-6, 2)} fileName={(what) => ['run', what]} />);
     expect(screen.getByRole('note').textContent).toBe(
       '16 % of the emitted mass is above 100 µm aerodynamic diameter and is not simulated; the concentrations and fates shown cover the rest.',
     );
   });
 
   it('says nothing when all but a negligible share is simulated, or when the result predates the figure', () => {
-    const { unmount } = render(<FateSection view={withProfile(5e-6, 2)} />);
+    const { unmount } = render(<FateSection view={withProfile(5e-6, 2)} fileName={(what) => ['run', what]} />);
     expect(screen.queryByRole('note')).toBeNull();
     unmount();
-    render(<FateSection view={parseRunResult(v120)} />);
+    render(<FateSection view={parseRunResult(v120)} fileName={(what) => ['run', what]} />);
     expect(screen.queryByRole('note')).toBeNull();
   });
 });

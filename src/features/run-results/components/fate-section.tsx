@@ -4,14 +4,20 @@ import { FATE_COLOUR } from '@/features/run-results/lib/fate-colours';
 import type { RunResult } from '../../../../shared/schemas/run-result';
 import { MassLeftOutNote } from './mass-left-out-note';
 import { Section } from './section';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
+import { fateTable } from '@/features/run-results/lib/section-csv';
 
-export function FateSection({ view }: { view: RunResult }) {
+export function FateSection({ view, fileName }: { view: RunResult; fileName: (what: string) => (string | undefined)[] }) {
   const { emitted_mg, ...shares } = view.fate;
   const total = FATES.reduce((a, f) => a + (Number.isFinite(shares[f]) ? shares[f] : 0), 0);
   const widths = FATES.map((f) => 1000 * Math.max(0, shares[f] || 0));
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));
   return (
-    <Section title="Where the dust went" intro={`Fate of the ${readableNumber(emitted_mg)} mg emitted during the simulated window.`}>
+    <Section
+      title="Where the dust went"
+      intro={`Fate of the ${readableNumber(emitted_mg)} mg emitted during the simulated window.`}
+      actions={<DownloadCsvButton name={fileName('fate')} header={fateTable(view).header} rows={() => fateTable(view).rows} />}
+    >
       <svg
         viewBox="0 0 1000 44"
         preserveAspectRatio="none"

@@ -60,7 +60,7 @@ const COLUMNS: Column<Row>[] = [
   },
 ];
 
-export function FractionTable({ view, runLabel }: { view: RunResult; runLabel: string }) {
+export function FractionTable({ view, fileName }: { view: RunResult; fileName: (what: string) => string }) {
   const rows: Row[] = FRACTIONS.map((f) => ({
     fraction: f,
     ...view.breathingZone.fractions[f],
@@ -68,10 +68,10 @@ export function FractionTable({ view, runLabel }: { view: RunResult; runLabel: s
   }));
   const actions = (
     <>
-      <Button variant="secondary" onClick={() => downloadText(`${runLabel}-fractions.csv`, fractionTableCsv(view))}>
+      <Button variant="secondary" onClick={() => downloadText(fileName('fractions'), fractionTableCsv(view))}>
         <span aria-hidden="true">↓</span> Download CSV
       </Button>
-      <Button variant="secondary" onClick={() => downloadText(`${runLabel}-time-series.csv`, seriesCsv(view))}>
+      <Button variant="secondary" onClick={() => downloadText(fileName('time series'), seriesCsv(view))}>
         <span aria-hidden="true">↓</span> Download time series CSV
       </Button>
     </>
@@ -79,7 +79,12 @@ export function FractionTable({ view, runLabel }: { view: RunResult; runLabel: s
   return (
     <Section
       title="Concentrations by size fraction"
-      intro="Task mean over the simulated window; the 8-h TWA adds the rest of the shift at background. Select a column heading to sort."
+      intro={
+        <>
+          Task mean over the simulated window; the 8-h TWA adds the rest of the shift at background.{' '}
+          <span className="no-print">Select a column heading to sort.</span>
+        </>
+      }
       actions={actions}
     >
       <DataTable

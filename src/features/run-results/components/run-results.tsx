@@ -13,6 +13,7 @@ import { MapsSection } from './maps-section';
 import { ModelSection } from './model-section';
 import { ParticleViews } from './particle-views';
 import { Section } from './section';
+import { csvFileName } from '@/lib/csv';
 
 export interface RunResultsProps {
   /** The engine's Results, or its JSON as stored by the server. */
@@ -20,6 +21,8 @@ export interface RunResultsProps {
   scenario: Scenario;
   agentName?: string;
   limitSource?: string;
+  /** The scenario's name, for the names of downloaded files. */
+  title?: string;
 }
 
 function read(result: unknown): { view: RunResult } | { error: unknown } {
@@ -30,11 +33,11 @@ function read(result: unknown): { view: RunResult } | { error: unknown } {
   }
 }
 
-// File names carry the seed so two downloads from different runs never overwrite each other.
-const runLabel = (view: RunResult) => `motewalk-run-seed-${String(view.engine.seed).replace(/[^\w-]/g, '_')}`;
+// File names carry the scenario's name, the seed and the day, so two downloads from different runs never overwrite each other.
+const fileParts = (view: RunResult, title?: string) => (what: string) => [title, 'seed', String(view.engine.seed), what];
 
 /** Everything one run says, from the banner down to the cautions; presentational, nothing fetched. */
-export function RunResults({ result, scenario, agentName, limitSource }: RunResultsProps) {
+export function RunResults({ result, scenario, agentName, limitSource, title }: RunResultsProps) {
   const read_ = useMemo(() => read(result), [result]);
   if ('error' in read_) {
     return (
@@ -51,11 +54,11 @@ export function RunResults({ result, scenario, agentName, limitSource }: RunResu
         <Headline view={view} scenario={scenario} agentName={agentName} limitSource={limitSource} />
       </Section>
       <ConcentrationSection view={view} />
-      <FractionTable view={view} runLabel={runLabel(view)} />
-      <FateSection view={view} />
+      <FractionTable view={view} fileName={(what) => csvFileName(fileParts(view, title)(what))} />
+      <FateSection view={view} fileName={fileParts(view, title)} />
       <ParticleViews view={view} scenario={scenario} />
       <MapsSection view={view} scenario={scenario} />
-      <CrossChecks view={view} />
+      <CrossChecks view={view} fileName={fileParts(view, title)} />
       <ModelSection view={view} />
       <Cautions />
     </div>

@@ -4,7 +4,7 @@ import type { RunResult } from '../../../../shared/schemas/run-result';
 
 import { toCsv } from '@/lib/csv';
 
-// Full precision in files: rounding is for the screen, the engineer's spreadsheet decides its own.
+// The writer keeps four significant figures: finer than any run's statistical error, free of float noise.
 
 export function fractionTableCsv(view: RunResult): string {
   const header = [

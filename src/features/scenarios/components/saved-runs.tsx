@@ -3,7 +3,9 @@ import { Link } from 'react-router-dom';
 import type { RunListItem } from '../../../../shared/schemas/workspace-views';
 import { BannerBadge } from '@/components/banner-badge';
 import { DataTable, type Column } from '@/components/ui/data-table';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
 import { EmptyState } from '@/components/ui/status';
+import { SAVED_RUNS_HEADER, savedRunRow } from '@/features/scenarios/lib/saved-runs-csv';
 import { paths } from '@/config/paths';
 import { dateTime, sig } from '@/lib/format';
 import { fractionWord } from '@/features/scenarios/lib/fraction-word';
@@ -57,7 +59,12 @@ const COLUMNS: Column<RunListItem>[] = [
   },
 ];
 
-export function SavedRuns({ runs }: { runs: RunListItem[] }) {
+export function SavedRuns({ runs, scenarioName }: { runs: RunListItem[]; scenarioName?: string }) {
   if (!runs.length) return <EmptyState title="No saved runs yet">Run the scenario and save the run to keep its results.</EmptyState>;
-  return <DataTable caption="Saved runs" rows={runs} columns={COLUMNS} rowKey={(r) => r.id} />;
+  return (
+    <div className="space-y-2">
+      <DownloadCsvButton name={[scenarioName, 'saved runs']} header={SAVED_RUNS_HEADER} rows={() => runs.map(savedRunRow)} />
+      <DataTable caption="Saved runs" rows={runs} columns={COLUMNS} rowKey={(r) => r.id} />
+    </div>
+  );
 }

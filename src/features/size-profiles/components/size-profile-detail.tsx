@@ -21,6 +21,7 @@ const NOTES: Record<Detail['kind'], string> = {
 };
 
 export function SizeProfileDetail({ profile }: { profile: Detail }) {
+  const fit = profile.fittedMmad_m !== null && profile.fittedGsd !== null ? { mmad_m: profile.fittedMmad_m, gsd: profile.fittedGsd } : null;
   return (
     <div className="space-y-4">
       <p className="text-sm text-muted">
@@ -31,8 +32,8 @@ export function SizeProfileDetail({ profile }: { profile: Detail }) {
         <p className="text-sm text-muted">No lognormal fit: fewer than two bin edges lie strictly between 0 % and 100 % cumulative mass.</p>
       )}
       <div className="grid gap-4 lg:grid-cols-2">
-        <SizeHistogram bins={profile.bins} />
-        <CumulativeCurve bins={profile.bins} mmad_m={profile.fittedMmad_m} />
+        <SizeHistogram bins={profile.bins} fit={fit} />
+        <CumulativeCurve bins={profile.bins} fit={fit} />
       </div>
     </div>
   );

@@ -1,5 +1,7 @@
 import { Can } from '@/components/can';
+import { DownloadCsvButton } from '@/components/ui/download-csv-button';
 import { Page } from '@/components/ui/page';
+import { PROFILES_HEADER, profileRow } from '@/features/size-profiles/lib/profiles-csv';
 import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
 import { useSizeProfiles } from '@/features/size-profiles/api/get-size-profiles';
 import { LognormalForm } from './lognormal-form';
@@ -19,7 +21,10 @@ export function SizeProfilesPage() {
         {profiles.error && <ErrorMessage error={profiles.error} />}
         {profiles.data &&
           (profiles.data.items.length ? (
-            <SizeProfilesTable rows={profiles.data.items} />
+            <div className="space-y-2">
+              <SizeProfilesTable rows={profiles.data.items} />
+              <DownloadCsvButton name={['size profiles']} header={PROFILES_HEADER} rows={() => profiles.data.items.map(profileRow)} />
+            </div>
           ) : (
             <EmptyState title="No size profiles yet">
               <TemplateLinks />

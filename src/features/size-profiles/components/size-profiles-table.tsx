@@ -1,3 +1,4 @@
+import { dateText } from '../../../../shared/format/index';
 import { Link } from 'react-router-dom';
 import type { SizeProfileSummary } from '../../../../shared/schemas/size-profiles';
 import { metresToMicrometres } from '../../../../shared/units';
@@ -42,7 +43,7 @@ export function SizeProfilesTable({ rows }: { rows: SizeProfileSummary[] }) {
       key: 'created',
       header: 'Added',
       sortValue: (p) => p.createdAt,
-      render: (p) => `${new Date(p.createdAt).toLocaleDateString()}${p.createdBy ? ` · ${p.createdBy.name}` : ''}`,
+      render: (p) => `${dateText(p.createdAt)}${p.createdBy ? ` · ${p.createdBy.name}` : ''}`,
     },
     {
       key: 'actions',

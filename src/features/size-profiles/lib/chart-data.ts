@@ -1,4 +1,5 @@
 import { formatSig, percentText } from '../../../../shared/format/index';
+import { normalCdf } from '../../../../shared/physics/index';
 import type { MassBins } from '../../../../shared/size-profiles/index';
 import { metresToMicrometres } from '../../../../shared/units';
 
@@ -34,4 +35,30 @@ export function decadeTicks_um(min_um: number, max_um: number): number[] {
     }
   }
   return ticks;
+}
+
+export type CurvePoint = { d_um: number; value: number };
+
+// Evenly spaced in log d, so the curve is as smooth at 0.5 µm as at 50 µm.
+function logSpaced(min_um: number, max_um: number, points: number): number[] {
+  const a = Math.log(min_um);
+  const step = (Math.log(max_um) - a) / (points - 1);
+  return Array.from({ length: points }, (_, i) => Math.exp(a + i * step));
+}
+
+/** The fitted lognormal's mass per decade, dM/dlog d = ln 10 · φ(z) / ln GSD with z = ln(d / MMAD) / ln GSD (the lognormal mass distribution, Hinds ch. 4, from memory). */
+export function fittedPerDecade(mmad_m: number, gsd: number, min_um: number, max_um: number, points = 121): CurvePoint[] {
+  const s = Math.log(gsd);
+  const mmad_um = metresToMicrometres(mmad_m);
+  return logSpaced(min_um, max_um, points).map((d_um) => {
+    const z = Math.log(d_um / mmad_um) / s;
+    return { d_um, value: (Math.LN10 * Math.exp(-0.5 * z * z)) / (Math.sqrt(2 * Math.PI) * s) };
+  });
+}
+
+/** The fitted lognormal's cumulative mass below d, Φ(ln(d / MMAD) / ln GSD), as a fraction. */
+export function fittedCumulative(mmad_m: number, gsd: number, min_um: number, max_um: number, points = 121): CurvePoint[] {
+  const s = Math.log(gsd);
+  const mmad_um = metresToMicrometres(mmad_m);
+  return logSpaced(min_um, max_um, points).map((d_um) => ({ d_um, value: normalCdf(Math.log(d_um / mmad_um) / s) }));
 }

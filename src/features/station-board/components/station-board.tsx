@@ -1,3 +1,4 @@
+import { dateText, timeText } from '../../../../shared/format/index';
 import type { StationBoard as Board, WatchCause } from '../../../../shared/schemas/workspace-views';
 import { BANNER_LABEL, type Banner } from '../../../../shared/vocabulary/index';
 import { BANNER_CLASSES } from '@/components/banner-badge';
@@ -62,12 +63,10 @@ export function StationBoard({ board }: { board: Board }) {
         </div>
         <div>
           <dt className="text-muted">Next review</dt>
-          <dd className="font-semibold">{board.reviewDate ?? '—'}</dd>
+          <dd className="font-semibold">{dateText(board.reviewDate)}</dd>
         </div>
       </dl>
-      <p className="mt-4 text-sm text-muted">
-        Checked {new Date(board.checkedAt).toLocaleTimeString()}; this page refreshes itself every minute.
-      </p>
+      <p className="mt-4 text-sm text-muted">Checked {timeText(board.checkedAt)}; this page refreshes itself every minute.</p>
       <Cautions compact />
     </article>
   );
