@@ -1,7 +1,9 @@
-import type { AgentInput } from '../../shared/schemas/workspace';
+import type { AgentInput, AgentUpdate } from '../../shared/schemas/workspace';
 import type { AgentRecord } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
+import { changedFields } from '../lib/changes';
+import { editAtVersion } from '../lib/version-conflict';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { agents } from './agents.repo';
 import { rejudgeAgentRuns } from '../verdicts/rejudge-agent-runs';
@@ -24,21 +26,23 @@ export const agentsService = {
       return (await agents.get(trx, id))!;
     });
   },
-  async update(db: Db, actor: Actor, id: number, input: AgentInput): Promise<AgentRecord> {
-    const before = await agents.get(db, id);
-    if (!before) throw notFound('Dust agent');
+  // The override path is this same edit: a stale save is refused, so it can never put an old limit back.
+  async update(db: Db, actor: Actor, id: number, { version, ...input }: AgentUpdate): Promise<AgentRecord> {
     return withTransaction(db, async (trx) => {
-      await agents.update(trx, id, input);
+      const { before, after } = await editAtVersion(trx, agents, 'dust agent', id, version, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
       const scenariosRejudged = await rejudgeAgentRuns(trx, id, input.data);
+      const changes = changedFields({ name: before.name, data: before.data }, { name: after.name, data: after.data });
       await auditAgent(
         trx,
         actor,
         overridden ? 'agent.limit_overridden' : 'agent.changed',
         id,
-        overridden ? { override: input.data.override, scenariosRejudged } : undefined,
+        overridden
+          ? { name: after.name, version: after.version, override: input.data.override, scenariosRejudged, changes }
+          : { name: after.name, version: after.version, changes },
       );
-      return (await agents.get(trx, id))!;
+      return after;
     });
   },
 };
