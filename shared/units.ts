@@ -28,3 +28,7 @@ export const celsiusToKelvin = (temperature_C: number): number => temperature_C 
 
 export const pascalsToKilopascals = (pressure_Pa: number): number => pressure_Pa / 1e3;
 export const kilopascalsToPascals = (pressure_kPa: number): number => pressure_kPa * 1e3;
+
+// Air changes per hour: the supply airflow over the room volume (the definition of ACH).
+export const supplyAirflowToAirChanges_perH = (airflow_m3PerH: number, volume_m3: number): number => airflow_m3PerH / volume_m3;
+export const airChangesToSupplyAirflow_m3PerH = (airChanges_perH: number, volume_m3: number): number => airChanges_perH * volume_m3;

@@ -1,7 +1,8 @@
-import type { AgentInput } from '../../shared/schemas/workspace';
+import type { AgentInput, AgentUpdate } from '../../shared/schemas/workspace';
 import type { AgentRecord } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
 import { notFound } from '../lib/app-error';
+import { editAtVersion } from '../lib/version-conflict';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { changesOf } from '../audit/changes';
 import { agents } from './agents.repo';
@@ -25,18 +26,23 @@ export const agentsService = {
       return (await agents.get(trx, id))!;
     });
   },
-  async update(db: Db, actor: Actor, id: number, input: AgentInput): Promise<AgentRecord> {
-    const before = await agents.get(db, id);
-    if (!before) throw notFound('Dust agent');
+  // The override path is this same edit: a stale save is refused, so it can never put an old limit back.
+  async update(db: Db, actor: Actor, id: number, { version, ...input }: AgentUpdate): Promise<AgentRecord> {
     return withTransaction(db, async (trx) => {
-      await agents.update(trx, id, input);
+      const { before, after } = await editAtVersion(trx, agents, 'dust agent', id, version, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
       const scenariosRejudged = await rejudgeAgentRuns(trx, id, input.data);
-      await auditAgent(trx, actor, overridden ? 'agent.limit_overridden' : 'agent.changed', id, {
-        ...(overridden ? { override: input.data.override, scenariosRejudged } : {}),
-        changes: changesOf({ name: before.name, ...before.data }, { name: input.name, ...input.data }),
-      });
-      return (await agents.get(trx, id))!;
+      const changes = changesOf({ name: before.name, ...before.data }, { name: after.name, ...after.data });
+      await auditAgent(
+        trx,
+        actor,
+        overridden ? 'agent.limit_overridden' : 'agent.changed',
+        id,
+        overridden
+          ? { name: after.name, version: after.version, override: input.data.override, scenariosRejudged, changes }
+          : { name: after.name, version: after.version, changes },
+      );
+      return after;
     });
   },
 };

@@ -9,10 +9,14 @@ export type JsonRow<T, K extends string = never> = JsonRecord<T> & Record<K, num
 // Rooms, workstations and dust agents keep their fields as one validated JSON column.
 export function jsonTable<T, K extends string = never>(table: JsonTableName, parents: Record<K, string> = {} as Record<K, string>) {
   const map = (r: AnyJsonRow): JsonRow<T, K> => {
-    const out = { id: r.id, name: r.name, data: JSON.parse(r.data) as T, createdAt: r.created_at, updatedAt: r.updated_at } as JsonRow<
-      T,
-      K
-    >;
+    const out = {
+      id: r.id,
+      name: r.name,
+      data: JSON.parse(r.data) as T,
+      version: r.version,
+      createdAt: r.created_at,
+      updatedAt: r.updated_at,
+    } as JsonRow<T, K>;
     for (const [key, column] of Object.entries(parents) as [K, string][])
       (out as Record<K, number>)[key] = (r as unknown as Record<string, number>)[column];
     return out;
@@ -37,11 +41,12 @@ export function jsonTable<T, K extends string = never>(table: JsonTableName, par
         .returning('id');
       return (typeof row === 'object' ? row.id : row) as number;
     },
-    async update(db: Conn, id: number, patch: { name?: string; data?: T }): Promise<void> {
-      const cols: Record<string, unknown> = { updated_at: new Date().toISOString() };
+    // Only the version named is overwritten, and the row moves on to the next one.
+    async update(db: Conn, id: number, version: number, patch: { name?: string; data?: T }): Promise<boolean> {
+      const cols: Record<string, unknown> = { updated_at: new Date().toISOString(), version: version + 1 };
       if (patch.name !== undefined) cols.name = patch.name;
       if (patch.data !== undefined) cols.data = JSON.stringify(patch.data);
-      await db(table).where({ id }).update(cols);
+      return (await db(table).where({ id, version }).whereNull('deleted_at').update(cols)) === 1;
     },
     async softDelete(db: Conn, id: number): Promise<void> {
       await db(table).where({ id }).update({ deleted_at: new Date().toISOString() });

@@ -9,6 +9,8 @@ import * as createScenarios from '../../migrations/20261202000700_create_scenari
 import * as createApprovals from '../../migrations/20261202000800_create_approvals';
 import * as addRunVerdictNumbers from '../../migrations/20261202000900_add_run_verdict_numbers';
 import * as moveReleaseTypeToSource from '../../migrations/20261202150000_move_release_type_to_source';
+import * as addPlaceVersions from '../../migrations/20261203110001_add_place_versions';
+import * as addRoomSupplyAirflow from '../../migrations/20261203110002_add_room_supply_airflow';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -25,6 +27,8 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202000800_create_approvals.ts': createApprovals,
   '20261202000900_add_run_verdict_numbers.ts': addRunVerdictNumbers,
   '20261202150000_move_release_type_to_source.ts': moveReleaseTypeToSource,
+  '20261203110001_add_place_versions.ts': addPlaceVersions,
+  '20261203110002_add_room_supply_airflow.ts': addRoomSupplyAirflow,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

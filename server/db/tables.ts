@@ -47,10 +47,10 @@ export type OutboxRow = {
   created_at: string;
 };
 
-export type SiteRow = { id: number; name: string; data: string } & Stamps;
-export type RoomRow = { id: number; site_id: number; name: string; data: string } & Stamps;
-export type WorkstationRow = { id: number; room_id: number; name: string; data: string } & Stamps;
-export type DustAgentRow = { id: number; name: string; data: string } & Stamps;
+export type SiteRow = { id: number; name: string; data: string; version: number } & Stamps;
+export type RoomRow = { id: number; site_id: number; name: string; data: string; version: number } & Stamps;
+export type WorkstationRow = { id: number; room_id: number; name: string; data: string; version: number } & Stamps;
+export type DustAgentRow = { id: number; name: string; data: string; version: number } & Stamps;
 export type WorkstationOperatorRow = { workstation_id: number; person_id: number };
 
 export type SizeProfileRow = {
@@ -128,10 +128,10 @@ declare module 'knex/types/tables' {
     password_tokens: Table<PasswordTokenRow, 'used_at'>;
     audit_log: Table<AuditLogRow>;
     outbox: Table<OutboxRow>;
-    sites: Table<SiteRow, 'deleted_at' | 'created_by'>;
-    rooms: Table<RoomRow, 'deleted_at' | 'created_by'>;
-    workstations: Table<WorkstationRow, 'deleted_at' | 'created_by'>;
-    dust_agents: Table<DustAgentRow, 'deleted_at' | 'created_by'>;
+    sites: Table<SiteRow, 'deleted_at' | 'created_by' | 'version'>;
+    rooms: Table<RoomRow, 'deleted_at' | 'created_by' | 'version'>;
+    workstations: Table<WorkstationRow, 'deleted_at' | 'created_by' | 'version'>;
+    dust_agents: Table<DustAgentRow, 'deleted_at' | 'created_by' | 'version'>;
     workstation_operators: WorkstationOperatorRow;
     size_profiles: Table<SizeProfileRow, 'deleted_at'>;
     scenarios: Table<

@@ -47,3 +47,19 @@ export async function placesTree(db: Conn): Promise<SiteTree[]> {
     rooms: r.filter((room) => room.siteId === site.id).map((room) => ({ ...room, workstations: w.filter((ws) => ws.roomId === room.id) })),
   }));
 }
+
+// What still hangs below a place: live rooms of a site, live workstations of a room, live scenarios of a workstation.
+export async function liveChildren(db: Conn, kind: 'site' | 'room' | 'workstation', id: number): Promise<string[]> {
+  const [table, column] =
+    kind === 'site'
+      ? (['rooms', 'site_id'] as const)
+      : kind === 'room'
+        ? (['workstations', 'room_id'] as const)
+        : (['scenarios', 'workstation_id'] as const);
+  const rows: { name: string }[] = await db(table)
+    .where({ [column]: id })
+    .whereNull('deleted_at')
+    .orderBy('name')
+    .select('name');
+  return rows.map((r) => r.name);
+}

@@ -1,32 +1,63 @@
-import type { RoomInput, SiteInput, WorkstationInput } from '../../shared/schemas/workspace';
+import type { RoomInput, RoomUpdate, SiteInput, SiteUpdate, WorkstationInput, WorkstationUpdate } from '../../shared/schemas/workspace';
 import type { RoomRecord, SiteRecord, SiteTree, WorkstationDetail, WorkstationRecord } from '../../shared/schemas/workspace-views';
-import { withTransaction, type Db } from '../db/knex';
+import { withTransaction, type Conn, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
+import { editAtVersion } from '../lib/version-conflict';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { changesOf } from '../audit/changes';
 import { currentApproval } from '../approvals/approvals.repo';
-import { operatorIds, placesTree, rooms, sites, workstations } from './places.repo';
+import { liveChildren, operatorIds, placesTree, rooms, sites, workstations } from './places.repo';
+import { pointsOutsideRoom } from './place-fit';
 
 const auditSite = auditOf('site');
 const auditRoom = auditOf('room');
 const auditWorkstation = auditOf('workstation');
 
-async function insideRoom(db: Db, roomId: number, data: WorkstationInput['data']) {
+async function insideRoom(db: Conn, roomId: number, data: WorkstationInput['data']) {
   const room = await rooms.get(db, roomId);
   if (!room) throw new AppError(400, 'invalid_input', 'That room does not exist', [{ path: 'body.roomId', message: `No room ${roomId}` }]);
-  const issues = [];
-  for (const [part, point] of [
-    ['source', data.source],
-    ['worker', data.worker],
-  ] as const) {
-    if (point.x_m > room.data.length_m)
-      issues.push({ path: `body.data.${part}.x_m`, message: `Must be within the room length (${room.data.length_m} m), got ${point.x_m}` });
-    if (point.y_m > room.data.width_m)
-      issues.push({ path: `body.data.${part}.y_m`, message: `Must be within the room width (${room.data.width_m} m), got ${point.y_m}` });
-    if (point.z_m > room.data.height_m)
-      issues.push({ path: `body.data.${part}.z_m`, message: `Must be below the ceiling (${room.data.height_m} m), got ${point.z_m}` });
-  }
+  const issues = pointsOutsideRoom(room.data, data);
   if (issues.length) throw new AppError(400, 'invalid_input', 'The workstation does not fit in its room', issues);
+}
+
+const DIMENSION = { x_m: 'length_m', y_m: 'width_m', z_m: 'height_m' } as const;
+
+// A room cannot shrink around a workstation drawn in it: each one left outside is named on the dimension.
+async function roomStillHoldsWorkstations(db: Conn, roomId: number, data: RoomUpdate['data']) {
+  const inside = await workstations.list(db, { room_id: roomId });
+  const issues = inside.flatMap((w) =>
+    pointsOutsideRoom(data, w.data).map((i) => {
+      const [, part, axis] = i.path.slice('body.'.length).split('.') as [string, string, keyof typeof DIMENSION];
+      return {
+        path: `body.data.${DIMENSION[axis]}`,
+        message: `${w.name}: the ${part === 'worker' ? 'worker' : 'source'} ${i.message.toLowerCase()}`,
+      };
+    }),
+  );
+  if (issues.length) throw new AppError(400, 'invalid_input', 'A workstation in this room would lie outside it', issues);
+}
+
+const edited = (r: { name: string; data: object }) => ({ name: r.name, data: r.data });
+
+const CHILD: Record<'site' | 'room' | 'workstation', [string, string]> = {
+  site: ['room', 'rooms'],
+  room: ['workstation', 'workstations'],
+  workstation: ['scenario', 'scenarios'],
+};
+
+// Deleting is refused while anything live hangs below the place (see places.routes.ts for why).
+async function assertEmpty(db: Conn, kind: 'site' | 'room' | 'workstation', id: number, name: string) {
+  const names = await liveChildren(db, kind, id);
+  if (!names.length) return;
+  const [one, many] = CHILD[kind];
+  const listed = names.slice(0, 5).join(', ') + (names.length > 5 ? ', …' : '');
+  throw new AppError(
+    409,
+    'not_empty',
+    `“${name}” still has ${names.length} ${names.length === 1 ? one : many} (${listed}). Delete or move ${names.length === 1 ? 'it' : 'them'} first.`,
+    undefined,
+    { children: names },
+  );
 }
 
 export const placesService = {
@@ -63,16 +94,50 @@ export const placesService = {
       return (await workstations.get(trx, id))!;
     });
   },
-  async updateWorkstation(db: Db, actor: Actor, id: number, input: Pick<WorkstationInput, 'name' | 'data'>): Promise<WorkstationRecord> {
-    const current = await workstations.get(db, id);
-    if (!current) throw notFound('Workstation');
-    await insideRoom(db, current.roomId, input.data);
+  async updateSite(db: Db, actor: Actor, id: number, { version, ...patch }: SiteUpdate): Promise<SiteRecord> {
     return withTransaction(db, async (trx) => {
-      await workstations.update(trx, id, input);
-      await auditWorkstation(trx, actor, 'workstation.changed', id, {
-        changes: changesOf({ name: current.name, ...current.data }, { name: input.name, ...input.data }),
+      const { before, after } = await editAtVersion(trx, sites, 'site', id, version, patch);
+      await auditSite(trx, actor, 'site.changed', id, {
+        name: after.name,
+        version: after.version,
+        changes: changesOf(edited(before), edited(after)),
       });
-      return (await workstations.get(trx, id))!;
+      return after;
+    });
+  },
+  async updateRoom(db: Db, actor: Actor, id: number, { version, ...patch }: RoomUpdate): Promise<RoomRecord> {
+    return withTransaction(db, async (trx) => {
+      if (await rooms.get(trx, id)) await roomStillHoldsWorkstations(trx, id, patch.data);
+      const { before, after } = await editAtVersion(trx, rooms, 'room', id, version, patch);
+      await auditRoom(trx, actor, 'room.changed', id, {
+        name: after.name,
+        version: after.version,
+        changes: changesOf(edited(before), edited(after)),
+      });
+      return after;
+    });
+  },
+  async updateWorkstation(db: Db, actor: Actor, id: number, { version, ...patch }: WorkstationUpdate): Promise<WorkstationRecord> {
+    return withTransaction(db, async (trx) => {
+      const current = await workstations.get(trx, id);
+      if (current) await insideRoom(trx, current.roomId, patch.data);
+      const { before, after } = await editAtVersion(trx, workstations, 'workstation', id, version, patch);
+      await auditWorkstation(trx, actor, 'workstation.changed', id, {
+        name: after.name,
+        version: after.version,
+        changes: changesOf(edited(before), edited(after)),
+      });
+      return after;
+    });
+  },
+  async remove(db: Db, actor: Actor, kind: 'site' | 'room' | 'workstation', id: number): Promise<void> {
+    const table = { site: sites, room: rooms, workstation: workstations }[kind];
+    await withTransaction(db, async (trx) => {
+      const current = await table.get(trx, id);
+      if (!current) throw notFound(kind.charAt(0).toUpperCase() + kind.slice(1));
+      await assertEmpty(trx, kind, id, current.name);
+      await table.softDelete(trx, id);
+      await auditOf(kind)(trx, actor, `${kind}.deleted`, id, { name: current.name });
     });
   },
 };

@@ -6,6 +6,7 @@ import type { Page, SavedRun, ScenarioDetail, ScenarioSummary } from '../../shar
 import { withTransaction, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
 import { inputHash } from '../lib/hash';
+import { assertEditedVersion } from '../lib/version-conflict';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { changesOfPatch } from '../audit/changes';
 import { agents } from '../agents/agents.repo';
@@ -21,6 +22,7 @@ import {
   updateScenario,
 } from './scenarios.repo';
 import { findRun, insertRun, listRuns } from './runs.repo';
+import { assertMayMove } from './move-rule';
 import { currentLimit, judgedRunFigures } from '../verdicts/run-verdict';
 import { verdictNumbers } from '../verdicts/verdict-numbers';
 import { withVerdict } from '../../shared/verdict/index';
@@ -91,23 +93,18 @@ export const scenariosService = {
     return getScenario(db, id);
   },
 
-  // Optimistic concurrency: the caller names the version it edited; a newer one wins nothing silently.
   async update(db: Db, actor: Actor, id: number, patch: ScenarioUpdate): Promise<ScenarioDetail> {
     await checkRefs(db, patch);
     await withTransaction(db, async (trx) => {
       const current = await findScenario(trx, id);
       if (!current) throw notFound('Scenario');
-      if (current.version !== patch.version) {
-        throw new AppError(
-          409,
-          'version_conflict',
-          `Someone saved this scenario after you opened it (your version ${patch.version}, current ${current.version}). Review both before saving again.`,
-          undefined,
-          {
-            current: { version: current.version, input: current.input, name: current.name, controlDescription: current.controlDescription },
-          },
-        );
-      }
+      assertEditedVersion('scenario', patch.version, current, {
+        version: current.version,
+        input: current.input,
+        name: current.name,
+        controlDescription: current.controlDescription,
+      });
+      assertMayMove(current, patch.workstationId);
       const { version: _edited, ...fields } = patch;
       await updateScenario(
         trx,
@@ -115,7 +112,12 @@ export const scenariosService = {
         { ...fields, version: current.version + 1, inputHash: patch.input === undefined ? undefined : inputHash(patch.input) },
         actor.id,
       );
-      await auditScenario(trx, actor, 'scenario.changed', id, { version: current.version + 1, changes: changesOfPatch(current, fields) });
+      const moved = patch.workstationId !== undefined && patch.workstationId !== current.workstationId;
+      await auditScenario(trx, actor, 'scenario.changed', id, {
+        version: current.version + 1,
+        changes: changesOfPatch(current, fields),
+        ...(moved ? { workstationId: { from: current.workstationId, to: patch.workstationId } } : {}),
+      });
     });
     return getScenario(db, id);
   },

@@ -121,13 +121,16 @@ export type SavedRun = {
 
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 
-export type JsonRecord<T> = { id: number; name: string; data: T; createdAt: string; updatedAt: string };
+export type JsonRecord<T> = { id: number; name: string; data: T; version: number; createdAt: string; updatedAt: string };
 export type AgentRecord = JsonRecord<AgentData>;
 export type RoomData = {
   length_m: number;
   width_m: number;
   height_m: number;
+  /** Which of the two the person typed; the other follows from the room's volume. */
+  ventilationEntered: 'airChanges' | 'supplyAirflow';
   airChanges_perH: number;
+  supplyAirflow_m3PerH: number;
   draftSpeed_mPerS: number;
   draftDirection_deg: number;
   temperature_K: number;

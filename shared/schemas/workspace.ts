@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { CONTROL_TIERS, LIMIT_FRACTIONS, RELEASE_TYPES } from '../vocabulary/index';
+import { CONTROL_TIERS, LIMIT_FRACTIONS, POSTURES, RELEASE_TYPES } from '../vocabulary/index';
 import { scenarioSchema } from './scenario';
+import { airChangesToSupplyAirflow_m3PerH, supplyAirflowToAirChanges_perH } from '../units';
 
 const name = z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters');
 const positive = (what: string) =>
@@ -20,19 +21,58 @@ export const siteDataSchema = z
 export const siteInputSchema = z.object({ name, data: siteDataSchema.prefault({}) }).strict();
 export type SiteInput = z.infer<typeof siteInputSchema>;
 
+// Every edit of a place or an agent names the version it was made from (optimistic concurrency).
+const version = z.number({ message: 'Send the version you edited' }).int().positive();
+export const siteUpdateSchema = siteInputSchema.extend({ version }).strict();
+export type SiteUpdate = z.infer<typeof siteUpdateSchema>;
+
+export const VENTILATION_ENTERED = ['airChanges', 'supplyAirflow'] as const;
+const MAX_AIR_CHANGES_perH = 200;
+
+// People give general ventilation either as air changes or as the supply airflow; what they typed is kept as
+// typed and the other figure follows from the room's volume, so the engine always reads one consistent ACH.
 export const roomDataSchema = z
   .object({
     length_m: positive('Length').max(500),
     width_m: positive('Width').max(500),
     height_m: positive('Height').max(100),
-    airChanges_perH: nonNegative('Air changes per hour').max(200),
+    ventilationEntered: z.enum(VENTILATION_ENTERED).default('airChanges'),
+    airChanges_perH: nonNegative('Air changes per hour').max(MAX_AIR_CHANGES_perH).optional(),
+    supplyAirflow_m3PerH: nonNegative('Supply airflow').max(1e8).optional(),
     draftSpeed_mPerS: nonNegative('Draft speed').max(10),
     draftDirection_deg: z.number().finite().min(-360).max(360),
     temperature_K: z.number().finite().min(223.15, 'Temperature must be at least −50 °C').max(373.15, 'Temperature must be at most 100 °C'),
   })
-  .strict();
+  .strict()
+  .superRefine((d, ctx) => {
+    const volume_m3 = d.length_m * d.width_m * d.height_m;
+    if (d.ventilationEntered === 'airChanges' && d.airChanges_perH === undefined)
+      ctx.addIssue({ code: 'custom', path: ['airChanges_perH'], message: 'Enter the air changes per hour' });
+    if (d.ventilationEntered === 'supplyAirflow') {
+      if (d.supplyAirflow_m3PerH === undefined)
+        ctx.addIssue({ code: 'custom', path: ['supplyAirflow_m3PerH'], message: 'Enter the supply airflow' });
+      else if (supplyAirflowToAirChanges_perH(d.supplyAirflow_m3PerH, volume_m3) > MAX_AIR_CHANGES_perH)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['supplyAirflow_m3PerH'],
+          message: `That is more than ${MAX_AIR_CHANGES_perH} air changes per hour for this room`,
+        });
+    }
+  })
+  .transform(({ airChanges_perH, supplyAirflow_m3PerH, ...d }) => {
+    const volume_m3 = d.length_m * d.width_m * d.height_m;
+    const ach =
+      d.ventilationEntered === 'supplyAirflow'
+        ? supplyAirflowToAirChanges_perH(supplyAirflow_m3PerH ?? 0, volume_m3)
+        : (airChanges_perH ?? 0);
+    const supply =
+      d.ventilationEntered === 'supplyAirflow' ? (supplyAirflow_m3PerH ?? 0) : airChangesToSupplyAirflow_m3PerH(ach, volume_m3);
+    return { ...d, airChanges_perH: ach, supplyAirflow_m3PerH: supply };
+  });
 export const roomInputSchema = z.object({ siteId: z.number().int().positive(), name, data: roomDataSchema }).strict();
 export type RoomInput = z.infer<typeof roomInputSchema>;
+export const roomUpdateSchema = roomInputSchema.omit({ siteId: true }).extend({ version }).strict();
+export type RoomUpdate = z.infer<typeof roomUpdateSchema>;
 
 export const workstationDataSchema = z
   .object({
@@ -43,7 +83,7 @@ export const workstationDataSchema = z
         x_m: nonNegative('Worker x'),
         y_m: nonNegative('Worker y'),
         z_m: nonNegative('Breathing-zone height'),
-        posture: z.enum(['standing', 'seated']),
+        posture: z.enum(POSTURES),
       })
       .strict(),
     releaseType: z.enum(RELEASE_TYPES),
@@ -51,6 +91,8 @@ export const workstationDataSchema = z
   .strict();
 export const workstationInputSchema = z.object({ roomId: z.number().int().positive(), name, data: workstationDataSchema }).strict();
 export type WorkstationInput = z.infer<typeof workstationInputSchema>;
+export const workstationUpdateSchema = workstationInputSchema.omit({ roomId: true }).extend({ version }).strict();
+export type WorkstationUpdate = z.infer<typeof workstationUpdateSchema>;
 
 export const agentDataSchema = z
   .object({
@@ -75,6 +117,8 @@ export const agentDataSchema = z
   .strict();
 export const agentInputSchema = z.object({ name, data: agentDataSchema }).strict();
 export type AgentInput = z.infer<typeof agentInputSchema>;
+export const agentUpdateSchema = agentInputSchema.extend({ version }).strict();
+export type AgentUpdate = z.infer<typeof agentUpdateSchema>;
 export type AgentData = z.infer<typeof agentDataSchema>;
 
 export { CONTROL_TIERS, type ControlTier } from '../vocabulary/control-tiers';

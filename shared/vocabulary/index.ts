@@ -6,3 +6,4 @@ export * from './fractions';
 export * from './hood-kinds';
 export * from './rating-categories';
 export * from './release-types';
+export * from './postures';

@@ -6,7 +6,7 @@ import { AGENT, ROOM_DATA, SITE, WORKSTATION_DATA, scenarioInput } from '../fixt
 
 let t: TestApp;
 let admin: Awaited<ReturnType<TestApp['signIn']>>;
-const ids = { scenario: 0, workstation: 0, agent: 0, person: 0, run: 0 };
+const ids = { scenario: 0, site: 0, room: 0, workstation: 0, agent: 0, person: 0, run: 0 };
 let sent = 0;
 
 beforeAll(async () => {
@@ -14,6 +14,8 @@ beforeAll(async () => {
   admin = await t.signIn('admin');
   const site = await admin.post('/api/sites').send(SITE);
   const room = await admin.post('/api/rooms').send({ siteId: site.body.id, name: 'Hall', data: ROOM_DATA });
+  ids.site = site.body.id;
+  ids.room = room.body.id;
   ids.workstation = (await admin.post('/api/workstations').send({ roomId: room.body.id, name: 'Bench', data: WORKSTATION_DATA })).body.id;
   ids.agent = (await admin.post('/api/agents').send(AGENT)).body.id;
   const input = scenarioInput({ run: { particles: 200, seed: 1, batches: 2 } });
@@ -104,10 +106,12 @@ const TARGETS: Target[] = [
   { method: 'post', url: () => '/api/sites', valid: SITE },
   { method: 'post', url: () => '/api/rooms', valid: { siteId: 1, name: 'R', data: ROOM_DATA } },
   { method: 'post', url: () => '/api/workstations', valid: { roomId: 1, name: 'W', data: WORKSTATION_DATA } },
-  { method: 'put', url: () => `/api/workstations/${ids.workstation}`, valid: { name: 'W', data: WORKSTATION_DATA } },
+  { method: 'put', url: () => `/api/workstations/${ids.workstation}`, valid: { version: 1, name: 'W', data: WORKSTATION_DATA } },
+  { method: 'put', url: () => `/api/sites/${ids.site}`, valid: { version: 1, ...SITE } },
+  { method: 'put', url: () => `/api/rooms/${ids.room}`, valid: { version: 1, name: 'R', data: ROOM_DATA } },
   { method: 'put', url: () => `/api/workstations/${ids.workstation}/operators`, valid: { personIds: [] } },
   { method: 'post', url: () => '/api/agents', valid: AGENT },
-  { method: 'put', url: () => `/api/agents/${ids.agent}`, valid: AGENT },
+  { method: 'put', url: () => `/api/agents/${ids.agent}`, valid: { version: 1, ...AGENT } },
   { method: 'post', url: () => '/api/scenarios', valid: { workstationId: 1, name: 'S', input: scenarioInput() } },
   { method: 'patch', url: () => `/api/scenarios/${ids.scenario}`, valid: { version: 1, name: 'S' } },
   { method: 'post', url: () => `/api/scenarios/${ids.scenario}/duplicate`, valid: { name: 'copy' } },

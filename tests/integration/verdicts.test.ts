@@ -134,9 +134,10 @@ describe('a limit change re-judges without a new run', () => {
       const runsBefore = await t.db('runs').count({ n: '*' });
 
       const wood = agent('Oak dust', 'inhalable', 2);
+      const { version } = (await eng.get(`/api/agents/${woodId}`)).body;
       const cut = await eng
         .put(`/api/agents/${woodId}`)
-        .send({ ...wood, data: { ...wood.data, override: { limit8h_mgPerM3: 0.04, reason: 'Site applies a stricter limit' } } });
+        .send({ ...wood, version, data: { ...wood.data, override: { limit8h_mgPerM3: 0.04, reason: 'Site applies a stricter limit' } } });
       expect(cut.status).toBe(200);
 
       const board = (await op.get(`/api/boards/${workstationId}`)).body;

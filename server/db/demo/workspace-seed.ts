@@ -3,6 +3,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseScenario, type Scenario } from '../../../shared/schemas/scenario';
 import { runResultSchema, toJsonFriendly } from '../../../shared/schemas/runs';
+import { roomDataSchema } from '../../../shared/schemas/workspace';
 import { combineBatches, prepareScenario, runBatch } from '../../../workers/engine/index';
 import type { Db } from '../knex';
 import { placesService } from '../../places/places.service';
@@ -40,7 +41,7 @@ export async function seedDemoWorkspace(
     const room = await placesService.createRoom(db, actor, {
       siteId: site.id,
       name: place.room,
-      data: { length_m, width_m, height_m, airChanges_perH, draftSpeed_mPerS, draftDirection_deg, temperature_K },
+      data: roomDataSchema.parse({ length_m, width_m, height_m, airChanges_perH, draftSpeed_mPerS, draftDirection_deg, temperature_K }),
     });
     const ws = await placesService.createWorkstation(db, actor, {
       roomId: room.id,

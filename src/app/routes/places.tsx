@@ -2,7 +2,9 @@ import { Can } from '@/components/can';
 import { Page } from '@/components/ui/page';
 import { EmptyState, ErrorMessage, Spinner } from '@/components/ui/status';
 import { useSites } from '@/features/places/api/get-sites';
-import { NewRoomForm, NewSiteForm, NewWorkstationForm } from '@/features/places/components/new-place-forms';
+import { RoomForm } from '@/features/places/components/room-form';
+import { SiteForm } from '@/features/places/components/site-form';
+import { WorkstationForm } from '@/features/places/components/workstation-form';
 import { PlacesTree } from '@/features/places/components/places-tree';
 
 export function PlacesRoute() {
@@ -10,7 +12,7 @@ export function PlacesRoute() {
   return (
     <Page
       title="Sites and workstations"
-      intro="Sites hold rooms; rooms hold workstations. Open a workstation to compare its control options or add one."
+      intro="Sites hold rooms; rooms hold workstations. Open a workstation to compare its control options or add one. A place can be deleted once nothing is left inside it: its scenarios and audit trail stay on record."
     >
       {sites.isPending && <Spinner />}
       {sites.error && <ErrorMessage error={sites.error} />}
@@ -23,9 +25,9 @@ export function PlacesRoute() {
       <Can permission="scenarios:write">
         <section className="mt-10 space-y-4" aria-labelledby="add-places">
           <h2 id="add-places">Add places</h2>
-          <NewSiteForm />
-          {sites.data && <NewRoomForm sites={sites.data.items} />}
-          {sites.data && <NewWorkstationForm sites={sites.data.items} />}
+          <SiteForm />
+          {sites.data && <RoomForm sites={sites.data.items} />}
+          {sites.data && <WorkstationForm sites={sites.data.items} />}
         </section>
       </Can>
     </Page>

@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { Page } from '@/components/ui/page';
 import { ErrorMessage, Spinner } from '@/components/ui/status';
 import { paths } from '@/config/paths';
+import { sig } from '@/lib/format';
 import { useWorkstation } from '@/features/places/api/get-sites';
 import { useCreateScenario } from '@/features/scenarios/api/create-scenario';
 import { workstationGeometry } from '@/features/scenarios/api/new-scenario';
@@ -50,7 +51,7 @@ export function WorkstationRoute() {
   return (
     <Page
       title={w.name}
-      intro={`${w.data.description || 'No description'} · room ${w.room.name} (${w.room.data.length_m} × ${w.room.data.width_m} × ${w.room.data.height_m} m, ${w.room.data.airChanges_perH} ACH)`}
+      intro={`${w.data.description || 'No description'} · room ${w.room.name} (${w.room.data.length_m} × ${w.room.data.width_m} × ${w.room.data.height_m} m, ${sig(w.room.data.airChanges_perH)} ACH)`}
       actions={
         <Can permission="scenarios:write">
           <Button onClick={addOption} disabled={create.isPending}>

@@ -5,8 +5,11 @@ import { api } from '@/config/paths';
 import { apiFetch } from '@/lib/api-client';
 import { agentKeys } from './get-agents';
 
-export const saveAgent = ({ id, body }: { id?: number; body: AgentInput }) =>
-  apiFetch<AgentRecord>(id ? api.agent(id) : api.agents, { method: id ? 'PUT' : 'POST', body });
+// An edit names the version it was made from; the server answers 409 with the stored agent when it moved on.
+export const saveAgent = ({ id, version, body }: { id?: number; version?: number; body: AgentInput }) =>
+  id
+    ? apiFetch<AgentRecord>(api.agent(id), { method: 'PUT', body: { ...body, version } })
+    : apiFetch<AgentRecord>(api.agents, { method: 'POST', body });
 
 export function useSaveAgent() {
   const qc = useQueryClient();

@@ -9,13 +9,15 @@ import { ErrorMessage, Notice } from '@/components/ui/status';
 import { bindFields } from '@/lib/bind-fields';
 import { fieldErrors } from '@/lib/form-errors';
 import { useSaveAgent } from '@/features/agents/api/save-agent';
+import { VersionConflict } from '@/components/version-conflict';
+import { useVersionConflict } from '@/hooks/use-version-conflict';
 
 const num = decimalOrNaN;
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
 
-export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () => void }) {
+const fromAgent = (agent?: AgentRecord) => {
   const d = agent?.data;
-  const [f, setF] = useState({
+  return {
     name: agent?.name ?? '',
     density: str(d?.density_kgPerM3 ?? 2650),
     shape: str(d?.shapeFactor ?? 1),
@@ -28,7 +30,31 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
     overrideOn: Boolean(d?.override),
     override: str(d?.override?.limit8h_mgPerM3),
     reason: d?.override?.reason ?? '',
-  });
+  };
+};
+
+const LABELS: Record<string, string> = {
+  name: 'Name',
+  'data.density_kgPerM3': 'Particle density (kg/m³)',
+  'data.shapeFactor': 'Dynamic shape factor',
+  'data.limitFraction': 'Limit applies to',
+  'data.limit8h_mgPerM3': '8-h limit (mg/m³)',
+  'data.limit15min_mgPerM3': '15-min limit (mg/m³)',
+  'data.jurisdiction': 'Jurisdiction',
+  'data.limitSource': 'Source of the limit',
+  'data.limitDate': 'Date of the limit',
+  'data.override': 'Override',
+  'data.override.limit8h_mgPerM3': 'Override 8-h limit (mg/m³)',
+  'data.override.reason': 'Reason for the override',
+  'data.notes': 'Notes',
+};
+
+export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () => void }) {
+  // The stored agent this edit starts from: after a conflict, the one the person chose to build on.
+  const [base, setBase] = useState(agent);
+  const d = base?.data;
+  const [f, setF] = useState(() => fromAgent(agent));
+  const conflict = useVersionConflict<AgentRecord>();
   const [submitted, setSubmitted] = useState(false);
   const save = useSaveAgent();
   const body = {
@@ -49,11 +75,17 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
   const parsed = agentInputSchema.safeParse(body);
   const e = submitted ? fieldErrors(parsed, save.error) : {};
   const field = bindFields(f, setF, e);
+  const send = (version: number | undefined) => {
+    if (parsed.success)
+      save.mutate({ id: agent?.id, version, body: parsed.data }, { onSuccess: () => onDone?.(), onError: conflict.onError });
+  };
   const submit = (ev: FormEvent) => {
     ev.preventDefault();
     setSubmitted(true);
-    if (parsed.success) save.mutate({ id: agent?.id, body: parsed.data }, { onSuccess: () => onDone?.() });
+    conflict.clear();
+    send(base?.version);
   };
+  const saved = conflict.saved;
 
   return (
     <form
@@ -108,9 +140,31 @@ export function AgentForm({ agent, onDone }: { agent?: AgentRecord; onDone?: () 
           <Notice>Saved “{save.data.name}”.</Notice>
         </div>
       )}
-      {save.error && (
+      {save.error && !saved && (
         <div className="sm:col-span-3">
           <ErrorMessage title="Not saved" error={save.error} />
+        </div>
+      )}
+      {saved && (
+        <div className="sm:col-span-3">
+          <VersionConflict
+            what="dust agent"
+            mine={parsed.success ? parsed.data : body}
+            saved={saved}
+            savedFields={{ name: saved.name, data: saved.data }}
+            labels={LABELS}
+            onKeepMine={() => {
+              setBase(saved);
+              conflict.clear();
+              send(saved.version);
+            }}
+            onTakeSaved={() => {
+              setBase(saved);
+              setF(fromAgent(saved));
+              conflict.clear();
+              save.reset();
+            }}
+          />
         </div>
       )}
     </form>

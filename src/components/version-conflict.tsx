@@ -1,0 +1,64 @@
+import { Button } from '@/components/ui/button';
+import { sig } from '@/lib/format';
+import { recordDiff } from '@/lib/record-diff';
+
+type Props = {
+  what: string;
+  mine: unknown;
+  saved: { version: number };
+  savedFields: unknown;
+  labels?: Record<string, string>;
+  onKeepMine: () => void;
+  onTakeSaved: () => void;
+};
+
+function shown(v: unknown): string {
+  if (v === null || v === undefined || v === '') return '—';
+  if (typeof v === 'number') return sig(v, 4);
+  if (typeof v === 'string') return `“${v}”`;
+  if (typeof v === 'boolean') return v ? 'yes' : 'no';
+  return Object.entries(v as Record<string, unknown>)
+    .map(([k, x]) => `${k} ${shown(x)}`)
+    .join(', ');
+}
+
+// Someone saved first: both versions stay on screen, nothing typed is lost, and the person decides which wins.
+export function VersionConflict({ what, mine, saved, savedFields, labels = {}, onKeepMine, onTakeSaved }: Props) {
+  const rows = recordDiff(mine, savedFields);
+  return (
+    <section role="alert" aria-label="Edit conflict" className="rounded-lg border-2 border-watch bg-watch-soft p-4 text-sm">
+      <h3 className="font-semibold text-watch">Someone else saved this {what} while you were editing</h3>
+      <p className="mt-1">
+        Nothing of yours was saved. The stored copy is now version {saved.version}; your changes are still in the form.
+      </p>
+      {rows.length ? (
+        <table className="mt-2 w-full text-left text-xs">
+          <thead>
+            <tr>
+              <th className="pr-3">Field</th>
+              <th className="pr-3">Yours</th>
+              <th>Stored now</th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r.path}>
+                <td className="pr-3 font-semibold">{labels[r.path] ?? r.path}</td>
+                <td className="pr-3">{shown(r.mine)}</td>
+                <td>{shown(r.saved)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : (
+        <p className="mt-2">Your fields and the stored ones are the same.</p>
+      )}
+      <div className="mt-3 flex flex-wrap gap-2">
+        <Button onClick={onKeepMine}>Save mine over version {saved.version}</Button>
+        <Button variant="secondary" onClick={onTakeSaved}>
+          Discard mine and load the stored one
+        </Button>
+      </div>
+    </section>
+  );
+}
