@@ -76,7 +76,10 @@ describe('the run results preview', () => {
 
   it('downloads the fraction table as CSV with units in the headers', async () => {
     const download = page.waitForEvent('download');
-    await page.getByRole('button', { name: 'Download CSV', exact: true }).click();
+    await page
+      .getByRole('region', { name: 'Concentrations by size fraction' })
+      .getByRole('button', { name: 'Download CSV', exact: true })
+      .click();
     const file = await download;
     expect(file.suggestedFilename()).toMatch(/^motewalk-seed-7-fractions-\d{4}-\d{2}-\d{2}\.csv$/);
     const text = fs.readFileSync((await file.path())!, 'utf8');

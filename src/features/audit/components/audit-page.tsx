@@ -31,7 +31,7 @@ const COLUMNS: Column<AuditEntry>[] = [
       const changes = changesOf(a);
       return (
         <>
-          <span className="first-letter:uppercase">{deedWords(a)}</span>
+          <span className="block first-letter:uppercase">{deedWords(a)}</span>
           {changes.length > 0 && (
             <ul aria-label="What changed" className="mt-1 list-disc pl-5 text-xs text-muted">
               {changes.map((c) => (

@@ -75,9 +75,18 @@ describe('auditSentence', () => {
   });
 });
 
+describe('names as they were', () => {
+  it('names the record as the entry recorded it, and says what it is called now', () => {
+    expect(auditSentence(entry({ action: 'scenario.created', targetName: 'Slot hood (more air)', detail: { name: 'Slot hood' } }))).toBe(
+      'Tomas Okafor created the scenario “Slot hood” (now “Slot hood (more air)”).',
+    );
+  });
+});
+
 describe('fieldWords and valueWords', () => {
   it('turn a stored field path into words with its unit', () => {
     expect(fieldWords('source.rate_mgPerMin')).toEqual({ label: 'source rate', unit: 'mg/min' });
+    expect(fieldWords('input.hoods.2.faceWidth_m')).toEqual({ label: 'hood 2 face width', unit: 'm' });
     expect(fieldWords('controlDescription')).toEqual({ label: 'control description', unit: undefined });
     expect(fieldWords('room.temperature_C')).toEqual({ label: 'room temperature', unit: '°C' });
   });

@@ -80,7 +80,8 @@ const UNIT: Record<string, string> = {
 
 /** "hoods.1.airflow_m3PerS" reads "hood 1 airflow", with its unit "m³/s". */
 export function fieldWords(field: string): { label: string; unit?: string } {
-  const parts = field.split('.');
+  // A scenario's inputs sit under "input"; the reader knows the scenario is what changed.
+  const parts = field.replace(/^input\./, '').split('.');
   const leaf = parts[parts.length - 1];
   const cut = leaf.indexOf('_');
   const unit = cut > 0 ? UNIT[leaf.slice(cut + 1)] : undefined;
@@ -109,7 +110,11 @@ function thing(e: AuditEntry): string {
   if (!e.targetType) return '';
   const kind = THING[e.targetType] ?? words(e.targetType);
   if (e.targetType === 'person') return e.targetName ?? `person ${e.targetId}`;
-  return e.targetName ? `the ${kind} “${e.targetName}”` : `${kind} ${e.targetId ?? ''}`.trim();
+  // The entry names the record as it was then; a later rename is said beside it.
+  const then = typeof e.detail?.name === 'string' ? e.detail.name : null;
+  const name = then ?? e.targetName;
+  if (!name) return `${kind} ${e.targetId ?? ''}`.trim();
+  return `the ${kind} “${name}”${e.targetName && then && e.targetName !== then ? ` (now “${e.targetName}”)` : ''}`;
 }
 
 const role = (r: unknown) => ROLE_LABELS[r as Role] ?? String(r);
