@@ -61,13 +61,11 @@ describe('places and dust agents', () => {
 
   it('records a limit override with its reason in the audit log', async () => {
     const eng = await t.signIn('engineer');
-    const res = await eng
-      .put(`/api/agents/${agentId}`)
-      .send({
-        version: 1,
-        name: AGENT.name,
-        data: { ...AGENT.data, override: { limit8h_mgPerM3: 0.05, reason: 'Site follows the OSHA PEL' } },
-      });
+    const res = await eng.put(`/api/agents/${agentId}`).send({
+      version: 1,
+      name: AGENT.name,
+      data: { ...AGENT.data, override: { limit8h_mgPerM3: 0.05, reason: 'Site follows the OSHA PEL' } },
+    });
     expect(res.status).toBe(200);
     expect(res.body.data.override.limit8h_mgPerM3).toBe(0.05);
     const audit = await t.db('audit_log').where({ action: 'agent.limit_overridden' }).first();
