@@ -10,7 +10,7 @@ describe('the fate and cross-check tables as CSV', () => {
   it('gives each fate its share and mass, adding up to what was emitted', () => {
     const { header, rows } = fateTable(view);
     expect(header).toEqual(['Fate', 'Share (%)', 'Mass (mg)']);
-    expect(rows).toHaveLength(4);
+    expect(rows).toHaveLength(5);
     const mass = rows.reduce((a, r) => a + Number(r[2]), 0);
     expect(mass / view.fate.emitted_mg).toBeCloseTo(1, 6);
   });
