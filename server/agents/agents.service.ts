@@ -32,7 +32,7 @@ export const agentsService = {
       const { before, after } = await editAtVersion(trx, agents, 'dust agent', id, version, input);
       const overridden = JSON.stringify(before.data.override) !== JSON.stringify(input.data.override);
       const scenariosRejudged = await rejudgeAgentRuns(trx, id, input.data);
-      const changes = changesOf({ name: before.name, ...before.data }, { name: after.name, ...after.data });
+      const changes = changesOf({ name: before.name, data: before.data }, { name: after.name, data: after.data });
       await auditAgent(
         trx,
         actor,

@@ -51,7 +51,7 @@ describe('editing a dust agent names the version it was made from', () => {
       .first();
     expect(JSON.parse(audit.detail)).toMatchObject({
       version: 2,
-      changes: { 'data.override.limit8h_mgPerM3': { from: null, to: 0.0125 } },
+      changes: expect.arrayContaining([{ field: 'data.override.limit8h_mgPerM3', from: null, to: 0.0125 }]),
     });
   });
 
