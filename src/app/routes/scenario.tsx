@@ -1,4 +1,3 @@
-import { captureCheck } from '../../../shared/physics/capture-verdict';
 import { useMemo, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { can } from '../../../shared/auth/permissions';
@@ -16,7 +15,7 @@ import { ScenarioEditor } from '@/features/scenario-editor/components/scenario-e
 import { useSizeProfileOptions } from '@/features/size-profiles/api/use-size-profile-options';
 import { useUser } from '@/lib/auth';
 import type { RunResult } from '../../../shared/schemas/run-result';
-import { agentLimit, withVerdict } from '../../../shared/verdict/index';
+import { agentLimit, judgeOptions, withVerdict } from '../../../shared/verdict/index';
 import { ScenarioActions } from './scenario-actions';
 import { ScenarioRecords } from './scenario-records';
 import { ScenarioRunArea } from './scenario-run-area';
@@ -47,8 +46,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const agent = agents.find((a) => a.id === draft.agentId);
   // Judged against the agent's current limit, as the server will judge it once saved.
   const judged = useMemo(
-    () =>
-      fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data), { captureVelocity: captureCheck(fresh.input)?.verdict }) : null,
+    () => (fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data), judgeOptions(fresh.input)) : null),
     [fresh, agent],
   );
 
