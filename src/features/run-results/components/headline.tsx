@@ -71,7 +71,7 @@ export function Headline({
       <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
         <Figure label={`8-h TWA, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="twa">
           {readableNumber(s.twa8h_mgPerM3)} mg/m³
-          <span className="block text-xs font-normal text-muted">95 % CI {ciText(s.twa8hCi95_mgPerM3)} mg/m³</span>
+          <span className="block text-xs font-normal text-muted">95 % CI {ciText(s.twa8hCi95_mgPerM3, 3, ' mg/m³')}</span>
         </Figure>
         {limit && (
           <Figure label="Share of the limit" testId="percent-of-limit">

@@ -13,7 +13,7 @@ export function PeakText({ summary, limit }: { summary: FractionSummary; limit?:
       {summary.peak15minCi95_mgPerM3 && <span className="block text-xs text-muted">{ciText(summary.peak15minCi95_mgPerM3)}</span>}
       {st && (
         <span className="block text-xs" data-testid="short-term">
-          {percentText(st.percentOfLimit)} of the 15-min limit {readableNumber(st.value_mgPerM3)} (up to{' '}
+          {percentText(st.percentOfLimit)} of the 15-min limit {readableNumber(st.value_mgPerM3)} mg/m³ (up to{' '}
           {percentText(st.percentOfLimitUpper)}): {EXCEEDS[st.exceeds]}
         </span>
       )}
