@@ -90,7 +90,7 @@ export function Headline({
           </Figure>
         )}
         <Figure label={`Peak 15-min average, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="peak">
-          <PeakText summary={s} limit={limit} /> <span className="text-xs font-normal text-muted">mg/m³</span>
+          <PeakText summary={s} limit={limit} unit=" mg/m³" />
         </Figure>
         <Figure label="Statistical error" testId="statistical-error">
           ± {readableNumber(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence

@@ -39,8 +39,8 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
               : undefined
           }
         >
-          <option value="particles">The particles above are done</option>
-          <option value="precision">The 8-h TWA is known to a precision, or the verdict is decided</option>
+          <option value="particles">All the particles above</option>
+          <option value="precision">A precision or a decision</option>
         </SelectField>
         {precision && (
           <>
