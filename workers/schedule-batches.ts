@@ -15,6 +15,8 @@ export interface ScheduleOptions {
   /** Share of all batches done (partial batches count by their own share) and particle-steps so far; never decreases. */
   onProgress?: (fraction: number, particleSteps: number) => void;
   signal?: CancelSignal;
+  /** Index of the first batch: a run to a precision adds batches first…first+batches−1 to the ones it has. */
+  first?: number;
 }
 
 export class RunCancelledError extends Error {
@@ -25,7 +27,7 @@ export class RunCancelledError extends Error {
 }
 
 /**
- * Hands batch indices 0…batches−1 to whichever worker is free and returns the results in batch
+ * Hands batch indices first…first+batches−1 (first is 0 unless given) to whichever worker is free and returns the results in batch
  * order, so nothing downstream depends on how many workers ran or which finished first. The first
  * worker error or a cancel rejects at once; the caller stops the workers (a busy loop cannot be
  * interrupted from here), and anything they report afterwards is ignored.
@@ -33,7 +35,7 @@ export class RunCancelledError extends Error {
 export async function scheduleBatches<R extends { particleSteps: number }>(
   workers: readonly BatchWorker<R>[],
   batches: number,
-  { onProgress, signal }: ScheduleOptions = {},
+  { onProgress, signal, first = 0 }: ScheduleOptions = {},
 ): Promise<R[]> {
   if (workers.length === 0 && batches > 0) throw new RangeError('scheduleBatches needs at least one worker');
   const results: R[] = new Array(batches);
@@ -61,7 +63,7 @@ export async function scheduleBatches<R extends { particleSteps: number }>(
     await worker.prepare();
     while (!settled && next < batches) {
       const batchIndex = next++;
-      const result = await worker.run(batchIndex, (fraction, steps) => {
+      const result = await worker.run(first + batchIndex, (fraction, steps) => {
         if (settled || results[batchIndex]) return;
         partial.set(batchIndex, { fraction, steps });
         report();

@@ -1,4 +1,3 @@
-import { captureCheck } from '../../shared/physics/capture-verdict';
 import type { RunResult } from '../../shared/schemas/run-result';
 import type { RunCreate } from '../../shared/schemas/runs';
 import type { ScenarioCreate, ScenarioListQuery, ScenarioUpdate } from '../../shared/schemas/workspace';
@@ -25,7 +24,7 @@ import { findRun, insertRun, listRuns } from './runs.repo';
 import { assertMayMove } from './move-rule';
 import { currentLimit, judgedRunFigures } from '../verdicts/run-verdict';
 import { verdictNumbers } from '../verdicts/verdict-numbers';
-import { withVerdict } from '../../shared/verdict/index';
+import { judgeOptions, withVerdict } from '../../shared/verdict/index';
 
 const auditScenario = auditOf('scenario');
 
@@ -153,7 +152,7 @@ export const scenariosService = {
       // Whatever verdict the client sent is dropped: the server judges from the numbers and today's limit.
       const source = await scenarioLimitSource(trx, id);
       const limit = currentLimit(source?.agentData ?? null, current.input);
-      const result = withVerdict(run.result, limit, { captureVelocity: captureCheck(run.input)?.verdict });
+      const result = withVerdict(run.result, limit, judgeOptions(run.input));
       const verdict = result.limit ?? null;
       const summary = run.result.breathingZone.fractions[verdict?.fraction ?? 'respirable'];
       const newId = await insertRun(trx, {
@@ -201,6 +200,6 @@ export async function getRun(db: Db, runId: number): Promise<SavedRun> {
     createdAt: run.createdAt,
     outOfDate: !scenario || scenario.inputHash !== run.inputHash,
     input: run.input,
-    result: withVerdict(run.result as RunResult, limit, { captureVelocity: captureCheck(run.input)?.verdict }),
+    result: withVerdict(run.result as RunResult, limit, judgeOptions(run.input)),
   };
 }

@@ -2,7 +2,7 @@ import type { AgentData } from '../../shared/schemas/workspace';
 import { agentLimit, type JudgeLimit, judgeRun, type Verdict } from '../../shared/verdict/index';
 import type { VerdictNumbers } from './verdict-numbers';
 
-type ScenarioLimit = { fraction: JudgeLimit['fraction']; value_mgPerM3: number };
+type ScenarioLimit = { fraction: JudgeLimit['fraction']; value_mgPerM3: number; shortTerm_mgPerM3?: number };
 
 const parse = <T>(text: unknown): T | null => (typeof text === 'string' && text ? (JSON.parse(text) as T) : null);
 
@@ -17,7 +17,9 @@ export function currentLimit(agentData: unknown, scenarioInput: unknown): JudgeL
     typeof scenarioInput === 'string'
       ? parse<{ limit?: ScenarioLimit }>(scenarioInput)
       : (scenarioInput as { limit?: ScenarioLimit } | null);
-  return input?.limit ? { fraction: input.limit.fraction, value_mgPerM3: input.limit.value_mgPerM3 } : null;
+  if (!input?.limit) return null;
+  const { fraction, value_mgPerM3, shortTerm_mgPerM3 } = input.limit;
+  return { fraction, value_mgPerM3, ...(shortTerm_mgPerM3 !== undefined ? { shortTerm_mgPerM3 } : {}) };
 }
 
 /** The server's verdict on a stored run; null without a limit, or for a run whose numbers were never kept. */
@@ -31,9 +33,11 @@ export function judgeStored(numbersText: unknown, limit: JudgeLimit | null): Ver
       twa8hCi95_mgPerM3: s.twa8hCi95_mgPerM3,
       zoneHistories: s.zoneHistories,
       histories: numbers.histories,
+      peak15min_mgPerM3: s.peak15min_mgPerM3,
+      peak15minCi95_mgPerM3: s.peak15minCi95_mgPerM3,
     },
     limit,
-    { captureVelocity: numbers.captureVelocity },
+    { captureVelocity: numbers.captureVelocity, gsd: numbers.gsd },
   );
 }
 

@@ -1,22 +1,41 @@
-import { captureCheck, type CaptureVerdictWord } from '../../shared/physics/capture-verdict';
+import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
+import { judgeOptions } from '../../shared/verdict/judge-options';
 import { FRACTIONS, type Fraction } from '../../shared/vocabulary/fractions';
 
-type FractionNumbers = { twa8h_mgPerM3: number; twa8hCi95_mgPerM3: [number, number]; zoneHistories?: number };
+type FractionNumbers = {
+  twa8h_mgPerM3: number;
+  twa8hCi95_mgPerM3: [number, number];
+  zoneHistories?: number;
+  peak15min_mgPerM3?: number;
+  peak15minCi95_mgPerM3?: [number, number];
+};
 
 /** What a verdict needs from a run, per fraction: kept beside the run so reading never parses its whole result. */
-export type VerdictNumbers = { histories: number; fractions: Record<Fraction, FractionNumbers>; captureVelocity?: CaptureVerdictWord };
+export type VerdictNumbers = {
+  histories: number;
+  fractions: Record<Fraction, FractionNumbers>;
+  captureVelocity?: CaptureVerdictWord;
+  /** The day-to-day GSD the run's scenario set; absent means the default. */
+  gsd?: number;
+};
 
 type ResultLike = {
   engine: { particles: number };
   breathingZone: {
     fractions: Record<
       Fraction,
-      { twa8h_mgPerM3: number; twa8hCi95_mgPerM3: readonly [number, number] | number[]; zoneHistories?: number | null }
+      {
+        twa8h_mgPerM3: number;
+        twa8hCi95_mgPerM3: readonly [number, number] | number[];
+        zoneHistories?: number | null;
+        peak15min_mgPerM3?: number;
+        peak15minCi95_mgPerM3?: readonly [number, number] | number[];
+      }
     >;
   };
 };
 
-export function verdictNumbers(result: ResultLike, input?: Parameters<typeof captureCheck>[0]): VerdictNumbers {
+export function verdictNumbers(result: ResultLike, input?: Parameters<typeof judgeOptions>[0]): VerdictNumbers {
   const fractions = {} as VerdictNumbers['fractions'];
   for (const f of FRACTIONS) {
     const s = result.breathingZone.fractions[f];
@@ -24,8 +43,12 @@ export function verdictNumbers(result: ResultLike, input?: Parameters<typeof cap
       twa8h_mgPerM3: s.twa8h_mgPerM3,
       twa8hCi95_mgPerM3: [s.twa8hCi95_mgPerM3[0], s.twa8hCi95_mgPerM3[1]],
       ...(typeof s.zoneHistories === 'number' ? { zoneHistories: s.zoneHistories } : {}),
+      ...(typeof s.peak15min_mgPerM3 === 'number' ? { peak15min_mgPerM3: s.peak15min_mgPerM3 } : {}),
+      ...(s.peak15minCi95_mgPerM3
+        ? { peak15minCi95_mgPerM3: [s.peak15minCi95_mgPerM3[0], s.peak15minCi95_mgPerM3[1]] as [number, number] }
+        : {}),
     };
   }
-  const captureVelocity = input ? captureCheck(input)?.verdict : undefined;
-  return { histories: result.engine.particles, fractions, ...(captureVelocity ? { captureVelocity } : {}) };
+  const options = input ? judgeOptions(input) : {};
+  return { histories: result.engine.particles, fractions, ...options };
 }

@@ -25,11 +25,40 @@ export const fractionSummarySchema = z.object({
   twa8h_mgPerM3: conc,
   twa8hCi95_mgPerM3: ci,
   peak15min_mgPerM3: conc,
+  /** Interval of the peak 15-min average, estimated on batches other than those that chose its window; absent in older results. */
+  peak15minCi95_mgPerM3: ci.optional(),
+  /** Start and end of the window the peak was chosen in, s from the task start. */
+  peak15minWindow_s: ci.optional(),
   /** Simulated particles that spent any time in the breathing zone and count for this fraction; absent in older results (unknown). */
   zoneHistories: count.optional(),
 });
 
-export const seriesBandSchema = z.object({ mean: numberList, lo: numberList, hi: numberList });
+export const seriesBandSchema = z.object({
+  mean: numberList,
+  lo: numberList,
+  hi: numberList,
+  /** Estimated zone visits per time bin, and whether too few of them make the series unreadable; absent in older results. */
+  visits: numberList.optional(),
+  sparse: z.boolean().optional(),
+});
+
+const lookSchema = z.object({
+  batches: z.number().int().positive(),
+  /** Two-sided error rate spent at this look. */
+  alpha: z.number().gt(0).lt(1),
+  mean_mgPerM3: conc,
+  ci_mgPerM3: ci,
+  decided: z.boolean(),
+});
+
+/** How a run to a precision stopped: its rule, each look at 20·2^k batches, and why it stopped there. */
+export const stoppingSchema = z.object({
+  relativeHalfWidth: z.number().gt(0).lte(1),
+  maxBatches: z.number().int().positive(),
+  fraction: z.enum(FRACTIONS),
+  looks: z.array(lookSchema).min(1).max(12),
+  reason: z.enum(['precision', 'decided', 'max-batches']),
+});
 
 const gridShape = { nx: count, ny: count, cell_m: pair, origin_m: pair, values: float32List };
 type GridOut = { nx: number; ny: number; values: Float32Array };
@@ -98,6 +127,14 @@ export const resultLimitSchema = z.object({
   reasons: z.array(z.string().max(500)).max(10).optional(),
   moreHistories: count.nullable().optional(),
   gsd: z.number().finite().gte(1).optional(),
+  shortTerm: z
+    .object({
+      value_mgPerM3: z.number().positive(),
+      percentOfLimit: z.number().finite(),
+      percentOfLimitUpper: z.number().finite(),
+      exceeds: z.enum(['no', 'maybe', 'yes']),
+    })
+    .optional(),
 });
 
 export const modelSchema = z.object({
@@ -140,11 +177,12 @@ export const runResultSchema = z.object({
     timeStep_s: z.number().positive(),
     stepFraction: z.number().positive(),
     sizeBins: count,
+    stopping: stoppingSchema.optional(),
   }),
   breathingZone: z.object({
     volume_m3: z.number().positive(),
     fractions: z.object(perFraction(fractionSummarySchema)),
-    series: z.object({ time_s: numberList, ...perFraction(seriesBandSchema) }),
+    series: z.object({ time_s: numberList, binWidth_s: z.number().positive().optional(), ...perFraction(seriesBandSchema) }),
   }),
   // Results of engines before 2.0 had no wall deposition: their walls share reads 0.
   fate: z.object({ emitted_mg: conc, ...perFate(share), walls: share.default(0) }),
@@ -180,3 +218,5 @@ export type MassLeftOut = z.output<typeof massLeftOutSchema>;
 export type ResultLimit = z.output<typeof resultLimitSchema>;
 export type Trajectories = RunResult['trajectories'];
 export type Ci = FractionSummary['twa8hCi95_mgPerM3'];
+export type Stopping = z.output<typeof stoppingSchema>;
+export type Look = Stopping['looks'][number];

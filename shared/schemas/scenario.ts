@@ -107,6 +107,8 @@ const workerSchema = z.object({
   z_m: finite(),
   radius_m: positive().default(0.3),
   posture: z.enum(['standing', 'seated']).optional(),
+  /** Day-to-day GSD of this worker's 8-h exposures for the verdict's 95th percentile; absent means the trade's default (shared/verdict). */
+  dayToDayGsd: finite({ gte: 1 }).max(6).optional(),
 });
 
 const limitSchema = z.object({
@@ -116,6 +118,15 @@ const limitSchema = z.object({
   source: text().optional(),
 });
 
+/**
+ * Run until the limit fraction's 8-h TWA is known to ± relativeHalfWidth, or the verdict is decided,
+ * looking only at 20, 40, 80, … batches up to maxBatches (workers/run-to-precision.ts).
+ */
+const precisionSchema = z.object({
+  relativeHalfWidth: finite({ gt: 0 }).max(1).default(0.1),
+  maxBatches: z.number().int().gte(20).lte(2560).default(640),
+});
+
 const runSchema = z.object({
   particles: z.number().int().gte(1).lte(SCENARIO_BOUNDS.particles, 'must be at most 5,000,000 particles per run').default(20000),
   seed: z.union([z.number().int(), text().min(1)]).default(1),
@@ -123,6 +134,7 @@ const runSchema = z.object({
   duration_s: positive().max(SCENARIO_BOUNDS.duration_s, 'must be at most 24 h (86400 s)').optional(),
   maxTimeStep_s: positive().default(2),
   stepFraction: finite({ gt: 0 }).lte(1).default(0.5),
+  precision: precisionSchema.optional(),
 });
 
 const baseSchema = z.object({
@@ -213,6 +225,7 @@ export type ScenarioInput = z.input<typeof checkedSchema>;
 export type ReleaseType = (typeof RELEASE_TYPES)[number];
 export type Jet = NonNullable<Scenario['source']['jet']>;
 export type Hood = Scenario['hoods'][number];
+export type RunPrecision = NonNullable<Scenario['run']['precision']>;
 
 function describe(value: unknown): string {
   if (typeof value === 'number') return String(value);

@@ -12,6 +12,8 @@ export function judgeResult(result: Judged, limit: JudgeLimit, options?: JudgeOp
       twa8hCi95_mgPerM3: s.twa8hCi95_mgPerM3,
       zoneHistories: s.zoneHistories,
       histories: result.engine.particles,
+      peak15min_mgPerM3: s.peak15min_mgPerM3,
+      peak15minCi95_mgPerM3: s.peak15minCi95_mgPerM3,
     },
     limit,
     options,

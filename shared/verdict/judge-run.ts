@@ -16,11 +16,24 @@ export interface RunNumbers {
   zoneHistories?: number;
   /** Simulated source histories in the run (particles over all batches). */
   histories: number;
+  /** Peak 15-min average and its interval (absent in results that predate it). */
+  peak15min_mgPerM3?: number;
+  peak15minCi95_mgPerM3?: readonly [number, number];
 }
 
 export interface JudgeLimit {
   fraction: Fraction;
   value_mgPerM3: number;
+  /** The agent's 15-min short-term limit, where one exists. */
+  shortTerm_mgPerM3?: number;
+}
+
+/** The peak 15-min average against the short-term limit: 'maybe' when its interval reaches either side. */
+export interface ShortTermVerdict {
+  value_mgPerM3: number;
+  percentOfLimit: number;
+  percentOfLimitUpper: number;
+  exceeds: 'no' | 'maybe' | 'yes';
 }
 
 export interface JudgeOptions {
@@ -44,6 +57,7 @@ export interface Verdict {
   /** Further particles estimated to reach a decision at the current rate; null when no estimate can be made. */
   moreHistories: number | null;
   gsd: number;
+  shortTerm?: ShortTermVerdict;
 }
 
 // Half the limit is the action level (29 CFR 1910.1053); the bands are on the daily 95th percentile.
@@ -67,6 +81,23 @@ function moreToSettle(histories: number, mean: number, halfWidth: number, thresh
   const gap = Math.abs(mean - thresholdMean);
   if (!(gap > 0) || !(halfWidth > 0) || !(histories > 0)) return null;
   return Math.max(0, Math.ceil(histories * ((halfWidth / gap) ** 2 - 1)));
+}
+
+// A peak above the short-term limit is a finding of its own; a peak whose interval straddles it keeps the banner from Clear.
+function judgeShortTerm(numbers: RunNumbers, shortTerm_mgPerM3: number | undefined): ShortTermVerdict | undefined {
+  const peak = numbers.peak15min_mgPerM3;
+  if (!(shortTerm_mgPerM3 !== undefined && shortTerm_mgPerM3 > 0) || peak === undefined || !Number.isFinite(peak)) return undefined;
+  const [lo, hi] = numbers.peak15minCi95_mgPerM3 ?? [peak, peak];
+  const sound = Number.isFinite(lo) && Number.isFinite(hi) && lo <= peak && hi >= peak;
+  const upper = sound ? hi : Math.max(peak, Number.isFinite(hi) ? hi : peak);
+  const lower = sound ? lo : 0;
+  const exceeds = lower > shortTerm_mgPerM3 ? 'yes' : upper > shortTerm_mgPerM3 ? 'maybe' : 'no';
+  return {
+    value_mgPerM3: shortTerm_mgPerM3,
+    percentOfLimit: (100 * peak) / shortTerm_mgPerM3,
+    percentOfLimitUpper: (100 * upper) / shortTerm_mgPerM3,
+    exceeds,
+  };
 }
 
 /**
@@ -112,12 +143,25 @@ export function judgeRun(numbers: RunNumbers, limit: JudgeLimit, options: JudgeO
       }
     }
   }
+  const shortTerm = judgeShortTerm(numbers, limit.shortTerm_mgPerM3);
+  if (shortTerm?.exceeds === 'yes')
+    reasons.push(
+      `The peak 15-min average is above the short-term limit: ${pct(shortTerm.percentOfLimit / 100)} of ${formatSig(shortTerm.value_mgPerM3, 3)} mg/m³.`,
+    );
+  if (shortTerm?.exceeds === 'maybe') {
+    reasons.push(
+      `Not enough particles to decide the peak: its interval reaches ${pct(shortTerm.percentOfLimitUpper / 100)} of the 15-min short-term limit.`,
+    );
+    decided = false;
+    moreHistories = null;
+  }
   if (options.captureVelocity === 'below-half') {
     reasons.push(
       "The hood's speed at the source is below half the lower end of the range for this release: confirm by measurement before relying on the result.",
     );
   }
   const guarded = !decided || options.captureVelocity === 'below-half';
+  const banner = shortTerm?.exceeds === 'yes' ? 'act' : guarded && computed === 'clear' ? 'watch' : computed;
   return {
     fraction: limit.fraction,
     value_mgPerM3: limit_mgPerM3,
@@ -125,10 +169,11 @@ export function judgeRun(numbers: RunNumbers, limit: JudgeLimit, options: JudgeO
     percentOfLimitUpper: (100 * hi) / limit_mgPerM3,
     p95_mgPerM3: p95,
     ratingCategory: exposureRatingCategory(p95 / limit_mgPerM3),
-    banner: guarded && computed === 'clear' ? 'watch' : computed,
+    banner,
     decided,
     reasons,
     moreHistories: decided ? 0 : moreHistories,
     gsd,
+    ...(shortTerm ? { shortTerm } : {}),
   };
 }

@@ -1,15 +1,18 @@
 import * as Comlink from 'comlink';
-import { type Scenario, parseScenario } from '../../shared/schemas/scenario';
+import { type RunPrecision, type Scenario, parseScenario } from '../../shared/schemas/scenario';
 import type { RunResult } from '../../shared/schemas/run-result';
-import { type BatchResult, combineBatches, prepareScenario } from '../../workers/engine/index';
+import { type BatchResult, combineBatches, type PreparedScenario, prepareScenario } from '../../workers/engine/index';
+import { FIRST_LOOK_BATCHES, type LookOutcome, runToPrecision } from '../../workers/run-to-precision';
 import { referenceScenario } from '../../workers/engine/reference-scenario';
-import { scheduleBatches } from '../../workers/schedule-batches';
+import { type BatchWorker, scheduleBatches } from '../../workers/schedule-batches';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker';
 
 export interface RunProgress {
   fraction: number;
   particlesPerS: number;
   secondsLeft: number;
+  /** A run to a precision: the batch count it is working toward and the looks so far, each with its interval. */
+  precision?: { target: number; looks: LookOutcome[] };
 }
 
 export { RunCancelledError } from '../../workers/schedule-batches';
@@ -63,7 +66,7 @@ export interface RunOptions {
 export async function runSimulation(scenario: Scenario, { onProgress, signal }: RunOptions = {}): Promise<RunResult> {
   const prepared = prepareScenario(scenario);
   const started = performance.now();
-  const size = Math.min(poolSize(), prepared.batches);
+  const size = Math.min(poolSize(), scenario.run.precision ? FIRST_LOOK_BATCHES : prepared.batches);
   // Workers started here go straight to the run: a warm-up would only come before it.
   while (idle.length < size) idle.push(startWorker(false));
   const busy = idle.splice(0, size);
@@ -76,16 +79,22 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
       secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity,
     });
   };
-  let done: BatchResult[];
+  const workers = busy.map(({ api }) => ({
+    prepare: () => api.prepare(prepared),
+    run: (batchIndex: number, onBatchProgress: (fraction: number, steps: number) => void) =>
+      api.run(batchIndex, Comlink.proxy(onBatchProgress)),
+  }));
+  const elapsed_s = () => (performance.now() - started) / 1000;
   try {
-    done = await scheduleBatches(
-      busy.map(({ api }) => ({
-        prepare: () => api.prepare(prepared),
-        run: (batchIndex, onBatchProgress) => api.run(batchIndex, Comlink.proxy(onBatchProgress)),
-      })),
-      prepared.batches,
-      { signal, onProgress: onProgress && report },
-    );
+    const result = scenario.run.precision
+      ? await runToPrecisionOn(workers, prepared, scenario.run.precision, { signal, onProgress }, elapsed_s)
+      : combineBatches(
+          prepared,
+          await scheduleBatches(workers, prepared.batches, { signal, onProgress: onProgress && report }),
+          elapsed_s(),
+        );
+    idle.push(...busy);
+    return result;
   } catch (error) {
     // A busy loop never reads its message queue, so terminating is the only way to stop it; the
     // replacements start now rather than at the next run.
@@ -93,6 +102,37 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
     warmUpWorkers();
     throw error;
   }
-  idle.push(...busy);
-  return combineBatches(prepared, done, (performance.now() - started) / 1000);
+}
+
+/**
+ * The pool's side of a run to a precision: each look's batches go to the same workers, and
+ * progress counts toward the look being filled, with every finished look's interval beside it.
+ */
+function runToPrecisionOn(
+  workers: BatchWorker<BatchResult>[],
+  prepared: PreparedScenario,
+  rule: RunPrecision,
+  { signal, onProgress }: RunOptions,
+  elapsed_s: () => number,
+): Promise<RunResult> {
+  const looks: LookOutcome[] = [];
+  const runBatches = (first: number, count: number) => {
+    const target = first + count;
+    return scheduleBatches(workers, count, {
+      first,
+      signal,
+      onProgress: (fraction) => {
+        const t = elapsed_s();
+        const particles = (first + fraction * count) * prepared.particlesPerBatch;
+        const share = (first + fraction * count) / target;
+        onProgress?.({
+          fraction: share,
+          particlesPerS: t > 0 ? particles / t : 0,
+          secondsLeft: share > 0 ? (t * (1 - share)) / share : Infinity,
+          precision: { target, looks: [...looks] },
+        });
+      },
+    });
+  };
+  return runToPrecision(prepared, rule, runBatches, (outcome) => looks.push(outcome), elapsed_s);
 }

@@ -76,7 +76,10 @@ describe('POST /api/scenarios/:id/runs', () => {
     const before = await viewer.get(`/api/runs/${runId}`);
     expect(before.status).toBe(200);
     expect(before.body.outOfDate).toBe(false);
-    expect(before.body.result.breathingZone.series.time_s.length).toBeGreaterThan(10);
+    // The whole stored series comes back (sparse 400-particle runs merge time bins, so its length varies).
+    const storedSeries = JSON.parse((await t.db('runs').where({ id: runId }).first()).result).breathingZone.series.time_s;
+    expect(storedSeries.length).toBeGreaterThan(0);
+    expect(before.body.result.breathingZone.series.time_s).toEqual(storedSeries);
     const eng = await t.signIn('engineer');
     const changed = scenarioInput();
     changed.hoods![0].airflow_m3PerS = 0.5;

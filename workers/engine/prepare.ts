@@ -1,4 +1,5 @@
 import { captureCheck } from '../../shared/physics/capture-verdict';
+import { judgeOptions } from '../../shared/verdict/judge-options';
 import type { Scenario } from '../../shared/schemas/scenario';
 import { airProperties, roomEddyDiffusivity } from '../../shared/physics/index';
 import { resolveJet } from '../../shared/physics/release-jets';
@@ -81,8 +82,11 @@ export function prepareScenario(s: Scenario): PreparedScenario {
       frames: TRAJECTORY_FRAMES,
       frameInterval_s: duration_s / TRAJECTORY_FRAMES,
     },
-    limit: s.limit ? { fraction: s.limit.fraction, value_mgPerM3: s.limit.value_mgPerM3 } : undefined,
+    limit: s.limit
+      ? { fraction: s.limit.fraction, value_mgPerM3: s.limit.value_mgPerM3, shortTerm_mgPerM3: s.limit.shortTerm_mgPerM3 }
+      : undefined,
     captureVelocity: captureCheck(s)?.verdict,
+    judging: judgeOptions(s),
     crossCheck: {
       airflow_m3PerS: (s.room.airChanges_perH * volume_m3) / 3600,
       hoodAirflow_m3PerS: s.hoods.reduce((a, h) => a + h.airflow_m3PerS, 0),

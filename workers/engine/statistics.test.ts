@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import tQuantile from '@stdlib/stats-base-dists-t-quantile';
-import { batchEstimate, tQuantile975 } from './statistics';
+import { batchEstimate, batchEstimateAt, tQuantile as tQuantileAt, tQuantile975 } from './statistics';
 
 const range = (from: number, to: number) => Array.from({ length: to - from + 1 }, (_, i) => from + i);
 
@@ -27,5 +27,28 @@ describe('batch estimate', () => {
     expect(e.mean).toBe(2.5);
     expect(e.standardError).toBeCloseTo(se, 12);
     expect(e.hi - e.mean).toBeCloseTo(tQuantile(0.975, 3) * se, 3);
+  });
+});
+
+describe('Student t at any level (exact distribution function, checked against @stdlib)', () => {
+  it.each([
+    [0.975, 1],
+    [0.975, 2],
+    [0.9995, 19],
+    [0.99996, 19],
+    [0.995, 39],
+    [0.9875, 79],
+    [0.99, 1279],
+    [0.6, 7],
+  ])('matches the reference quantile at p = %s, %i df', (p, df) => {
+    expect(tQuantileAt(p, df)).toBeCloseTo(tQuantile(p, df), 6);
+  });
+  it('is symmetric about zero', () => {
+    expect(tQuantileAt(0.1, 12)).toBeCloseTo(-tQuantile(0.9, 12), 8);
+  });
+  it('widens the batch interval at a smaller error rate and gives the 95 % one at alpha = 0.05', () => {
+    const values = [1, 2, 3, 4, 5, 6];
+    expect(batchEstimateAt(values, 0.05).hi).toBeCloseTo(batchEstimate(values).hi, 3);
+    expect(batchEstimateAt(values, 0.001).hi).toBeGreaterThan(batchEstimate(values).hi);
   });
 });

@@ -30,3 +30,61 @@ export function batchEstimate(values: ArrayLike<number>): Estimate {
   const half = n > 1 ? tQuantile975(n - 1) * standardError : NaN;
   return { mean, standardError, lo: Math.max(0, mean - half), hi: mean + half };
 }
+
+/**
+ * Student t distribution function at an integer df, exact (Abramowitz & Stegun 26.7.3/26.7.4:
+ * finite sums in θ = atan(t/√df)), so any confidence level gets its quantile without a table.
+ */
+export function tCdf(t: number, df: number): number {
+  const n = Math.max(1, Math.round(df));
+  const theta = Math.atan(t / Math.sqrt(n));
+  const s = Math.sin(theta);
+  const c = Math.cos(theta);
+  let a: number;
+  if (n % 2 === 1) {
+    let sum = 0;
+    let term = c;
+    if (n > 1) {
+      sum = term;
+      for (let k = 3; k <= n - 2; k += 2) {
+        term *= ((k - 1) / k) * c * c;
+        sum += term;
+      }
+    }
+    a = (2 / Math.PI) * (theta + s * sum);
+  } else {
+    let sum = 1;
+    let term = 1;
+    for (let k = 2; k <= n - 2; k += 2) {
+      term *= ((k - 1) / k) * c * c;
+      sum += term;
+    }
+    a = s * sum;
+  }
+  // a is P(|T| < |t|) signed with t.
+  return 0.5 + 0.5 * a;
+}
+
+/** The p quantile of Student's t (p in (0, 1)), by bisection on the exact distribution function. */
+export function tQuantile(p: number, df: number): number {
+  if (!(p > 0 && p < 1)) throw new RangeError(`tQuantile needs 0 < p < 1, got ${p}`);
+  if (p < 0.5) return -tQuantile(1 - p, df);
+  let lo = 0;
+  let hi = 1;
+  while (tCdf(hi, df) < p && hi < 1e12) hi *= 2;
+  for (let i = 0; i < 200 && hi - lo > 1e-12 * hi; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (tCdf(mid, df) < p) lo = mid;
+    else hi = mid;
+  }
+  return 0.5 * (lo + hi);
+}
+
+/** The batch t-interval at a chosen two-sided error rate alpha (0.05 gives batchEstimate's 95 %). */
+export function batchEstimateAt(values: ArrayLike<number>, alpha: number): Estimate {
+  const e = batchEstimate(values);
+  const n = values.length;
+  if (!(n > 1)) return e;
+  const half = tQuantile(1 - alpha / 2, n - 1) * e.standardError;
+  return { ...e, lo: Math.max(0, e.mean - half), hi: e.mean + half };
+}

@@ -2,6 +2,7 @@ import type { RoundJet } from '../../shared/physics/round-jet';
 import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
 import type { MassLeftOut, RunResult } from '../../shared/schemas/run-result';
 import type { modelSchema } from '../../shared/schemas/run-result';
+import type { JudgeOptions } from '../../shared/verdict/index';
 import type { z } from 'zod';
 import type { Fraction } from '../../shared/vocabulary/fractions';
 
@@ -68,9 +69,11 @@ export interface PreparedScenario {
   task: { minutesPerShift: number; background_mgPerM3: number };
   deposition: { nx: number; ny: number };
   trajectory: { particles: number; frames: number; frameInterval_s: number };
-  limit?: { fraction: Fraction; value_mgPerM3: number };
+  limit?: { fraction: Fraction; value_mgPerM3: number; shortTerm_mgPerM3?: number };
   /** The hood's hand-calculated speed at the source against the release type's range (shared/physics/capture-verdict). */
   captureVelocity?: CaptureVerdictWord;
+  /** What the verdict takes from the scenario besides the numbers: that speed and the day-to-day GSD (shared/verdict/judge-options). */
+  judging: JudgeOptions;
   /** Inputs of the analytic cross-checks, derived from the scenario in prepareScenario. */
   crossCheck: {
     airflow_m3PerS: number;
@@ -116,5 +119,5 @@ export interface BatchResult {
   particles?: ParticleStates;
 }
 
-export type { FractionSummary, Grid, SeriesBand } from '../../shared/schemas/run-result';
+export type { FractionSummary, Grid, SeriesBand, Stopping } from '../../shared/schemas/run-result';
 export type Results = RunResult;

@@ -6,6 +6,7 @@ import type { PreparedScenario } from '../engine/index';
 import { writeReadmeSection } from '../../tests/helpers/readme-section';
 import { describeMemory, measureBatchMemory } from './memory-figure';
 import { referenceScenario } from '../engine/reference-scenario';
+import { BENCH_RULE, benchDemos } from './bench-demos';
 import { ThreadPool } from './thread-pool';
 
 const TIMED_PASSES = 3;
@@ -57,12 +58,22 @@ async function main(): Promise<void> {
     `  ${cores} workers: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker (passes ${list(many.passes)})`,
   );
 
+  await all.close();
+  const counts = [1, Math.min(2, cores)].filter((n, i, a) => a.indexOf(n) === i);
+  console.log(
+    `Every demo scenario to a decision (±${100 * BENCH_RULE.relativeHalfWidth} % or a decided verdict, at most ${BENCH_RULE.maxBatches} batches) on ${counts.join(' and ')} warm workers:`,
+  );
+  const demos = await benchDemos(counts, (line) => console.log(line));
+  const zeroWidth = demos.filter((d) => !(d.narrowest > 0));
+  if (zeroWidth.length > 0) console.log(`ZERO-WIDTH INTERVAL in: ${zeroWidth.map((d) => d.name).join(', ')}`);
+
+  const again = new ThreadPool(cores);
   const demoText = await readFile(new URL('../../shared/demo-scenarios/default.json', import.meta.url), 'utf8');
   const demo = prepareScenario(parseScenario(JSON.parse(demoText)));
   const started = performance.now();
-  const results = combineBatches(demo, await all.run(demo));
+  const results = combineBatches(demo, await again.run(demo));
   const seconds = (performance.now() - started) / 1000;
-  await all.close();
+  await again.close();
   const r = results.breathingZone.fractions.respirable;
   const half = (r.twa8hCi95_mgPerM3[1] - r.twa8hCi95_mgPerM3[0]) / 2;
   const halfWidth_pct = ((100 * half) / r.twa8h_mgPerM3).toFixed(1);
@@ -74,6 +85,11 @@ async function main(): Promise<void> {
       `- One worker: ${single.mps.toFixed(1)} M particle-steps/s (reference scenario, best of ${TIMED_PASSES} passes after a warm-up pass)`,
       `- All ${cores} cores: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker`,
       `- Default demo: ${seconds.toFixed(2)} s to result on ${cores} warm workers; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³, 95 % CI half-width ${halfWidth_pct} % of the mean`,
+      `- Time to a decision (±${100 * BENCH_RULE.relativeHalfWidth} % or decided, at most ${BENCH_RULE.maxBatches} batches; seconds on ${counts.join(' / ')} workers, batches, why it stopped, step cost on one worker, FOM of the plain walk; the variance-reduction FOM column is for when it exists):`,
+      ...demos.map(
+        (d) =>
+          `  - ${d.name}: ${counts.map((n) => d.seconds[n].toFixed(2)).join(' / ')} s, ${d.batches} batches (${d.reason}), ${d.stepCost_ns.toFixed(0)} ns/step, FOM ${d.fomAnalog.toPrecision(3)} /s, with variance reduction ${d.fomReduced === null ? '—' : d.fomReduced.toPrecision(3)}`,
+      ),
       `- Memory: ${memory}`,
       `- Load average at the start: ${load} (1, 5, 15 min) on ${cores} cores`,
     ]);

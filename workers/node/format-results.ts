@@ -15,13 +15,14 @@ export function summary(name: string, r: RunResult): string {
     `${name}`,
     `engine ${r.engine.version}, seed ${r.engine.seed}, ${r.engine.particles} particles in ${r.engine.batches} batches, ${r.engine.sizeBins} size bins`,
     '',
-    'Breathing zone (mg/m³)     task mean [95 % CI]            8-h TWA [95 % CI]              peak 15 min',
+    'Breathing zone (mg/m³)     task mean [95 % CI]            8-h TWA [95 % CI]              peak 15 min [95 % CI]',
   ];
   for (const f of FRACTIONS) {
     const s = r.breathingZone.fractions[f];
     const task = `${mg(s.taskMean_mgPerM3)} [${mg(s.taskMeanCi95_mgPerM3[0])}, ${mg(s.taskMeanCi95_mgPerM3[1])}]`;
     const twa = `${mg(s.twa8h_mgPerM3)} [${mg(s.twa8hCi95_mgPerM3[0])}, ${mg(s.twa8hCi95_mgPerM3[1])}]`;
-    lines.push(`  ${f.padEnd(24)} ${task.padEnd(30)} ${twa.padEnd(30)} ${mg(s.peak15min_mgPerM3)}`);
+    const peakCi = s.peak15minCi95_mgPerM3 ? ` [${mg(s.peak15minCi95_mgPerM3[0])}, ${mg(s.peak15minCi95_mgPerM3[1])}]` : '';
+    lines.push(`  ${f.padEnd(24)} ${task.padEnd(30)} ${twa.padEnd(30)} ${mg(s.peak15min_mgPerM3)}${peakCi}`);
   }
   if (r.limit) {
     const l = r.limit;
@@ -31,7 +32,19 @@ export function summary(name: string, r: RunResult): string {
     );
     if (l.p95_mgPerM3 !== undefined)
       lines.push(`Daily 95th percentile ${mg(l.p95_mgPerM3)} mg/m³ (day-to-day GSD ${l.gsd}); ${l.decided ? 'decided' : 'not decided'}`);
+    if (l.shortTerm)
+      lines.push(
+        `Peak 15-min average ${percentText(l.shortTerm.percentOfLimit)} of the short-term limit ${l.shortTerm.value_mgPerM3} mg/m³ (upper CI ${percentText(l.shortTerm.percentOfLimitUpper)})`,
+      );
     for (const reason of l.reasons ?? []) lines.push(`  ${reason}`);
+  }
+  const stop = r.engine.stopping;
+  if (stop) {
+    const looks = stop.looks.map((k) => `${k.batches}: ${mg(k.ci_mgPerM3[0])}–${mg(k.ci_mgPerM3[1])}`).join('; ');
+    lines.push(
+      '',
+      `Run to ±${percentText(100 * stop.relativeHalfWidth)} or a decision: stopped at ${r.engine.batches} batches (${stop.reason}); looks ${looks}`,
+    );
   }
   const fate = r.fate;
   lines.push(

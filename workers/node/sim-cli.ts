@@ -5,7 +5,7 @@ import { ScenarioError, parseScenario, type Scenario } from '../../shared/schema
 import { combineBatches, prepareScenario } from '../engine/index';
 import { resultsToJson, summary } from './format-results';
 import { USAGE, parseSimArgs } from './sim-args';
-import { runOnThreads } from './thread-pool';
+import { runOnThreads, ThreadPool } from './thread-pool';
 
 async function readScenario(file: string): Promise<Record<string, unknown>> {
   let text: string;
@@ -34,9 +34,25 @@ async function main(): Promise<void> {
   const prepared = prepareScenario(scenario);
   const started = Date.now();
   const progress = args.json ? undefined : (fraction: number) => process.stderr.write(`\r${(100 * fraction).toFixed(0).padStart(3)} %`);
-  const batches = await runOnThreads(prepared, args.workers ?? availableParallelism(), progress);
-  if (progress) process.stderr.write('\r');
-  const results = combineBatches(prepared, batches, (Date.now() - started) / 1000);
+  const precision = scenario.run.precision;
+  let results;
+  if (precision) {
+    const pool = new ThreadPool(args.workers ?? availableParallelism());
+    try {
+      results = await pool.runToPrecision(
+        prepared,
+        precision,
+        args.json ? undefined : (o) => process.stderr.write(`\r${o.look.batches} batches, ±${(100 * o.relativeHalfWidth).toFixed(1)} %   `),
+      );
+    } finally {
+      await pool.close();
+    }
+    if (!args.json) process.stderr.write('\n');
+  } else {
+    const batches = await runOnThreads(prepared, args.workers ?? availableParallelism(), progress);
+    if (progress) process.stderr.write('\r');
+    results = combineBatches(prepared, batches, (Date.now() - started) / 1000);
+  }
   process.stdout.write(`${args.json ? resultsToJson(results) : summary(scenario.name ?? args.file, results)}\n`);
 }
 

@@ -1,5 +1,7 @@
 import { Worker } from 'node:worker_threads';
-import type { BatchResult, PreparedScenario } from '../engine/index';
+import type { RunPrecision } from '../../shared/schemas/scenario';
+import type { BatchResult, PreparedScenario, Results } from '../engine/index';
+import { runToPrecision } from '../run-to-precision';
 import { type BatchWorker, scheduleBatches } from '../schedule-batches';
 
 type ThreadMessage =
@@ -58,12 +60,29 @@ export class ThreadPool {
   }
 
   async run(prepared: PreparedScenario, onProgress?: PoolProgress): Promise<BatchResult[]> {
-    const threads = this.workers.slice(0, Math.min(this.workers.length, prepared.batches)).map((w) => threadWorker(w, prepared));
+    return this.runRange(prepared, 0, prepared.batches, onProgress);
+  }
+
+  /** Batches first…first+count−1 of the scenario's seed stream, in batch order. */
+  async runRange(prepared: PreparedScenario, first: number, count: number, onProgress?: PoolProgress): Promise<BatchResult[]> {
+    const threads = this.workers.slice(0, Math.min(this.workers.length, count)).map((w) => threadWorker(w, prepared));
     try {
-      return await scheduleBatches(threads, prepared.batches, { onProgress });
+      return await scheduleBatches(threads, count, { onProgress, first });
     } finally {
       threads.forEach((t) => t.detach());
     }
+  }
+
+  /** The scenario run to its precision rule (workers/run-to-precision.ts). */
+  runToPrecision(prepared: PreparedScenario, rule: RunPrecision, onLook?: Parameters<typeof runToPrecision>[3]): Promise<Results> {
+    const started = performance.now();
+    return runToPrecision(
+      prepared,
+      rule,
+      (first, count) => this.runRange(prepared, first, count),
+      onLook,
+      () => (performance.now() - started) / 1000,
+    );
   }
 
   async close(): Promise<void> {

@@ -1,4 +1,3 @@
-import { captureCheck } from '../../../shared/physics/capture-verdict';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { can } from '../../../shared/auth/permissions';
@@ -20,7 +19,7 @@ import { useSizeProfileOptions } from '@/features/size-profiles/api/use-size-pro
 import { useUser } from '@/lib/auth';
 import type { RunResult } from '../../../shared/schemas/run-result';
 import type { ControlTier } from '../../../shared/vocabulary/control-tiers';
-import { agentLimit, withVerdict } from '../../../shared/verdict/index';
+import { agentLimit, judgeOptions, withVerdict } from '../../../shared/verdict/index';
 import { ScenarioActions } from './scenario-actions';
 import { ScenarioRecords } from './scenario-records';
 import { ScenarioRunArea } from './scenario-run-area';
@@ -70,8 +69,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const agent = agents.find((a) => a.id === draft.agentId);
   // Judged against the agent's current limit, as the server will judge it once saved.
   const judged = useMemo(
-    () =>
-      fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data), { captureVelocity: captureCheck(fresh.input)?.verdict }) : null,
+    () => (fresh && agent ? withVerdict(fresh.result, agentLimit(agent.data), judgeOptions(fresh.input)) : null),
     [fresh, agent],
   );
   // After a run the reader's place moves to what it produced.

@@ -1,4 +1,5 @@
-import { readableNumber, trimSig } from '../../../../shared/format/index';
+import { countText, readableNumber, trimSig } from '../../../../shared/format/index';
+import { MIN_VISITS_PER_BIN } from '../../../../workers/engine/series-bins';
 import { GridRows } from '@visx/grid';
 import { scaleLinear } from '@visx/scale';
 import { Area, LinePath } from '@visx/shape';
@@ -15,6 +16,35 @@ const BOX = { width: 760, height: 340, margin: { top: 20, right: 24, bottom: 52,
 const LIMIT_IN_VIEW = 5;
 
 const tick = (v: number) => trimSig(v, 3);
+
+// The bin width and what it holds; a series too thin to read says so instead of letting its spikes pass for data.
+function SeriesNote({ view, fraction }: { view: RunResult; fraction: Fraction }) {
+  const series = view.breathingZone.series;
+  const band = series[fraction];
+  const width_min = (series.binWidth_s ?? (series.time_s[1] ?? 0) - (series.time_s[0] ?? 0)) / 60;
+  const visits = band.visits?.reduce((a, v) => a + v, 0);
+  if (band.sparse)
+    return (
+      <p
+        role="status"
+        data-testid="series-sparse"
+        className="mt-2 rounded-md border-2 border-watch bg-watch-soft p-2 text-sm font-semibold text-watch"
+      >
+        Too sparse to read: about {countText(visits ?? 0)} zone visits in all, fewer than {MIN_VISITS_PER_BIN} in some{' '}
+        {readableNumber(width_min, 2)}-min bins where the dust is, so the ups and downs are noise. Read the 8-h TWA and its interval, which
+        pool every visit, or run more particles.
+      </p>
+    );
+  return (
+    <p className="mt-1 text-sm text-muted" data-testid="series-bins">
+      Each point averages {readableNumber(width_min, 2)} min
+      {visits !== undefined
+        ? `, a width chosen so each bin where the dust is holds at least ${MIN_VISITS_PER_BIN} zone visits (${countText(visits)} in all)`
+        : ''}
+      .
+    </p>
+  );
+}
 
 export function ConcentrationChart({ view, fraction }: { view: RunResult; fraction: Fraction }) {
   const band = view.breathingZone.series[fraction];
@@ -50,6 +80,7 @@ export function ConcentrationChart({ view, fraction }: { view: RunResult; fracti
       }}
       footer={
         <>
+          <SeriesNote view={view} fraction={fraction} />
           {limit !== undefined && !showLimit && (
             <p className="mt-1 text-sm text-muted">
               The limit, {readableNumber(limit)} mg/m³, is more than {LIMIT_IN_VIEW} times the highest value here and lies above the chart.
@@ -70,11 +101,19 @@ export function ConcentrationChart({ view, fraction }: { view: RunResult; fracti
         y0={(p) => y(Number.isFinite(p.lo) ? p.lo : p.mean)}
         y1={(p) => y(Number.isFinite(p.hi) ? p.hi : p.mean)}
         fill={ACCENT_SOFT}
+        fillOpacity={band.sparse ? 0.5 : 1}
         stroke={ACCENT}
         strokeOpacity={0.25}
         data-testid="ci-band"
       />
-      <LinePath data={points} x={(p) => x(p.t)} y={(p) => y(p.mean)} stroke={ACCENT} strokeWidth={2} />
+      <LinePath
+        data={points}
+        x={(p) => x(p.t)}
+        y={(p) => y(p.mean)}
+        stroke={ACCENT}
+        strokeWidth={2}
+        strokeDasharray={band.sparse ? '4 4' : undefined}
+      />
       {showLimit && <ReferenceLine y={y(limit)} width={innerW} testId="limit-line" />}
     </ChartFigure>
   );

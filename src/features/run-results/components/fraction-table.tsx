@@ -6,10 +6,11 @@ import { fractionTableCsv, seriesCsv } from '@/features/run-results/lib/csv';
 import { downloadText } from '@/lib/download';
 import { FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import { ciText } from '@/features/run-results/lib/format';
-import type { FractionSummary, RunResult } from '../../../../shared/schemas/run-result';
+import type { FractionSummary, ResultLimit, RunResult } from '../../../../shared/schemas/run-result';
+import { PeakText } from './peak-figure';
 import { Section } from './section';
 
-type Row = FractionSummary & { fraction: Fraction; percent?: number; percentUpper?: number };
+type Row = FractionSummary & { fraction: Fraction; percent?: number; percentUpper?: number; limit?: ResultLimit };
 
 const withCi = (value: number, ci: [number, number]) => (
   <>
@@ -36,9 +37,9 @@ const COLUMNS: Column<Row>[] = [
   },
   {
     key: 'peak',
-    header: 'Peak 15-min average (mg/m³)',
+    header: 'Peak 15-min average (mg/m³, 95 % CI)',
     align: 'right',
-    render: (r) => readableNumber(r.peak15min_mgPerM3),
+    render: (r) => <PeakText summary={r} limit={r.limit} />,
     sortValue: (r) => r.peak15min_mgPerM3,
   },
   {
@@ -64,7 +65,9 @@ export function FractionTable({ view, fileName }: { view: RunResult; fileName: (
   const rows: Row[] = FRACTIONS.map((f) => ({
     fraction: f,
     ...view.breathingZone.fractions[f],
-    ...(view.limit?.fraction === f ? { percent: view.limit.percentOfLimit, percentUpper: view.limit.percentOfLimitUpper } : {}),
+    ...(view.limit?.fraction === f
+      ? { percent: view.limit.percentOfLimit, percentUpper: view.limit.percentOfLimitUpper, limit: view.limit }
+      : {}),
   }));
   const actions = (
     <>

@@ -6,6 +6,8 @@ import { BANNER_LABEL, FRACTION_LABEL, RATING_LABEL } from '../../../../shared/v
 import { BANNER_CLASSES, BannerBadge } from '@/components/banner-badge';
 import { ciText, relativeError } from '@/features/run-results/lib/format';
 import type { RunResult } from '../../../../shared/schemas/run-result';
+import { PeakText } from './peak-figure';
+import { RunMore } from './run-more';
 
 function Figure({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (
@@ -53,6 +55,9 @@ export function Headline({
               ))}
             </ul>
           )}
+          <div className="w-full">
+            <RunMore view={view} />
+          </div>
         </div>
       ) : (
         <p role="note" className="rounded-lg border border-line bg-paper-deep p-4 text-sm">
@@ -63,10 +68,10 @@ export function Headline({
       <div className="mt-3">
         <CaptureVerdict scenario={scenario} />
       </div>
-      <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
+      <dl className="mt-4 grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
         <Figure label={`8-h TWA, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="twa">
           {readableNumber(s.twa8h_mgPerM3)} mg/m³
-          <span className="block text-xs font-normal text-muted">95 % CI {ciText(s.twa8hCi95_mgPerM3)} mg/m³</span>
+          <span className="block text-xs font-normal text-muted">95 % CI {ciText(s.twa8hCi95_mgPerM3, 3, ' mg/m³')}</span>
         </Figure>
         {limit && (
           <Figure label="Share of the limit" testId="percent-of-limit">
@@ -84,8 +89,12 @@ export function Headline({
             </span>
           </Figure>
         )}
+        <Figure label={`Peak 15-min average, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="peak">
+          <PeakText summary={s} limit={limit} unit=" mg/m³" />
+        </Figure>
         <Figure label="Statistical error" testId="statistical-error">
           ± {readableNumber(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence
+          {view.engine.stopping ? ' over all looks' : ''}
           <span className="block text-xs font-normal text-muted">
             {countText(view.engine.particles)} particles in {view.engine.batches} batches
           </span>

@@ -34,9 +34,11 @@ describe('CSV builders', () => {
     for (const h of rows[0].slice(1)) expect(h).toMatch(/\((mg\/m³|% of limit)\)$/);
     const respirable = rows[4];
     expect(Number(respirable[4])).toBe(four(view.breathingZone.fractions.respirable.twa8h_mgPerM3));
-    expect(Number(respirable[9])).toBe(four(view.limit!.percentOfLimit));
+    expect(Number(respirable[7])).toBe(four(view.breathingZone.fractions.respirable.peak15min_mgPerM3));
+    expect(Number(respirable[9])).toBe(four(view.breathingZone.fractions.respirable.peak15minCi95_mgPerM3![1]));
+    expect(Number(respirable[13])).toBe(four(view.limit!.percentOfLimit));
     // The limit applies to one fraction; the others get no % of limit.
-    expect(rows[1][9]).toBe('');
+    expect(rows[1][13]).toBe('');
   });
 
   it('write the time series to four significant figures, one row per time bin', () => {
@@ -45,6 +47,7 @@ describe('CSV builders', () => {
     expect(rows[0]).toHaveLength(1 + 4 * 3);
     expect(rows).toHaveLength(view.breathingZone.series.time_s.length + 1);
     expect(Number(rows[1][0])).toBe(four(view.breathingZone.series.time_s[0]));
-    expect(Number(rows[10][10])).toBe(four(view.breathingZone.series.respirable.mean[9]));
+    const last = rows.length - 1;
+    expect(Number(rows[last][10])).toBe(four(view.breathingZone.series.respirable.mean[last - 1]));
   });
 });

@@ -1,5 +1,6 @@
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
-import { TextField } from '@/components/ui/field';
+import { countText } from '../../../../shared/format/index';
+import { SelectField, TextField } from '@/components/ui/field';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withRun } from '@/features/scenario-editor/lib/update';
 import { bindNumberFields } from '@/lib/bind-fields';
@@ -13,6 +14,8 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
   const run = value.run ?? {};
   const set = (patch: Partial<NonNullable<ScenarioInput['run']>>) => onChange(withRun(value, patch));
   const field = bindNumberFields(run, set, errors, 'run');
+  const precision = run.precision ? { relativeHalfWidth: 0.1, maxBatches: 640, ...run.precision } : undefined;
+  const perBatch = Math.ceil((run.particles ?? DEFAULTS.particles) / (run.batches ?? DEFAULTS.batches));
 
   return (
     <Section legend="Run settings" intro="More particles narrow the confidence band; the same seed gives the same result.">
@@ -26,6 +29,41 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
           autoComplete="off"
         />
         <NumberField label="Batches" {...field('batches', DEFAULTS.batches)} hint="2 to 1000; they give the error bars" />
+        <SelectField
+          label="Run until"
+          value={precision ? 'precision' : 'particles'}
+          onChange={(e) => set({ precision: e.target.value === 'precision' ? { relativeHalfWidth: 0.1, maxBatches: 640 } : undefined })}
+          hint={
+            precision
+              ? `Batches of ${countText(perBatch)} particles (particles ÷ batches), looked at only at 20, 40, 80, … batches`
+              : undefined
+          }
+        >
+          <option value="particles">All the particles above</option>
+          <option value="precision">A precision or a decision</option>
+        </SelectField>
+        {precision && (
+          <>
+            <NumberField
+              label="Precision, ±"
+              unit="%"
+              value={precision.relativeHalfWidth}
+              toDisplay={(v) => 100 * v}
+              fromDisplay={(v) => v / 100}
+              onValue={(relativeHalfWidth) => set({ precision: { ...precision, relativeHalfWidth } })}
+              error={errors['run.precision.relativeHalfWidth']}
+              hint="Half-width of the limit fraction's 8-h TWA interval, relative to the mean"
+            />
+            <NumberField
+              label="At most"
+              unit="batches"
+              value={precision.maxBatches}
+              onValue={(maxBatches) => set({ precision: { ...precision, maxBatches } })}
+              error={errors['run.precision.maxBatches']}
+              hint="20 to 2,560; the run stops there even when undecided"
+            />
+          </>
+        )}
       </FieldGrid>
     </Section>
   );

@@ -1,4 +1,5 @@
 import type { ScenarioInput } from '../../../../shared/schemas/scenario';
+import { DAY_TO_DAY_GSD_SOURCE, DEFAULT_DAY_TO_DAY_GSD } from '../../../../shared/verdict/day-to-day';
 import { SelectField } from '@/components/ui/field';
 import { DEFAULTS, POSTURE_HEIGHT_m } from '@/features/scenario-editor/lib/defaults';
 import { withWorker } from '@/features/scenario-editor/lib/update';
@@ -28,6 +29,20 @@ export function WorkerSection({ value, onChange, errors }: SectionProps<Scenario
         <NumberField label="Nose and mouth y" unit="m" {...field('y_m')} />
         <NumberField label="Nose and mouth height" unit="m" {...field('z_m')} />
         <NumberField label="Breathing-zone radius" unit="m" {...field('radius_m', DEFAULTS.radius_m)} hint="Usually 0.3 m" />
+        <NumberField
+          label="Day-to-day GSD"
+          optional
+          value={worker.dayToDayGsd}
+          onValue={(dayToDayGsd) => set({ dayToDayGsd })}
+          error={errors['worker.dayToDayGsd']}
+          placeholder={String(DEFAULT_DAY_TO_DAY_GSD)}
+          hint={
+            <span data-testid="gsd-source">
+              How much this worker's 8-h exposures vary from day to day; the verdict judges their 95th percentile. Blank:{' '}
+              {DEFAULT_DAY_TO_DAY_GSD} ({DAY_TO_DAY_GSD_SOURCE}).
+            </span>
+          }
+        />
       </FieldGrid>
     </Section>
   );

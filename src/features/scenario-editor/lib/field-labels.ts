@@ -7,8 +7,8 @@ const AT_FIELD = [
   /^dust\.(density_kgPerM3|shapeFactor)$/,
   /^dust\.sizeProfile\./,
   /^hoods\.\d+\.(kind|x_m|y_m|z_m|direction|direction\.azimuth_deg|direction\.elevation_deg|faceWidth_m|faceHeight_m|airflow_m3PerS)$/,
-  /^worker\.(x_m|y_m|z_m|radius_m)$/,
-  /^run\.(particles|seed|batches)$/,
+  /^worker\.(x_m|y_m|z_m|radius_m|dayToDayGsd)$/,
+  /^run\.(particles|seed|batches|precision\.relativeHalfWidth|precision\.maxBatches)$/,
 ];
 
 export const isShownAtField = (path: string) => AT_FIELD.some((re) => re.test(path));

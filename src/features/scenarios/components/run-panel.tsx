@@ -6,6 +6,14 @@ import { ErrorMessage } from '@/components/ui/status';
 import { ProgressBar, timeLeft } from '@/components/progress-bar';
 import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
 import { runSimulation } from '@/lib/simulation-bridge';
+import { countText, percentText } from '../../../../shared/format/index';
+import { PrecisionLooks } from './precision-looks';
+
+// A run to a precision names its aim; a fixed run its particle count.
+const runLabel = (s: Scenario) =>
+  s.run.precision
+    ? `until ±${percentText(100 * s.run.precision.relativeHalfWidth, 2)} or decided`
+    : `${countText(s.run.particles)} particles`;
 
 export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: RunResult, input: Scenario) => void }) {
   const run = useEngineRun<RunResult>(RUN_START);
@@ -28,7 +36,7 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
     <section aria-label="Run the simulation" className="rounded-lg border border-line bg-white p-4">
       <div className="flex flex-wrap items-center gap-3">
         <Button onClick={start} disabled={running || !scenario}>
-          ▶ Run {scenario ? `${scenario.run.particles.toLocaleString()} particles` : ''}
+          ▶ Run {scenario ? runLabel(scenario) : ''}
         </Button>
         {running && (
           <Button variant="secondary" onClick={run.cancel}>
@@ -52,8 +60,15 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
           <ProgressBar label="Simulation progress" percent={pct} />
           <p className="mt-1 text-sm text-muted" aria-live="polite">
             {pct} % · {Math.round(state.progress.particlesPerS).toLocaleString()} particles/s · about {timeLeft(state.progress.secondsLeft)}{' '}
-            left
+            left{state.progress.precision ? ` to ${state.progress.precision.target} batches` : ''}
           </p>
+          {state.progress.precision && scenario?.run.precision && (
+            <PrecisionLooks
+              looks={state.progress.precision.looks}
+              target={state.progress.precision.target}
+              aim={scenario.run.precision.relativeHalfWidth}
+            />
+          )}
         </div>
       )}
       {state.phase === 'failed' && (

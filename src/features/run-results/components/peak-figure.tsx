@@ -1,0 +1,23 @@
+import { percentText, readableNumber } from '../../../../shared/format/index';
+import type { FractionSummary, ResultLimit } from '../../../../shared/schemas/run-result';
+import { ciText } from '@/features/run-results/lib/format';
+
+const EXCEEDS = { no: 'below', maybe: 'possibly above', yes: 'above' } as const;
+
+/** The peak 15-min average with its interval, and against the short-term limit where the agent has one. */
+export function PeakText({ summary, limit, unit = '' }: { summary: FractionSummary; limit?: ResultLimit; unit?: string }) {
+  const st = limit?.shortTerm;
+  return (
+    <>
+      {readableNumber(summary.peak15min_mgPerM3)}
+      {unit}
+      {summary.peak15minCi95_mgPerM3 && <span className="block text-xs text-muted">{ciText(summary.peak15minCi95_mgPerM3, 3, unit)}</span>}
+      {st && (
+        <span className="block text-xs" data-testid="short-term">
+          {percentText(st.percentOfLimit)} of the 15-min limit {readableNumber(st.value_mgPerM3)} mg/m³ (up to{' '}
+          {percentText(st.percentOfLimitUpper)}): {EXCEEDS[st.exceeds]}
+        </span>
+      )}
+    </>
+  );
+}
