@@ -2,7 +2,7 @@ import type { RunPrecision } from '../shared/schemas/scenario';
 import type { Look, Stopping } from '../shared/schemas/run-result';
 import { judgeRun, MIN_ZONE_HISTORIES } from '../shared/verdict/index';
 import { summarise } from './engine/combine';
-import { type BatchResult, combineBatches, type PreparedScenario, type Results } from './engine/index';
+import { type BatchResult, combineBatches, type PreparedScenario, type Results, withBatchTallies } from './engine/index';
 
 /** The first look; later ones double it, so each look re-reads batches 0…N−1 of the same seed stream. */
 export const FIRST_LOOK_BATCHES = 20;
@@ -110,7 +110,8 @@ export async function runToPrecision(
         looks,
         reason: outcome.stop,
       };
-      return combineBatches(p, batches, elapsed(), { alpha: alphas[k], stopping });
+      // The batches' tallies go with it, so a server can replay a sample of them (the look's count is the run's).
+      return withBatchTallies(p, combineBatches(p, batches, elapsed(), { alpha: alphas[k], stopping }), batches);
     }
   }
   throw new Error('runToPrecision: the plan ended without a stop');

@@ -7,6 +7,7 @@ import { auditOf, type Actor } from '../audit/audit.repo';
 import { changesOf } from '../audit/changes';
 import { agents } from './agents.repo';
 import { rejudgeAgentRuns } from '../verdicts/rejudge-agent-runs';
+import { agentLimit } from '../../shared/verdict/index';
 
 const auditAgent = auditOf('agent');
 
@@ -38,9 +39,15 @@ export const agentsService = {
         actor,
         overridden ? 'agent.limit_overridden' : 'agent.changed',
         id,
-        overridden
-          ? { name: after.name, version: after.version, override: input.data.override, scenariosRejudged, changes }
-          : { name: after.name, version: after.version, changes },
+        // The limit before and after, and every scenario whose runs were judged afresh against it.
+        {
+          name: after.name,
+          version: after.version,
+          ...(overridden ? { override: input.data.override, scenariosRejudged } : {}),
+          limitBefore: agentLimit(before.data),
+          limitAfter: agentLimit(input.data),
+          changes,
+        },
       );
       return after;
     });

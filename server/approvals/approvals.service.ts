@@ -6,6 +6,7 @@ import { AppError, notFound } from '../lib/app-error';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { agents } from '../agents/agents.repo';
 import { findRunOfScenario } from '../scenarios/runs.repo';
+import { runsService } from '../scenarios/runs.service';
 import { findScenario, markApproved } from '../scenarios/scenarios.repo';
 import { currentLimit, judgeStored } from '../verdicts/run-verdict';
 import { currentApproval, replaceApproval } from './approvals.repo';
@@ -13,6 +14,8 @@ import { currentApproval, replaceApproval } from './approvals.repo';
 const auditScenario = auditOf('scenario');
 
 export async function approveScenario(db: Db, actor: Actor, scenarioId: number, input: ApproveInput): Promise<Approval | null> {
+  // Before the transaction: a whole replay takes seconds and must not hold the database.
+  await runsService.replayWholeRun(db, actor, scenarioId, input.runId);
   const workstationId = await withTransaction(db, async (trx) => {
     const scenario = await findScenario(trx, scenarioId);
     if (!scenario) throw notFound('Scenario');

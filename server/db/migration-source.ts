@@ -11,6 +11,8 @@ import * as addRunVerdictNumbers from '../../migrations/20261202000900_add_run_v
 import * as moveReleaseTypeToSource from '../../migrations/20261202150000_move_release_type_to_source';
 import * as addPlaceVersions from '../../migrations/20261203110001_add_place_versions';
 import * as addRoomSupplyAirflow from '../../migrations/20261203110002_add_room_supply_airflow';
+import * as createRunTickets from '../../migrations/20261203120001_create_run_tickets';
+import * as compressRunResults from '../../migrations/20261203120002_compress_run_results';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -29,6 +31,8 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202150000_move_release_type_to_source.ts': moveReleaseTypeToSource,
   '20261203110001_add_place_versions.ts': addPlaceVersions,
   '20261203110002_add_room_supply_airflow.ts': addRoomSupplyAirflow,
+  '20261203120001_create_run_tickets.ts': createRunTickets,
+  '20261203120002_compress_run_results.ts': compressRunResults,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -96,8 +96,22 @@ export type RunRow = Omit<RunListItem, 'banner' | 'outOfDate' | 'decided' | 'rea
   /** JSON of server/verdicts/verdict-numbers.ts: what the server judges every read from. */
   verdict_numbers: string | null;
   input: string;
+  /** Empty once result_gz holds the gzip-compressed JSON (every run saved after the compression migration). */
   result: string;
+  result_gz: Buffer | null;
   deleted_at: string | null;
+};
+
+export type RunTicketRow = {
+  id: number;
+  ticket: string;
+  scenario_id: number;
+  seed: string;
+  engine_version: string;
+  issued_to: number;
+  issued_at: string;
+  used_at: string | null;
+  run_id: number | null;
 };
 
 export type ApprovalRow = {
@@ -138,7 +152,8 @@ declare module 'knex/types/tables' {
       ScenarioRow,
       'control_description' | 'control_tier' | 'status' | 'version' | 'deleted_at' | 'agent_id' | 'size_profile_id'
     >;
-    runs: Table<RunRow, 'deleted_at' | 'verdict_numbers'>;
+    runs: Table<RunRow, 'deleted_at' | 'verdict_numbers' | 'result_gz'>;
+    run_tickets: Table<RunTicketRow, 'used_at' | 'run_id'>;
     approvals: Table<ApprovalRow, 'note' | 'superseded_at' | 'limit_fraction' | 'limit_mgPerM3'>;
   }
 }

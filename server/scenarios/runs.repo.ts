@@ -1,9 +1,9 @@
-import { toJsonFriendly } from '../../shared/schemas/runs';
 import type { Scenario } from '../../shared/schemas/scenario';
 import type { Banner, RunListItem } from '../../shared/schemas/workspace-views';
 import type { Conn } from '../db/knex';
 import type { RunRow } from '../db/tables';
 import type { VerdictNumbers } from '../verdicts/verdict-numbers';
+import { unpackResult } from './stored-result';
 
 export type NewRun = {
   scenarioId: number;
@@ -20,7 +20,8 @@ export type NewRun = {
   banner: Banner | null;
   verdictNumbers: VerdictNumbers;
   input: unknown;
-  result: unknown;
+  /** The result's JSON, gzip-compressed (stored-result.ts). */
+  resultGz: Buffer;
   createdBy: number;
 };
 
@@ -67,8 +68,8 @@ export async function insertRun(db: Conn, run: NewRun): Promise<number> {
       banner: run.banner,
       verdict_numbers: JSON.stringify(run.verdictNumbers),
       input: JSON.stringify(run.input),
-      // Typed arrays in the parsed result would stringify as {"0": …} objects: store plain lists.
-      result: JSON.stringify(toJsonFriendly(run.result)),
+      result: '',
+      result_gz: run.resultGz,
       created_by: run.createdBy,
       created_at: new Date().toISOString(),
     })
@@ -78,7 +79,7 @@ export async function insertRun(db: Conn, run: NewRun): Promise<number> {
 
 export async function findRun(db: Conn, id: number): Promise<StoredRunWithData | undefined> {
   const row = await db('runs').where({ id }).whereNull('deleted_at').first();
-  return row ? { ...toStored(row), input: JSON.parse(row.input), result: JSON.parse(row.result) } : undefined;
+  return row ? { ...toStored(row), input: JSON.parse(row.input), result: unpackResult(row) } : undefined;
 }
 
 // Sharing names any run the scenario ever had; approving needs one that is still live.

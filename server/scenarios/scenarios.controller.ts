@@ -1,6 +1,7 @@
 import type { Request, Response } from 'express';
 import type { ScenarioListQuery } from '../../shared/schemas/workspace';
 import type { Db } from '../db/knex';
+import { runsService } from './runs.service';
 import { getRun, getScenario, listScenariosForReview, scenariosService } from './scenarios.service';
 
 export function scenariosController(db: Db) {
@@ -26,7 +27,10 @@ export function scenariosController(db: Db) {
       res.status(201).json(await scenariosService.duplicate(db, req.user!, id(req), req.body.name));
     },
     async saveRun(req: Request, res: Response) {
-      res.status(201).json(await scenariosService.saveRun(db, req.user!, id(req), req.body));
+      res.status(201).json(await runsService.saveRun(db, req.user!, id(req), req.body));
+    },
+    async issueTicket(req: Request, res: Response) {
+      res.status(201).json(await runsService.issueRunTicket(db, req.user!, id(req)));
     },
     async getRun(req: Request, res: Response) {
       res.json(await getRun(db, id(req)));

@@ -1,5 +1,4 @@
 import type { RunResult } from '../../shared/schemas/run-result';
-import type { RunCreate } from '../../shared/schemas/runs';
 import type { ScenarioCreate, ScenarioListQuery, ScenarioUpdate } from '../../shared/schemas/workspace';
 import type { Page, SavedRun, ScenarioDetail, ScenarioSummary } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Db } from '../db/knex';
@@ -20,10 +19,9 @@ import {
   softDeleteScenario,
   updateScenario,
 } from './scenarios.repo';
-import { findRun, insertRun, listRuns } from './runs.repo';
+import { findRun, listRuns } from './runs.repo';
 import { assertMayMove } from './move-rule';
 import { currentLimit, judgedRunFigures } from '../verdicts/run-verdict';
-import { verdictNumbers } from '../verdicts/verdict-numbers';
 import { judgeOptions, withVerdict } from '../../shared/verdict/index';
 
 const auditScenario = auditOf('scenario');
@@ -143,44 +141,6 @@ export const scenariosService = {
       await softDeleteScenario(trx, id);
       await auditScenario(trx, actor, 'scenario.deleted', id);
     });
-  },
-
-  async saveRun(db: Db, actor: Actor, id: number, run: RunCreate): Promise<SavedRun> {
-    const runId = await withTransaction(db, async (trx) => {
-      const current = await findScenario(trx, id);
-      if (!current) throw notFound('Scenario');
-      // Whatever verdict the client sent is dropped: the server judges from the numbers and today's limit.
-      const source = await scenarioLimitSource(trx, id);
-      const limit = currentLimit(source?.agentData ?? null, current.input);
-      const result = withVerdict(run.result, limit, judgeOptions(run.input));
-      const verdict = result.limit ?? null;
-      const summary = run.result.breathingZone.fractions[verdict?.fraction ?? 'respirable'];
-      const newId = await insertRun(trx, {
-        scenarioId: id,
-        seed: String(run.result.engine.seed),
-        engineVersion: run.result.engine.version,
-        inputHash: inputHash(run.input),
-        particles: run.result.engine.particles,
-        limitFraction: verdict?.fraction ?? null,
-        twa8h_mgPerM3: summary.twa8h_mgPerM3,
-        twa8hCi95_mgPerM3: [summary.twa8hCi95_mgPerM3[0], summary.twa8hCi95_mgPerM3[1]],
-        respirableTwa8h_mgPerM3: run.result.breathingZone.fractions.respirable.twa8h_mgPerM3,
-        percentOfLimit: verdict?.percentOfLimit ?? null,
-        ratingCategory: verdict?.ratingCategory ?? null,
-        banner: verdict?.banner ?? null,
-        verdictNumbers: verdictNumbers(run.result, run.input),
-        input: run.input,
-        result,
-        createdBy: actor.id,
-      });
-      await auditScenario(trx, actor, 'run.saved', id, {
-        runId: newId,
-        particles: run.result.engine.particles,
-        seed: String(run.result.engine.seed),
-      });
-      return newId;
-    });
-    return getRun(db, runId);
   },
 };
 

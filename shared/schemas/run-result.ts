@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BANNERS, FATES, type Fate, FRACTIONS, type Fraction } from '../vocabulary/fractions';
+import { batchTallySchema } from './batch-tally';
 import { float32List, int32List, measured, numberList, pair } from './run-result-lists';
 
 const conc = z.number().finite().gte(0);
@@ -208,6 +209,8 @@ export const runResultSchema = z.object({
   /** What the engine assumed beyond the inputs; absent in results of engines before 2.0. */
   model: modelSchema.optional(),
   performance: z.object({ particleSteps: count, wallTime_s: z.number().gte(0), particleStepsPerS: z.number().gte(0) }),
+  /** Per-batch figures and hashes the server replays a sample of before it stores a run; absent in older results. */
+  batchTallies: z.array(batchTallySchema).max(1000).optional(),
 });
 
 export type RunResult = z.output<typeof runResultSchema>;

@@ -7,6 +7,8 @@ export { runResultSchema };
 export const runCreateSchema = z
   .object({
     scenarioVersion: z.number().int().positive(),
+    /** The single-use run ticket the server issued with this run's seed (POST …/run-tickets). */
+    ticket: z.string().regex(/^[0-9a-f]{32}$/, 'must be a run ticket the server issued'),
     input: scenarioSchema,
     result: runResultSchema,
   })
@@ -22,6 +24,12 @@ function shortestFloat32(v: number): number {
   }
   return v;
 }
+
+/** Asking for a run ticket carries nothing; the server picks the seed. */
+export const runTicketRequestSchema = z.object({}).strict();
+
+/** What the server answers: the seed to run with, once, and the engine version it will replay with. */
+export type RunTicket = { ticket: string; seed: number; engineVersion: string };
 
 // Typed arrays do not survive JSON.stringify as arrays; turn them into plain lists first.
 export function toJsonFriendly<T>(value: T): unknown {

@@ -46,6 +46,7 @@ export const api = {
   scenario: (id: number) => `/api/scenarios/${id}`,
   duplicateScenario: (id: number) => `/api/scenarios/${id}/duplicate`,
   scenarioRuns: (id: number) => `/api/scenarios/${id}/runs`,
+  runTickets: (scenarioId: number) => `/api/scenarios/${scenarioId}/run-tickets`,
   run: (id: number) => `/api/runs/${id}`,
   approve: (scenarioId: number) => `/api/scenarios/${scenarioId}/approve`,
   share: (scenarioId: number) => `/api/scenarios/${scenarioId}/share`,

@@ -1,7 +1,7 @@
 import * as Comlink from 'comlink';
 import { type RunPrecision, type Scenario, parseScenario } from '../../shared/schemas/scenario';
 import type { RunResult } from '../../shared/schemas/run-result';
-import { type BatchResult, combineBatches, type PreparedScenario, prepareScenario } from '../../workers/engine/index';
+import { type BatchResult, combineBatches, type PreparedScenario, prepareScenario, withBatchTallies } from '../../workers/engine/index';
 import { FIRST_LOOK_BATCHES, type LookOutcome, runToPrecision } from '../../workers/run-to-precision';
 import { referenceScenario } from '../../workers/engine/reference-scenario';
 import { type BatchWorker, scheduleBatches } from '../../workers/schedule-batches';
@@ -88,10 +88,9 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
   try {
     const result = scenario.run.precision
       ? await runToPrecisionOn(workers, prepared, scenario.run.precision, { signal, onProgress }, elapsed_s)
-      : combineBatches(
-          prepared,
-          await scheduleBatches(workers, prepared.batches, { signal, onProgress: onProgress && report }),
-          elapsed_s(),
+      : await scheduleBatches(workers, prepared.batches, { signal, onProgress: onProgress && report }).then((done) =>
+          // Each batch's figures and hash travel with the result: the server replays a sample before it keeps a run.
+          withBatchTallies(prepared, combineBatches(prepared, done, elapsed_s()), done),
         );
     idle.push(...busy);
     return result;

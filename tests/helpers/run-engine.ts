@@ -1,11 +1,30 @@
+import type { Agent, Response } from 'supertest';
 import { parseScenario, type ScenarioInput } from '../../shared/schemas/scenario';
 import { toJsonFriendly } from '../../shared/schemas/runs';
-import { combineBatches, prepareScenario, runBatch } from '../../workers/engine/index';
+import { combineBatches, prepareScenario, runBatch, withBatchTallies } from '../../workers/engine/index';
 
-// The real engine, in-process, as the browser would run it (just without workers).
+// The real engine, in-process, as the browser would run it (just without workers), with the
+// per-batch tallies the browser uploads.
 export function runEngine(input: ScenarioInput) {
   const scenario = parseScenario(input);
   const prepared = prepareScenario(scenario);
   const batches = Array.from({ length: prepared.batches }, (_, k) => runBatch(prepared, k));
-  return { scenario, result: toJsonFriendly(combineBatches(prepared, batches)) as Record<string, unknown> };
+  return {
+    scenario,
+    result: toJsonFriendly(withBatchTallies(prepared, combineBatches(prepared, batches), batches)) as Record<string, unknown>,
+  };
+}
+
+/** What the run panel does: ask for a run ticket, run with its seed; the body to save is returned, not sent. */
+export async function ticketedRun(agent: Agent, scenarioId: number, input: ScenarioInput, scenarioVersion = 1) {
+  const issued = await agent.post(`/api/scenarios/${scenarioId}/run-tickets`).send({});
+  if (issued.status !== 201) throw new Error(`run ticket refused: ${issued.status} ${JSON.stringify(issued.body)}`);
+  const run = runEngine({ ...input, run: { ...(input.run ?? {}), seed: issued.body.seed } } as ScenarioInput);
+  return { ...run, body: { scenarioVersion, ticket: issued.body.ticket as string, input: run.scenario, result: run.result } };
+}
+
+/** Ticket, run and save in one go; answers the save's response. */
+export async function saveTicketedRun(agent: Agent, scenarioId: number, input: ScenarioInput, scenarioVersion = 1): Promise<Response> {
+  const { body } = await ticketedRun(agent, scenarioId, input, scenarioVersion);
+  return agent.post(`/api/scenarios/${scenarioId}/runs`).send(body);
 }

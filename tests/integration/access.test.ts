@@ -40,6 +40,7 @@ const RULES: Record<string, Rule> = {
   'PATCH /api/scenarios/:id': 'scenarios:write',
   'DELETE /api/scenarios/:id': 'scenarios:write',
   'POST /api/scenarios/:id/duplicate': 'scenarios:write',
+  'POST /api/scenarios/:id/run-tickets': 'runs:write',
   'POST /api/scenarios/:id/runs': 'runs:write',
   'POST /api/scenarios/:id/approve': 'scenarios:approve',
   'POST /api/scenarios/:id/share': 'reports:share',

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { currentApproval } from '../../server/approvals/approvals.repo';
 import { createTestApp, type TestApp } from '../helpers/test-app';
-import { runEngine } from '../helpers/run-engine';
+import { saveTicketedRun } from '../helpers/run-engine';
 
 let t: TestApp;
 let benchId: number;
@@ -104,10 +104,7 @@ describe('approving a scenario as the current control', () => {
       run: { ...detail.input.run, particles: 300_000 },
     };
     expect((await eng.patch(`/api/scenarios/${s.id}`).send({ version: detail.version, input })).status).toBe(200);
-    const engine = runEngine(input);
-    const saved = await eng
-      .post(`/api/scenarios/${s.id}/runs`)
-      .send({ scenarioVersion: detail.version + 1, input: engine.scenario, result: engine.result });
+    const saved = await saveTicketedRun(eng, s.id, input, detail.version + 1);
     expect(saved.status).toBe(201);
     const run = await t.db('runs').where({ id: saved.body.id }).first();
     expect(run.banner).toBe('clear');

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../helpers/test-app';
-import { runEngine } from '../helpers/run-engine';
+import { ticketedRun } from '../helpers/run-engine';
 import { ROOM_DATA, SITE, WORKSTATION_DATA } from '../fixtures/workspace';
 import type { ScenarioInput } from '../../shared/schemas/scenario';
 
@@ -41,8 +41,8 @@ afterAll(() => t.close());
 async function save(input: ScenarioInput) {
   const eng = await t.signIn('engineer');
   const sc = await eng.post('/api/scenarios').send({ workstationId, agentId, name: 'Grinding', input });
-  const run = runEngine(input);
-  const res = await eng.post(`/api/scenarios/${sc.body.id}/runs`).send({ scenarioVersion: 1, input: run.scenario, result: run.result });
+  const run = await ticketedRun(eng, sc.body.id, input);
+  const res = await eng.post(`/api/scenarios/${sc.body.id}/runs`).send(run.body);
   return { res, run };
 }
 

@@ -1,4 +1,5 @@
 import type { PreparedScenario } from './types';
+import { pow } from './det-math';
 
 type Room = PreparedScenario['room'];
 
@@ -11,7 +12,7 @@ export function zoneVolume_m3(room: Room, x: number, y: number, z: number, radiu
     y + radius_m <= room.width_m &&
     z - radius_m >= 0 &&
     z + radius_m <= room.height_m;
-  const sphere = (4 / 3) * Math.PI * radius_m ** 3;
+  const sphere = (4 / 3) * Math.PI * pow(radius_m, 3);
   if (inside) return sphere;
   const n = 64;
   const h = (2 * radius_m) / n;
@@ -23,7 +24,7 @@ export function zoneVolume_m3(room: Room, x: number, y: number, z: number, radiu
       const py = y - radius_m + (j + 0.5) * h;
       for (let k = 0; k < n; k++) {
         const pz = z - radius_m + (k + 0.5) * h;
-        if ((px - x) ** 2 + (py - y) ** 2 + (pz - z) ** 2 > radius_m * radius_m) continue;
+        if ((px - x) * (px - x) + (py - y) * (py - y) + (pz - z) * (pz - z) > radius_m * radius_m) continue;
         total++;
         if (px >= 0 && px <= room.length_m && py >= 0 && py <= room.width_m && pz >= 0 && pz <= room.height_m) hits++;
       }

@@ -41,7 +41,7 @@ export function taskMean(series: Float64Array): number {
 }
 
 // Task time at the simulated mean, the rest of the shift at background: Σ Cᵢtᵢ / 8 h (29 CFR 1910.1000(d); EN 689).
-function twa8h(p: PreparedScenario, mean: number): number {
+export function twa8h(p: PreparedScenario, mean: number): number {
   const task = p.task.minutesPerShift;
   return (mean * task + p.task.background_mgPerM3 * (SHIFT_min - task)) / SHIFT_min;
 }

@@ -1,4 +1,5 @@
 import { eddyContinuousSource, nearFieldFarField, wellMixedConcentration } from '../../shared/physics/index';
+import { pow } from './det-math';
 import type { Fraction, PreparedScenario, Results } from './types';
 import { FRACTIONS } from './types';
 
@@ -27,8 +28,8 @@ export function crossChecks(p: PreparedScenario, fraction: Fraction): Results['c
   const airflow = c.airflow_m3PerS + c.hoodAirflow_m3PerS;
   const release_s = Math.max(p.emission.release_s, 1e-9);
   const radius = Math.max(c.sourceToZone_m, p.zone.radius_m);
-  const surface = (c.sourceOnFloor ? 2 : 4) * Math.PI * radius ** 2;
-  const nearVolume = Math.min(((c.sourceOnFloor ? 2 : 4) / 3) * Math.PI * radius ** 3, 0.5 * room.volume_m3);
+  const surface = (c.sourceOnFloor ? 2 : 4) * Math.PI * radius * radius;
+  const nearVolume = Math.min(((c.sourceOnFloor ? 2 : 4) / 3) * Math.PI * pow(radius, 3), 0.5 * room.volume_m3);
   const beta = 0.5 * surface * c.randomAirSpeed_mPerS;
   let wellMixed = 0;
   let near = 0;

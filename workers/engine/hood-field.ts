@@ -2,6 +2,7 @@ import type { Hood } from '../../shared/schemas/scenario';
 import { hoodAxis } from '../../shared/schemas/hood-axis';
 import { sinkPanelVelocity } from '../../shared/physics/index';
 import * as slots from './hood-slots';
+import { hypot3 } from './det-math';
 
 // Module-level copies rather than the imported bindings: V8 folds a module's own constants into
 // the compiled loop, while each use of an import stays a load and a check.
@@ -53,12 +54,12 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
     let e1x = -ny;
     let e1y = nx;
     let e1z = 0;
-    const l1 = Math.hypot(e1x, e1y);
+    const l1 = hypot3(e1x, e1y);
     if (l1 < 1e-9) [e1x, e1y, e1z] = [1, 0, 0];
     else [e1x, e1y] = [e1x / l1, e1y / l1];
     const kind = HOOD_KINDS.indexOf(hood.kind);
     const area = hood.faceWidth_m * hood.faceHeight_m;
-    const reach = Math.hypot(hood.faceWidth_m, hood.faceHeight_m) / 2;
+    const reach = hypot3(hood.faceWidth_m, hood.faceHeight_m) / 2;
     p[o + HOOD_KIND] = kind;
     p[o + HOOD_X] = hood.x_m;
     p[o + HOOD_Y] = hood.y_m;

@@ -1,6 +1,7 @@
 import { addHoodVelocity } from './hood-field';
 import { HOOD_STRIDE, HOOD_X, HOOD_Y } from './hood-slots';
 import type { BatchResult, Grid, PreparedScenario, Results } from './types';
+import { hypot3 } from './det-math';
 
 const MAP_CELLS = 40;
 
@@ -30,7 +31,7 @@ function captureGrid(p: PreparedScenario, x0: number, y0: number, x1: number, y1
       field[1] = p.draft_mPerS[1];
       field[2] = 0;
       addHoodVelocity(p.hoods.params, p.hoods.count, x0 + (ix + 0.5) * cell[0], y0 + (iy + 0.5) * cell[1], z, field);
-      values[ix * ny + iy] = Math.hypot(field[0], field[1], field[2]);
+      values[ix * ny + iy] = hypot3(field[0], field[1], field[2]);
     }
   }
   return { nx, ny, cell_m: cell, origin_m: [x0, y0], values, height_m: z };

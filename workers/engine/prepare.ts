@@ -9,6 +9,7 @@ import { zoneVolume_m3 } from './breathing-zone';
 import { packHoods } from './hood-field';
 import { buildSizeBins } from './size-bins';
 import type { PreparedScenario } from './types';
+import { cos, hypot3, sin } from './det-math';
 
 export const TIME_BINS = 120;
 // Taylor's D = σ_u²·T_L with σ_u ≈ 0.1 m/s, a typical turbulent speed in a ventilated workroom [P] common practice.
@@ -43,7 +44,7 @@ export function prepareScenario(s: Scenario): PreparedScenario {
   const particlesPerBatch = Math.max(1, Math.ceil(s.run.particles / s.run.batches));
   const bins = buildSizeBins(s.dust, air, particlesPerBatch, emission.emitted_mg, eddy);
   const direction = (s.room.draftDirection_deg * Math.PI) / 180;
-  const draft_mPerS: [number, number] = [s.room.draftSpeed_mPerS * Math.cos(direction), s.room.draftSpeed_mPerS * Math.sin(direction)];
+  const draft_mPerS: [number, number] = [s.room.draftSpeed_mPerS * cos(direction), s.room.draftSpeed_mPerS * sin(direction)];
   const surfaces = surfaceDeposition(s, bins, air, draft_mPerS);
   const timeBin_s = duration_s / TIME_BINS;
   const jet = releaseJet(s);
@@ -90,7 +91,7 @@ export function prepareScenario(s: Scenario): PreparedScenario {
     crossCheck: {
       airflow_m3PerS: (s.room.airChanges_perH * volume_m3) / 3600,
       hoodAirflow_m3PerS: s.hoods.reduce((a, h) => a + h.airflow_m3PerS, 0),
-      sourceToZone_m: Math.hypot(s.source.x_m - w.x_m, s.source.y_m - w.y_m, s.source.z_m - w.z_m),
+      sourceToZone_m: hypot3(s.source.x_m - w.x_m, s.source.y_m - w.y_m, s.source.z_m - w.z_m),
       // The near-field boundary sees at least the draft; 0.05 m/s stands in for still air (common practice).
       randomAirSpeed_mPerS: Math.max(s.room.draftSpeed_mPerS, 0.05),
       sourceOnFloor: s.source.z_m <= 0.05,

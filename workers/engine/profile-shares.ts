@@ -7,6 +7,7 @@ import {
   normalCdf,
   physicalDiameter,
 } from '../../shared/physics/index';
+import { log } from './det-math';
 
 type Dust = Scenario['dust'];
 
@@ -21,14 +22,14 @@ export interface ProfileShares {
 function lognormalShare(lo_m: number, hi_m: number, median_m: number, gsd: number, top: boolean): number {
   // A one-size profile sitting exactly on the top edge still belongs to the last bin, as massOutsideRange counts it in.
   if (gsd === 1) return median_m >= lo_m && (median_m < hi_m || (top && median_m === hi_m)) ? 1 : 0;
-  const s = Math.log(gsd);
-  return normalCdf(Math.log(hi_m / median_m) / s) - normalCdf(Math.log(lo_m / median_m) / s);
+  const s = log(gsd);
+  return normalCdf(log(hi_m / median_m) / s) - normalCdf(log(lo_m / median_m) / s);
 }
 
 function overlapShare(lo: number, hi: number, binLo: number, binHi: number): number {
   const a = Math.max(lo, binLo);
   const b = Math.min(hi, binHi);
-  return b > a ? Math.log(b / a) / Math.log(hi / lo) : 0;
+  return b > a ? log(b / a) / log(hi / lo) : 0;
 }
 
 /**

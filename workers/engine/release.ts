@@ -1,5 +1,6 @@
 import type { Xoshiro128 } from './rng';
 import type { PreparedScenario } from './types';
+import { cos, log, sin } from './det-math';
 
 export interface ParticleArrays {
   count: number;
@@ -61,8 +62,8 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
       if (s.shape === 'disc') {
         const r = 0.5 * s.size_m * Math.sqrt(rng.nextUniform());
         const th = 2 * Math.PI * rng.nextUniform();
-        x += r * Math.cos(th);
-        y += r * Math.sin(th);
+        x += r * cos(th);
+        y += r * sin(th);
       } else if (s.shape === 'box') {
         x += s.size_m * (rng.nextUniform() - 0.5);
         y += s.size_m * (rng.nextUniform() - 0.5);
@@ -73,9 +74,9 @@ export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): Particle
       a.z[i] = clamp(z, room.height_m);
       a.t[i] = t0;
       a.release[i] = t0;
-      a.exhaustAt[i] = p.exhaustRate_perS > 0 ? t0 - Math.log(rng.nextUniform()) / p.exhaustRate_perS : Infinity;
+      a.exhaustAt[i] = p.exhaustRate_perS > 0 ? t0 - log(rng.nextUniform()) / p.exhaustRate_perS : Infinity;
       const wallRate = p.surfaces.wrappedWallRate_perS[b];
-      if (wallRate > 0) a.wallAt[i] = t0 - Math.log(rng.nextUniform()) / wallRate;
+      if (wallRate > 0) a.wallAt[i] = t0 - log(rng.nextUniform()) / wallRate;
       a.bin[i] = b;
     }
   }

@@ -1,5 +1,6 @@
 import type { Scenario } from '../../shared/schemas/scenario';
 import { type AirProperties, aerodynamicDiameter } from '../../shared/physics/index';
+import { exp, log } from './det-math';
 
 /**
  * The simulated sizes run from 1 nm physical diameter to 100 µm aerodynamic diameter.
@@ -27,11 +28,11 @@ type Particle = Pick<Scenario['dust'], 'density_kgPerM3' | 'shapeFactor'>;
 export function binEdges_m(dust: Particle, air: AirProperties): Float64Array {
   const lower_m = aerodynamicDiameter(SIZE_MIN_PHYSICAL_m, dust.density_kgPerM3, dust.shapeFactor, air);
   const step = Math.LN10 / BINS_PER_DECADE;
-  const span = Math.log(SIZE_MAX_AERODYNAMIC_m / lower_m) / step;
+  const span = log(SIZE_MAX_AERODYNAMIC_m / lower_m) / step;
   const whole = Math.floor(span + 1e-9);
   const count = Math.max(1, span - whole >= 0.5 ? whole + 1 : whole);
   const edges = new Float64Array(count + 1);
-  for (let i = 1; i <= count; i++) edges[i] = SIZE_MAX_AERODYNAMIC_m * Math.exp((i - count) * step);
+  for (let i = 1; i <= count; i++) edges[i] = SIZE_MAX_AERODYNAMIC_m * exp((i - count) * step);
   edges[0] = lower_m;
   return edges;
 }

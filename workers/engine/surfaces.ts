@@ -1,6 +1,7 @@
 import { type AirProperties, depositionVelocities } from '../../shared/physics/index';
 import type { Scenario } from '../../shared/schemas/scenario';
 import type { PreparedScenario, SizeBins } from './types';
+import { hypot3 } from './det-math';
 
 // Indoor friction velocity: about 1 cm/s in still rooms (Lai & Nazaroff 2000's indoor range, from
 // memory), and a twentieth of a draft that sweeps the surfaces [P] common practice.
@@ -15,7 +16,7 @@ export function surfaceDeposition(
   draft_mPerS: [number, number],
 ): PreparedScenario['surfaces'] {
   const n = bins.count;
-  const draft = Math.hypot(draft_mPerS[0], draft_mPerS[1]);
+  const draft = hypot3(draft_mPerS[0], draft_mPerS[1]);
   const frictionVelocity_mPerS = Math.max(STILL_ROOM_FRICTION_mPerS, FRICTION_PER_DRAFT * draft);
   const out: PreparedScenario['surfaces'] = {
     enabled: s.room.wallDeposition,

@@ -3,6 +3,7 @@ import { JET_SPREADING_RATE, jetVelocity } from '../../shared/physics/round-jet'
 import { addHoodVelocity, faceEntered, reflectAtFaces } from './hood-field';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
 import { fillNormals } from './ziggurat';
+import { exp, expm1 } from './det-math';
 
 // Long enough that a visit's set-up is small beside its steps, short enough that a pass over the
 // live particles still reports progress within a batch.
@@ -199,7 +200,7 @@ export function walk(k: Kernel, i: number): number {
     if (inertial) {
       // dv/dt = (u − v)/τ + g integrated exactly over the step with the air velocity u held at its
       // midpoint value: v relaxes toward u − V_TS·ẑ (Hinds ch. 5), so large particles overshoot.
-      const decay = Math.exp(-dt / tau);
+      const decay = exp(-dt / tau);
       const lag = tau * (1 - decay);
       const tx = vx;
       const ty = vy;
@@ -229,7 +230,7 @@ export function walk(k: Kernel, i: number): number {
     }
     let variance = 2 * (brownian + jetD) * dt;
     if (t < youngUntil && lagrangian > 0) {
-      const fade = Math.exp(-(t - born) / lagrangian) * -Math.expm1(-dt / lagrangian);
+      const fade = exp(-(t - born) / lagrangian) * -expm1(-dt / lagrangian);
       variance += 2 * roomD * (dt - lagrangian * fade);
     } else {
       variance += 2 * roomD * dt;

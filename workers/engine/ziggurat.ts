@@ -1,4 +1,5 @@
 import type { Xoshiro128 } from './rng';
+import { exp, log } from './det-math';
 
 // 128-layer ziggurat for the standard normal (Marsaglia & Tsang 2000), one 32-bit draw per normal.
 const LAYERS = 128;
@@ -12,18 +13,18 @@ const fn = new Float64Array(LAYERS);
   const vn = 9.91256303526217e-3;
   let dn = R;
   let tn = dn;
-  const q = vn / Math.exp(-0.5 * dn * dn);
+  const q = vn / exp(-0.5 * dn * dn);
   kn[0] = (dn / q) * m1;
   kn[1] = 0;
   wn[0] = q / m1;
   wn[LAYERS - 1] = dn / m1;
   fn[0] = 1;
-  fn[LAYERS - 1] = Math.exp(-0.5 * dn * dn);
+  fn[LAYERS - 1] = exp(-0.5 * dn * dn);
   for (let i = LAYERS - 2; i >= 1; i--) {
-    dn = Math.sqrt(-2 * Math.log(vn / dn + Math.exp(-0.5 * dn * dn)));
+    dn = Math.sqrt(-2 * log(vn / dn + exp(-0.5 * dn * dn)));
     kn[i + 1] = (dn / tn) * m1;
     tn = dn;
-    fn[i] = Math.exp(-0.5 * dn * dn);
+    fn[i] = exp(-0.5 * dn * dn);
     wn[i] = dn / m1;
   }
 })();
@@ -36,12 +37,12 @@ function normalSlow(rng: Xoshiro128, hz: number, iz: number): number {
       let tx: number;
       let ty: number;
       do {
-        tx = -Math.log(rng.nextUniform()) / R;
-        ty = -Math.log(rng.nextUniform());
+        tx = -log(rng.nextUniform()) / R;
+        ty = -log(rng.nextUniform());
       } while (ty + ty < tx * tx);
       return hz > 0 ? R + tx : -R - tx;
     }
-    if (fn[iz] + rng.nextUniform() * (fn[iz - 1] - fn[iz]) < Math.exp(-0.5 * x * x)) return x;
+    if (fn[iz] + rng.nextUniform() * (fn[iz - 1] - fn[iz]) < exp(-0.5 * x * x)) return x;
     hz = rng.nextInt32();
     iz = hz & (LAYERS - 1);
     if (Math.abs(hz) < kn[iz]) return hz * wn[iz];

@@ -55,8 +55,10 @@ function threadWorker(thread: Worker, prepared: PreparedScenario): BatchWorker<B
 export class ThreadPool {
   private readonly workers: Worker[];
 
-  constructor(threads: number) {
+  /** `background`: idle threads do not keep the process alive (a server's pool). */
+  constructor(threads: number, opts: { background?: boolean } = {}) {
     this.workers = Array.from({ length: Math.max(1, threads) }, startThread);
+    if (opts.background) this.workers.forEach((w) => w.unref());
   }
 
   async run(prepared: PreparedScenario, onProgress?: PoolProgress): Promise<BatchResult[]> {
@@ -64,10 +66,20 @@ export class ThreadPool {
   }
 
   /** Batches first…first+count−1 of the scenario's seed stream, in batch order. */
-  async runRange(prepared: PreparedScenario, first: number, count: number, onProgress?: PoolProgress): Promise<BatchResult[]> {
-    const threads = this.workers.slice(0, Math.min(this.workers.length, count)).map((w) => threadWorker(w, prepared));
+  runRange(prepared: PreparedScenario, first: number, count: number, onProgress?: PoolProgress): Promise<BatchResult[]> {
+    return this.runBatches(
+      prepared,
+      Array.from({ length: count }, (_, k) => first + k),
+      onProgress,
+    );
+  }
+
+  /** Only the named batches (a replay's sample), returned in the order named. One call at a time per pool. */
+  async runBatches(prepared: PreparedScenario, batchIndices: readonly number[], onProgress?: PoolProgress): Promise<BatchResult[]> {
+    const threads = this.workers.slice(0, Math.min(this.workers.length, batchIndices.length)).map((w) => threadWorker(w, prepared));
+    const named = threads.map((t) => ({ prepare: t.prepare, run: (i: number, report: PoolProgress) => t.run(batchIndices[i], report) }));
     try {
-      return await scheduleBatches(threads, count, { onProgress, first });
+      return await scheduleBatches(named, batchIndices.length, { onProgress });
     } finally {
       threads.forEach((t) => t.detach());
     }

@@ -4,13 +4,14 @@ import { fileURLToPath } from 'node:url';
 import { parseScenario, type Scenario } from '../../../shared/schemas/scenario';
 import { runResultSchema, toJsonFriendly } from '../../../shared/schemas/runs';
 import { roomDataSchema } from '../../../shared/schemas/workspace';
-import { combineBatches, prepareScenario, runBatch } from '../../../workers/engine/index';
+import { combineBatches, prepareScenario, runBatch, withBatchTallies } from '../../../workers/engine/index';
 import type { Db } from '../knex';
 import { placesService } from '../../places/places.service';
 import { firstWorkstationId, hasAnySite, replaceOperators } from '../../places/places.repo';
 import { firstWithRole } from '../../people/people.repo';
 import { agentsService } from '../../agents/agents.service';
 import { scenariosService } from '../../scenarios/scenarios.service';
+import { runsService } from '../../scenarios/runs.service';
 import { DEMO_AGENTS, DEMO_SITES } from './places';
 
 const SCENARIO_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../shared/demo-scenarios');
@@ -22,7 +23,7 @@ export const loadDemoScenario = (file: string): Scenario =>
 function simulate(scenario: Scenario) {
   const prepared = prepareScenario(scenario);
   const batches = Array.from({ length: prepared.batches }, (_, k) => runBatch(prepared, k));
-  return runResultSchema.parse(toJsonFriendly(combineBatches(prepared, batches)));
+  return runResultSchema.parse(toJsonFriendly(withBatchTallies(prepared, combineBatches(prepared, batches), batches)));
 }
 
 export async function seedDemoWorkspace(
@@ -71,7 +72,7 @@ export async function seedDemoWorkspace(
         input,
       });
       const t0 = Date.now();
-      await scenariosService.saveRun(db, actor, created.id, { scenarioVersion: created.version, input, result: simulate(input) });
+      await runsService.storeComputedRun(db, actor, created.id, input, simulate(input));
       opts.log?.(
         `  ran "${created.name}" at ${place.workstation.name} (${input.run.particles} particles, ${((Date.now() - t0) / 1000).toFixed(1)} s)`,
       );

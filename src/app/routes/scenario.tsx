@@ -60,7 +60,7 @@ function ScenarioWorkspace({ initial }: { initial: ScenarioDetail }) {
   const profiles = useSizeProfileOptions();
   const [draft, setDraft] = useState<Draft>(() => fromDetail(initial));
   const [base, setBase] = useState<ScenarioDetail>(initial);
-  const [fresh, setFresh] = useState<{ result: RunResult; input: Scenario } | null>(null);
+  const [fresh, setFresh] = useState<{ result: RunResult; input: Scenario; ticket?: string } | null>(null);
   const results = useRef<HTMLDivElement>(null);
   const shown: ScenarioDetail = { ...base, runs: live.runs, status: live.status, approval: live.approval, lastRun: live.lastRun };
   const parsed = useMemo(() => scenarioSchema.safeParse(draft.input), [draft]);

@@ -9,15 +9,20 @@ import { scenarioKeys } from './get-scenarios';
 export const saveRun = ({
   scenarioId,
   scenarioVersion,
+  ticket,
   input,
   result,
 }: {
   scenarioId: number;
   scenarioVersion: number;
+  ticket: string;
   input: Scenario;
   result: unknown;
 }) =>
-  apiFetch<SavedRun>(api.scenarioRuns(scenarioId), { method: 'POST', body: { scenarioVersion, input, result: toJsonFriendly(result) } });
+  apiFetch<SavedRun>(api.scenarioRuns(scenarioId), {
+    method: 'POST',
+    body: { scenarioVersion, ticket, input, result: toJsonFriendly(result) },
+  });
 
 /** A saved run changes the scenario's detail and lists; \`also\` names other features' queries it makes stale (the audit trail). */
 export function useSaveRun(also: readonly QueryKey[] = []) {

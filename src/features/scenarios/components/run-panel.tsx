@@ -7,6 +7,7 @@ import { ProgressBar, timeLeft } from '@/components/progress-bar';
 import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
 import { runSimulation } from '@/lib/simulation-bridge';
 import { countText, percentText } from '../../../../shared/format/index';
+import { ticketedScenario, type TicketRequest } from '../api/request-run-ticket';
 import { PrecisionLooks } from './precision-looks';
 
 // A run to a precision names its aim; a fixed run its particle count.
@@ -15,8 +16,19 @@ const runLabel = (s: Scenario) =>
     ? `until ±${percentText(100 * s.run.precision.relativeHalfWidth, 2)} or decided`
     : `${countText(s.run.particles)} particles`;
 
-export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; onResult: (r: RunResult, input: Scenario) => void }) {
-  const run = useEngineRun<RunResult>(RUN_START);
+type Ran = { result: RunResult; input: Scenario; ticket?: string };
+
+/** `requestTicket`: a run that may be saved asks the server for its seed first (exploratory runs keep the scenario's own). */
+export function RunPanel({
+  scenario,
+  onResult,
+  requestTicket,
+}: {
+  scenario: Scenario | null;
+  onResult: (r: RunResult, input: Scenario, ticket?: string) => void;
+  requestTicket?: TicketRequest;
+}) {
+  const run = useEngineRun<Ran>(RUN_START);
   const state = run.state;
   const progress = useRef<HTMLDivElement>(null);
   const running = state.phase === 'running';
@@ -27,8 +39,13 @@ export function RunPanel({ scenario, onResult }: { scenario: Scenario | null; on
 
   async function start() {
     if (!scenario) return;
-    const result = await run.start((options) => runSimulation(scenario, options));
-    if (result) onResult(result, scenario);
+    const ran = await run.start(async (options) => {
+      const { input, ticket } = requestTicket ? await ticketedScenario(scenario, requestTicket) : { input: scenario, ticket: undefined };
+      return { result: await runSimulation(input, options), input, ticket };
+    });
+    if (!ran) return;
+    if (ran.ticket) onResult(ran.result, ran.input, ran.ticket);
+    else onResult(ran.result, ran.input);
   }
 
   const pct = running ? Math.round(state.progress.fraction * 100) : 0;

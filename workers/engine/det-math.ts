@@ -1,0 +1,326 @@
+/**
+ * exp, log, pow, sin and cos in plain IEEE arithmetic, so every JavaScript engine gives the same
+ * bits (the language leaves Math.exp and friends implementation-approximated). The algorithms
+ * are those of fdlibm (Sun Microsystems, 1993: e_exp.c, e_log.c, k_sin.c, k_cos.c and the
+ * Cody–Waite part of e_rem_pio2.c); V8 ships the same ports, so Node and Chromium agree with Math.*
+ * as well. +, −, ×, ÷, Math.sqrt, Math.abs and Math.floor are exactly rounded everywhere.
+ */
+
+// Word access to a double; every platform a browser or Node runs on is little-endian, checked once.
+const f64 = new Float64Array(1);
+const u32 = new Uint32Array(f64.buffer);
+f64[0] = 1;
+const HI = u32[1] === 0x3ff00000 ? 1 : 0;
+const LO = 1 - HI;
+
+function highWord(x: number): number {
+  f64[0] = x;
+  return u32[HI] | 0;
+}
+
+// Powers of two 2^-1022…2^1023 by exact doubling, so scaling never touches the bits.
+const POW2 = new Float64Array(2046);
+POW2[1022] = 1;
+for (let k = 1; k <= 1023; k++) POW2[1022 + k] = POW2[1021 + k] * 2;
+for (let k = 1; k <= 1022; k++) POW2[1022 - k] = POW2[1023 - k] * 0.5;
+
+/** y · 2^k; each product by a power of two is exact unless the result is subnormal (then one rounding, as fdlibm). */
+function scale(y: number, k: number): number {
+  if (k > 1023) return y * POW2[1022 + 1023] * POW2[1022 + k - 1023];
+  if (k < -1021) return y * POW2[1022 + k + 1000] * POW2[1022 - 1000];
+  return y * POW2[1022 + k];
+}
+
+const LN2_HI = 6.9314718036912381649e-1;
+const LN2_LO = 1.90821492927058770002e-10;
+const INV_LN2 = 1.442695040888963387;
+const P1 = 1.66666666666666019037e-1;
+const P2 = -2.77777777770155933842e-3;
+const P3 = 6.61375632143793436117e-5;
+const P4 = -1.6533902205465251539e-6;
+const P5 = 4.13813679705723846039e-8;
+
+export function exp(x: number): number {
+  if (x !== x) return x;
+  // The one input where fdlibm's result is a rounding short of the correctly rounded value (V8 agrees).
+  if (x === 1) return 2.718281828459045;
+  if (x > 7.09782712893383973096e2) return Infinity;
+  if (x < -7.4513321910194110842e2) return 0;
+  const hx = highWord(x) & 0x7fffffff;
+  let hi = 0;
+  let lo = 0;
+  let k = 0;
+  if (hx > 0x3fd62e42) {
+    if (hx < 0x3ff0a2b2) k = x < 0 ? -1 : 1;
+    else k = Math.trunc(INV_LN2 * x + (x < 0 ? -0.5 : 0.5));
+    hi = x - k * LN2_HI;
+    lo = k * LN2_LO;
+    x = hi - lo;
+  } else if (hx < 0x3e300000) {
+    return 1 + x;
+  }
+  const t = x * x;
+  const c = x - t * (P1 + t * (P2 + t * (P3 + t * (P4 + t * P5))));
+  if (k === 0) return 1 - ((x * c) / (c - 2) - x);
+  return scale(1 - (lo - (x * c) / (2 - c) - hi), k);
+}
+
+const TWO54 = 1.8014398509481984e16;
+const LG1 = 6.66666666666673513e-1;
+const LG2 = 3.999999999940941908e-1;
+const LG3 = 2.857142874366239149e-1;
+const LG4 = 2.222219843214978396e-1;
+const LG5 = 1.818357216161805012e-1;
+const LG6 = 1.531383769920937332e-1;
+const LG7 = 1.479819860511658591e-1;
+
+export function log(x: number): number {
+  let hx = highWord(x);
+  const lx = u32[LO];
+  let k = 0;
+  if (hx < 0x00100000) {
+    if (((hx & 0x7fffffff) | lx) === 0) return -Infinity;
+    if (hx < 0) return NaN;
+    k -= 54;
+    x *= TWO54;
+    hx = highWord(x);
+  }
+  if (hx >= 0x7ff00000) return x + x;
+  k += (hx >> 20) - 1023;
+  hx &= 0x000fffff;
+  const i0 = (hx + 0x95f64) & 0x100000;
+  // x (or x/2) brought into [√2/2, √2): the exponent bits replaced, the mantissa kept.
+  f64[0] = x;
+  u32[HI] = hx | (i0 ^ 0x3ff00000);
+  x = f64[0];
+  k += i0 >> 20;
+  const f = x - 1;
+  const dk = k;
+  if ((0x000fffff & (2 + hx)) < 3) {
+    if (f === 0) return k === 0 ? 0 : dk * LN2_HI + dk * LN2_LO;
+    const r = f * f * (0.5 - 0.3333333333333333 * f);
+    return k === 0 ? f - r : dk * LN2_HI - (r - dk * LN2_LO - f);
+  }
+  const s = f / (2 + f);
+  const z = s * s;
+  const w = z * z;
+  const t1 = w * (LG2 + w * (LG4 + w * LG6));
+  const t2 = z * (LG1 + w * (LG3 + w * (LG5 + w * LG7)));
+  const r = t2 + t1;
+  if (((hx - 0x6147a) | (0x6b851 - hx)) > 0) {
+    const hfsq = 0.5 * f * f;
+    return k === 0 ? f - (hfsq - s * (hfsq + r)) : dk * LN2_HI - (hfsq - (s * (hfsq + r) + dk * LN2_LO) - f);
+  }
+  return k === 0 ? f - s * (f - r) : dk * LN2_HI - (s * (f - r) - dk * LN2_LO - f);
+}
+
+// Dekker's exact product: a·b = p + productError(a, b, p) with no fused multiply-add.
+const SPLIT = 134217729;
+function productError(a: number, b: number, p: number): number {
+  let c = SPLIT * a;
+  const ah = c - (c - a);
+  const al = a - ah;
+  c = SPLIT * b;
+  const bh = c - (c - b);
+  const bl = b - bh;
+  return ah * bh - p + ah * bl + al * bh + al * bl;
+}
+
+/**
+ * x^y. Small integer powers by repeated squaring (one rounding per product, within 3 ulp for
+ * the small powers the engine takes); otherwise exp(y·ln x) with ln x carried to about twice double
+ * precision (one Newton step through exp) and y·ln x split exactly, so the error stays near
+ * (1 + |y|/2) ulp instead of growing with |y·ln x|.
+ */
+export function pow(x: number, y: number): number {
+  if (y === 0) return 1;
+  if (x !== x || y !== y) return NaN;
+  if (Number.isInteger(y) && Math.abs(y) <= 64) {
+    let n = Math.abs(y);
+    let base = x;
+    let result = 1;
+    while (n > 0) {
+      if (n & 1) result *= base;
+      n >>>= 1;
+      if (n > 0) base *= base;
+    }
+    return y < 0 ? 1 / result : result;
+  }
+  if (x === 0) return y < 0 ? Infinity : 0;
+  if (x < 0) {
+    if (!Number.isInteger(y)) return NaN;
+    const magnitude = pow(-x, y);
+    return y % 2 === 0 ? magnitude : -magnitude;
+  }
+  if (x === Infinity) return y < 0 ? 0 : Infinity;
+  const l = log(x);
+  const e = exp(l);
+  const lTail = e > 0 && e < Infinity ? (x - e) / e : 0;
+  const head = y * l;
+  if (head > 709.79) return Infinity;
+  if (head < -745.2) return 0;
+  const tail = productError(y, l, head) + y * lTail;
+  const v = exp(head);
+  return v + v * tail;
+}
+
+const S1 = -1.66666666666666324348e-1;
+const S2 = 8.33333333332248946124e-3;
+const S3 = -1.98412698298579493134e-4;
+const S4 = 2.75573137070700676789e-6;
+const S5 = -2.50507602534068634195e-8;
+const S6 = 1.58969099521155010221e-10;
+
+// sin on [−π/4, π/4] for x + y, y the tail of the reduced argument (none when tail is false).
+function kernelSin(x: number, y: number, tail: boolean): number {
+  if (Math.abs(x) < 7.450580596923828e-9) return x;
+  const z = x * x;
+  const v = z * x;
+  const r = S2 + z * (S3 + z * (S4 + z * (S5 + z * S6)));
+  if (!tail) return x + v * (S1 + z * r);
+  return x - (z * (0.5 * y - v * r) - y - v * S1);
+}
+
+const C1 = 4.16666666666666019037e-2;
+const C2 = -1.38888888888741095749e-3;
+const C3 = 2.48015872894767294178e-5;
+const C4 = -2.75573143513906633035e-7;
+const C5 = 2.0875723212981748279e-9;
+const C6 = -1.13596475577881948265e-11;
+
+function kernelCos(x: number, y: number): number {
+  const ax = Math.abs(x);
+  if (ax < 7.450580596923828e-9) return 1;
+  const z = x * x;
+  const r = z * (C1 + z * (C2 + z * (C3 + z * (C4 + z * (C5 + z * C6)))));
+  if (ax < 0.3) return 1 - (0.5 * z - (z * r - x * y));
+  // qx: |x|/4 cut to its high word, so 1 − qx is exact.
+  let qx = 0.28125;
+  if (ax <= 0.78125) {
+    const hx = highWord(ax);
+    f64[0] = 0;
+    u32[HI] = hx - 0x00200000;
+    qx = f64[0];
+  }
+  const hz = 0.5 * z - qx;
+  const a = 1 - qx;
+  return a - (hz - (z * r - x * y));
+}
+
+const INV_PIO2 = 6.36619772367581382433e-1;
+const PIO2_1 = 1.57079632673412561417;
+const PIO2_1T = 6.07710050650619224932e-11;
+const PIO2_2 = 6.0771005063039659766e-11;
+const PIO2_2T = 2.02226624879595063154e-21;
+const PIO2_3 = 2.0222662487111664558e-21;
+const PIO2_3T = 8.47842766036889956997e-32;
+
+const exponentOf = (v: number) => (highWord(v) >> 20) & 0x7ff;
+
+// |x| − n·π/2 as head + tail (π/2 in three 33-bit parts, a further part only when the first ones
+// cancel). n·part is exact for n < 2^20; beyond |x| ≈ 8e5 (never an engine angle) the reduction
+// loses accuracy but not determinism. Returns n; the parts land in reducedHead/Tail.
+let reducedHead = 0;
+let reducedTail = 0;
+function reduce(ax: number): number {
+  const n = Math.floor(ax * INV_PIO2 + 0.5);
+  const j = exponentOf(ax);
+  let r = ax - n * PIO2_1;
+  let w = n * PIO2_1T;
+  let y0 = r - w;
+  if (j - exponentOf(y0) > 16) {
+    let t = r;
+    w = n * PIO2_2;
+    r = t - w;
+    w = n * PIO2_2T - (t - r - w);
+    y0 = r - w;
+    if (j - exponentOf(y0) > 49) {
+      t = r;
+      w = n * PIO2_3;
+      r = t - w;
+      w = n * PIO2_3T - (t - r - w);
+      y0 = r - w;
+    }
+  }
+  reducedHead = y0;
+  reducedTail = r - y0 - w;
+  return n;
+}
+
+const QUARTER_PI_HIGH = 0x3fe921fb;
+
+export function sin(x: number): number {
+  if ((highWord(x) & 0x7fffffff) <= QUARTER_PI_HIGH) return kernelSin(x, 0, false);
+  if (!Number.isFinite(x)) return NaN;
+  const n = reduce(Math.abs(x)) & 3;
+  const h = reducedHead;
+  const t = reducedTail;
+  const s = n === 0 ? kernelSin(h, t, true) : n === 1 ? kernelCos(h, t) : n === 2 ? -kernelSin(h, t, true) : -kernelCos(h, t);
+  return x < 0 ? -s : s;
+}
+
+export function cos(x: number): number {
+  if ((highWord(x) & 0x7fffffff) <= QUARTER_PI_HIGH) return kernelCos(x, 0);
+  if (!Number.isFinite(x)) return NaN;
+  const n = reduce(Math.abs(x)) & 3;
+  const h = reducedHead;
+  const t = reducedTail;
+  return n === 0 ? kernelCos(h, t) : n === 1 ? -kernelSin(h, t, true) : n === 2 ? -kernelCos(h, t) : kernelSin(h, t, true);
+}
+
+/** √(x² + y² + z²) from exactly rounded operations; no overflow guard (engine lengths are metres). */
+export function hypot3(x: number, y: number, z = 0): number {
+  return Math.sqrt(x * x + y * y + z * z);
+}
+
+const Q1 = -3.33333333333331316428e-2;
+const Q2 = 1.58730158725481460165e-3;
+const Q3 = -7.93650757867487942473e-5;
+const Q4 = 4.00821782732936239552e-6;
+const Q5 = -2.01099218183624371326e-7;
+
+/** e^x − 1 without cancellation for small x: fdlibm's s_expm1.c (argument reduction by ln 2, a rational kernel). */
+export function expm1(x: number): number {
+  let hx = highWord(x);
+  const negative = hx < 0;
+  hx &= 0x7fffffff;
+  if (hx >= 0x4043687a) {
+    // |x| ≥ 56·ln 2: −1 below, e^x alone above (and its overflow).
+    if (hx >= 0x7ff00000) return Number.isNaN(x) ? x : negative ? -1 : x;
+    if (negative) return -1;
+    if (x > 7.09782712893383973096e2) return Infinity;
+  }
+  let k = 0;
+  let c = 0;
+  if (hx > 0x3fd62e42) {
+    // |x| > ½ ln 2: x = k·ln 2 + r with r split into hi − lo.
+    let hi: number;
+    let lo: number;
+    if (hx < 0x3ff0a2b2) {
+      k = negative ? -1 : 1;
+      hi = negative ? x + LN2_HI : x - LN2_HI;
+      lo = negative ? -LN2_LO : LN2_LO;
+    } else {
+      k = Math.trunc(INV_LN2 * x + (negative ? -0.5 : 0.5));
+      hi = x - k * LN2_HI;
+      lo = k * LN2_LO;
+    }
+    x = hi - lo;
+    c = hi - x - lo;
+  } else if (hx < 0x3c900000) {
+    return x;
+  }
+  const hfx = 0.5 * x;
+  const hxs = x * hfx;
+  const r1 = 1 + hxs * (Q1 + hxs * (Q2 + hxs * (Q3 + hxs * (Q4 + hxs * Q5))));
+  const t = 3 - r1 * hfx;
+  let e = hxs * ((r1 - t) / (6 - x * t));
+  if (k === 0) return x - (x * e - hxs);
+  e = x * (e - c) - c;
+  e -= hxs;
+  if (k === -1) return 0.5 * (x - e) - 0.5;
+  if (k === 1) return x < -0.25 ? -2 * (e - (x + 0.5)) : 1 + 2 * (x - e);
+  if (k <= -2 || k > 56) return scale(1 - (e - x), k) - 1;
+  if (k < 20) return scale(1 - POW2[1022 - k] - (e - x), k);
+  return scale(x - (e + POW2[1022 - k]) + 1, k);
+}
