@@ -123,21 +123,32 @@ export type AgentData = z.infer<typeof agentDataSchema>;
 
 export { CONTROL_TIERS, type ControlTier } from '../vocabulary/control-tiers';
 
+// The fields without their defaults: an update leaves out what it does not change, and a default
+// there would quietly reset it (a name-only edit used to clear the agent).
+const scenarioMetaFields = {
+  workstationId: z.number().int().positive(),
+  agentId: z.number().int().positive().nullable(),
+  sizeProfileId: z.number().int().positive().nullable(),
+  name,
+  controlDescription: z.string().trim().max(500),
+  controlTier: z.enum(CONTROL_TIERS),
+};
+
 export const scenarioMetaSchema = z
   .object({
-    workstationId: z.number().int().positive(),
-    agentId: z.number().int().positive().nullable().default(null),
-    sizeProfileId: z.number().int().positive().nullable().default(null),
-    name,
-    controlDescription: z.string().trim().max(500).default(''),
-    controlTier: z.enum(CONTROL_TIERS).default('none'),
+    ...scenarioMetaFields,
+    agentId: scenarioMetaFields.agentId.default(null),
+    sizeProfileId: scenarioMetaFields.sizeProfileId.default(null),
+    controlDescription: scenarioMetaFields.controlDescription.default(''),
+    controlTier: scenarioMetaFields.controlTier.default('none'),
   })
   .strict();
 
 export const scenarioCreateSchema = scenarioMetaSchema.extend({ input: scenarioSchema }).strict();
 export type ScenarioCreate = z.infer<typeof scenarioCreateSchema>;
 
-export const scenarioUpdateSchema = scenarioMetaSchema
+export const scenarioUpdateSchema = z
+  .object(scenarioMetaFields)
   .partial()
   .extend({ input: scenarioSchema.optional(), version: z.number().int().positive() })
   .strict();

@@ -117,6 +117,8 @@ describe('scenarios', () => {
     const first = await eng.patch(`/api/scenarios/${scenarioId}`).send({ version: 1, name: 'Flanged hood, renamed' });
     expect(first.status).toBe(200);
     expect(first.body.version).toBe(2);
+    // A name-only edit leaves the agent and the control as they were (defaults must not reset them).
+    expect(first.body).toMatchObject({ agentId, agentName: 'Test quartz', controlTier: 'engineering' });
     const stale = await eng.patch(`/api/scenarios/${scenarioId}`).send({ version: 1, name: 'Lost edit?' });
     expect(stale.status).toBe(409);
     expect(stale.body.code).toBe('version_conflict');
