@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../helpers/test-app';
+import { saveLowEnergyRun } from '../helpers/run-engine';
 
 let t: TestApp;
 let benchId: number;
@@ -11,7 +12,6 @@ const boardOf = async (ws: number) => {
 };
 
 beforeAll(async () => {
-  // The same demo workspace and particle count the approval tests use, where the slot hood's run may be approved.
   t = await createTestApp({ demoWorkspace: true, particles: 2000 });
   const wss = await t.db('workstations').orderBy('id');
   benchId = wss[0].id;
@@ -33,13 +33,11 @@ describe('moving a scenario to another workstation', () => {
     expect(JSON.parse(audit.detail).workstationId).toEqual({ from: benchId, to: otherBenchId });
   });
 
-  // Engine 2.0 turned the stone-bench demo options this test approves to Act (the grinder's jet beats both hoods),
-  // so an approval is refused before the rule under test is reached: to be moved onto the bakery's Watch options.
-  it.skip('refuses to move the approved option with 409, and the old station keeps its board and approval', async () => {
+  it('refuses to move the approved option with 409, and the old station keeps its board and approval', { timeout: 120_000 }, async () => {
     const eng = await t.signIn('engineer');
     const slot = await scenarioAt(benchId, 'Slot hood');
-    const run = await t.db('runs').where({ scenario_id: slot.id }).first();
-    expect((await eng.post(`/api/scenarios/${slot.id}/approve`).send({ runId: run.id })).status).toBe(201);
+    const { run } = await saveLowEnergyRun(eng, slot.id, 2000);
+    expect((await eng.post(`/api/scenarios/${slot.id}/approve`).send({ runId: run.body.id })).status).toBe(201);
     const before = await boardOf(benchId);
     expect(before).toMatchObject({ control: 'Slot hood' });
     expect(before.banner).not.toBe('act');
@@ -60,9 +58,7 @@ describe('moving a scenario to another workstation', () => {
     expect(await t.db('approvals').where({ workstation_id: benchId }).whereNull('superseded_at').count({ n: '*' })).toEqual([{ n: 1 }]);
   });
 
-  // Engine 2.0 turned the stone-bench demo options this test approves to Act (the grinder's jet beats both hoods),
-  // so an approval is refused before the rule under test is reached: to be moved onto the bakery's Watch options.
-  it.skip('still lets the approved option be edited where it is', async () => {
+  it('still lets the approved option be edited where it is', async () => {
     const eng = await t.signIn('engineer');
     const slot = await scenarioAt(benchId, 'Slot hood');
     const res = await eng
@@ -72,9 +68,7 @@ describe('moving a scenario to another workstation', () => {
     expect(res.body).toMatchObject({ workstationId: benchId, status: 'approved', name: 'Slot hood (renamed)' });
   });
 
-  // Engine 2.0 turned the stone-bench demo options this test approves to Act (the grinder's jet beats both hoods),
-  // so an approval is refused before the rule under test is reached: to be moved onto the bakery's Watch options.
-  it.skip('lets a duplicate of the approved option go to the other workstation as a draft', async () => {
+  it('lets a duplicate of the approved option go to the other workstation as a draft', async () => {
     const eng = await t.signIn('engineer');
     const slot = await t.db('scenarios').where({ workstation_id: benchId, status: 'approved' }).first();
     const copy = (await eng.post(`/api/scenarios/${slot.id}/duplicate`).send({ name: 'Slot hood for the other bench' })).body;
