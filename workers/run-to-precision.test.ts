@@ -75,6 +75,8 @@ function syntheticBatch(p: PreparedScenario, seed: number, k: number): BatchResu
     zoneResidence_s: new Float64Array(p.timeBins).fill(residence),
     zoneHistories: Int32Array.of(50),
     particleSteps: 1,
+    splitCopies: 0,
+    rouletteRemoved: 0,
     wallTime_s: 0,
   };
 }

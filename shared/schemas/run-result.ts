@@ -12,6 +12,9 @@ const share = z
   .gte(-1e-9)
   .lte(1 + 1e-9);
 const count = z.number().int().gte(0);
+// A fate's share is an estimate with variance reduction (Russian roulette survivors carry the weight
+// of those removed), so in a small run it may pass 1 a little; twice the emission is beyond any noise.
+const fateShare = z.number().finite().gte(-1e-9).lte(2);
 
 function perFraction<T extends z.ZodType>(schema: T) {
   return Object.fromEntries(FRACTIONS.map((f) => [f, schema])) as Record<Fraction, T>;
@@ -186,7 +189,7 @@ export const runResultSchema = z.object({
     series: z.object({ time_s: numberList, binWidth_s: z.number().positive().optional(), ...perFraction(seriesBandSchema) }),
   }),
   // Results of engines before 2.0 had no wall deposition: their walls share reads 0.
-  fate: z.object({ emitted_mg: conc, ...perFate(share), walls: share.default(0) }),
+  fate: z.object({ emitted_mg: conc, ...perFate(fateShare), walls: fateShare.default(0) }),
   /** Absent in results of engines before 1.4.0, whose bins renormalised it away (unknown). */
   massLeftOut: massLeftOutSchema.optional(),
   limit: resultLimitSchema.optional(),

@@ -135,6 +135,8 @@ const runSchema = z.object({
   maxTimeStep_s: positive().default(2),
   stepFraction: finite({ gt: 0 }).lte(1).default(0.5),
   precision: precisionSchema.optional(),
+  /** Splitting near the breathing zone and Russian roulette deep in a hood's capture region; false runs the plain (analog) walk, kept for checks. */
+  varianceReduction: z.boolean().default(true),
 });
 
 const baseSchema = z.object({

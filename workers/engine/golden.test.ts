@@ -9,12 +9,12 @@ import { workstation } from './workstation.test-helper';
 // results changed for the same scenario and seed: bump ENGINE_VERSION and say why in the commit.
 // Every part of the model is on: the release jet, young dust's growing diffusivity, collecting walls.
 describe('golden regression, seed 2024', () => {
-  it('reproduces the stored results', () => {
+  it('reproduces the stored results of the plain walk (run.varianceReduction false)', () => {
     const s = testScenario({
       ...workstation,
       room: { ...workstation.room, wallDeposition: true },
       source: { ...workstation.source, releaseType: 'active' },
-      run: { particles: 1000, batches: 4, seed: 2024 },
+      run: { particles: 1000, batches: 4, seed: 2024, varianceReduction: false },
     });
     const p = prepareScenario(parseScenario(s));
     const r = combineBatches(p, runAll(p));
@@ -26,5 +26,27 @@ describe('golden regression, seed 2024', () => {
     expect(r.fate.exhausted).toBeCloseTo(0.33434403757302567, 12);
     expect(r.fate.walls).toBeCloseTo(0, 12);
     expect(r.fate.airborne).toBeCloseTo(0.3003696023122655, 12);
+  });
+
+  it('reproduces the stored results with variance reduction (the default), a respirable limit steering the size allocation', () => {
+    const s = testScenario({
+      ...workstation,
+      room: { ...workstation.room, wallDeposition: true },
+      source: { ...workstation.source, releaseType: 'active' },
+      limit: { fraction: 'respirable', value_mgPerM3: 0.1 },
+      run: { particles: 1000, batches: 4, seed: 2024 },
+    });
+    const p = prepareScenario(parseScenario(s));
+    const batches = runAll(p);
+    const r = combineBatches(p, batches);
+    expect(r.performance.particleSteps).toBe(815427);
+    expect(batches.reduce((a, b) => a + b.splitCopies, 0)).toBe(2122);
+    expect(batches.reduce((a, b) => a + b.rouletteRemoved, 0)).toBe(2232);
+    expect(r.breathingZone.fractions.respirable.taskMean_mgPerM3).toBeCloseTo(0.2698864048591002, 12);
+    expect(r.breathingZone.fractions.total.taskMean_mgPerM3).toBeCloseTo(0.8164353966028874, 12);
+    expect(r.fate.captured).toBeCloseTo(0.2651529717580447, 12);
+    expect(r.fate.settled).toBeCloseTo(0.08941049100009972, 12);
+    expect(r.fate.exhausted).toBeCloseTo(0.2880654056054992, 12);
+    expect(r.fate.airborne).toBeCloseTo(0.31582922680809433, 12);
   });
 });

@@ -5,6 +5,7 @@ import type { ParticleArrays } from './release';
 import type { Xoshiro128 } from './rng';
 import { stepRule } from './step-rule';
 import type { PreparedScenario } from './types';
+import { dropChildRow, swapRows } from './importance';
 
 export const NORMAL_BLOCK = 3 * 2048;
 
@@ -39,8 +40,14 @@ export const SCALAR = {
   lagrangianTime: 21,
   jet: 22,
   wallDeposition: 23,
+  reduce: 24,
+  nearFace: 25,
+  leaveFace: 26,
+  pecletIn: 27,
+  pecletOut: 28,
+  deepFactor: 29,
 } as const;
-const SCALAR_COUNT = 24;
+const SCALAR_COUNT = 30;
 // Steps whose hood drift uses under a fifth of the drift limit keep Euler: their lag is negligible.
 const MIDPOINT_SHARE = 0.2;
 
@@ -48,6 +55,8 @@ const MIDPOINT_SHARE = 0.2;
 export class Kernel {
   readonly normals = new Float64Array(NORMAL_BLOCK);
   readonly field = new Float64Array(8);
+  /** The air's drift at a point and the step rule's length scales there (walk.ts airAt). */
+  readonly air = new Float64Array(6);
   readonly settling: Float64Array;
   /** Relaxation time τ = V_TS/g per bin; bins with τ above the shortest step carry a velocity. */
   readonly relaxation: Float64Array;
@@ -78,9 +87,21 @@ export class Kernel {
   readonly particleMass_mg: Float64Array;
   readonly depositionNx: number;
   readonly depositionNy: number;
+  /** Variance reduction's importance map (workers/engine/importance.ts), per tier. */
+  readonly inward2: Float64Array;
+  readonly outward2: Float64Array;
+  readonly target: Float64Array;
+  readonly exhaustRate_perS: number;
+  readonly wrappedWallRate_perS: Float64Array;
   normalIndex = NORMAL_BLOCK;
   steps = 0;
+  /** Rows 0…live−1 walk; rows live…rows−1 hold released particles that have ended. */
   live: number;
+  rows: number;
+  /** The target weight the walk left for reweight(). */
+  pendingTarget = 1;
+  copies = 0;
+  rouletteKilled = 0;
 
   constructor(
     p: PreparedScenario,
@@ -133,8 +154,21 @@ export class Kernel {
     s[SCALAR.lagrangianTime] = p.lagrangianTime_s;
     s[SCALAR.jet] = p.jet ? 1 : 0;
     s[SCALAR.wallDeposition] = p.surfaces.enabled ? 1 : 0;
+    const plan = p.varianceReduction;
+    // Final states per particle (keepParticles) only mean something for the plain walk.
+    s[SCALAR.reduce] = plan.enabled && !p.keepParticles ? 1 : 0;
+    s[SCALAR.nearFace] = plan.nearFace_m;
+    s[SCALAR.leaveFace] = plan.leaveFace_m;
+    s[SCALAR.pecletIn] = plan.pecletIn;
+    s[SCALAR.pecletOut] = plan.pecletOut;
+    s[SCALAR.deepFactor] = plan.deepFactor;
+    this.inward2 = plan.inward2;
+    this.outward2 = plan.outward2;
+    this.target = plan.target;
+    this.exhaustRate_perS = p.exhaustRate_perS;
+    this.wrappedWallRate_perS = p.surfaces.wrappedWallRate_perS;
     this.lastBin = p.timeBins - 1;
-    this.ids = Int32Array.from({ length: a.count }, (_, i) => i);
+    this.ids = Int32Array.from({ length: a.capacity }, (_, i) => i);
     this.fate = new Int8Array(a.count).fill(-1);
     this.zoneVisited = new Uint8Array(a.count);
     this.depositionNx = p.deposition.nx;
@@ -142,6 +176,7 @@ export class Kernel {
     this.deposition_mg = new Float64Array(p.deposition.nx * p.deposition.ny);
     this.particleMass_mg = p.bins.particleMass_mg;
     this.live = a.count;
+    this.rows = a.count;
     // Frames before a particle exists stay NaN: its first frame is the first one at or after release.
     for (let i = 0; i < a.count; i++) {
       const sl = a.slot[i];
@@ -156,38 +191,22 @@ export class Kernel {
 // A jet of zero speed keeps the kernel's shape the same with and without one.
 const NO_JET: RoundJet = { ox_m: 0, oy_m: 0, oz_m: 0, ex: 0, ey: 0, ez: 1, speed_mPerS: 0, diameter_m: 1 };
 
-function swap(arr: Float64Array | Int32Array, i: number, j: number): void {
-  const v = arr[i];
-  arr[i] = arr[j];
-  arr[j] = v;
-}
-
 /**
- * Tallies particle i's fate and keeps live particles packed at the front: it swaps with the last
- * live one, so its final state ends up behind the live block and no pass visits it again.
+ * Tallies particle i's fate (its mass times its weight) and keeps live particles packed at the
+ * front: it swaps with the last live one, so its final state ends up behind the live block and no
+ * pass visits it again. A split copy's row is dropped instead.
  */
 export function retire(k: Kernel, i: number, f: number): void {
   const a = k.a;
-  const mass = k.particleMass_mg[a.bin[i]];
+  const mass = k.particleMass_mg[a.bin[i]] * a.w[i];
   k.fateMass_mg[f] += mass;
   if (f === 1) {
     const ix = Math.min(k.depositionNx - 1, Math.floor((a.x[i] / k.scalars[SCALAR.L]) * k.depositionNx));
     const iy = Math.min(k.depositionNy - 1, Math.floor((a.y[i] / k.scalars[SCALAR.W]) * k.depositionNy));
     k.deposition_mg[ix * k.depositionNy + iy] += mass;
   }
-  k.fate[k.ids[i]] = f;
   const last = --k.live;
-  swap(a.x, i, last);
-  swap(a.y, i, last);
-  swap(a.z, i, last);
-  swap(a.t, i, last);
-  swap(a.release, i, last);
-  swap(a.exhaustAt, i, last);
-  swap(a.wallAt, i, last);
-  swap(a.ux, i, last);
-  swap(a.uy, i, last);
-  swap(a.uz, i, last);
-  swap(a.bin, i, last);
-  swap(a.slot, i, last);
-  swap(k.ids, i, last);
+  if (!a.child[i]) k.fate[k.ids[i]] = f;
+  swapRows(k, i, last);
+  if (a.child[last]) dropChildRow(k, last);
 }

@@ -7,9 +7,10 @@ import { releaseJet } from './release-jet';
 import { surfaceDeposition } from './surfaces';
 import { zoneVolume_m3 } from './breathing-zone';
 import { packHoods } from './hood-field';
-import { buildSizeBins } from './size-bins';
+import { CONVENTIONS, buildSizeBins } from './size-bins';
 import type { PreparedScenario } from './types';
 import { cos, hypot3, sin } from './det-math';
+import { importancePlan } from './importance';
 
 export const TIME_BINS = 120;
 // Taylor's D = σ_u²·T_L with σ_u ≈ 0.1 m/s, a typical turbulent speed in a ventilated workroom [P] common practice.
@@ -42,7 +43,9 @@ export function prepareScenario(s: Scenario): PreparedScenario {
   const duration_s = s.run.duration_s ?? s.source.emission.taskDuration_min * 60;
   const emission = emissionPlan(s.source, duration_s);
   const particlesPerBatch = Math.max(1, Math.ceil(s.run.particles / s.run.batches));
-  const bins = buildSizeBins(s.dust, air, particlesPerBatch, emission.emitted_mg, eddy);
+  // Variance reduction also spends particles where the limit's fraction lies (size-bins.ts allocateParticles).
+  const emphasis = s.run.varianceReduction && s.limit ? CONVENTIONS[s.limit.fraction] : undefined;
+  const bins = buildSizeBins(s.dust, air, particlesPerBatch, emission.emitted_mg, eddy, emphasis);
   const direction = (s.room.draftDirection_deg * Math.PI) / 180;
   const draft_mPerS: [number, number] = [s.room.draftSpeed_mPerS * cos(direction), s.room.draftSpeed_mPerS * sin(direction)];
   const surfaces = surfaceDeposition(s, bins, air, draft_mPerS);
@@ -110,6 +113,12 @@ export function prepareScenario(s: Scenario): PreparedScenario {
       wallDeposition: s.room.wallDeposition,
       frictionVelocity_mPerS: surfaces.frictionVelocity_mPerS,
     },
+    varianceReduction: importancePlan(
+      s.run.varianceReduction,
+      w.radius_m,
+      hypot3(s.source.x_m - w.x_m, s.source.y_m - w.y_m, s.source.z_m - w.z_m) - w.radius_m,
+      s.hoods.length,
+    ),
     keepParticles: false,
   };
 }

@@ -3,7 +3,10 @@ import type { PreparedScenario } from './types';
 import { cos, log, sin } from './det-math';
 
 export interface ParticleArrays {
+  /** Particles released (source histories); rows 0…count−1 hold them once the walk is over. */
   count: number;
+  /** Rows allocated: the released particles plus room for split copies (variance reduction). */
+  capacity: number;
   x: Float64Array;
   y: Float64Array;
   z: Float64Array;
@@ -18,6 +21,19 @@ export interface ParticleArrays {
   uz: Float64Array;
   bin: Int32Array;
   slot: Int32Array;
+  /** Statistical weight: 1 at release; splitting divides it, Russian roulette survivors carry the killed ones'. */
+  w: Float64Array;
+  /** Importance level (breathing-zone shell) and whether the particle is deep in a hood's capture region. */
+  level: Int8Array;
+  deep: Uint8Array;
+  /** 1 for a split copy, which has no row of its own once it ends. */
+  child: Uint8Array;
+}
+
+// Room for split copies alive at once beside the released particles, capped so a million-particle
+// batch stays within its memory budget; when the store is full a particle simply does not split.
+export function splitRoom(count: number, reduced: boolean): number {
+  return reduced ? Math.min(2 * count + 256, 32_768) : 0;
 }
 
 function clamp(v: number, hi: number): number {
@@ -30,20 +46,26 @@ function clamp(v: number, hi: number): number {
 // Walls that a draft wraps through (periodic sides) collect as such a loss per volume too.
 export function releaseParticles(p: PreparedScenario, rng: Xoshiro128): ParticleArrays {
   const n = p.bins.particlesPerBatch.reduce((a, v) => a + v, 0);
+  const c = n + splitRoom(n, p.varianceReduction.enabled && !p.keepParticles);
   const a: ParticleArrays = {
     count: n,
-    x: new Float64Array(n),
-    y: new Float64Array(n),
-    z: new Float64Array(n),
-    t: new Float64Array(n),
-    release: new Float64Array(n),
-    exhaustAt: new Float64Array(n),
-    wallAt: new Float64Array(n).fill(Infinity),
-    ux: new Float64Array(n).fill(NaN),
-    uy: new Float64Array(n).fill(NaN),
-    uz: new Float64Array(n).fill(NaN),
-    bin: new Int32Array(n),
-    slot: new Int32Array(n).fill(-1),
+    capacity: c,
+    x: new Float64Array(c),
+    y: new Float64Array(c),
+    z: new Float64Array(c),
+    t: new Float64Array(c),
+    release: new Float64Array(c),
+    exhaustAt: new Float64Array(c),
+    wallAt: new Float64Array(c).fill(Infinity),
+    ux: new Float64Array(c).fill(NaN),
+    uy: new Float64Array(c).fill(NaN),
+    uz: new Float64Array(c).fill(NaN),
+    bin: new Int32Array(c),
+    slot: new Int32Array(c).fill(-1),
+    w: new Float64Array(c).fill(1),
+    level: new Int8Array(c),
+    deep: new Uint8Array(c),
+    child: new Uint8Array(c),
   };
   const { source: s, room, emission } = p;
   const events = emission.eventTimes_s;

@@ -29,6 +29,8 @@ export function runBatch(p: PreparedScenario, batchIndex: number, onProgress?: S
     trajectoryFates: Int8Array.from(sampled, (i) => (i >= 0 ? tallies.fate[i] : -1)),
     trajectoryEnds,
     particleSteps: tallies.particleSteps,
+    splitCopies: tallies.copies,
+    rouletteRemoved: tallies.rouletteRemoved,
     wallTime_s: (Date.now() - started) / 1000,
   };
   if (p.keepParticles) {

@@ -16,12 +16,29 @@ export { BINS_PER_DECADE, SIZE_MAX_AERODYNAMIC_m, SIZE_MIN_PHYSICAL_m, binEdges_
 
 type Dust = Scenario['dust'];
 
+/** The ISO 7708 / EN 481 convention of each fraction (total takes every size). */
+export const CONVENTIONS: Record<(typeof FRACTIONS)[number], (aerodynamic_m: number) => number> = {
+  total: () => 1,
+  inhalable: inhalableFraction,
+  thoracic: thoracicFraction,
+  respirable: respirableFraction,
+};
+
 // Defensive mixture: half the particles follow mass, half are spread evenly over bins that carry
-// mass, so small respirable bins get particles even when coarse dust dominates the mass.
-export function allocateParticles(shares: Float64Array, particles: number): Int32Array {
+// mass, so small respirable bins get particles even when coarse dust dominates the mass. With an
+// emphasis (variance reduction: the limit fraction's convention weight per bin), half follow each
+// bin's contribution to that fraction, a quarter mass and a quarter go evenly: each bin's particle
+// mass changes with its count, so the estimate stays unbiased whatever the split.
+export function allocateParticles(shares: Float64Array, particles: number, emphasis?: Float64Array): Int32Array {
   const relevant = shares.map((m) => (m > 1e-6 ? 1 : 0));
   const nRelevant = relevant.reduce((a, v) => a + v, 0);
-  const target = shares.map((m, b) => particles * (0.5 * m + (0.5 * relevant[b]) / nRelevant));
+  const weighted = emphasis ? shares.map((m, b) => (relevant[b] ? m * emphasis[b] : 0)) : undefined;
+  const weightedSum = weighted ? weighted.reduce((a, v) => a + v, 0) : 0;
+  const target = shares.map((m, b) =>
+    weighted && weightedSum > 0
+      ? particles * ((0.5 * weighted[b]) / weightedSum + 0.25 * m + (0.25 * relevant[b]) / nRelevant)
+      : particles * (0.5 * m + (0.5 * relevant[b]) / nRelevant),
+  );
   const counts = Int32Array.from(target, (v) => Math.floor(v));
   let left = particles - counts.reduce((a, v) => a + v, 0);
   const order = [...target.keys()].sort((a, b) => target[b] - Math.floor(target[b]) - (target[a] - Math.floor(target[a])) || a - b);
@@ -39,7 +56,14 @@ export function allocateParticles(shares: Float64Array, particles: number): Int3
  * the whole emission) and cross-checks all speak of the same simulated mass, and the left-out share
  * travels to the result beside them; fates plus the left-out share make one.
  */
-export function buildSizeBins(dust: Dust, air: AirProperties, particles: number, emitted_mg: number, eddy_m2PerS: number): SizeBins {
+export function buildSizeBins(
+  dust: Dust,
+  air: AirProperties,
+  particles: number,
+  emitted_mg: number,
+  eddy_m2PerS: number,
+  emphasis?: (aerodynamic_m: number) => number,
+): SizeBins {
   const edges = binEdges_m(dust, air);
   const { shares, below, above } = profileShares(dust, edges, air);
   const simulated = shares.reduce((a, m) => a + m, 0);
@@ -47,7 +71,11 @@ export function buildSizeBins(dust: Dust, air: AirProperties, particles: number,
     throw new RangeError(
       `dust.sizeProfile: no mass between 1 nm physical and 100 µm aerodynamic diameter, got ${below} below and ${above} above`,
     );
-  const counts = allocateParticles(shares, particles);
+  const counts = allocateParticles(
+    shares,
+    particles,
+    emphasis && Float64Array.from(shares, (_, b) => emphasis(Math.sqrt(edges[b] * edges[b + 1]))),
+  );
   // Bins that got no particle (tiny runs only) give up their mass to the other simulated bins; the
   // cross-checks read profileMassFraction, which does not depend on this.
   const covered = shares.reduce((a, m, b) => a + (counts[b] > 0 ? m : 0), 0);
@@ -72,7 +100,7 @@ export function buildSizeBins(dust: Dust, air: AirProperties, particles: number,
       upperAerodynamic_m: SIZE_MAX_AERODYNAMIC_m,
     },
   };
-  const conventions = [() => 1, inhalableFraction, thoracicFraction, respirableFraction];
+  const conventions = FRACTIONS.map((f) => CONVENTIONS[f]);
   for (let b = 0; b < n; b++) {
     const da = Math.sqrt(edges[b] * edges[b + 1]);
     const dp = physicalDiameter(da, dust.density_kgPerM3, dust.shapeFactor, air);

@@ -3,6 +3,7 @@ import type { ParticleArrays } from './release';
 import type { Xoshiro128 } from './rng';
 import type { PreparedScenario } from './types';
 import { walk } from './walk';
+import { REWEIGHT, reweight, tierAt } from './importance';
 
 export interface Tallies {
   zoneResidence_s: Float64Array;
@@ -12,6 +13,9 @@ export interface Tallies {
   fate: Int8Array;
   zoneVisited: Uint8Array;
   particleSteps: number;
+  /** Split copies made and particles that roulette removed (variance reduction). */
+  copies: number;
+  rouletteRemoved: number;
 }
 
 export type StepProgress = (fraction: number, particleSteps: number) => void;
@@ -20,11 +24,19 @@ const PROGRESS_EVERY = 1_000_000;
 
 export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshiro128, onProgress?: StepProgress): Tallies {
   const k = new Kernel(p, a, rng);
+  const zone = p.zone;
+  for (let i = 0; i < a.count; i++) {
+    const r2 = (a.x[i] - zone.x_m) ** 2 + (a.y[i] - zone.y_m) ** 2 + (a.z[i] - zone.z_m) ** 2;
+    a.level[i] = tierAt(p.varianceReduction, r2);
+  }
   let nextReport = PROGRESS_EVERY;
   while (k.live > 0) {
+    // Copies that reweight() adds join the live block's end and walk in the same pass; a particle
+    // that roulette removes leaves another live one in its row.
     for (let i = 0; i < k.live;) {
       const f = walk(k, i);
-      if (f < 0) i++;
+      if (f === -1) i++;
+      else if (f === REWEIGHT) reweight(k, i);
       else retire(k, i, f);
     }
     if (onProgress && k.steps >= nextReport) {
@@ -41,12 +53,17 @@ export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshi
     fate: k.fate,
     zoneVisited: k.zoneVisited,
     particleSteps: k.steps,
+    copies: k.copies,
+    rouletteRemoved: k.rouletteKilled,
   };
 }
 
+// Released particles only: a split copy's work is part of its source particle's.
 function progressFraction(a: ParticleArrays, live: number, duration: number): number {
-  let done = a.count - live;
+  let done = a.count;
   for (let i = 0; i < live; i++) {
+    if (a.child[i]) continue;
+    done--;
     const end = Math.min(duration, a.exhaustAt[i]);
     done += end > a.release[i] ? (a.t[i] - a.release[i]) / (end - a.release[i]) : 1;
   }

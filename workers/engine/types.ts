@@ -1,3 +1,4 @@
+import type { ImportancePlan } from './importance';
 import type { RoundJet } from '../../shared/physics/round-jet';
 import type { CaptureVerdictWord } from '../../shared/physics/capture-verdict';
 import type { MassLeftOut, RunResult } from '../../shared/schemas/run-result';
@@ -84,7 +85,9 @@ export interface PreparedScenario {
   };
   /** What the engine assumed beyond the inputs, reported with the result. */
   model: z.output<typeof modelSchema>;
-  /** Tests ask for the final particle states; normal runs leave it off. */
+  /** run.varianceReduction: splitting and Russian roulette over an importance map (workers/engine/importance.ts). */
+  varianceReduction: ImportancePlan;
+  /** Tests ask for the final particle states (the plain walk then, whatever varianceReduction says); normal runs leave it off. */
   keepParticles: boolean;
 }
 
@@ -115,6 +118,9 @@ export interface BatchResult {
   /** Per sampled particle: release time (s) and point (m), end time and point; NaN for an unused slot. */
   trajectoryEnds: Float32Array;
   particleSteps: number;
+  /** Variance reduction: copies that splitting made and particles that Russian roulette removed. */
+  splitCopies: number;
+  rouletteRemoved: number;
   wallTime_s: number;
   particles?: ParticleStates;
 }

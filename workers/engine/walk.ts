@@ -4,6 +4,7 @@ import { addHoodVelocity, faceEntered, reflectAtFaces } from './hood-field';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
 import { fillNormals } from './ziggurat';
 import { exp, expm1 } from './det-math';
+import { REWEIGHT, WINDOW } from './importance';
 
 // Long enough that a visit's set-up is small beside its steps, short enough that a pass over the
 // live particles still reports progress within a batch.
@@ -18,8 +19,9 @@ const FATE_WALLS = 4;
 const JET_WIDTH_GROWTH = +JET_SPREADING_RATE;
 
 /**
- * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (FATES order) or −1 while it
- * lives. Allocation-free arithmetic only.
+ * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (FATES order), −1 while it
+ * lives, or REWEIGHT when variance reduction must split it or play roulette before its next step
+ * (its weight is then outside the window around k.pendingTarget). Allocation-free arithmetic only.
  *
  * One step (Itô, operator splitting): the drift (draft, hood sink panels, release jet, the jet's
  * ∇D and settling) moves the particle and is the only thing that can carry it through a hood face
@@ -52,18 +54,17 @@ export function walk(k: Kernel, i: number): number {
   const roomD = sc[SCALAR.roomDiffusivity];
   const lagrangian = sc[SCALAR.lagrangianTime];
   const youngUntil = born + YOUNG_AGE_TIMES * lagrangian;
-  const hasJet = sc[SCALAR.jet] > 0 ? 1 : 0;
   const collects = sc[SCALAR.wallDeposition] > 0 ? 1 : 0;
   const wallV = k.wallVelocity[b],
     floorV = k.floorExtraVelocity[b],
     ceilingV = k.ceilingVelocity[b];
   const field = k.field;
+  const air = k.air;
   const normals = k.normals;
   const R = sc[SCALAR.R];
   const R2 = R * R;
   const nh = k.hoodCount;
   const hoods = k.hoods;
-  const jet = k.jet;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
   const draftX = sc[SCALAR.draftX],
@@ -91,6 +92,21 @@ export function walk(k: Kernel, i: number): number {
   const normalBlock = NORMAL_BLOCK | 0;
   const inertial = tau > minStep_s ? 1 : 0;
   const sqrtPi = Math.sqrt(Math.PI);
+  // Variance reduction (importance.ts); the animated sample walks plainly so every path is whole.
+  const reduce = sc[SCALAR.reduce] > 0 && a.slot[i] < 0 ? 1 : 0;
+  const w = a.w[i];
+  let tier = a.level[i];
+  let deep = a.deep[i];
+  const inward2 = k.inward2,
+    outward2 = k.outward2,
+    target = k.target;
+  let inR2 = inward2[tier],
+    outR2 = outward2[tier];
+  const nearFace_m = sc[SCALAR.nearFace],
+    leaveFace_m = sc[SCALAR.leaveFace],
+    pecletIn = sc[SCALAR.pecletIn],
+    pecletOut = sc[SCALAR.pecletOut],
+    deepFactor = sc[SCALAR.deepFactor];
   let n = k.normalIndex;
   let fate = -1;
   let steps = 0;
@@ -106,28 +122,12 @@ export function walk(k: Kernel, i: number): number {
       if (d < 0) d = -d;
       if (d < zoneFloor_m) d = zoneFloor_m;
     }
-    field[0] = draftX;
-    field[1] = draftY;
-    field[2] = 0;
-    field[3] = Infinity;
-    if (nh > 0) addHoodVelocity(hoods, nh, x, y, z, field);
-    let vx = field[0];
-    let vy = field[1];
-    let vz = field[2];
-    const dh = field[3] < hoodFloor_m ? hoodFloor_m : field[3];
-    let jetD = 0;
-    let dj = Infinity;
-    if (hasJet) {
-      jetVelocity(jet, x, y, z, field);
-      vx += field[0];
-      vy += field[1];
-      vz += field[2];
-      jetD = jetSpread(jet, x, y, z, field);
-      vx += field[1];
-      vy += field[2];
-      vz += field[3];
-      dj = field[4];
-    }
+    let jetD = airAt(k, x, y, z, 1);
+    let vx = air[0];
+    let vy = air[1];
+    let vz = air[2];
+    const dh = air[3] < hoodFloor_m ? hoodFloor_m : air[3];
+    const dj = air[4];
     const dMax = brownian + roomD + jetD;
     let speed = Math.abs(vx) + Math.abs(vy) + Math.abs(vz - vs);
     if (inertial) {
@@ -139,6 +139,42 @@ export function walk(k: Kernel, i: number): number {
       }
       const own = Math.abs(ux) + Math.abs(uy) + Math.abs(uz);
       if (own > speed) speed = own;
+    }
+    if (reduce) {
+      let changed = 0;
+      if (r2 < inR2) {
+        tier++;
+        changed = 1;
+      } else if (r2 > outR2) {
+        tier--;
+        changed = 1;
+      }
+      if (changed) {
+        inR2 = inward2[tier];
+        outR2 = outward2[tier];
+      }
+      // Deep in a capture region: the hood's own drift over the distance to its face beats
+      // diffusion (a local Péclet number), and the particle is no nearer the zone than the source.
+      const carried = air[5] * dh;
+      const isDeep = deep
+        ? dh < leaveFace_m && carried > pecletOut * dMax
+          ? 1
+          : 0
+        : dh < nearFace_m && tier <= 1 && carried > pecletIn * dMax
+          ? 1
+          : 0;
+      if (isDeep !== deep) {
+        deep = isDeep;
+        changed = 1;
+      }
+      if (changed) {
+        const goal = deep ? deepFactor * target[tier] : target[tier];
+        if (w > WINDOW * goal || w * WINDOW < goal) {
+          k.pendingTarget = goal;
+          fate = REWEIGHT;
+          break;
+        }
+      }
     }
     const zoneLimit_m = stepFraction * d;
     const hoodLimit_m = driftFraction * dh;
@@ -166,32 +202,16 @@ export function walk(k: Kernel, i: number): number {
       // Midpoint drift: the hood and jet fields change along the step, and a start-of-step velocity
       // would lag behind them (Euler), biasing capture low by a few per cent at the default step.
       const half = 0.5 * dt;
-      const mx = x + half * vx;
-      const my = y + half * vy;
-      const mz = z + half * vz;
-      field[0] = draftX;
-      field[1] = draftY;
-      field[2] = 0;
-      if (nh > 0) addHoodVelocity(hoods, nh, mx, my, mz, field);
-      vx = field[0];
-      vy = field[1];
-      vz = field[2];
-      if (hasJet) {
-        jetVelocity(jet, mx, my, mz, field);
-        vx += field[0];
-        vy += field[1];
-        vz += field[2];
-        jetD = jetSpread(jet, mx, my, mz, field);
-        vx += field[1];
-        vy += field[2];
-        vz += field[3];
-      }
+      jetD = airAt(k, x + half * vx, y + half * vy, z + half * vz, 0);
+      vx = air[0];
+      vy = air[1];
+      vz = air[2];
     }
     if (r2 < R2) {
       k.zoneVisited[k.ids[i]] = 1;
       let tb = (t * invBin) | 0;
       if (tb > lastBin) tb = lastBin;
-      residence[tb * nBins + b] += dt;
+      residence[tb * nBins + b] += dt * w;
     }
     if (a.slot[i] >= 0) recordFrames(k, a.slot[i], t, x, y, z);
     let dx = vx * dt;
@@ -301,7 +321,48 @@ export function walk(k: Kernel, i: number): number {
   a.ux[i] = ux;
   a.uy[i] = uy;
   a.uz[i] = uz;
+  a.level[i] = tier;
+  a.deep[i] = deep;
   return fate;
+}
+
+/**
+ * The air's drift velocity at a point (draft, hood sink panels, release jet and the jet's ∇D) into
+ * k.air[0..2]; returns the jet's eddy diffusivity there. With withScales it also leaves the nearest
+ * face's distance in k.air[3] and the jet's length scale in k.air[4] for the step rule.
+ * One function for the start-of-step and the midpoint evaluations.
+ */
+function airAt(k: Kernel, x: number, y: number, z: number, withScales: number): number {
+  const field = k.field;
+  const air = k.air;
+  const sc = k.scalars;
+  field[0] = sc[SCALAR.draftX];
+  field[1] = sc[SCALAR.draftY];
+  field[2] = 0;
+  field[3] = Infinity;
+  const nh = k.hoodCount;
+  if (nh > 0) addHoodVelocity(k.hoods, nh, x, y, z, field);
+  air[0] = field[0];
+  air[1] = field[1];
+  air[2] = field[2];
+  if (withScales) {
+    air[3] = field[3];
+    air[4] = Infinity;
+    // The hoods' own drift (beside the draft), which decides whether a particle is deep in a capture region.
+    air[5] = Math.abs(field[0] - sc[SCALAR.draftX]) + Math.abs(field[1] - sc[SCALAR.draftY]) + Math.abs(field[2]);
+  }
+  if (sc[SCALAR.jet] <= 0) return 0;
+  const jet = k.jet;
+  jetVelocity(jet, x, y, z, field);
+  air[0] += field[0];
+  air[1] += field[1];
+  air[2] += field[2];
+  const jetD = jetSpread(jet, x, y, z, field);
+  air[0] += field[1];
+  air[1] += field[2];
+  air[2] += field[3];
+  if (withScales) air[4] = field[4];
+  return jetD;
 }
 
 /**

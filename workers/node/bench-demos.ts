@@ -1,7 +1,7 @@
 import { readdir, readFile } from 'node:fs/promises';
 import { parseScenario } from '../../shared/schemas/scenario';
 import type { RunResult } from '../../shared/schemas/run-result';
-import { prepareScenario } from '../engine/index';
+import { combineBatches, prepareScenario } from '../engine/index';
 import { ThreadPool } from './thread-pool';
 
 /** The bench's rule: ±10 % or a decided verdict, as the issue's time to a decision; capped so the bench stays a few minutes. */
@@ -15,17 +15,17 @@ export interface DemoFigure {
   seconds: Record<number, number>;
   /** Nanoseconds per particle-step on one worker. */
   stepCost_ns: number;
-  /** 1 / (relative variance of the limit fraction's task mean × seconds on one worker), the plain walk. */
+  /** 1 / (relative variance of the limit fraction's task mean × seconds on one worker), the plain walk (run.varianceReduction false). */
   fomAnalog: number;
-  /** The same with variance reduction: the lead fills this in when run.varianceReduction exists. */
-  fomReduced: number | null;
+  /** The same with variance reduction (the default, which the timings above use). */
+  fomReduced: number;
   /** Narrowest 8-h interval of any fraction relative to its mean (0 would be a zero-width interval on screen). */
   narrowest: number;
 }
 
 const DIR = new URL('../../shared/demo-scenarios/', import.meta.url);
 
-function fom(result: RunResult, seconds: number): number {
+export function fom(result: RunResult, seconds: number): number {
   const s = result.breathingZone.fractions[result.limit?.fraction ?? 'respirable'];
   // The stored interval is the spent one; its half-width over t still scales as the standard error.
   const relativeHalf = (s.taskMeanCi95_mgPerM3[1] - s.taskMean_mgPerM3) / s.taskMean_mgPerM3;
@@ -64,6 +64,11 @@ export async function benchDemos(workerCounts: readonly number[], log: (line: st
       }
       const r = result!;
       const one = seconds[workerCounts[0]] * workerCounts[0];
+      // The plain walk to the same rule on the first pool, for its figure of merit.
+      const plain = prepareScenario(parseScenario({ ...raw, run: { ...raw.run, precision: BENCH_RULE, varianceReduction: false } }));
+      const plainStarted = performance.now();
+      const plainResult = await pools.get(workerCounts[0])!.runToPrecision(plain, BENCH_RULE);
+      const plainSeconds = ((performance.now() - plainStarted) / 1000) * workerCounts[0];
       const figure: DemoFigure = {
         name: file.replace(/\.json$/, ''),
         batches: r.engine.batches,
@@ -71,8 +76,8 @@ export async function benchDemos(workerCounts: readonly number[], log: (line: st
         banner: r.limit?.banner ?? 'none',
         seconds,
         stepCost_ns: (1e9 * one) / r.performance.particleSteps,
-        fomAnalog: fom(r, one),
-        fomReduced: null,
+        fomAnalog: fom(plainResult, plainSeconds),
+        fomReduced: fom(r, one),
         narrowest: narrowest(r),
       };
       figures.push(figure);
@@ -90,7 +95,56 @@ export function describeDemo(f: DemoFigure): string {
   const times = Object.entries(f.seconds)
     .map(([n, s]) => `${s.toFixed(2)} s on ${n}`)
     .join(', ');
-  const reduced =
-    f.fomReduced === null ? 'FOM with variance reduction: not built yet' : `FOM with variance reduction ${f.fomReduced.toPrecision(3)}`;
-  return `  ${f.name.padEnd(32)} ${times}; ${f.batches} batches (${REASON[f.reason] ?? f.reason}), ${f.banner}; step ${f.stepCost_ns.toFixed(0)} ns; FOM analog ${f.fomAnalog.toPrecision(3)} /s, ${reduced}; narrowest interval ${(100 * f.narrowest).toFixed(1)} % of its mean`;
+  const reduced = `with variance reduction ${f.fomReduced.toPrecision(3)} (${(f.fomReduced / f.fomAnalog).toFixed(2)}×)`;
+  return `  ${f.name.padEnd(32)} ${times}; ${f.batches} batches (${REASON[f.reason] ?? f.reason}), ${f.banner}; step ${f.stepCost_ns.toFixed(0)} ns; FOM plain walk ${f.fomAnalog.toPrecision(3)} /s, ${reduced}; narrowest interval ${(100 * f.narrowest).toFixed(1)} % of its mean`;
+}
+
+export interface SideBySide {
+  batches: number;
+  arms: { varianceReduction: boolean; seconds: number; relativeHalfWidth: number; fom: number; steps: number }[];
+  ratio: number;
+}
+
+/**
+ * The default demo's figure of merit with and without variance reduction, one after the other on
+ * the same one-worker pool, the same seed and the same number of batches (at least 100 a side, so
+ * each arm's variance is itself known to about ±14 %).
+ */
+export async function fomSideBySide(batches = 100, particlesPerBatch = 400): Promise<SideBySide> {
+  const raw = JSON.parse(await readFile(new URL('default.json', DIR), 'utf8')) as { run?: object };
+  const pool = new ThreadPool(1);
+  try {
+    const arms: SideBySide['arms'] = [];
+    for (const varianceReduction of [false, true]) {
+      const prepared = prepareScenario(
+        parseScenario({ ...raw, run: { ...raw.run, particles: batches * particlesPerBatch, batches, varianceReduction } }),
+      );
+      await pool.run({ ...prepared, batches: 2 });
+      const started = performance.now();
+      const batchResults = await pool.run(prepared);
+      const seconds = (performance.now() - started) / 1000;
+      const result = combineBatches(prepared, batchResults) as unknown as RunResult;
+      const s = result.breathingZone.fractions[result.limit?.fraction ?? 'respirable'];
+      arms.push({
+        varianceReduction,
+        seconds,
+        relativeHalfWidth: (s.taskMeanCi95_mgPerM3[1] - s.taskMean_mgPerM3) / s.taskMean_mgPerM3,
+        fom: fom(result, seconds),
+        steps: result.performance.particleSteps,
+      });
+    }
+    return { batches, arms, ratio: arms[1].fom / arms[0].fom };
+  } finally {
+    await pool.close();
+  }
+}
+
+export function describeSideBySide(f: SideBySide): string[] {
+  return [
+    ...f.arms.map(
+      (a) =>
+        `  ${a.varianceReduction ? 'with variance reduction' : 'plain walk            '}: ${a.seconds.toFixed(2)} s, ${(a.steps / 1e6).toFixed(1)} M steps, task mean ±${(100 * a.relativeHalfWidth).toFixed(1)} %, FOM ${a.fom.toPrecision(3)} /s`,
+    ),
+    `  ratio ${f.ratio.toFixed(2)}× (target ≥ 2×, aim 4×)`,
+  ];
 }

@@ -6,7 +6,7 @@ import type { PreparedScenario } from '../engine/index';
 import { writeReadmeSection } from '../../tests/helpers/readme-section';
 import { describeMemory, measureBatchMemory } from './memory-figure';
 import { referenceScenario } from '../engine/reference-scenario';
-import { BENCH_RULE, benchDemos } from './bench-demos';
+import { BENCH_RULE, benchDemos, describeSideBySide, fomSideBySide } from './bench-demos';
 import { ThreadPool } from './thread-pool';
 
 const TIMED_PASSES = 3;
@@ -67,6 +67,10 @@ async function main(): Promise<void> {
   const zeroWidth = demos.filter((d) => !(d.narrowest > 0));
   if (zeroWidth.length > 0) console.log(`ZERO-WIDTH INTERVAL in: ${zeroWidth.map((d) => d.name).join(', ')}`);
 
+  const sideBySide = await fomSideBySide();
+  console.log(`Default demo, figure of merit side by side (${sideBySide.batches} batches a side, one worker, same seed):`);
+  for (const line of describeSideBySide(sideBySide)) console.log(line);
+
   const again = new ThreadPool(cores);
   const demoText = await readFile(new URL('../../shared/demo-scenarios/default.json', import.meta.url), 'utf8');
   const demo = prepareScenario(parseScenario(JSON.parse(demoText)));
@@ -85,11 +89,12 @@ async function main(): Promise<void> {
       `- One worker: ${single.mps.toFixed(1)} M particle-steps/s (reference scenario, best of ${TIMED_PASSES} passes after a warm-up pass)`,
       `- All ${cores} cores: ${many.mps.toFixed(1)} M particle-steps/s, ${(many.mps / single.mps).toFixed(2)}× one worker`,
       `- Default demo: ${seconds.toFixed(2)} s to result on ${cores} warm workers; respirable 8-h TWA ${r.twa8h_mgPerM3.toPrecision(3)} mg/m³, 95 % CI half-width ${halfWidth_pct} % of the mean`,
-      `- Time to a decision (±${100 * BENCH_RULE.relativeHalfWidth} % or decided, at most ${BENCH_RULE.maxBatches} batches; seconds on ${counts.join(' / ')} workers, batches, why it stopped, step cost on one worker, FOM of the plain walk; the variance-reduction FOM column is for when it exists):`,
+      `- Time to a decision (±${100 * BENCH_RULE.relativeHalfWidth} % or decided, at most ${BENCH_RULE.maxBatches} batches; seconds on ${counts.join(' / ')} workers, batches, why it stopped, step cost on one worker, FOM of the plain walk and with variance reduction, the default):`,
       ...demos.map(
         (d) =>
-          `  - ${d.name}: ${counts.map((n) => d.seconds[n].toFixed(2)).join(' / ')} s, ${d.batches} batches (${d.reason}), ${d.stepCost_ns.toFixed(0)} ns/step, FOM ${d.fomAnalog.toPrecision(3)} /s, with variance reduction ${d.fomReduced === null ? '—' : d.fomReduced.toPrecision(3)}`,
+          `  - ${d.name}: ${counts.map((n) => d.seconds[n].toFixed(2)).join(' / ')} s, ${d.batches} batches (${d.reason}), ${d.stepCost_ns.toFixed(0)} ns/step, FOM ${d.fomAnalog.toPrecision(3)} /s plain, ${d.fomReduced.toPrecision(3)} /s with variance reduction`,
       ),
+      `- Default demo, FOM side by side (${sideBySide.batches} batches a side, one worker): plain ${sideBySide.arms[0].fom.toPrecision(3)} /s, with variance reduction ${sideBySide.arms[1].fom.toPrecision(3)} /s, ratio ${sideBySide.ratio.toFixed(2)}×`,
       `- Memory: ${memory}`,
       `- Load average at the start: ${load} (1, 5, 15 min) on ${cores} cores`,
     ]);

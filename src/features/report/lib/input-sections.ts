@@ -138,6 +138,7 @@ export function inputSections(s: Scenario, opts: { agent?: AgentInfo; sizeProfil
         ['Seed', String(s.run.seed)],
         ['Batches', String(s.run.batches)],
         ['Largest time step', `${n(s.run.maxTimeStep_s)} s`],
+        ['Variance reduction', s.run.varianceReduction === false ? 'off (plain walk)' : 'on (splitting and Russian roulette)'],
       ],
     },
   ];

@@ -10,7 +10,12 @@ import { fateTable } from '@/features/run-results/lib/section-csv';
 export function FateSection({ view, fileName }: { view: RunResult; fileName: (what: string) => (string | undefined)[] }) {
   const { emitted_mg, ...shares } = view.fate;
   const total = FATES.reduce((a, f) => a + (Number.isFinite(shares[f]) ? shares[f] : 0), 0);
-  const widths = FATES.map((f) => 1000 * Math.max(0, shares[f] || 0));
+  // With variance reduction the shares are estimates that add up to the simulated share only on
+  // average; the bar is scaled to their sum when it passes 100 % so it never runs off its frame.
+  const scale = Math.max(1, total);
+  const widths = FATES.map((f) => (1000 * Math.max(0, shares[f] || 0)) / scale);
+  const leftOut = view.massLeftOut?.share ?? 0;
+  const offBy = total + leftOut - 1;
   const starts = widths.map((_, i) => widths.slice(0, i).reduce((a, w) => a + w, 0));
   return (
     <Section
@@ -84,6 +89,13 @@ export function FateSection({ view, fileName }: { view: RunResult; fileName: (wh
           </tr>
         </tbody>
       </table>
+      {Math.abs(offBy) > 0.005 && (
+        <p className="mt-2 max-w-xl text-sm text-muted" data-testid="fate-estimate-note">
+          These shares are estimates: variance reduction splits particles and removes some by Russian roulette, so the fates add up to the
+          emission only on average. This run’s add up to {readableNumber(100 * (total + leftOut), 3)} % with what was left out; more
+          particles bring them closer.
+        </p>
+      )}
       <MassLeftOutNote view={view} />
     </Section>
   );

@@ -65,6 +65,16 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
           </>
         )}
       </FieldGrid>
+      <label className="inline-flex items-center gap-2 text-sm font-semibold">
+        <input
+          type="checkbox"
+          className="h-4 w-4 accent-accent"
+          checked={run.varianceReduction ?? true}
+          onChange={(e) => set({ varianceReduction: e.target.checked })}
+        />
+        Spend the particles where they matter: split them near the breathing zone, thin them out at the hood face (untick for the plain
+        walk, same answer on average, wider band)
+      </label>
     </Section>
   );
 }
