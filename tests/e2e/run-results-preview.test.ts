@@ -160,6 +160,21 @@ describe('the run results preview', () => {
     expect(await time()).toBe(paused);
   });
 
+  it('reruns at half and twice the release jet’s speed and says whether the banner holds', { timeout: 120_000 }, async () => {
+    await page.getByRole('button', { name: 'Rerun at ½× and 2× the jet speed' }).click();
+    const table = page.getByTestId('jet-sensitivity');
+    await table.waitFor({ timeout: 100_000 });
+    const rows = await table.locator('tbody tr th').allTextContents();
+    expect(rows).toHaveLength(3);
+    // The rows' speeds are the run's jet speed scaled by ½, 1 and 2 (shared/physics/release-jets withJetSpeedScaled).
+    const speeds = rows.map((r) => Number(/· ([\d.]+) m\/s/.exec(r)![1]));
+    expect(speeds[0] / speeds[1]).toBeCloseTo(0.5, 2);
+    expect(speeds[2] / speeds[1]).toBeCloseTo(2, 2);
+    expect(rows[1]).toMatch(/this run/);
+    expect(await page.getByTestId('jet-sensitivity-verdict').textContent()).toMatch(/banner (holds|changes)/);
+    await shot(page, 'run-results-jet-sensitivity');
+  });
+
   it('reads the same run as server JSON, and says so when the scenario has no limit', async () => {
     await page.getByLabel('As JSON from the server').check();
     await page.getByLabel('With a limit').uncheck();

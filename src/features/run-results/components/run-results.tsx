@@ -11,6 +11,7 @@ import { FractionTable } from './fraction-table';
 import { Headline } from './headline';
 import { MapsSection } from './maps-section';
 import { ModelSection } from './model-section';
+import { JetSensitivity } from './jet-sensitivity';
 import { ParticleViews } from './particle-views';
 import { Section } from './section';
 import { csvFileName } from '@/lib/csv';
@@ -60,6 +61,7 @@ export function RunResults({ result, scenario, agentName, limitSource, title }: 
       <MapsSection view={view} scenario={scenario} />
       <CrossChecks view={view} fileName={fileParts(view, title)} />
       <ModelSection view={view} />
+      <JetSensitivity view={view} scenario={scenario} />
       <Cautions />
     </div>
   );
