@@ -36,8 +36,7 @@ const CONTROL_LABELS = [
 ];
 
 describe('the printed report', () => {
-  // After merging the new sticky-column tables its extracted heading text no longer matches in one table: to be fixed next (see the note).
-  it.skip('prints to a few full pages with every table heading and no screen controls', { timeout: 180_000 }, async () => {
+  it('prints to a few full pages with every table heading and no screen controls', { timeout: 180_000 }, async () => {
     const page = await ctx.browser.newPage();
     await signIn(page, ctx.server.url, viewer.email, viewer.password);
     await page.waitForURL(/\/scenarios$/);
@@ -46,21 +45,26 @@ describe('the printed report', () => {
     const all = pages.join('\n').replace(/(\w)- (\w)/g, '$1-$2');
 
     for (const heading of [
-      'Fraction Task mean (mg/m³, 95 % CI) 8-h TWA (mg/m³, 95 % CI) Peak 15-min average (mg/m³) % of limit (upper 95 %)',
+      // The sticky first column ("Fraction") is drawn after the others, so the PDF's text gives it last.
+      'Task mean (mg/m³, 95 % CI) 8-h TWA (mg/m³, 95 % CI) Peak 15-min average (mg/m³, 95 % CI) % of limit (upper 95 %) Fraction',
       'Fate Share (%) Mass (mg)',
-      'Model Concentration (mg/m³) Monte-Carlo ÷ model What it assumes',
+      'Concentration (mg/m³) Monte-Carlo ÷ model What it assumes',
     ])
       expect(all).toContain(heading);
     for (const label of CONTROL_LABELS) expect(all).not.toContain(label);
     // Without a play button, paper gets every recorded path instead of one frame of the animation.
-    expect(all).toMatch(/On paper: the whole recorded paths over the first \d+ min/);
-    // Eleven half-empty pages before; the sections now flow and only their parts are kept whole.
-    expect(pages.length).toBeLessThanOrEqual(8);
+    expect(all).toMatch(/On paper: the whole paths of the \d+ sampled particles over the \d+ min run/);
+    // Eleven half-empty pages before; the sections now flow and only their parts are kept whole. The
+    // report has grown since (the day-to-day GSD, peaks with intervals, what the model assumed) to nine,
+    // and no page holds only a stray line: the sign-off stays whole with its heading.
+    expect(pages.length).toBeLessThanOrEqual(9);
+    for (const text of pages) expect(text.trim().length).toBeGreaterThan(100);
+    expect(pages.at(-1)).toMatch(/Approval and sign-off[\s\S]*Signature/);
 
     // A table split over two pages starts again with its headings on the second.
     for (const [n, text] of pages.entries())
-      if (/Respirable \d/.test(text) && !/Fraction Task mean/.test(text) && /Thoracic \d/.test(pages[n - 1] ?? ''))
-        expect(text).toContain('Fraction Task mean');
+      if (/Respirable \d/.test(text) && !/Task mean \(mg/.test(text) && /Thoracic \d/.test(pages[n - 1] ?? ''))
+        expect(text).toContain('Task mean (mg/m³, 95 % CI)');
 
     await page.emulateMedia({ media: 'print' });
     expect(await page.getByTestId('paths-plan').locator('polyline').count()).toBeGreaterThan(50);

@@ -83,78 +83,81 @@ function JetReruns({ view, scenario, jet }: { view: RunResult; scenario: Scenari
   const shown = state.phase === 'done' ? withThisRun(view, state.result) : [];
   const banners = new Set(shown.map((r) => r.banner));
   const pct = running ? Math.round(state.progress.fraction * 100) : 0;
+  // On paper the section only makes sense once the reruns have answered.
   return (
-    <Section
-      title="Jet speed sensitivity"
-      intro={`The release jet was taken as ${readableNumber(jet.speed_mPerS, 3)} m/s${jet.fromDefault ? ', the release type’s default (common practice, not measured)' : ''}. Rerun at half and twice that speed to see whether the verdict depends on it.`}
-    >
-      <div className="flex flex-wrap items-center gap-3 print:hidden">
-        <Button variant="secondary" onClick={start} disabled={running}>
-          Rerun at ½× and 2× the jet speed
-        </Button>
-        {running && (
-          <Button variant="secondary" onClick={run.cancel}>
-            Cancel
+    <div className={shown.length > 0 ? undefined : 'print:hidden'}>
+      <Section
+        title="Jet speed sensitivity"
+        intro={`The release jet was taken as ${readableNumber(jet.speed_mPerS, 3)} m/s${jet.fromDefault ? ', the release type’s default (common practice, not measured)' : ''}. Rerun at half and twice that speed to see whether the verdict depends on it.`}
+      >
+        <div className="flex flex-wrap items-center gap-3 print:hidden">
+          <Button variant="secondary" onClick={start} disabled={running}>
+            Rerun at ½× and 2× the jet speed
           </Button>
-        )}
-        {state.phase === 'cancelled' && (
-          <span role="status" className="text-sm text-muted">
-            Sensitivity runs cancelled.
-          </span>
-        )}
-      </div>
-      {running && (
-        <div className="mt-3 max-w-xl">
-          <ProgressBar label="Jet sensitivity progress" percent={pct} />
-          <p className="mt-1 text-sm text-muted" aria-live="polite">
-            {pct} % · about {timeLeft(state.progress.secondsLeft)} left
-          </p>
+          {running && (
+            <Button variant="secondary" onClick={run.cancel}>
+              Cancel
+            </Button>
+          )}
+          {state.phase === 'cancelled' && (
+            <span role="status" className="text-sm text-muted">
+              Sensitivity runs cancelled.
+            </span>
+          )}
         </div>
-      )}
-      {state.phase === 'failed' && <ErrorMessage title="The sensitivity runs failed" error={state.error} />}
-      {shown.length > 0 && (
-        <>
-          <table className="mt-3 w-full max-w-2xl text-sm" data-testid="jet-sensitivity">
-            <caption className="sr-only">Result at half, the same and twice the jet speed</caption>
-            <thead>
-              <tr className="text-left text-muted">
-                <th scope="col" className="py-1 font-semibold">
-                  Jet speed
-                </th>
-                <th scope="col" className="py-1 font-semibold">
-                  Banner
-                </th>
-                <th scope="col" className="py-1 text-right font-semibold">
-                  % of limit (upper bound)
-                </th>
-                <th scope="col" className="py-1 text-right font-semibold">
-                  Captured
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {shown.map((r) => (
-                <tr key={r.factor} className="border-t border-line">
-                  <th scope="row" className="py-1.5 text-left font-normal">
-                    {r.factor}× · {readableNumber(r.speed_mPerS, 3)} m/s{r.factor === 1 ? ' (this run)' : ''}
+        {running && (
+          <div className="mt-3 max-w-xl">
+            <ProgressBar label="Jet sensitivity progress" percent={pct} />
+            <p className="mt-1 text-sm text-muted" aria-live="polite">
+              {pct} % · about {timeLeft(state.progress.secondsLeft)} left
+            </p>
+          </div>
+        )}
+        {state.phase === 'failed' && <ErrorMessage title="The sensitivity runs failed" error={state.error} />}
+        {shown.length > 0 && (
+          <>
+            <table className="mt-3 w-full max-w-2xl text-sm" data-testid="jet-sensitivity">
+              <caption className="sr-only">Result at half, the same and twice the jet speed</caption>
+              <thead>
+                <tr className="text-left text-muted">
+                  <th scope="col" className="py-1 font-semibold">
+                    Jet speed
                   </th>
-                  <td className="py-1.5">{r.banner ? <BannerBadge banner={r.banner} /> : 'no limit'}</td>
-                  <td className="py-1.5 text-right tabular-nums">
-                    {r.percent === null ? '—' : `${percentText(r.percent, 3)} (${percentText(r.percentUpper ?? r.percent, 3)})`}
-                  </td>
-                  <td className="py-1.5 text-right tabular-nums">{percentText(100 * r.captured, 3)}</td>
+                  <th scope="col" className="py-1 font-semibold">
+                    Banner
+                  </th>
+                  <th scope="col" className="py-1 text-right font-semibold">
+                    % of limit (upper bound)
+                  </th>
+                  <th scope="col" className="py-1 text-right font-semibold">
+                    Captured
+                  </th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
-          <p className="mt-2 max-w-2xl text-sm font-semibold" data-testid="jet-sensitivity-verdict">
-            {banners.size === 1
-              ? 'The banner holds from half to twice the jet speed.'
-              : 'The banner changes within a factor of two of the jet speed: measure the release (or its air speed) before relying on it, and judge on the cautious row.'}
-          </p>
-        </>
-      )}
-    </Section>
+              </thead>
+              <tbody>
+                {shown.map((r) => (
+                  <tr key={r.factor} className="border-t border-line">
+                    <th scope="row" className="py-1.5 text-left font-normal">
+                      {r.factor}× · {readableNumber(r.speed_mPerS, 3)} m/s{r.factor === 1 ? ' (this run)' : ''}
+                    </th>
+                    <td className="py-1.5">{r.banner ? <BannerBadge banner={r.banner} /> : 'no limit'}</td>
+                    <td className="py-1.5 text-right tabular-nums">
+                      {r.percent === null ? '—' : `${percentText(r.percent, 3)} (${percentText(r.percentUpper ?? r.percent, 3)})`}
+                    </td>
+                    <td className="py-1.5 text-right tabular-nums">{percentText(100 * r.captured, 3)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            <p className="mt-2 max-w-2xl text-sm font-semibold" data-testid="jet-sensitivity-verdict">
+              {banners.size === 1
+                ? 'The banner holds from half to twice the jet speed.'
+                : 'The banner changes within a factor of two of the jet speed: measure the release (or its air speed) before relying on it, and judge on the cautious row.'}
+            </p>
+          </>
+        )}
+      </Section>
+    </div>
   );
 }
 

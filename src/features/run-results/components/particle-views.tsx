@@ -11,6 +11,7 @@ import { focusPoints, projection, viewSpan } from '@/features/run-results/lib/ro
 import { sizeClasses } from '@/features/run-results/lib/size-classes';
 import { baseRate_sPerS } from '@/features/run-results/lib/trajectory-frames';
 import { type DotStyle, ParticleLayer } from './particle-layer';
+import { PathTraces } from './path-traces';
 import { PlaybackControls } from './playback-controls';
 import { DRAWING_WIDTH, RoomView } from './room-view';
 import { Section } from './section';
@@ -56,8 +57,16 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
   const airborne = paths.filter((p) => positionAt(p, play.time_s)).length;
   const tail_s = TAIL_FRAMES * t.frameInterval_s;
   const intro = `${paths.length} simulated particles sampled over the whole run, drawn to scale and sized by size class${sizes.byDiameter ? '' : ' (this result does not carry bin diameters, so classes are bin indices, smallest first)'}. At 1× the animation shows ${rate} simulated seconds per second. Both views open zoomed on the workstation.`;
+  // On screen the animation at its current time; on paper every sampled path over the whole run.
   const layer = (p: typeof plan) => (
-    <ParticleLayer paths={paths} p={p} time_s={play.time_s} tail_s={tail_s} styleOf={styleOf} room={scenario.room} />
+    <>
+      <g className="print:hidden">
+        <ParticleLayer paths={paths} p={p} time_s={play.time_s} tail_s={tail_s} styleOf={styleOf} room={scenario.room} />
+      </g>
+      <g className="hidden print:inline">
+        <PathTraces paths={paths} p={p} styleOf={styleOf} room={scenario.room} />
+      </g>
+    </>
   );
   return (
     <Section title="Particle paths, plan and elevation" intro={intro}>
@@ -109,7 +118,11 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
           </figure>
         </div>
         <aside aria-label="Key to the particle views" className="space-y-4 text-sm lg:sticky lg:top-4 lg:self-start">
-          <p className="rounded-lg border border-line bg-white p-3">
+          <p className="hidden rounded-lg border border-line bg-white p-3 print:block">
+            On paper: the whole paths of the {paths.length} sampled particles over the {Math.round(end_s / 60)} min run, from release to
+            where each ended.
+          </p>
+          <p className="rounded-lg border border-line bg-white p-3 print:hidden">
             <span className="block text-2xl font-semibold tabular-nums" data-testid="airborne-count">
               {airborne}
             </span>

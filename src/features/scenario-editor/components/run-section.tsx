@@ -72,8 +72,8 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
           checked={run.varianceReduction ?? true}
           onChange={(e) => set({ varianceReduction: e.target.checked })}
         />
-        Spend the particles where they matter: split them near the breathing zone, thin them out at the hood face (untick for the plain
-        walk, same answer on average, wider band)
+        Variance reduction: split simulated dust near the breathing zone, thin it out at the hood face (untick for the plain walk: the same
+        answer on average, a wider band)
       </label>
     </Section>
   );
