@@ -60,6 +60,14 @@ const DEEP_FACTOR = 4;
 export const WINDOW = 1.5;
 export const REWEIGHT = -2;
 
+// 2^k by repeated doubling or halving (exact), not **, whose result the language leaves to each engine.
+function pow2(k: number): number {
+  let v = 1;
+  for (let j = 0; j < k; j++) v *= 2;
+  for (let j = 0; j > k; j--) v /= 2;
+  return v;
+}
+
 /** The plan for a scenario; sourceGap_m is the distance from the source to the zone's surface. */
 export function importancePlan(
   enabled: boolean,
@@ -69,7 +77,7 @@ export function importancePlan(
 ): ImportancePlan & { tiers: number } {
   const gap = Math.max(sourceGap_m, INNERMOST_GAP_m);
   let inner = 0;
-  while (inner < MAX_INNER_TIERS && gap / 2 ** (inner + 1) >= INNERMOST_GAP_m) inner++;
+  while (inner < MAX_INNER_TIERS && gap / pow2(inner + 1) >= INNERMOST_GAP_m) inner++;
   const tiers = inner + 2;
   const inward2 = new Float64Array(tiers);
   const outward2 = new Float64Array(tiers);
@@ -78,11 +86,11 @@ export function importancePlan(
   const sq = (v: number) => v * v;
   for (let tier = 0; tier < tiers; tier++) {
     // Tier 1 is entered (from far away) at FAR_GAPS source gaps from the zone's surface, tier j ≥ 2 at gap·2^−(j−1).
-    const enterNext = tier === 0 ? FAR_GAPS * gap : gap / 2 ** tier;
+    const enterNext = tier === 0 ? FAR_GAPS * gap : gap / pow2(tier);
     inward2[tier] = tier === tiers - 1 ? -1 : sq(R + enterNext);
-    const entered = tier === 0 ? Infinity : tier === 1 ? FAR_GAPS * gap : gap / 2 ** (tier - 1);
+    const entered = tier === 0 ? Infinity : tier === 1 ? FAR_GAPS * gap : gap / pow2(tier - 1);
     outward2[tier] = tier === 0 ? Infinity : sq(R + HYSTERESIS * entered);
-    target[tier] = 2 ** -(tier - 1);
+    target[tier] = pow2(1 - tier);
   }
   return {
     enabled,

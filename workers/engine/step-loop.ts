@@ -26,7 +26,11 @@ export function stepParticles(p: PreparedScenario, a: ParticleArrays, rng: Xoshi
   const k = new Kernel(p, a, rng);
   const zone = p.zone;
   for (let i = 0; i < a.count; i++) {
-    const r2 = (a.x[i] - zone.x_m) ** 2 + (a.y[i] - zone.y_m) ** 2 + (a.z[i] - zone.z_m) ** 2;
+    // Products, not **: the result must not depend on an engine's pow.
+    const dx = a.x[i] - zone.x_m;
+    const dy = a.y[i] - zone.y_m;
+    const dz = a.z[i] - zone.z_m;
+    const r2 = dx * dx + dy * dy + dz * dz;
     a.level[i] = tierAt(p.varianceReduction, r2);
   }
   let nextReport = PROGRESS_EVERY;
