@@ -33,11 +33,6 @@ function rowOf(factor: number, r: RunResult): Row {
   };
 }
 
-/**
- * The release jet's speed is a default from common practice unless the engineer measured it, so
- * the verdict should not hang on it unseen: the same scenario, seed and particle count at half and
- * twice the jet speed (common random numbers, so the difference is the jet's, not the noise's).
- */
 // A new result starts the section afresh: reruns of an earlier result must not sit under it.
 const resultIds = new WeakMap<RunResult, number>();
 let nextId = 0;
@@ -47,6 +42,11 @@ function idOf(view: RunResult): number {
   return id;
 }
 
+/**
+ * The release jet's speed is a default from common practice unless the engineer measured it, so
+ * the verdict should not hang on it unseen: the same scenario, seed and particle count at half and
+ * twice the jet speed (common random numbers, so the difference is the jet's, not the noise's).
+ */
 export function JetSensitivity({ view, scenario }: { view: RunResult; scenario: Scenario }) {
   const jet = view.model?.jet;
   return jet ? <JetReruns key={idOf(view)} view={view} scenario={scenario} jet={jet} /> : null;
@@ -62,14 +62,14 @@ function JetReruns({ view, scenario, jet }: { view: RunResult; scenario: Scenari
       const rows: Row[] = [];
       for (const [i, factor] of FACTORS.entries()) {
         // The same particles as the run shown, without a precision rule: both arms then stop at the same batch.
-        const run = {
+        const settings = {
           ...scenario.run,
           precision: undefined,
           batches: view.engine.batches,
           particles: view.engine.particles,
           seed: view.engine.seed,
         };
-        const input = { ...withJetSpeedScaled(scenario, factor), run };
+        const input = { ...withJetSpeedScaled(scenario, factor), run: settings };
         const r = await runSimulation(input, {
           signal,
           onProgress: (p) => onProgress({ ...p, fraction: (i + p.fraction) / FACTORS.length }),
