@@ -6,10 +6,47 @@ import jsxA11y from 'eslint-plugin-jsx-a11y';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
-const noMathRandom = {
+const mathRandom = { object: 'Math', property: 'random', message: 'Randomness is a parameter: pass a seeded generator.' };
+const noMathRandom = { 'no-restricted-properties': ['error', mathRandom] };
+
+// What a run computes must be the same bits in every JavaScript engine (the server replays it):
+// the language leaves these Math functions and ** approximate, so the engine and the physics it
+// calls use shared/det-math. Math.sqrt, abs, floor, trunc, min and max are exact everywhere.
+const approximateMath = [
+  'exp',
+  'log',
+  'log10',
+  'log2',
+  'log1p',
+  'expm1',
+  'pow',
+  'sin',
+  'cos',
+  'tan',
+  'atan',
+  'atan2',
+  'asin',
+  'acos',
+  'sinh',
+  'cosh',
+  'tanh',
+  'hypot',
+  'cbrt',
+];
+const deterministicMath = {
   'no-restricted-properties': [
     'error',
-    { object: 'Math', property: 'random', message: 'Randomness is a parameter: pass a seeded generator.' },
+    mathRandom,
+    ...approximateMath.map((property) => ({
+      object: 'Math',
+      property,
+      message: `Math.${property} differs between engines: use shared/det-math.`,
+    })),
+  ],
+  'no-restricted-syntax': [
+    'error',
+    { selector: "BinaryExpression[operator='**']", message: '** differs between engines: multiply, or use pow from shared/det-math.' },
+    { selector: "AssignmentExpression[operator='**=']", message: '**= differs between engines: use pow from shared/det-math.' },
   ],
 };
 
@@ -95,6 +132,11 @@ export default tseslint.config(
     },
   },
   { files: ['shared/**/*.ts', 'workers/**/*.ts'], rules: noMathRandom },
+  {
+    files: ['shared/physics/**/*.ts', 'shared/verdict/**/*.ts', 'shared/det-math/**/*.ts', 'workers/engine/**/*.ts'],
+    ignores: ['**/*.test.ts', '**/*.test-helper.ts'],
+    rules: deterministicMath,
+  },
   {
     files: ['src/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },

@@ -41,6 +41,8 @@ function syntheticScenario(): PreparedScenario {
         conventionWeight: Float64Array.of(1, 1, 1, 1),
         massLeftOut: { share: 0, below: 0, above: 0, lowerPhysical_m: 1e-6, upperAerodynamic_m: 1e-6 },
       };
+      // One sampled path of two frames: the batches' tallies hash it, and 200 seeds × 640 batches of full samples cost minutes.
+      p.trajectory = { ...p.trajectory, particles: 1, frames: 2 };
     },
   );
 }

@@ -6,7 +6,7 @@ import { requirePositive } from './validate';
 
 // Both sides of Hinds Eq. 3.26 are d²·ρ·Cc(d); d²·Cc(d) increases with d, so one root exists.
 function settlingGroup(diameter_m: number, density_kgPerM3: number, air: AirProperties): number {
-  return diameter_m ** 2 * density_kgPerM3 * slipCorrection(diameter_m, air);
+  return diameter_m * diameter_m * density_kgPerM3 * slipCorrection(diameter_m, air);
 }
 
 // d_a²·ρ₀·Cc(d_a) = d_p²·(ρ_p/χ)·Cc(d_p) (Hinds Eq. 3.26 form) solved for one side given the other,

@@ -1,3 +1,4 @@
+import { pow } from '../det-math/index';
 import { AIR_MOLAR_MASS_kgPerMol, GAS_CONSTANT_JPerMolK } from './constants';
 import { requirePositive } from './validate';
 
@@ -19,7 +20,7 @@ export const REFERENCE_MEAN_FREE_PATH_m = 0.066e-6;
 
 // Sutherland's law, constants from the US Standard Atmosphere 1976.
 export function sutherlandViscosity(temperature_K: number): number {
-  return (1.458e-6 * temperature_K ** 1.5) / (temperature_K + 110.4);
+  return (1.458e-6 * pow(temperature_K, 1.5)) / (temperature_K + 110.4);
 }
 
 // Kinetic theory gives λ ∝ (μ/p)·√T (Hinds Eq. 2.25 form), anchored to a reference λ.

@@ -1,3 +1,4 @@
+import { exp, log } from '../det-math/index';
 import { normalCdf } from './normal';
 import { requireNonNegative } from './validate';
 
@@ -5,13 +6,13 @@ export type SamplingConvention = 'inhalable' | 'thoracic' | 'respirable';
 
 const METRES_TO_MICROMETRES = 1e6;
 const INHALABLE_LIMIT_um = 100;
-const LN_GSD = Math.log(1.5);
+const LN_GSD = log(1.5);
 
 // ISO 7708 defines inhalability only to 100 µm; beyond it we count nothing rather than extrapolate.
 export function inhalableFraction(d_m: number): number {
   const d_um = requireNonNegative('d_m', d_m) * METRES_TO_MICROMETRES;
   if (d_um > INHALABLE_LIMIT_um) return 0;
-  return 0.5 * (1 + Math.exp(-0.06 * d_um));
+  return 0.5 * (1 + exp(-0.06 * d_um));
 }
 
 // ISO 7708 thoracic convention: E_I·[1 − Φ(ln(d/11.64)/ln 1.5)] (Soderholm 1989).
@@ -28,7 +29,7 @@ export function respirableFraction(d_m: number): number {
 function penetrating(d_m: number, median_um: number): number {
   const inhalable = inhalableFraction(d_m);
   if (d_m === 0) return inhalable;
-  return inhalable * normalCdf(-Math.log((d_m * METRES_TO_MICROMETRES) / median_um) / LN_GSD);
+  return inhalable * normalCdf(-log((d_m * METRES_TO_MICROMETRES) / median_um) / LN_GSD);
 }
 
 export function conventionFraction(convention: SamplingConvention): (d_m: number) => number {

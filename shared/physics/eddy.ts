@@ -1,3 +1,4 @@
+import { exp, pow } from '../det-math/index';
 import { erfc, erfcx } from './normal';
 import { requireNonNegative, requirePositive, requireTime } from './validate';
 
@@ -36,13 +37,13 @@ export function eddyContinuousSource(source: ContinuousSource, distance_m: numbe
   requireTime('time_s', time_s);
   const scale = (imageCount(source.boundary) * g) / (4 * Math.PI * d * r);
   const decayLength = r * Math.sqrt(k / d);
-  if (time_s === Infinity) return scale * Math.exp(-decayLength);
+  if (time_s === Infinity) return scale * exp(-decayLength);
   if (time_s === 0) return 0;
   const u = r / Math.sqrt(4 * d * time_s);
   const v = Math.sqrt(k * time_s);
   // The growing exponential is folded into erfcx so that neither factor overflows.
-  const rising = Math.exp(decayLength - (u + v) ** 2) * erfcx(u + v);
-  return 0.5 * scale * (Math.exp(-decayLength) * erfc(u - v) + rising);
+  const rising = exp(decayLength - (u + v) * (u + v)) * erfcx(u + v);
+  return 0.5 * scale * (exp(-decayLength) * erfc(u - v) + rising);
 }
 
 // Instantaneous point puff C = M/(4πDt)^(3/2)·exp(−r²/(4Dt))·e^(−kt) (Carslaw & Jaeger, from memory).
@@ -53,13 +54,13 @@ export function eddyPuff(puff: Puff, distance_m: number, time_s: number): number
   const r = requireNonNegative('distance_m', distance_m);
   const t = requirePositive('time_s', time_s);
   const spread = 4 * d * t;
-  return ((imageCount(puff.boundary) * m) / (Math.PI * spread) ** 1.5) * Math.exp(-(r * r) / spread - k * t);
+  return ((imageCount(puff.boundary) * m) / pow(Math.PI * spread, 1.5)) * exp(-(r * r) / spread - k * t);
 }
 
 // Room eddy diffusivity D = (0.52·ACH + 8.61e-5 s⁻¹)·V^(2/3), ACH in s⁻¹ (Cheng et al. 2011 line of work, from memory).
 export function eddyDiffusivityFromVentilation(airChanges_perH: number, volume_m3: number): number {
   const airChanges_perS = requireNonNegative('airChanges_perH', airChanges_perH) / 3600;
-  return (0.52 * airChanges_perS + 8.61e-5) * requirePositive('volume_m3', volume_m3) ** (2 / 3);
+  return (0.52 * airChanges_perS + 8.61e-5) * pow(requirePositive('volume_m3', volume_m3), 2 / 3);
 }
 
 export interface RoomDiffusivity {

@@ -27,7 +27,7 @@ function airflowPerVelocity_m2(hood: HoodGeometry, distance_m: number): number {
   switch (hood.kind) {
     case 'plain':
     case 'flanged':
-      return HOOD_FIT_COEFFICIENT[hood.kind] * (OPENING_DISTANCE_FACTOR * distance_m ** 2 + area_m2);
+      return HOOD_FIT_COEFFICIENT[hood.kind] * (OPENING_DISTANCE_FACTOR * distance_m * distance_m + area_m2);
     case 'slot':
     case 'flanged-slot':
       return HOOD_FIT_COEFFICIENT[hood.kind] * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;

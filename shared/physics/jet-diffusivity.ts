@@ -1,3 +1,4 @@
+import { exp } from '../det-math/index';
 import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, jetCentrelineSpeed, jetFrame, jetHalfWidth, type RoundJet } from './round-jet';
 
 // ν_T ≈ 0.028·u_c·r½ across the self-similar round jet (Pope, Turbulent Flows, ch. 5, from memory).
@@ -9,7 +10,7 @@ export function jetEddyDiffusivity(axial_m: number, radial_m: number, speed_mPer
   if (axial_m <= 0) return 0;
   const halfWidth_m = jetHalfWidth(axial_m, diameter_m);
   const eta = radial_m / halfWidth_m;
-  return JET_EDDY_VISCOSITY_RATIO * jetCentrelineSpeed(axial_m, speed_mPerS, diameter_m) * halfWidth_m * Math.exp(-LN2 * eta * eta);
+  return JET_EDDY_VISCOSITY_RATIO * jetCentrelineSpeed(axial_m, speed_mPerS, diameter_m) * halfWidth_m * exp(-LN2 * eta * eta);
 }
 
 const FRAME = new Float64Array(6);
@@ -32,7 +33,7 @@ export function jetDiffusivityAndGradient(jet: RoundJet, px_m: number, py_m: num
     x >= core_m ? JET_EDDY_VISCOSITY_RATIO * speed_mPerS * core_m * JET_SPREADING_RATE : JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidth;
   const scaleSlope = x >= core_m ? 0 : JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidthSlope;
   const inverseSquare = 1 / (halfWidth * halfWidth);
-  const g = Math.exp(-LN2 * rr * inverseSquare);
+  const g = exp(-LN2 * rr * inverseSquare);
   const d = scale * g;
   const axial = scaleSlope * g + d * 2 * LN2 * rr * inverseSquare * (halfWidthSlope / halfWidth);
   const radial = -2 * LN2 * inverseSquare * d;

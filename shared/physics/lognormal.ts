@@ -1,3 +1,4 @@
+import { exp, log } from '../det-math/index';
 import { type SamplingConvention, conventionFraction } from './conventions';
 import { requireAtLeast, requirePositive } from './validate';
 
@@ -12,8 +13,9 @@ export interface HatchChoateDiameters {
 // Hatch–Choate: ln d = ln CMD + b·(ln σg)² with b = 3, 2, 1.5, 2.5, 0.5 (Hinds Eqs. 4.38–4.53).
 export function hatchChoate(countMedian_m: number, gsd: number): HatchChoateDiameters {
   requirePositive('countMedian_m', countMedian_m);
-  const lnGsdSquared = Math.log(requireAtLeast('gsd', gsd, 1)) ** 2;
-  const shifted = (b: number) => countMedian_m * Math.exp(b * lnGsdSquared);
+  const lnGsd = log(requireAtLeast('gsd', gsd, 1));
+  const lnGsdSquared = lnGsd * lnGsd;
+  const shifted = (b: number) => countMedian_m * exp(b * lnGsdSquared);
   return {
     massMedian_m: shifted(3),
     surfaceMedian_m: shifted(2),
@@ -32,13 +34,13 @@ export function conventionMassFraction(massMedianAerodynamic_m: number, gsd: num
   requireAtLeast('gsd', gsd, 1);
   const fraction = conventionFraction(convention);
   if (gsd === 1) return fraction(massMedianAerodynamic_m);
-  const lnGsd = Math.log(gsd);
+  const lnGsd = log(gsd);
   const h = (2 * Z_LIMIT) / PANELS;
   let sum = 0;
   for (let i = 0; i <= PANELS; i++) {
     const z = -Z_LIMIT + i * h;
     const weight = i === 0 || i === PANELS ? 1 : i % 2 === 1 ? 4 : 2;
-    sum += weight * fraction(massMedianAerodynamic_m * Math.exp(z * lnGsd)) * Math.exp(-0.5 * z * z);
+    sum += weight * fraction(massMedianAerodynamic_m * exp(z * lnGsd)) * exp(-0.5 * z * z);
   }
   return (sum * h) / 3 / Math.sqrt(2 * Math.PI);
 }

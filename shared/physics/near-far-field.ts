@@ -1,3 +1,4 @@
+import { exp } from '../det-math/index';
 import { requireNonNegative, requirePositive, requireTime } from './validate';
 
 export interface NearFarFieldModel {
@@ -36,7 +37,7 @@ export function nearFieldFarField(model: NearFarFieldModel, time_s: number): Nea
   if (time_s === Infinity) return { near_mgPerM3: steadyNear, far_mgPerM3: steadyFar };
 
   const halfTrace = 0.5 * (a11 + a22);
-  const root = Math.sqrt(0.25 * (a11 - a22) ** 2 + a12 * a21);
+  const root = Math.sqrt(0.25 * (a11 - a22) * (a11 - a22) + a12 * a21);
   const lambda1 = halfTrace + root;
   const lambda2 = halfTrace - root;
   // Eigenvectors (a12, λ − a11); coefficients chosen so that C(0) = 0.
@@ -44,8 +45,8 @@ export function nearFieldFarField(model: NearFarFieldModel, time_s: number): Nea
   const w2 = lambda2 - a11;
   const c1 = (-steadyFar + (w2 * steadyNear) / a12) / (w1 - w2);
   const c2 = (steadyFar - (w1 * steadyNear) / a12) / (w1 - w2);
-  const e1 = Math.exp(lambda1 * time_s);
-  const e2 = Math.exp(lambda2 * time_s);
+  const e1 = exp(lambda1 * time_s);
+  const e2 = exp(lambda2 * time_s);
   return {
     near_mgPerM3: steadyNear + a12 * (c1 * e1 + c2 * e2),
     far_mgPerM3: steadyFar + c1 * w1 * e1 + c2 * w2 * e2,

@@ -1,3 +1,5 @@
+import { exp, log } from '../det-math/index';
+
 const SQRT_PI = Math.sqrt(Math.PI);
 
 // Below this the positive series is accurate; above it the continued fraction converges in few terms.
@@ -11,7 +13,7 @@ function erfSeries(x: number): number {
     term *= (2 * x * x) / (2 * n + 1);
     sum += term;
   }
-  return (2 / SQRT_PI) * Math.exp(-x * x) * sum;
+  return (2 / SQRT_PI) * exp(-x * x) * sum;
 }
 
 // e^(x²)·erfc(x) by the Laplace continued fraction (Abramowitz & Stegun 7.1.14), modified Lentz.
@@ -37,7 +39,7 @@ function erfcxContinuedFraction(x: number): number {
 export function erfcx(x: number): number {
   if (Number.isNaN(x)) return NaN;
   if (x >= SERIES_LIMIT) return erfcxContinuedFraction(x);
-  return Math.exp(x * x) * erfc(x);
+  return exp(x * x) * erfc(x);
 }
 
 // Complementary error function to near double precision (A&S 7.1.6 and 7.1.14).
@@ -46,7 +48,7 @@ export function erfc(x: number): number {
   if (x < 0) return 2 - erfc(-x);
   if (x === Infinity) return 0;
   if (x < SERIES_LIMIT) return 1 - erfSeries(x);
-  return Math.exp(-x * x) * erfcxContinuedFraction(x);
+  return exp(-x * x) * erfcxContinuedFraction(x);
 }
 
 // Standard normal CDF Φ(z) = ½·erfc(−z/√2).
@@ -63,7 +65,7 @@ const P_LOW = 0.02425;
 // Acklam's rational approximation, used only as the start for Halley refinement.
 function acklamGuess(p: number): number {
   if (p < P_LOW || p > 1 - P_LOW) {
-    const q = Math.sqrt(-2 * Math.log(p < P_LOW ? p : 1 - p));
+    const q = Math.sqrt(-2 * log(p < P_LOW ? p : 1 - p));
     const x = (((((C[0] * q + C[1]) * q + C[2]) * q + C[3]) * q + C[4]) * q + C[5]) / ((((D[0] * q + D[1]) * q + D[2]) * q + D[3]) * q + 1);
     return p < P_LOW ? x : -x;
   }
@@ -83,7 +85,7 @@ export function normalQuantile(p: number): number {
   let x = acklamGuess(p);
   for (let i = 0; i < 2; i++) {
     const error = p < 0.5 ? normalCdf(x) - p : 1 - p - 0.5 * erfc(x / Math.SQRT2);
-    const step = error * Math.sqrt(2 * Math.PI) * Math.exp((x * x) / 2);
+    const step = error * Math.sqrt(2 * Math.PI) * exp((x * x) / 2);
     x -= step / (1 + (x * step) / 2);
   }
   return x;

@@ -1,3 +1,4 @@
+import { hypot3 } from '../det-math/index';
 import { hoodAxis } from '../schemas/hood-axis';
 import type { ReleaseCondition } from './capture-velocity';
 
@@ -56,7 +57,7 @@ export function jetCentrelineSpeed_mPerS(speed_mPerS: number, diameter_m: number
 // The cautious default: the release blows straight at the nose. A worker standing in the source gets an upward jet.
 export function towardBreathingZone(source: Point, worker: Point): Vector3 {
   const d: Vector3 = [worker.x_m - source.x_m, worker.y_m - source.y_m, worker.z_m - source.z_m];
-  const length = Math.hypot(...d);
+  const length = hypot3(d[0], d[1], d[2]);
   return length > 1e-9 ? [d[0] / length, d[1] / length, d[2] / length] : [0, 0, 1];
 }
 

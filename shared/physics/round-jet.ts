@@ -1,3 +1,5 @@
+import { exp } from '../det-math/index';
+
 // Turbulent round free jet (Pope, Turbulent Flows, ch. 5, from memory): far field
 // u_c = B·u₀·d₀/x, u/u_c = exp(−ln2·(r/r½)²), r½ = S·x, with Panchapakesan & Lumley's (1993)
 // B = 6.06 and S = 0.096, whose volume flux 4·B·S²/ln2·x/d₀ = 0.32·x/d₀ matches Ricou & Spalding.
@@ -90,7 +92,7 @@ export function jetVelocity(jet: RoundJet, px_m: number, py_m: number, pz_m: num
   const uc = x >= core_m ? (speed_mPerS * core_m) / x : speed_mPerS;
   const fluxSlope = x >= core_m ? (uc * halfWidth * halfWidth) / x : 2 * uc * halfWidth * halfWidthSlope;
   const eta = r / halfWidth;
-  const g = Math.exp(-LN2 * eta * eta);
+  const g = exp(-LN2 * eta * eta);
   const u = uc * g;
   // (1 − g)/r → 0 on the axis, where the radial direction is undefined anyway.
   const v = r > 1e-12 * halfWidth ? (-fluxSlope * (1 - g)) / (2 * LN2 * r) + (uc * g * r * halfWidthSlope) / halfWidth : 0;

@@ -1,3 +1,4 @@
+import { pow } from '../det-math/index';
 import { type AirProperties, STANDARD_AIR } from './air';
 import { GRAVITY_MPerS2 } from './constants';
 import { bisect } from './root';
@@ -9,7 +10,7 @@ import { requirePositive } from './validate';
 export function relaxationTime(diameter_m: number, density_kgPerM3: number, air: AirProperties = STANDARD_AIR): number {
   requirePositive('diameter_m', diameter_m);
   requirePositive('density_kgPerM3', density_kgPerM3);
-  return (density_kgPerM3 * diameter_m ** 2 * slipCorrection(diameter_m, air)) / (18 * air.viscosity_PaS);
+  return (density_kgPerM3 * diameter_m * diameter_m * slipCorrection(diameter_m, air)) / (18 * air.viscosity_PaS);
 }
 
 // Stokes settling with slip, V = ρ_p·d²·g·Cc/(18μ) (Hinds Eq. 3.21).
@@ -19,7 +20,7 @@ export function stokesSettlingVelocity(diameter_m: number, density_kgPerM3: numb
 
 // Drag relative to Stokes: Schiller & Naumann 1933 below Re 1000, Newton's C_D = 0.44 above.
 export function dragFactor(reynolds: number): number {
-  return reynolds < 1000 ? 1 + 0.15 * reynolds ** 0.687 : (0.44 * reynolds) / 24;
+  return reynolds < 1000 ? 1 + 0.15 * pow(reynolds, 0.687) : (0.44 * reynolds) / 24;
 }
 
 // Force balance V·f(Re) = V_Stokes solved by bisection on [0, V_Stokes]; f ≥ 1 keeps the root inside.

@@ -1,3 +1,5 @@
+import { atan2, log } from '../det-math/index';
+
 // Velocity of a uniformly drawing rectangular face: the field of a constant-strength sink sheet,
 // u = −(σ/4π)∬(P − P')/|P − P'|³ dA' in closed form (log and atan terms at the four corners).
 // Face in the plane z = 0, centred on the origin, half-widths along x and y; the room is z > 0.
@@ -33,8 +35,8 @@ export function sinkPanelVelocity(
   const r11 = Math.sqrt(s1 * s1 + t1 * t1 + zz);
   const side = z_m >= 0 ? frontShare : 1 - frontShare;
   const c = (-2 * side * airflow_m3PerS) / (16 * Math.PI * halfWidth_m * halfHeight_m);
-  const ux = Math.log(edgeLogRatio(t2, r22, t1, r21) / edgeLogRatio(t2, r12, t1, r11));
-  const uy = Math.log(edgeLogRatio(s2, r22, s1, r12) / edgeLogRatio(s2, r21, s1, r11));
+  const ux = log(edgeLogRatio(t2, r22, t1, r21) / edgeLogRatio(t2, r12, t1, r11));
+  const uy = log(edgeLogRatio(s2, r22, s1, r12) / edgeLogRatio(s2, r21, s1, r11));
   // atan(p₁/q₁) + atan(p₂/q₂) = atan2(p₁q₂ + p₂q₁, q₁q₂ − p₁p₂) for q > 0: two atan2 for four atan.
   const za = z_m >= 0 ? z_m : -z_m;
   const q22 = za * r22;
@@ -45,7 +47,7 @@ export function sinkPanelVelocity(
   const p11 = s1 * t1;
   const p12 = s1 * t2;
   const p21 = s2 * t1;
-  const solid = Math.atan2(p22 * q11 + p11 * q22, q22 * q11 - p22 * p11) - Math.atan2(p12 * q21 + p21 * q12, q12 * q21 - p12 * p21);
+  const solid = atan2(p22 * q11 + p11 * q22, q22 * q11 - p22 * p11) - atan2(p12 * q21 + p21 * q12, q12 * q21 - p12 * p21);
   const uz = z_m >= 0 ? solid : -solid;
   out[0] = c * ux;
   out[1] = c * uy;

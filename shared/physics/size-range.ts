@@ -1,3 +1,4 @@
+import { log } from '../det-math/index';
 import { normalCdf } from './normal';
 import { requireAtLeast, requirePositive } from './validate';
 
@@ -17,9 +18,9 @@ export function massOutsideRange(massMedian_m: number, gsd: number, lower_m: num
   if (gsd === 1) {
     return { below: massMedian_m < lower_m ? 1 : 0, above: massMedian_m > upper_m ? 1 : 0 };
   }
-  const lnGsd = Math.log(gsd);
+  const lnGsd = log(gsd);
   return {
-    below: normalCdf(Math.log(lower_m / massMedian_m) / lnGsd),
-    above: normalCdf(-Math.log(upper_m / massMedian_m) / lnGsd),
+    below: normalCdf(log(lower_m / massMedian_m) / lnGsd),
+    above: normalCdf(-log(upper_m / massMedian_m) / lnGsd),
   };
 }

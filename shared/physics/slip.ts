@@ -1,3 +1,4 @@
+import { exp } from '../det-math/index';
 import { type AirConditions, type AirProperties, REFERENCE_AIR, REFERENCE_MEAN_FREE_PATH_m, STANDARD_AIR, scaleMeanFreePath } from './air';
 import { requirePositive } from './validate';
 
@@ -38,5 +39,5 @@ export function slipCorrection(diameter_m: number, air: AirProperties = STANDARD
     air.pressure_Pa,
   );
   const knudsen = (2 * meanFreePath_m) / diameter_m;
-  return 1 + knudsen * (coefficients.a + coefficients.b * Math.exp(-coefficients.c / knudsen));
+  return 1 + knudsen * (coefficients.a + coefficients.b * exp(-coefficients.c / knudsen));
 }

@@ -1,3 +1,4 @@
+import { atan, exp, expm1, log, pow } from '../det-math/index';
 import { type AirProperties, STANDARD_AIR } from './air';
 import { diffusionCoefficient } from './diffusion';
 import { settlingVelocity } from './settling';
@@ -14,21 +15,21 @@ export interface DepositionVelocities {
 // Near-wall eddy diffusivity ν_t/ν = 7.669e-4·y⁺³ (y⁺ < 4.3), 1.00e-3·y⁺^2.8214 (4.3–12.5),
 // 1.07e-2·y⁺^1.8895 (12.5–30) (Lai & Nazaroff 2000, after Corner & Pendlebury; last two [M]).
 function eddyRatio(yPlus: number): number {
-  if (yPlus < 4.3) return 7.669e-4 * yPlus ** 3;
-  if (yPlus < 12.5) return 1.0e-3 * yPlus ** 2.8214;
-  return 1.07e-2 * yPlus ** 1.8895;
+  if (yPlus < 4.3) return 7.669e-4 * yPlus * yPlus * yPlus;
+  if (yPlus < 12.5) return 1.0e-3 * pow(yPlus, 2.8214);
+  return 1.07e-2 * pow(yPlus, 1.8895);
 }
 
 // ∫ dy⁺/(1/Sc + ν_t/ν) from 4.3 (or r⁺ beyond it) to 30, Simpson in ln y⁺. The paper replaces this
 // part by the constant 39, which neglects Brownian diffusion there; keeping it matters below ~10 nm.
 function outerIntegral(inverseSchmidt: number, from: number): number {
   if (from >= 30) return 0;
-  const lo = Math.log(from);
+  const lo = log(from);
   const n = 400;
-  const h = (Math.log(30) - lo) / n;
+  const h = (log(30) - lo) / n;
   let sum = 0;
   for (let i = 0; i <= n; i++) {
-    const y = Math.exp(lo + i * h);
+    const y = exp(lo + i * h);
     const w = i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2;
     sum += (w * y) / (inverseSchmidt + eddyRatio(y));
   }
@@ -38,10 +39,10 @@ function outerIntegral(inverseSchmidt: number, from: number): number {
 // Closed form of ∫ dy⁺/(1/Sc + 7.669e-4·y⁺³) from r⁺ to 4.3: 3.64·Sc^(2/3)·(a − b) (Lai & Nazaroff 2000).
 function innerIntegral(schmidt: number, rPlus: number): number {
   if (rPlus >= 4.3) return 0;
-  const c = 10.92 * schmidt ** (-1 / 3);
+  const c = 10.92 * pow(schmidt, -1 / 3);
   const part = (y: number) =>
-    0.5 * Math.log((c + y) ** 3 / (1 / schmidt + 7.669e-4 * y ** 3)) + Math.sqrt(3) * Math.atan((2 * y - c) / (Math.sqrt(3) * c));
-  return 3.64 * schmidt ** (2 / 3) * (part(4.3) - part(rPlus));
+    0.5 * log(((c + y) * (c + y) * (c + y)) / (1 / schmidt + 7.669e-4 * y * y * y)) + Math.sqrt(3) * atan((2 * y - c) / (Math.sqrt(3) * c));
+  return 3.64 * pow(schmidt, 2 / 3) * (part(4.3) - part(rPlus));
 }
 
 // I = ∫ dy⁺/(1/Sc + ν_t/ν) from r⁺ = d·u*/(2ν) to 30 (Lai & Nazaroff, J. Aerosol Sci. 31:463, 2000).
@@ -70,7 +71,7 @@ export function depositionVelocities(
   const vertical_mPerS = uStar / integral;
   const a = (settling_mPerS * integral) / uStar;
   // expm1 keeps both limits: a → 0 gives u*/I, a → ∞ gives v_s upward and 0 downward.
-  const upward_mPerS = a < 1e-12 ? vertical_mPerS : settling_mPerS / -Math.expm1(-a);
-  const downward_mPerS = a < 1e-12 ? vertical_mPerS : settling_mPerS / Math.expm1(a);
+  const upward_mPerS = a < 1e-12 ? vertical_mPerS : settling_mPerS / -expm1(-a);
+  const downward_mPerS = a < 1e-12 ? vertical_mPerS : settling_mPerS / expm1(a);
   return { vertical_mPerS, upward_mPerS, downward_mPerS, settling_mPerS, integral };
 }

@@ -1,3 +1,4 @@
+import { exp } from '../det-math/index';
 import { requireNonNegative, requirePositive, requireTime } from './validate';
 
 export interface WellMixedRoom {
@@ -20,7 +21,7 @@ export function wellMixedConcentration(room: WellMixedRoom, time_s: number): num
   if (removal_perS === 0) return initial_mgPerM3 + (generation_mgPerS / volume_m3) * time_s;
   const steady_mgPerM3 = generation_mgPerS / (removal_perS * volume_m3);
   if (time_s === Infinity) return steady_mgPerM3;
-  const decay = Math.exp(-removal_perS * time_s);
+  const decay = exp(-removal_perS * time_s);
   return steady_mgPerM3 * (1 - decay) + initial_mgPerM3 * decay;
 }
 

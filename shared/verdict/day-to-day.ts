@@ -1,3 +1,4 @@
+import { exp, log, pow } from '../det-math/index';
 import { requireAtLeast, requireNonNegative } from '../physics/validate';
 
 /**
@@ -19,6 +20,6 @@ const Z95 = 1.645;
 export function dailyP95(mean_mgPerM3: number, gsd: number): number {
   requireNonNegative('mean_mgPerM3', mean_mgPerM3);
   requireAtLeast('gsd', gsd, 1);
-  const lnG = Math.log(gsd);
-  return (mean_mgPerM3 * gsd ** Z95) / Math.exp(0.5 * lnG * lnG);
+  const lnG = log(gsd);
+  return (mean_mgPerM3 * pow(gsd, Z95)) / exp(0.5 * lnG * lnG);
 }

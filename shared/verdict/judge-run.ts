@@ -80,7 +80,7 @@ function cleanInterval(n: RunNumbers): { mean: number; lo: number; hi: number; s
 function moreToSettle(histories: number, mean: number, halfWidth: number, thresholdMean: number): number | null {
   const gap = Math.abs(mean - thresholdMean);
   if (!(gap > 0) || !(halfWidth > 0) || !(histories > 0)) return null;
-  return Math.max(0, Math.ceil(histories * ((halfWidth / gap) ** 2 - 1)));
+  return Math.max(0, Math.ceil(histories * ((halfWidth / gap) * (halfWidth / gap) - 1)));
 }
 
 // A peak above the short-term limit is a finding of its own; a peak whose interval straddles it keeps the banner from Clear.

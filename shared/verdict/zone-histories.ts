@@ -13,7 +13,8 @@ export interface HistoryCheck {
 // Two significant figures, rounded up: "about 12,000 more" should never fall short.
 function roundUp(n: number): number {
   if (n <= 0) return 0;
-  const step = 10 ** Math.max(0, Math.floor(Math.log10(n)) - 1);
+  let step = 1;
+  while (step * 100 <= n) step *= 10;
   return Math.ceil(n / step) * step;
 }
 

@@ -1,11 +1,11 @@
 import { parseScenario } from '../../shared/schemas/scenario';
-import { cos, exp, log, pow, sin } from '../../workers/engine/det-math';
+import { atan, atan2, cos, exp, expm1, log, pow, sin } from '../../shared/det-math/index';
 import { batchTally, prepareScenario, runBatch } from '../../workers/engine/index';
 import { TallyHash } from '../../workers/engine/tally-hash';
 import { workstation } from '../../workers/engine/workstation.test-helper';
 
 // The golden test's bench (seed 2024), and the same with a disc source in a stronger draft, so
-// the release's sin, cos and log and the walk's exp all take part.
+// the release's sin, cos and log and the walk's exp all take part (the hood's sink panels take atan2 and log).
 const GOLDEN = [
   { ...workstation, run: { particles: 1000, batches: 4, seed: 2024 } },
   {
@@ -31,6 +31,9 @@ export function engineBits(): { batches: string[]; maths: string } {
     h.number(sin(x * 7));
     h.number(cos(x * 7));
     h.number(pow(x, 0.687));
+    h.number(atan(x - 25));
+    h.number(atan2(x - 25, 10 - x));
+    h.number(expm1((x - 25) * 0.01));
   }
   return { batches, maths: h.hex() };
 }

@@ -1,5 +1,5 @@
 import type { PreparedScenario } from './types';
-import { pow } from './det-math';
+import { pow } from '../../shared/det-math/index';
 
 type Room = PreparedScenario['room'];
 

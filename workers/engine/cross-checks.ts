@@ -1,5 +1,5 @@
 import { eddyContinuousSource, nearFieldFarField, wellMixedConcentration } from '../../shared/physics/index';
-import { pow } from './det-math';
+import { pow } from '../../shared/det-math/index';
 import type { Fraction, PreparedScenario, Results } from './types';
 import { FRACTIONS } from './types';
 

@@ -2,7 +2,7 @@ import type { Hood } from '../../shared/schemas/scenario';
 import { hoodAxis } from '../../shared/schemas/hood-axis';
 import { sinkPanelVelocity } from '../../shared/physics/index';
 import * as slots from './hood-slots';
-import { hypot3 } from './det-math';
+import { hypot3 } from '../../shared/det-math/index';
 
 // Module-level copies rather than the imported bindings: V8 folds a module's own constants into
 // the compiled loop, while each use of an import stays a load and a check.
@@ -80,7 +80,7 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
     p[o + HOOD_FRONT_SHARE] = kind === KIND_PLAIN || kind === KIND_SLOT ? UNFLANGED_FRONT_SHARE : 1;
     p[o + HOOD_FACE_VELOCITY] = hood.airflow_m3PerS / area;
     p[o + HOOD_REACH] = reach;
-    p[o + HOOD_FAR2] = (FAR_FIELD_HALF_DIAGONALS * reach) ** 2;
+    p[o + HOOD_FAR2] = FAR_FIELD_HALF_DIAGONALS * reach * (FAR_FIELD_HALF_DIAGONALS * reach);
   });
   return p;
 }

@@ -1,5 +1,5 @@
 import type { Kernel } from './kernel';
-import { log } from './det-math';
+import { log } from '../../shared/det-math/index';
 
 /**
  * Variance reduction (run.varianceReduction): a weight window over an importance map, so the

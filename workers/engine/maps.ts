@@ -1,7 +1,7 @@
 import { addHoodVelocity } from './hood-field';
 import { HOOD_STRIDE, HOOD_X, HOOD_Y } from './hood-slots';
 import type { BatchResult, Grid, PreparedScenario, Results } from './types';
-import { hypot3 } from './det-math';
+import { hypot3 } from '../../shared/det-math/index';
 
 const MAP_CELLS = 40;
 

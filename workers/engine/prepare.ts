@@ -9,7 +9,7 @@ import { zoneVolume_m3 } from './breathing-zone';
 import { packHoods } from './hood-field';
 import { CONVENTIONS, buildSizeBins } from './size-bins';
 import type { PreparedScenario } from './types';
-import { cos, hypot3, sin } from './det-math';
+import { cos, hypot3, sin } from '../../shared/det-math/index';
 import { importancePlan } from './importance';
 
 export const TIME_BINS = 120;
@@ -52,7 +52,7 @@ export function prepareScenario(s: Scenario): PreparedScenario {
   const timeBin_s = duration_s / TIME_BINS;
   const jet = releaseJet(s);
   const resolved = resolveJet(s.source, s.worker);
-  const lagrangianTime_s = eddy / ROOM_TURBULENT_SPEED_mPerS ** 2;
+  const lagrangianTime_s = eddy / (ROOM_TURBULENT_SPEED_mPerS * ROOM_TURBULENT_SPEED_mPerS);
   const w = s.worker;
   return {
     seed: s.run.seed,

@@ -7,7 +7,7 @@ import {
   normalCdf,
   physicalDiameter,
 } from '../../shared/physics/index';
-import { log } from './det-math';
+import { log } from '../../shared/det-math/index';
 
 type Dust = Scenario['dust'];
 
@@ -61,7 +61,7 @@ export function profileShares(dust: Dust, edges_m: Float64Array, air: AirPropert
     let inLo = p.edges_m[i];
     let inHi = p.edges_m[i + 1];
     const midPhys = p.diameter === 'physical' ? Math.sqrt(inLo * inHi) : toPhys(Math.sqrt(inLo * inHi));
-    const mass = p.basis === 'mass' ? p.amounts[i] : p.amounts[i] * rho * (Math.PI / 6) * midPhys ** 3;
+    const mass = p.basis === 'mass' ? p.amounts[i] : p.amounts[i] * rho * (Math.PI / 6) * midPhys * midPhys * midPhys;
     if (p.diameter === 'physical') {
       inLo = toAero(inLo);
       inHi = toAero(inHi);

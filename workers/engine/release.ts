@@ -1,6 +1,6 @@
 import type { Xoshiro128 } from './rng';
 import type { PreparedScenario } from './types';
-import { cos, log, sin } from './det-math';
+import { cos, log, sin } from '../../shared/det-math/index';
 
 export interface ParticleArrays {
   /** Particles released (source histories); rows 0…count−1 hold them once the walk is over. */

@@ -1,6 +1,6 @@
 import type { Scenario } from '../../shared/schemas/scenario';
 import { type AirProperties, aerodynamicDiameter } from '../../shared/physics/index';
-import { exp, log } from './det-math';
+import { exp, log } from '../../shared/det-math/index';
 
 /**
  * The simulated sizes run from 1 nm physical diameter to 100 µm aerodynamic diameter.

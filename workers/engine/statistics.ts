@@ -1,4 +1,4 @@
-import { pow } from './det-math';
+import { atan, cos, pow, sin } from '../../shared/det-math/index';
 
 // Two-sided 95 % Student t quantiles for 1–30 degrees of freedom (standard tables).
 const T975 = [
@@ -39,9 +39,9 @@ export function batchEstimate(values: ArrayLike<number>): Estimate {
  */
 export function tCdf(t: number, df: number): number {
   const n = Math.max(1, Math.round(df));
-  const theta = Math.atan(t / Math.sqrt(n));
-  const s = Math.sin(theta);
-  const c = Math.cos(theta);
+  const theta = atan(t / Math.sqrt(n));
+  const s = sin(theta);
+  const c = cos(theta);
   let a: number;
   if (n % 2 === 1) {
     let sum = 0;

@@ -1,7 +1,7 @@
 import { type AirProperties, depositionVelocities } from '../../shared/physics/index';
 import type { Scenario } from '../../shared/schemas/scenario';
 import type { PreparedScenario, SizeBins } from './types';
-import { hypot3 } from './det-math';
+import { hypot3 } from '../../shared/det-math/index';
 
 // Indoor friction velocity: about 1 cm/s in still rooms (Lai & Nazaroff 2000's indoor range, from
 // memory), and a twentieth of a draft that sweeps the surfaces [P] common practice.

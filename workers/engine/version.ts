@@ -1,2 +1,2 @@
 // Bump when a change alters results for the same scenario and seed.
-export const ENGINE_VERSION = '2.1.0';
+export const ENGINE_VERSION = '2.1.1';

@@ -2,7 +2,7 @@ import { faceEntered, reflectAtFaces } from './hood-field';
 import { airAt, recordFrames } from './walk-air';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
 import { fillNormals } from './ziggurat';
-import { exp, expm1 } from './det-math';
+import { exp, expm1 } from '../../shared/det-math/index';
 import { REWEIGHT, WINDOW } from './importance';
 
 // Long enough that a visit's set-up is small beside its steps, short enough that a pass over the

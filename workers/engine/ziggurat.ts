@@ -1,5 +1,5 @@
 import type { Xoshiro128 } from './rng';
-import { exp, log } from './det-math';
+import { exp, log } from '../../shared/det-math/index';
 
 // 128-layer ziggurat for the standard normal (Marsaglia & Tsang 2000), one 32-bit draw per normal.
 const LAYERS = 128;

@@ -1,39 +1,12 @@
 /**
- * exp, log, pow, sin and cos in plain IEEE arithmetic, so every JavaScript engine gives the same
- * bits (the language leaves Math.exp and friends implementation-approximated). The algorithms
- * are those of fdlibm (Sun Microsystems, 1993: e_exp.c, e_log.c, k_sin.c, k_cos.c and the
- * Cody–Waite part of e_rem_pio2.c); V8 ships the same ports, so Node and Chromium agree with Math.*
- * as well. +, −, ×, ÷, Math.sqrt, Math.abs and Math.floor are exactly rounded everywhere.
+ * exp, log, pow and expm1 in plain IEEE arithmetic, so every JavaScript engine gives the same bits
+ * (the language leaves Math.exp and friends implementation-approximated). The algorithms are
+ * fdlibm's (Sun Microsystems, 1993: e_exp.c, e_log.c, s_expm1.c); V8 ships the same ports, so Node
+ * and Chromium agree with Math.* as well. +, −, ×, ÷, Math.sqrt, Math.abs and Math.floor are
+ * exactly rounded everywhere.
  */
+import { HI, INV_LN2, LN2_HI, LN2_LO, LO, POW2, f64, highWord, scale, u32 } from './words';
 
-// Word access to a double; every platform a browser or Node runs on is little-endian, checked once.
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-f64[0] = 1;
-const HI = u32[1] === 0x3ff00000 ? 1 : 0;
-const LO = 1 - HI;
-
-function highWord(x: number): number {
-  f64[0] = x;
-  return u32[HI] | 0;
-}
-
-// Powers of two 2^-1022…2^1023 by exact doubling, so scaling never touches the bits.
-const POW2 = new Float64Array(2046);
-POW2[1022] = 1;
-for (let k = 1; k <= 1023; k++) POW2[1022 + k] = POW2[1021 + k] * 2;
-for (let k = 1; k <= 1022; k++) POW2[1022 - k] = POW2[1023 - k] * 0.5;
-
-/** y · 2^k; each product by a power of two is exact unless the result is subnormal (then one rounding, as fdlibm). */
-function scale(y: number, k: number): number {
-  if (k > 1023) return y * POW2[1022 + 1023] * POW2[1022 + k - 1023];
-  if (k < -1021) return y * POW2[1022 + k + 1000] * POW2[1022 - 1000];
-  return y * POW2[1022 + k];
-}
-
-const LN2_HI = 6.9314718036912381649e-1;
-const LN2_LO = 1.90821492927058770002e-10;
-const INV_LN2 = 1.442695040888963387;
 const P1 = 1.66666666666666019037e-1;
 const P2 = -2.77777777770155933842e-3;
 const P3 = 6.61375632143793436117e-5;
@@ -162,115 +135,6 @@ export function pow(x: number, y: number): number {
   const tail = productError(y, l, head) + y * lTail;
   const v = exp(head);
   return v + v * tail;
-}
-
-const S1 = -1.66666666666666324348e-1;
-const S2 = 8.33333333332248946124e-3;
-const S3 = -1.98412698298579493134e-4;
-const S4 = 2.75573137070700676789e-6;
-const S5 = -2.50507602534068634195e-8;
-const S6 = 1.58969099521155010221e-10;
-
-// sin on [−π/4, π/4] for x + y, y the tail of the reduced argument (none when tail is false).
-function kernelSin(x: number, y: number, tail: boolean): number {
-  if (Math.abs(x) < 7.450580596923828e-9) return x;
-  const z = x * x;
-  const v = z * x;
-  const r = S2 + z * (S3 + z * (S4 + z * (S5 + z * S6)));
-  if (!tail) return x + v * (S1 + z * r);
-  return x - (z * (0.5 * y - v * r) - y - v * S1);
-}
-
-const C1 = 4.16666666666666019037e-2;
-const C2 = -1.38888888888741095749e-3;
-const C3 = 2.48015872894767294178e-5;
-const C4 = -2.75573143513906633035e-7;
-const C5 = 2.0875723212981748279e-9;
-const C6 = -1.13596475577881948265e-11;
-
-function kernelCos(x: number, y: number): number {
-  const ax = Math.abs(x);
-  if (ax < 7.450580596923828e-9) return 1;
-  const z = x * x;
-  const r = z * (C1 + z * (C2 + z * (C3 + z * (C4 + z * (C5 + z * C6)))));
-  if (ax < 0.3) return 1 - (0.5 * z - (z * r - x * y));
-  // qx: |x|/4 cut to its high word, so 1 − qx is exact.
-  let qx = 0.28125;
-  if (ax <= 0.78125) {
-    const hx = highWord(ax);
-    f64[0] = 0;
-    u32[HI] = hx - 0x00200000;
-    qx = f64[0];
-  }
-  const hz = 0.5 * z - qx;
-  const a = 1 - qx;
-  return a - (hz - (z * r - x * y));
-}
-
-const INV_PIO2 = 6.36619772367581382433e-1;
-const PIO2_1 = 1.57079632673412561417;
-const PIO2_1T = 6.07710050650619224932e-11;
-const PIO2_2 = 6.0771005063039659766e-11;
-const PIO2_2T = 2.02226624879595063154e-21;
-const PIO2_3 = 2.0222662487111664558e-21;
-const PIO2_3T = 8.47842766036889956997e-32;
-
-const exponentOf = (v: number) => (highWord(v) >> 20) & 0x7ff;
-
-// |x| − n·π/2 as head + tail (π/2 in three 33-bit parts, a further part only when the first ones
-// cancel). n·part is exact for n < 2^20; beyond |x| ≈ 8e5 (never an engine angle) the reduction
-// loses accuracy but not determinism. Returns n; the parts land in reducedHead/Tail.
-let reducedHead = 0;
-let reducedTail = 0;
-function reduce(ax: number): number {
-  const n = Math.floor(ax * INV_PIO2 + 0.5);
-  const j = exponentOf(ax);
-  let r = ax - n * PIO2_1;
-  let w = n * PIO2_1T;
-  let y0 = r - w;
-  if (j - exponentOf(y0) > 16) {
-    let t = r;
-    w = n * PIO2_2;
-    r = t - w;
-    w = n * PIO2_2T - (t - r - w);
-    y0 = r - w;
-    if (j - exponentOf(y0) > 49) {
-      t = r;
-      w = n * PIO2_3;
-      r = t - w;
-      w = n * PIO2_3T - (t - r - w);
-      y0 = r - w;
-    }
-  }
-  reducedHead = y0;
-  reducedTail = r - y0 - w;
-  return n;
-}
-
-const QUARTER_PI_HIGH = 0x3fe921fb;
-
-export function sin(x: number): number {
-  if ((highWord(x) & 0x7fffffff) <= QUARTER_PI_HIGH) return kernelSin(x, 0, false);
-  if (!Number.isFinite(x)) return NaN;
-  const n = reduce(Math.abs(x)) & 3;
-  const h = reducedHead;
-  const t = reducedTail;
-  const s = n === 0 ? kernelSin(h, t, true) : n === 1 ? kernelCos(h, t) : n === 2 ? -kernelSin(h, t, true) : -kernelCos(h, t);
-  return x < 0 ? -s : s;
-}
-
-export function cos(x: number): number {
-  if ((highWord(x) & 0x7fffffff) <= QUARTER_PI_HIGH) return kernelCos(x, 0);
-  if (!Number.isFinite(x)) return NaN;
-  const n = reduce(Math.abs(x)) & 3;
-  const h = reducedHead;
-  const t = reducedTail;
-  return n === 0 ? kernelCos(h, t) : n === 1 ? -kernelSin(h, t, true) : n === 2 ? -kernelCos(h, t) : kernelSin(h, t, true);
-}
-
-/** √(x² + y² + z²) from exactly rounded operations; no overflow guard (engine lengths are metres). */
-export function hypot3(x: number, y: number, z = 0): number {
-  return Math.sqrt(x * x + y * y + z * z);
 }
 
 const Q1 = -3.33333333333331316428e-2;
