@@ -1,5 +1,5 @@
 import os from 'node:os';
-import { batchTally, type BatchTally, type PreparedScenario } from '../../workers/engine/index';
+import { type BatchResult, batchTally, type BatchTally, type PreparedScenario } from '../../workers/engine/index';
 import { ThreadPool } from '../../workers/node/thread-pool';
 
 // Started on the first replay and kept (a thread's start-up and JIT warm-up are paid once); two
@@ -9,12 +9,18 @@ let queue: Promise<unknown> = Promise.resolve();
 
 const THREADS = Math.max(1, Math.min(2, os.availableParallelism() - 1));
 
-/** Re-runs the named batches on the server's worker threads, one replay at a time, and tallies them as the browser did. */
-export function replayBatches(prepared: PreparedScenario, batchIndices: readonly number[]): Promise<BatchTally[]> {
+/**
+ * Re-runs the named batches on the server's worker threads, one replay at a time, and tallies them
+ * as the browser did; the batches themselves come back too (a run to a precision redoes its looks on them).
+ */
+export function replayBatches(
+  prepared: PreparedScenario,
+  batchIndices: readonly number[],
+): Promise<{ tallies: BatchTally[]; batches: BatchResult[] }> {
   const next = queue.then(async () => {
     pool ??= new ThreadPool(THREADS, { background: true });
-    const results = await pool.runBatches(prepared, batchIndices);
-    return results.map((b) => batchTally(prepared, b));
+    const batches = await pool.runBatches(prepared, batchIndices);
+    return { tallies: batches.map((b) => batchTally(prepared, b)), batches };
   });
   queue = next.catch(() => undefined);
   return next;

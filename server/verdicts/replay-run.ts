@@ -1,8 +1,18 @@
 import { randomInt } from 'node:crypto';
 import type { RunResult } from '../../shared/schemas/run-result';
 import type { Scenario } from '../../shared/schemas/scenario';
-import { combinationProblems, ENGINE_VERSION, prepareScenario, tallyMismatch } from '../../workers/engine/index';
-import { lookAlphas, lookPlan } from '../../workers/run-to-precision';
+import type { BatchTally } from '../../workers/engine/batch-tallies';
+import { twa8h } from '../../workers/engine/combine';
+import {
+  type BatchResult,
+  combinationProblems,
+  ENGINE_VERSION,
+  type PreparedScenario,
+  prepareScenario,
+  tallyMismatch,
+} from '../../workers/engine/index';
+import { batchEstimate, batchEstimateAt } from '../../workers/engine/statistics';
+import { lookAlphas, lookAt, lookPlan } from '../../workers/run-to-precision';
 import { replayBatches } from './replay-pool';
 
 /** Batches replayed before a run is stored: at least two, chosen after the upload. */
@@ -58,11 +68,71 @@ export async function replayRun(input: Scenario, result: RunResult, sample: numb
   const prepared = prepareScenario(input);
   const expected = expectedRun(input, result, prepared.batches);
   if (typeof expected === 'string') return { ok: false, replayed: [], problems: [expected] };
-  const problems = combinationProblems(prepared, result, tallies, expected);
+  const problems = [...combinationProblems(prepared, result, tallies, expected), ...lookFigureProblems(prepared, result, tallies)];
   if (problems.length) return { ok: false, replayed: [], problems };
   const replayed = sample === null ? tallies.map((t) => t.batchIndex) : sampleBatches(expected.batches, sample);
   const fresh = await replayBatches(prepared, replayed);
-  const mismatches = fresh.map((t) => tallyMismatch(tallies[t.batchIndex], t)).filter((m): m is string => m !== null);
+  const mismatches = fresh.tallies.map((t) => tallyMismatch(tallies[t.batchIndex], t)).filter((m): m is string => m !== null);
   if (mismatches.length) return { ok: false, replayed, problems: mismatches };
+  // Every batch replayed and matching: the looks can be redone on them, peaks and all.
+  const stops = sample === null ? stoppingProblems(prepared, input, result, fresh.batches) : [];
+  if (stops.length) return { ok: false, replayed, problems: stops };
   return { ok: true, replayed, seconds: (performance.now() - started) / 1000 };
+}
+
+const close = (a: number, b: number) => a === b || Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
+
+/**
+ * A run to a precision records each look's 8-h TWA and interval: they must combine from the
+ * uploaded batch tallies at the error rate spent at that look, on the limit's fraction. Checked
+ * before a run is stored; the looks' decisions need the peaks too, so they wait for the full replay.
+ */
+export function lookFigureProblems(p: PreparedScenario, result: RunResult, tallies: readonly BatchTally[]): string[] {
+  const stopping = result.engine.stopping;
+  if (!stopping) return [];
+  const fraction = p.limit?.fraction ?? 'respirable';
+  if (stopping.fraction !== fraction) return [`the looks judged the ${stopping.fraction} fraction; the scenario's limit is on ${fraction}`];
+  const alphas = lookAlphas(lookPlan(stopping.maxBatches));
+  const problems: string[] = [];
+  stopping.looks.forEach((look, i) => {
+    const values = tallies.slice(0, look.batches).map((t) => t.taskMean_mgPerM3[fraction]);
+    const e = alphas[i] === 0.05 ? batchEstimate(values) : batchEstimateAt(values, alphas[i]);
+    const agree =
+      close(look.alpha, alphas[i]) &&
+      close(look.mean_mgPerM3, twa8h(p, e.mean)) &&
+      close(look.ci_mgPerM3[0], twa8h(p, e.lo)) &&
+      close(look.ci_mgPerM3[1], twa8h(p, e.hi));
+    if (!agree) problems.push(`look ${i + 1} (${look.batches} batches): its 8-h TWA and interval do not combine from the batches`);
+  });
+  return problems;
+}
+
+/**
+ * The stopping rule redone on the replayed batches: no earlier look may have met it, and the last
+ * one must, for the reason the result gives (or be the last planned look). So a run cannot go on
+ * past a decided look, nor stop short of the rule and call itself done.
+ */
+export function stoppingProblems(p: PreparedScenario, input: Scenario, result: RunResult, batches: readonly BatchResult[]): string[] {
+  const rule = input.run.precision;
+  const stopping = result.engine.stopping;
+  if (!rule || !stopping) return [];
+  const plan = lookPlan(rule.maxBatches);
+  const alphas = lookAlphas(plan);
+  const last = stopping.looks.length - 1;
+  for (let k = 0; k <= last; k++) {
+    const { outcome } = lookAt(p, batches.slice(0, plan[k]), rule, alphas[k], k === plan.length - 1);
+    if (outcome.look.decided !== stopping.looks[k].decided)
+      return [
+        `look ${k + 1} (${plan[k]} batches): the server's replay ${outcome.look.decided ? 'decides' : 'does not decide'} the verdict; the result says otherwise`,
+      ];
+    if (k < last && outcome.stop)
+      return [`the rule was met at look ${k + 1} (${plan[k]} batches: ${outcome.stop}); the run went on to ${plan[last]} batches`];
+    if (k === last && outcome.stop !== stopping.reason)
+      return [
+        outcome.stop
+          ? `at ${plan[k]} batches the run stops for ${outcome.stop}; the result says ${stopping.reason}`
+          : `at ${plan[k]} batches the rule is not met yet; the result stopped there (${stopping.reason})`,
+      ];
+  }
+  return [];
 }
