@@ -1,6 +1,7 @@
 import { hoodAxis } from '../schemas/hood-axis';
 import { formatSig } from '../format/index';
 import { RELEASE_TYPE_NEEDS } from '../vocabulary/release-types';
+import { BENCH_FACE_VELOCITY, BENCH_REACH_ABOVE_m, benchFaceCheck } from './bench-face-velocity';
 import { captureVelocityRange, type CaptureVelocityRange, type ReleaseCondition } from './capture-velocity';
 import { hoodCenterlineVelocity, type HoodKind } from './hoods';
 
@@ -15,8 +16,11 @@ export type CaptureHood = Point & {
 };
 
 export type CaptureVerdictWord = 'below-half' | 'below' | 'within' | 'above';
+/** How the speed is found: the centre-line equation at the source, or a downdraft bench's face velocity over its work surface. */
+export type CaptureBasis = 'centre-line' | 'face-velocity';
 
 export interface CaptureCheck {
+  /** Centre-line speed at the source; for a downdraft bench its face velocity Q/A over the work surface. */
   speedAtSource_mPerS: number;
   range: CaptureVelocityRange;
   verdict: CaptureVerdictWord;
@@ -24,6 +28,9 @@ export interface CaptureCheck {
   hoodIndex: number;
   /** The source sits behind the face, where the centre-line equation says nothing: counted as no speed. */
   behind: boolean;
+  basis: CaptureBasis;
+  /** A downdraft bench the source is not over (outside its outline, or below or too far above it): counted as no speed. */
+  offSurface: boolean;
 }
 
 // Half a percent of slack so a hood sized to exactly the low end is not called "below" by rounding.
@@ -56,21 +63,70 @@ function speedAtSource(hood: CaptureHood, source: Point): { speed_mPerS: number;
   return { speed_mPerS: hoodCenterlineVelocity(geometry, axial_m), behind: false };
 }
 
-/** The hood that draws fastest at the source against the release type's capture range (ACGIH table), in words. */
+type Candidate = { speed_mPerS: number; range: CaptureVelocityRange; behind: boolean; offSurface: boolean; basis: CaptureBasis };
+
+// A bench is judged by its own guidance whatever the release; any other hood needs the release type for its range.
+function candidate(hood: CaptureHood, source: Point, release: ReleaseCondition | undefined): Candidate | null {
+  if (hood.kind === 'downdraft-bench') {
+    const bench = benchFaceCheck(hood, source);
+    const speed_mPerS = bench.overSurface ? bench.faceVelocity_mPerS : 0;
+    const range = { ...BENCH_FACE_VELOCITY, examples: [...BENCH_FACE_VELOCITY.examples] };
+    return { speed_mPerS, range, behind: false, offSurface: !bench.overSurface, basis: 'face-velocity' };
+  }
+  if (!release) return null;
+  return { ...speedAtSource(hood, source), range: captureVelocityRange(release), offSurface: false, basis: 'centre-line' };
+}
+
+// On one range the faster hood wins, as it always has; across ranges, the larger share of its own low end.
+const better = (c: Candidate, than: Candidate) =>
+  c.range.min_mPerS === than.range.min_mPerS
+    ? c.speed_mPerS > than.speed_mPerS
+    : c.speed_mPerS / c.range.min_mPerS > than.speed_mPerS / than.range.min_mPerS;
+
+const rangeText = (r: CaptureVelocityRange) => `${formatSig(r.min_mPerS, 2)}–${formatSig(r.max_mPerS, 2)} m/s`;
+
+function sentenceFor(c: Candidate, verdict: CaptureVerdictWord, release: ReleaseCondition | undefined): string {
+  if (c.basis === 'face-velocity') {
+    const at = c.offSurface
+      ? `The source is not over the work surface (inside its outline, at most ${formatSig(BENCH_REACH_ABOVE_m, 1)} m above it), so the bench's face-velocity guidance does not apply and counts as no speed`
+      : `${formatSig(c.speed_mPerS, 2)} m/s over the work surface`;
+    return `${at}; downdraft benches need ${rangeText(c.range)} (common practice; ${WORDS[verdict]}). Confirm against local guidance.`;
+  }
+  const at = c.behind
+    ? 'The source is behind the hood face, so no capture speed reaches it'
+    : `${formatSig(c.speed_mPerS, 2)} m/s at the source`;
+  return `${at}; ${RELEASE_TYPE_NEEDS[release!]} needs ${rangeText(c.range)} (${WORDS[verdict]}).`;
+}
+
+/**
+ * The hood that does best at the source, in words: a capturing hood's centre-line speed against the release
+ * type's capture range (ACGIH table), a downdraft bench's face velocity against the bench guidance (common practice).
+ * Hoods judged on different ranges are compared by their speed over the low end of their own range.
+ */
 export function captureCheck(scenario: {
   source: Point & { releaseType?: ReleaseCondition };
   hoods: readonly CaptureHood[];
 }): CaptureCheck | null {
   const release = scenario.source.releaseType;
-  if (!release || scenario.hoods.length === 0) return null;
-  const speeds = scenario.hoods.map((h) => speedAtSource(h, scenario.source));
-  const hoodIndex = speeds.reduce((best, s, i) => (s.speed_mPerS > speeds[best].speed_mPerS ? i : best), 0);
-  const { speed_mPerS, behind } = speeds[hoodIndex];
-  const range = captureVelocityRange(release);
-  const verdict = captureVerdictWord(speed_mPerS, range);
-  const at = behind
-    ? 'The source is behind the hood face, so no capture speed reaches it'
-    : `${formatSig(speed_mPerS, 2)} m/s at the source`;
-  const sentence = `${at}; ${RELEASE_TYPE_NEEDS[release]} needs ${formatSig(range.min_mPerS, 2)}–${formatSig(range.max_mPerS, 2)} m/s (${WORDS[verdict]}).`;
-  return { speedAtSource_mPerS: speed_mPerS, range, verdict, sentence, hoodIndex, behind };
+  let chosen: Candidate | null = null;
+  let hoodIndex = -1;
+  for (const [i, hood] of scenario.hoods.entries()) {
+    const c = candidate(hood, scenario.source, release);
+    if (c && (!chosen || better(c, chosen))) {
+      chosen = c;
+      hoodIndex = i;
+    }
+  }
+  if (!chosen) return null;
+  const verdict = captureVerdictWord(chosen.speed_mPerS, chosen.range);
+  return {
+    speedAtSource_mPerS: chosen.speed_mPerS,
+    range: chosen.range,
+    verdict,
+    sentence: sentenceFor(chosen, verdict, release),
+    hoodIndex,
+    behind: chosen.behind,
+    basis: chosen.basis,
+    offSurface: chosen.offSurface,
+  };
 }

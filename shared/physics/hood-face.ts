@@ -12,7 +12,8 @@ export interface HoodFace {
 const PLAIN_FRONT_SHARE = 0.75;
 
 // The rectangle and front share that the uniform sink panel uses for each hood kind; plain and
-// flanged faces are taken as squares, a slot as L × A/L, a booth's open face as flanged by its walls.
+// flanged faces are taken as squares, a slot as L × A/L, a booth's open face as flanged by its walls,
+// a downdraft bench as a flanged opening whose flange is the work surface around it.
 export function hoodFace(hood: HoodGeometry): HoodFace {
   const area_m2 = requirePositive('faceArea_m2', hood.faceArea_m2);
   const half_m = Math.sqrt(area_m2) / 2;
@@ -21,6 +22,7 @@ export function hoodFace(hood: HoodGeometry): HoodFace {
       return { halfWidth_m: half_m, halfHeight_m: half_m, frontShare: PLAIN_FRONT_SHARE };
     case 'flanged':
     case 'booth':
+    case 'downdraft-bench':
       return { halfWidth_m: half_m, halfHeight_m: half_m, frontShare: 1 };
     case 'slot':
     case 'flanged-slot': {
@@ -29,6 +31,6 @@ export function hoodFace(hood: HoodGeometry): HoodFace {
       return { halfWidth_m: length_m / 2, halfHeight_m: area_m2 / (2 * length_m), frontShare };
     }
     default:
-      throw new RangeError(`hood.kind must be plain, flanged, slot, flanged-slot or booth, got ${String(hood.kind)}`);
+      throw new RangeError(`hood.kind must be plain, flanged, slot, flanged-slot, booth or downdraft-bench, got ${String(hood.kind)}`);
   }
 }

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { captureVelocityRange, hoodCenterlineVelocity, hoodRequiredAirflow } from './index';
+import { captureVelocityRange, hoodCenterlineVelocity, hoodFace, hoodRequiredAirflow } from './index';
 
 describe('hoodCenterlineVelocity', () => {
   it.each([
@@ -90,5 +90,23 @@ describe('captureVelocityRange', () => {
   it('rejects an unknown release, quoting it', () => {
     // @ts-expect-error the type forbids it; the runtime check guards untyped callers
     expect(() => captureVelocityRange('toString')).toThrow(/toString/);
+  });
+});
+
+describe('a downdraft bench as a flanged opening facing up (the work surface is its flange)', () => {
+  it('has the flanged centre line Q/(0.75·(10·X² + A)) above its surface ([S] ACGIH hood-types figure)', () => {
+    for (const x_m of [0, 0.05, 0.3, 1]) {
+      const geometry = { faceArea_m2: 0.6, airflow_m3PerS: 0.6 };
+      expect(hoodCenterlineVelocity({ kind: 'downdraft-bench', ...geometry }, x_m)).toBe(
+        hoodCenterlineVelocity({ kind: 'flanged', ...geometry }, x_m),
+      );
+    }
+    // [C] 0.6/(0.75·(10·0.3² + 0.6)) = 0.533 m/s at 0.3 m above a 0.6 m² surface.
+    expect(hoodCenterlineVelocity({ kind: 'downdraft-bench', faceArea_m2: 0.6, airflow_m3PerS: 0.6 }, 0.3)).toBeCloseTo(0.5333, 4);
+  });
+
+  it('draws on the same sink-panel face as a flanged opening, nothing from behind', () => {
+    expect(hoodFace({ kind: 'downdraft-bench', faceArea_m2: 0.6 })).toEqual(hoodFace({ kind: 'flanged', faceArea_m2: 0.6 }));
+    expect(hoodFace({ kind: 'downdraft-bench', faceArea_m2: 0.6 }).frontShare).toBe(1);
   });
 });

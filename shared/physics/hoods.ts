@@ -28,13 +28,16 @@ function airflowPerVelocity_m2(hood: HoodGeometry, distance_m: number): number {
     case 'plain':
     case 'flanged':
       return HOOD_FIT_COEFFICIENT[hood.kind] * (OPENING_DISTANCE_FACTOR * distance_m * distance_m + area_m2);
+    // The work surface is the bench's flange (the engine draws it so); its check is the face velocity (bench-face-velocity.ts).
+    case 'downdraft-bench':
+      return HOOD_FIT_COEFFICIENT.flanged * (OPENING_DISTANCE_FACTOR * distance_m * distance_m + area_m2);
     case 'slot':
     case 'flanged-slot':
       return HOOD_FIT_COEFFICIENT[hood.kind] * requirePositive('slotLength_m', hood.slotLength_m ?? NaN) * distance_m;
     case 'booth':
       return area_m2;
     default:
-      throw new RangeError(`hood.kind must be plain, flanged, slot, flanged-slot or booth, got ${String(hood.kind)}`);
+      throw new RangeError(`hood.kind must be plain, flanged, slot, flanged-slot, booth or downdraft-bench, got ${String(hood.kind)}`);
   }
 }
 

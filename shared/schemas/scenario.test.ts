@@ -163,3 +163,36 @@ describe('scenario bounds', () => {
     expect(issues.find((i) => i.path === 'name')!.message).toMatch(/at most 200 characters/);
   });
 });
+
+describe('downdraft bench', () => {
+  const bench = (patch: Record<string, unknown> = {}) => {
+    const s = valid();
+    return { ...s, hoods: [{ ...s.hoods[0], kind: 'downdraft-bench', z_m: 0.85, faceWidth_m: 1.2, faceHeight_m: 0.6, ...patch }] };
+  };
+
+  it('faces straight up whatever direction is sent, as a vector or as angles', () => {
+    for (const direction of [{ azimuth_deg: -90 }, { x: 1, y: 0, z: 0 }, { x: 0, y: 0, z: -3 }, { azimuth_deg: 40, elevation_deg: -90 }]) {
+      expect(parseScenario(bench({ direction })).hoods[0].direction).toEqual({ x: 0, y: 0, z: 1 });
+    }
+  });
+
+  it('keeps the work surface length and depth as sent', () => {
+    expect(parseScenario(bench()).hoods[0]).toMatchObject({ kind: 'downdraft-bench', faceWidth_m: 1.2, faceHeight_m: 0.6 });
+  });
+
+  it('refuses a work surface of no length or a negative depth, naming the field and the value', () => {
+    expect(issuesOf(bench({ faceWidth_m: 0 }))).toEqual([
+      expect.objectContaining({ path: 'hoods.0.faceWidth_m', message: expect.stringContaining('got 0') }),
+    ]);
+    expect(issuesOf(bench({ faceHeight_m: -0.6 }))).toEqual([
+      expect.objectContaining({ path: 'hoods.0.faceHeight_m', message: expect.stringContaining('got -0.6') }),
+    ]);
+  });
+
+  it('leaves the direction of every other kind as sent', () => {
+    expect(parseScenario(valid()).hoods[0].direction).toEqual({ azimuth_deg: -90, elevation_deg: 0 });
+    const sideways = valid();
+    sideways.hoods[0].direction = { x: 1, y: 0, z: 0 } as never;
+    expect(parseScenario(sideways).hoods[0].direction).toEqual({ x: 1, y: 0, z: 0 });
+  });
+});

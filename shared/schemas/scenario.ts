@@ -89,7 +89,8 @@ const dustSchema = z.object({
   sizeProfile: sizeProfileSchema,
 });
 
-const hoodSchema = z.object({
+/** For a downdraft bench the face is the work surface: faceWidth_m is its length (along +x), faceHeight_m its depth (along +y). */
+const hoodFields = z.object({
   name: text().optional(),
   kind: z.enum(HOOD_KINDS),
   x_m: finite(),
@@ -100,6 +101,15 @@ const hoodSchema = z.object({
   faceHeight_m: positive(),
   airflow_m3PerS: nonNegative(),
 });
+
+/** The one direction a downdraft bench has: its work surface faces straight up. */
+export const BENCH_DIRECTION = { x: 0, y: 0, z: 1 } as const;
+
+// A bench's work surface cannot face anywhere but up, so whatever direction is sent is replaced rather than
+// refused: switching a hood's kind to a bench never strands the record on a direction nobody can see.
+const hoodSchema = hoodFields.transform((hood): z.output<typeof hoodFields> =>
+  hood.kind === 'downdraft-bench' ? { ...hood, direction: { ...BENCH_DIRECTION } } : hood,
+);
 
 const workerSchema = z.object({
   x_m: finite(),

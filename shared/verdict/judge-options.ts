@@ -3,9 +3,17 @@ import type { JudgeOptions } from './judge-run';
 
 type Judged = Parameters<typeof captureCheck>[0] & { worker?: { dayToDayGsd?: number } };
 
-/** What a scenario adds to the verdict beyond the numbers: the hood's speed at the source and the worker's day-to-day GSD. */
+/**
+ * What a scenario adds to the verdict beyond the numbers: the hood's speed at the source (a downdraft bench's face
+ * velocity over its work surface) and the worker's day-to-day GSD.
+ */
 export function judgeOptions(input: Judged): JudgeOptions {
-  const captureVelocity = captureCheck(input)?.verdict;
+  const check = captureCheck(input);
+  const captureVelocity = check?.verdict;
   const gsd = input.worker?.dayToDayGsd;
-  return { ...(captureVelocity ? { captureVelocity } : {}), ...(gsd !== undefined ? { gsd } : {}) };
+  return {
+    ...(captureVelocity ? { captureVelocity } : {}),
+    ...(check?.basis === 'face-velocity' ? { captureBasis: 'face-velocity' as const } : {}),
+    ...(gsd !== undefined ? { gsd } : {}),
+  };
 }

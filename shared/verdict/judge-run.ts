@@ -40,6 +40,8 @@ export interface JudgeOptions {
   /** Day-to-day GSD of daily 8-h exposures; DEFAULT_DAY_TO_DAY_GSD when absent. */
   gsd?: number;
   captureVelocity?: CaptureVelocityVerdict;
+  /** Set for a downdraft bench, whose speed is its face velocity over the work surface; absent for the centre-line check. */
+  captureBasis?: 'face-velocity';
 }
 
 export interface Verdict {
@@ -157,7 +159,9 @@ export function judgeRun(numbers: RunNumbers, limit: JudgeLimit, options: JudgeO
   }
   if (options.captureVelocity === 'below-half') {
     reasons.push(
-      "The hood's speed at the source is below half the lower end of the range for this release: confirm by measurement before relying on the result.",
+      options.captureBasis === 'face-velocity'
+        ? "The bench's face velocity is below half the lower end of the downdraft-bench guidance, or the source is not over its work surface: confirm by measurement before relying on the result."
+        : "The hood's speed at the source is below half the lower end of the range for this release: confirm by measurement before relying on the result.",
     );
   }
   const guarded = !decided || options.captureVelocity === 'below-half';

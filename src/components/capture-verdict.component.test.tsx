@@ -1,6 +1,7 @@
 import { render, screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import demoText from '../../shared/demo-scenarios/default.json?raw';
+import joineryText from '../../shared/demo-scenarios/joinery-sander-downdraft-bench.json?raw';
 import { parseScenario } from '../../shared/schemas/scenario';
 import { CaptureVerdict } from './capture-verdict';
 
@@ -21,5 +22,15 @@ describe('capture verdict beside a result', () => {
     unmount();
     render(<CaptureVerdict scenario={{ ...s, hoods: [] }} />);
     expect(screen.queryByTestId('capture-verdict')).toBeNull();
+  });
+
+  it('reads the joinery bench by its face velocity over the work surface, marked common practice ([C] 0.6 m³/s ÷ 0.6 m²)', () => {
+    render(<CaptureVerdict scenario={parseScenario(JSON.parse(joineryText))} />);
+    const text = screen.getByTestId('capture-verdict').textContent ?? '';
+    expect(text).toMatch(
+      /^✓1\.0 m\/s over the work surface; downdraft benches need 0\.50–1\.0 m\/s \(common practice; within the range\)\. Confirm against local guidance\./,
+    );
+    expect(text).toContain('The range is common practice, not a published figure.');
+    expect(text).not.toContain('centre line');
   });
 });

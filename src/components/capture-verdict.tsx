@@ -8,7 +8,7 @@ const TONE: Record<CaptureVerdictWord, { icon: string; cls: string }> = {
   above: { icon: '▲', cls: 'border-line bg-paper text-ink' },
 };
 
-/** The hand-calculated capture speed at the source against the release type's range, beside a result. */
+/** The hand-calculated capture speed at the source against the release type's range (a bench's face velocity against its guidance), beside a result. */
 export function CaptureVerdict({ scenario, compact = false }: { scenario: Pick<Scenario, 'source' | 'hoods'>; compact?: boolean }) {
   if (scenario.hoods.length === 0) return null;
   const check = captureCheck(scenario);
@@ -25,8 +25,10 @@ export function CaptureVerdict({ scenario, compact = false }: { scenario: Pick<S
     <p className={`flex items-start gap-2 rounded-md border px-3 py-2 text-sm ${tone.cls}`} data-testid="capture-verdict">
       <span aria-hidden="true">{tone.icon}</span>
       <span>
-        <strong className="font-semibold">{check.sentence}</strong> Hand calculation on the hood&apos;s centre line (Dalla Valle / ACGIH);
-        the capture ranges are from the ACGIH capture-velocity table.
+        <strong className="font-semibold">{check.sentence}</strong>{' '}
+        {check.basis === 'face-velocity'
+          ? 'Face velocity: airflow ÷ work surface area. The range is common practice, not a published figure.'
+          : "Hand calculation on the hood's centre line (Dalla Valle / ACGIH); the capture ranges are from the ACGIH capture-velocity table."}
       </span>
     </p>
   );

@@ -168,11 +168,15 @@ describe('a particle on a hood axis without diffusion', () => {
     return s.t[0];
   }
 
-  it.each(HOOD_KINDS)('reaches a %s face after ∫dx/V(x) at the default and at a finer step', (kind) => {
-    const exact = travel(packHoods([hood(kind) as never]), 0.5);
-    // Midpoint drift errs by O(s²) per step for a drift share s = f/10 of the distance, and the
-    // face is entered within one step of the exact time: both well under 1 % here (derived bound).
-    expect(Math.abs(simulated(kind, 0.5) / exact - 1)).toBeLessThan(0.01);
-    expect(Math.abs(simulated(kind, 0.1) / exact - 1)).toBeLessThan(0.005);
-  });
+  // The schema turns a downdraft bench to face up, off this +x axis; it draws as the flanged face (downdraft-bench.test.ts).
+  it.each(HOOD_KINDS.filter((k) => k !== 'downdraft-bench'))(
+    'reaches a %s face after ∫dx/V(x) at the default and at a finer step',
+    (kind) => {
+      const exact = travel(packHoods([hood(kind) as never]), 0.5);
+      // Midpoint drift errs by O(s²) per step for a drift share s = f/10 of the distance, and the
+      // face is entered within one step of the exact time: both well under 1 % here (derived bound).
+      expect(Math.abs(simulated(kind, 0.5) / exact - 1)).toBeLessThan(0.01);
+      expect(Math.abs(simulated(kind, 0.1) / exact - 1)).toBeLessThan(0.005);
+    },
+  );
 });

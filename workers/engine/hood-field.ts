@@ -34,7 +34,7 @@ const {
 } = slots;
 
 export { HOOD_STRIDE } from './hood-slots';
-export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth'] as const;
+export const HOOD_KINDS = ['plain', 'flanged', 'slot', 'flanged-slot', 'booth', 'downdraft-bench'] as const;
 /** The step rule's floor on the distance to a face: the field is resolved to within a few centimetres. */
 export const FACE_RESOLUTION_m = 0.05;
 // A flange saves a quarter of the airflow for the same centre-line speed (ACGIH hood-types figure),
@@ -45,7 +45,8 @@ const FAR_FIELD_HALF_DIAGONALS = 8;
 
 const local = new Float64Array(3);
 
-// Width runs horizontally across the face (along the slot for slots); height completes the frame.
+// Width runs horizontally across the face (along the slot for slots); height completes the frame. A downdraft
+// bench, facing up (the schema sees to that), packs as a flanged face: width along +x, height (depth) along +y.
 export function packHoods(hoods: readonly Hood[]): Float64Array {
   const p = new Float64Array(hoods.length * HOOD_STRIDE);
   hoods.forEach((hood, h) => {

@@ -24,7 +24,7 @@ export const HOOD_HALF_WIDTH = 13;
 export const HOOD_HALF_HEIGHT = 14;
 export const HOOD_AIRFLOW = 15;
 export const HOOD_AREA = 16;
-/** Share of the airflow drawn from in front of the face (1 flanged, 0.75 plain: shared/physics/hood-face.ts). */
+/** Share of the airflow drawn from in front of the face (1 flanged or a downdraft bench, 0.75 plain: shared/physics/hood-face.ts). */
 export const HOOD_FRONT_SHARE = 17;
 export const HOOD_FACE_VELOCITY = 18;
 /** The face outline's farthest point from the centre. */
@@ -39,3 +39,5 @@ export const KIND_FLANGED = 1;
 export const KIND_SLOT = 2;
 export const KIND_FLANGED_SLOT = 3;
 export const KIND_BOOTH = 4;
+/** Draws as a flanged opening facing up: the work surface is its flange. */
+export const KIND_DOWNDRAFT_BENCH = 5;

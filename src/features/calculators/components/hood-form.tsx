@@ -1,10 +1,15 @@
-import { captureVelocityRange, type HoodKind, type ReleaseCondition } from '../../../../shared/physics/index';
-import { HOOD_KINDS, RELEASE_CONDITIONS, type AirflowUnit } from '../../../../shared/schemas/calculators';
+import { captureVelocityRange, type ReleaseCondition } from '../../../../shared/physics/index';
+import {
+  CALCULATOR_HOOD_KINDS,
+  RELEASE_CONDITIONS,
+  type AirflowUnit,
+  type CalculatorHoodKind,
+} from '../../../../shared/schemas/calculators';
 import { HOOD_KIND_LABEL, isSlotKind, RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index';
 import { SelectField, TextField } from '@/components/ui/field';
 
 export type HoodFormState = {
-  kind: HoodKind;
+  kind: CalculatorHoodKind;
   width_m: string;
   height_m: string;
   basis: 'airflow' | 'capture';
@@ -45,8 +50,13 @@ export function HoodForm({
       onSubmit={(e) => e.preventDefault()}
       className="grid gap-4 rounded-lg border border-line bg-white p-4 md:grid-cols-2 lg:grid-cols-1"
     >
-      <SelectField label="Hood kind" value={form.kind} onChange={(e) => onChange({ kind: e.target.value as HoodKind })}>
-        {HOOD_KINDS.map((k) => (
+      <SelectField
+        label="Hood kind"
+        value={form.kind}
+        onChange={(e) => onChange({ kind: e.target.value as CalculatorHoodKind })}
+        hint="Openings, slots and booths. A downdraft bench is not worked here: it is checked by its face velocity over the work surface, which a scenario's hood hints show."
+      >
+        {CALCULATOR_HOOD_KINDS.map((k) => (
           <option key={k} value={k}>
             {HOOD_KIND_LABEL[k]}
           </option>

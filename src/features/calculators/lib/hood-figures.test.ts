@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { hoodCalculatorSchema } from '../../../../shared/schemas/calculators';
 import { hoodFigures } from './hood-figures';
 
 const plain = { kind: 'plain' as const, width_m: Math.sqrt(0.1), height_m: Math.sqrt(0.1), release: 'low' as const };
@@ -48,5 +49,20 @@ describe('hood figures for the calculator page', () => {
     expect(f.airflow_m3PerS).toBeCloseTo(3.7 * 1 * 0.1, 9);
     expect(f.aspectMismatch).toBe(false);
     expect(hoodFigures({ ...plain, kind: 'slot', distance_m: 0.1, basis: 'capture', captureVelocity_mPerS: 1 }).aspectMismatch).toBe(true);
+  });
+});
+
+describe('hood calculator kinds', () => {
+  it('leaves the downdraft bench out, saying plainly what covers it instead', () => {
+    const input = { width_m: 1, height_m: 0.6, distance_m: 0.1, release: 'low', basis: 'airflow', airflow: 0.6, airflowUnit: 'm3PerS' };
+    const parsed = hoodCalculatorSchema.safeParse({ ...input, kind: 'downdraft-bench' });
+    expect(parsed.success).toBe(false);
+    expect(parsed.error!.issues).toEqual([
+      expect.objectContaining({
+        path: ['kind'],
+        message: 'The hood calculator covers openings, slots and booths; a downdraft bench is checked by its face velocity in a scenario',
+      }),
+    ]);
+    expect(hoodCalculatorSchema.safeParse({ ...input, kind: 'flanged' }).success).toBe(true);
   });
 });

@@ -16,7 +16,7 @@ export function ControlsSection({ value, onChange, errors }: SectionProps<Scenar
   return (
     <Section
       legend="Controls"
-      intro="Capturing hoods and booths. With none, the run shows the exposure the controls have to fix. Each hood is compared with the capture range of the release type set under Source and emission."
+      intro="Capturing hoods, booths and downdraft benches. With none, the run shows the exposure the controls have to fix. Each hood is compared with the capture range of the release type set under Source and emission; a downdraft bench with the face velocity its work surface needs."
     >
       {hoods.length === 0 && <p className="text-sm text-muted">No hoods yet.</p>}
       {hoods.map((hood, i) => (

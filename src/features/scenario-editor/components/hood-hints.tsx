@@ -3,7 +3,9 @@ import { formatSig } from '../../../../shared/format/index';
 import type { ReleaseCondition } from '../../../../shared/physics/index';
 import { cubicMetresPerSecondToPerHour } from '../../../../shared/units';
 import type { HoodInput } from '@/features/scenario-editor/lib/hood-axis';
-import { hoodHint, type CaptureVerdict, type HoodHint } from '@/features/scenario-editor/lib/hood-hints';
+import { benchHint, hoodHint, type CaptureVerdict, type HoodHint } from '@/features/scenario-editor/lib/hood-hints';
+import { BENCH_REACH_ABOVE_m } from '../../../../shared/physics/bench-face-velocity';
+import { isBenchKind } from '../../../../shared/vocabulary/index';
 
 type Point = { x_m: number; y_m: number; z_m: number };
 
@@ -51,6 +53,7 @@ export function HoodHints({
   source: Point;
   releaseType: ReleaseCondition | undefined;
 }) {
+  if (isBenchKind(hood.kind)) return <BenchHints hood={hood} index={index} source={source} />;
   const h = hoodHint(hood, source, releaseType);
   if (!h) return <p className="text-sm text-muted">Hints appear once the face size and airflow are valid.</p>;
   const range = h.range ? `${formatSig(h.range.min_mPerS, 2)}–${formatSig(h.range.max_mPerS, 2)} m/s` : '';
@@ -93,6 +96,45 @@ export function HoodHints({
           ))}
         </ul>
       )}
+    </div>
+  );
+}
+
+// A downdraft bench is read by its face velocity over the work surface, whatever the release type.
+function BenchHints({ hood, index, source }: { hood: HoodInput; index: number; source: Point }) {
+  const h = benchHint(hood, source);
+  if (!h) return <p className="text-sm text-muted">Hints appear once the work surface size and airflow are valid.</p>;
+  const range = `${formatSig(h.range.min_mPerS, 2)}–${formatSig(h.range.max_mPerS, 2)} m/s`;
+  const verdict = h.verdict && VERDICT[h.verdict];
+  const where =
+    h.height_m >= 0
+      ? `Source ${metres(h.height_m)} above the work surface, ${metres(h.offCentre_m)} from its centre in plan.`
+      : `Source ${metres(-h.height_m)} below the work surface, ${metres(h.offCentre_m)} from its centre in plan.`;
+  return (
+    <div className="flex flex-col gap-3 rounded-md bg-paper p-4 text-sm" data-testid={`hood-hints-${index}`} aria-live="polite">
+      <p>{where}</p>
+      {verdict ? (
+        <p className={`flex items-start gap-2 rounded-md border px-3 py-2 ${verdict.tone}`} data-testid={`hood-verdict-${index}`}>
+          <span aria-hidden="true">{verdict.icon}</span>
+          <span>
+            <strong className="font-semibold">≈ {mps(h.faceVelocity_mPerS)} over the work surface</strong> (airflow ÷ surface area).{' '}
+            {verdict.words} the {range} downdraft benches need (common practice: confirm against local guidance).
+          </span>
+        </p>
+      ) : (
+        <ul className="flex flex-col gap-1" data-testid={`hood-verdict-${index}`}>
+          <Warning>
+            {`The source is not over the work surface (inside its outline, at most ${metres(BENCH_REACH_ABOVE_m)} above it), so the face-velocity guidance does not apply and the check counts no speed. Move the source over the bench or the bench under it.`}
+          </Warning>
+        </ul>
+      )}
+      {h.verdict === 'below' && (
+        <p>
+          About {formatSig(cubicMetresPerSecondToPerHour(h.airflowForRange_m3PerS), 2)} m³/h would bring the face velocity to{' '}
+          {formatSig(h.range.min_mPerS, 2)} m/s.
+        </p>
+      )}
+      {!verdict && <p className="text-muted">Face velocity {mps(h.faceVelocity_mPerS)} (airflow ÷ work surface area).</p>}
     </div>
   );
 }

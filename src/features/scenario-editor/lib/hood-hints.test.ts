@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { HoodInput } from './hood-axis';
-import { hoodHint, SLOT_REACH_m } from './hood-hints';
+import { benchHint, hoodHint, SLOT_REACH_m } from './hood-hints';
 
 // A = 0.4 m × 0.25 m = 0.1 m², Q = 0.5 m³/s, facing +x from (1, 1, 1).
 const plain: HoodInput = {
@@ -81,5 +81,44 @@ describe('hood hints', () => {
   it('gives no hint while the face size or airflow is unusable', () => {
     expect(hoodHint({ ...plain, faceWidth_m: 0 }, at(1.2), 'low')).toBeNull();
     expect(hoodHint({ ...plain, airflow_m3PerS: -0.1 }, at(1.2), 'low')).toBeNull();
+  });
+});
+
+describe('bench hints', () => {
+  // A 1 m × 0.6 m work surface at 0.85 m; Q = 0.372 m³/s gives Q/A = 0.62 m/s [C].
+  const bench: HoodInput = {
+    ...plain,
+    kind: 'downdraft-bench',
+    x_m: 4,
+    y_m: 3,
+    z_m: 0.85,
+    direction: { x: 0, y: 0, z: 1 },
+    faceWidth_m: 1,
+    faceHeight_m: 0.6,
+    airflow_m3PerS: 0.372,
+  };
+
+  it('read the face velocity against the 0.5–1.0 m/s bench guidance (common practice)', () => {
+    const h = benchHint(bench, { x_m: 4.3, y_m: 3.1, z_m: 0.95 })!;
+    expect(h.faceVelocity_mPerS).toBeCloseTo(0.62, 12);
+    expect(h).toMatchObject({ overSurface: true, verdict: 'within', range: { min_mPerS: 0.5, max_mPerS: 1 } });
+    expect(h.height_m).toBeCloseTo(0.1, 12);
+    expect(h.offCentre_m).toBeCloseTo(Math.hypot(0.3, 0.1), 12);
+    expect(benchHint({ ...bench, airflow_m3PerS: 0.2 }, { x_m: 4, y_m: 3, z_m: 0.9 })!.verdict).toBe('below');
+    expect(benchHint({ ...bench, airflow_m3PerS: 0.9 }, { x_m: 4, y_m: 3, z_m: 0.9 })!.verdict).toBe('above');
+  });
+
+  it('give the airflow that reaches the low end, Q = 0.5 m/s × 0.6 m² = 0.3 m³/s (common practice; [C])', () => {
+    expect(benchHint(bench, { x_m: 4, y_m: 3, z_m: 0.9 })!.airflowForRange_m3PerS).toBeCloseTo(0.3, 12);
+  });
+
+  it('give no verdict when the source is outside the outline or more than 0.3 m above it (a judgement)', () => {
+    expect(benchHint(bench, { x_m: 4.6, y_m: 3, z_m: 0.9 })).toMatchObject({ overSurface: false, verdict: null });
+    expect(benchHint(bench, { x_m: 4, y_m: 3, z_m: 1.2 })).toMatchObject({ overSurface: false, verdict: null });
+  });
+
+  it('give no hint while the work surface or airflow is unusable', () => {
+    expect(benchHint({ ...bench, faceHeight_m: 0 }, { x_m: 4, y_m: 3, z_m: 0.9 })).toBeNull();
+    expect(benchHint({ ...bench, airflow_m3PerS: NaN }, { x_m: 4, y_m: 3, z_m: 0.9 })).toBeNull();
   });
 });

@@ -5,6 +5,7 @@ import {
   type CaptureVelocityRange,
   type ReleaseCondition,
 } from '../../../../shared/physics/index';
+import { BENCH_FACE_VELOCITY, benchFaceCheck } from '../../../../shared/physics/bench-face-velocity';
 import { isSlotKind } from '../../../../shared/vocabulary/index';
 import { hoodAxis, type HoodInput } from './hood-axis';
 
@@ -82,5 +83,35 @@ export function hoodHint(
     beyondValidity: rule !== 'booth' && !behind && axial_m > validUpTo_m,
     // Off the axis the real field falls faster than the centre-line figure says.
     farOffAxis: !behind && offAxis_m > Math.max(axial_m, 0.05),
+  };
+}
+
+export interface BenchHint {
+  faceVelocity_mPerS: number;
+  /** Height of the source above the work surface, and its offset from the surface's centre in plan. */
+  height_m: number;
+  offCentre_m: number;
+  overSurface: boolean;
+  range: CaptureVelocityRange;
+  /** Null when the source is not over the surface: the guidance does not apply there. */
+  verdict: CaptureVerdict | null;
+  /** Airflow that brings the face velocity to the low end of the guidance, Q = V·A. */
+  airflowForRange_m3PerS: number;
+}
+
+// A bench is read by its face velocity over the work surface (shared/physics/bench-face-velocity.ts), not by a centre line.
+export function benchHint(hood: HoodInput, source: { x_m: number; y_m: number; z_m: number }): BenchHint | null {
+  if (!usable(hood.x_m, hood.y_m, hood.z_m, source.x_m, source.y_m, source.z_m, hood.airflow_m3PerS)) return null;
+  if (!(hood.faceWidth_m > 0 && hood.faceHeight_m > 0 && hood.airflow_m3PerS >= 0)) return null;
+  const check = benchFaceCheck(hood, source);
+  const range = { ...BENCH_FACE_VELOCITY, examples: [...BENCH_FACE_VELOCITY.examples] };
+  return {
+    faceVelocity_mPerS: check.faceVelocity_mPerS,
+    height_m: check.height_m,
+    offCentre_m: Math.hypot(source.x_m - hood.x_m, source.y_m - hood.y_m),
+    overSurface: check.overSurface,
+    range,
+    verdict: check.overSurface ? captureVerdict(check.faceVelocity_mPerS, range) : null,
+    airflowForRange_m3PerS: range.min_mPerS * hood.faceWidth_m * hood.faceHeight_m,
   };
 }

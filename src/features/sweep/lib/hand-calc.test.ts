@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Hood } from '../../../../shared/schemas/scenario';
-import { handCalcAnswer, HOOD_EQUATION } from './hand-calc';
+import { benchHandCalcSentence, handCalcAnswer, handCalcCovers, HOOD_EQUATION } from './hand-calc';
 
 // [C] physics.md §8 check values: a plain opening of A = 0.1 m² drawing Q = 0.5 m³/s gives
 // V(0.1, 0.2, 0.3, 0.5 m) = 2.50, 1.00, 0.50, 0.192 m/s on its centre line.
@@ -58,5 +58,27 @@ describe('hand-calculation answer (Dalla Valle / ACGIH)', () => {
       'flanged-slot': 'Q = 2.6 L V X',
       booth: 'Q = V W H',
     });
+  });
+});
+
+describe('hand calculation and a downdraft bench', () => {
+  const bench: Hood = {
+    ...plain,
+    kind: 'downdraft-bench',
+    direction: { x: 0, y: 0, z: 1 },
+    faceWidth_m: 1.2,
+    faceHeight_m: 0.5,
+    airflow_m3PerS: 0.372,
+  };
+
+  it('covers every kind but the downdraft bench with the centre-line equations', () => {
+    expect(handCalcCovers('downdraft-bench')).toBe(false);
+    for (const kind of Object.keys(HOOD_EQUATION) as Hood['kind'][]) expect(handCalcCovers(kind)).toBe(true);
+  });
+
+  it('quotes the bench face velocity Q/A instead: 0.62 m/s against 0.5–1.0 m/s (common practice; [C] 0.372/(1.2·0.5))', () => {
+    expect(benchHandCalcSentence(bench)).toBe(
+      'The centre-line hand calculation covers capturing hoods, slots and booths, not a downdraft bench. A bench is checked by its face velocity over the work surface instead: 0.62 m/s here, against 0.50–1.0 m/s for downdraft benches (common practice; confirm against local guidance). It does not change with the distance, but holds only while the source is over the work surface, at most 0.3 m above it.',
+    );
   });
 });

@@ -7,7 +7,10 @@ import {
   OPENING_DISTANCE_FACTOR,
   type ReleaseCondition,
 } from '../../../../shared/physics/index';
+import { BENCH_FACE_VELOCITY, BENCH_REACH_ABOVE_m } from '../../../../shared/physics/bench-face-velocity';
+import { formatSig } from '../../../../shared/format/index';
 import type { Hood } from '../../../../shared/schemas/scenario';
+import { isBenchKind } from '../../../../shared/vocabulary/index';
 import type { SweepParameter } from './sweep-points';
 
 export type HandCalc =
@@ -15,8 +18,12 @@ export type HandCalc =
   | { kind: 'distance'; captureVelocity_mPerS: number; distance_m: number | null; airflow_m3PerS: number }
   | { kind: 'faceScale'; captureVelocity_mPerS: number; faceScale: number | null; airflow_m3PerS: number; distance_m: number };
 
+/** The kinds the centre-line hand calculation covers: a downdraft bench is checked by its face velocity instead. */
+export type CentreLineKind = Exclude<Hood['kind'], 'downdraft-bench'>;
+export const handCalcCovers = (kind: Hood['kind']): kind is CentreLineKind => !isBenchKind(kind);
+
 /** The published equation behind each answer, quoted in the sentence so the engineer can redo it by hand. */
-export const HOOD_EQUATION: Record<Hood['kind'], string> = {
+export const HOOD_EQUATION: Record<CentreLineKind, string> = {
   plain: `Q = V (${OPENING_DISTANCE_FACTOR} X² + A)`,
   flanged: `Q = ${C.flanged} V (${OPENING_DISTANCE_FACTOR} X² + A)`,
   slot: `Q = ${C.slot} L V X`,
@@ -90,4 +97,11 @@ export function handCalcAnswer(hood: Hood, distance_m: number, release: ReleaseC
     airflow_m3PerS: hood.airflow_m3PerS,
     distance_m,
   };
+}
+
+/** What stands in for the hand calculation on a downdraft bench, which the centre-line equations do not cover. */
+export function benchHandCalcSentence(hood: Pick<Hood, 'faceWidth_m' | 'faceHeight_m' | 'airflow_m3PerS'>): string {
+  const faceVelocity_mPerS = hood.airflow_m3PerS / (hood.faceWidth_m * hood.faceHeight_m);
+  const range = `${formatSig(BENCH_FACE_VELOCITY.min_mPerS, 2)}–${formatSig(BENCH_FACE_VELOCITY.max_mPerS, 2)} m/s`;
+  return `The centre-line hand calculation covers capturing hoods, slots and booths, not a downdraft bench. A bench is checked by its face velocity over the work surface instead: ${formatSig(faceVelocity_mPerS, 2)} m/s here, against ${range} for downdraft benches (common practice; confirm against local guidance). It does not change with the distance, but holds only while the source is over the work surface, at most ${formatSig(BENCH_REACH_ABOVE_m, 1)} m above it.`;
 }

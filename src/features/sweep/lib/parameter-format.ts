@@ -1,7 +1,7 @@
 import { countText } from '../../../../shared/format/index';
 import type { Hood } from '../../../../shared/schemas/scenario';
 import { cubicMetresPerHourToPerSecond, cubicMetresPerSecondToPerHour } from '../../../../shared/units';
-import { HOOD_KIND_LABEL } from '../../../../shared/vocabulary/index';
+import { HOOD_KIND_LABEL, isBenchKind } from '../../../../shared/vocabulary/index';
 import { sig } from '@/lib/format';
 import type { Preferred } from './target-crossing';
 import type { SweepParameter } from './sweep-points';
@@ -53,6 +53,16 @@ export function faceText(hood: Pick<Hood, 'faceWidth_m' | 'faceHeight_m'>, scale
 
 /** Name for a scenario saved from a point: the hood type and where the point sits. */
 export function pointScenarioName(hood: Hood, parameter: SweepParameter, value_si: number): string {
+  // A bench's axis points up, so its distance is how far the source sits above the work surface.
+  if (isBenchKind(hood.kind)) {
+    const at =
+      parameter === 'faceScale'
+        ? `with a ${faceText(hood, value_si)} work surface`
+        : parameter === 'distance'
+          ? `${formatValue(parameter, value_si)} under the source`
+          : `at ${formatValue(parameter, value_si)}`;
+    return `${HOOD_KIND_LABEL[hood.kind]} ${at}`.slice(0, 120);
+  }
   const at = parameter === 'faceScale' ? `${faceText(hood, value_si)} face` : formatValue(parameter, value_si);
   return `${HOOD_KIND_LABEL[hood.kind]} at ${at}`.slice(0, 120);
 }
