@@ -22,6 +22,9 @@ function shown(v: unknown): string {
     .join(', ');
 }
 
+// On a narrow screen the two versions scroll sideways inside the panel and the field they belong to stays in view.
+const FIELD = 'sticky left-0 bg-watch-soft max-sm:shadow-[1px_0_0_var(--color-line)]';
+
 // Someone saved first: both versions stay on screen, nothing typed is lost, and the person decides which wins.
 export function VersionConflict({ what, mine, saved, savedFields, labels = {}, onKeepMine, onTakeSaved }: Props) {
   const rows = recordDiff(mine, savedFields);
@@ -32,24 +35,26 @@ export function VersionConflict({ what, mine, saved, savedFields, labels = {}, o
         Nothing of yours was saved. The stored copy is now version {saved.version}; your changes are still in the form.
       </p>
       {rows.length ? (
-        <table className="mt-2 w-full text-left text-xs">
-          <thead>
-            <tr>
-              <th className="pr-3">Field</th>
-              <th className="pr-3">Yours</th>
-              <th>Stored now</th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((r) => (
-              <tr key={r.path}>
-                <td className="pr-3 font-semibold">{labels[r.path] ?? r.path}</td>
-                <td className="pr-3">{shown(r.mine)}</td>
-                <td>{shown(r.saved)}</td>
+        <div className="mt-2 overflow-x-auto">
+          <table className="w-full text-left text-xs">
+            <thead>
+              <tr>
+                <th className={`pr-3 ${FIELD}`}>Field</th>
+                <th className="pr-3 max-sm:min-w-32">Yours</th>
+                <th className="max-sm:min-w-32">Stored now</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {rows.map((r) => (
+                <tr key={r.path}>
+                  <td className={`pr-3 font-semibold ${FIELD}`}>{labels[r.path] ?? r.path}</td>
+                  <td className="pr-3">{shown(r.mine)}</td>
+                  <td>{shown(r.saved)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       ) : (
         <p className="mt-2">Your fields and the stored ones are the same.</p>
       )}

@@ -34,6 +34,125 @@ async function dragRight(page: Page, marker: Locator, px: number) {
   await page.mouse.up();
 }
 
+type TableLayout = {
+  name: string;
+  boxed: boolean;
+  fits: boolean;
+  overflows: boolean;
+  scrolled: number;
+  firstLeft: number;
+  boxLeft: number;
+  right: number;
+  opaque: boolean;
+};
+
+// Scrolls the box of every table shown under root to its far right, then measures where each first column ended up.
+const scrollTablesSideways = (root: Locator): Promise<TableLayout[]> =>
+  root.evaluate(async (el) => {
+    const tables = Array.from(el.querySelectorAll('table')).filter((t) => t.getClientRects().length > 0);
+    const boxes = tables.map((t) => {
+      let b = t.parentElement;
+      while (b && b !== document.body && !/auto|scroll/.test(getComputedStyle(b).overflowX)) b = b.parentElement;
+      return b === document.body ? null : b;
+    });
+    for (const b of boxes) if (b) b.scrollLeft = b.scrollWidth;
+    await new Promise((done) => requestAnimationFrame(done));
+    const seeThrough = (c: Element) => /^transparent$|rgba\(.*,\s*0\)$/.test(getComputedStyle(c).backgroundColor);
+    return tables.map((t, i) => {
+      const box = boxes[i];
+      const firsts = Array.from(t.rows)
+        .map((r) => r.cells[0])
+        .filter(Boolean);
+      const rect = (box ?? t.parentElement!).getBoundingClientRect();
+      return {
+        name: t.caption?.textContent || t.rows[0]?.cells[0]?.textContent || `table ${i + 1}`,
+        boxed: Boolean(box),
+        fits: t.getBoundingClientRect().width <= rect.width + 0.5,
+        overflows: box ? box.scrollWidth > box.clientWidth + 1 : false,
+        scrolled: box?.scrollLeft ?? 0,
+        firstLeft: Math.min(...firsts.map((c) => c.getBoundingClientRect().left)),
+        boxLeft: rect.left,
+        right: rect.right,
+        opaque: firsts.every((c) => !seeThrough(c)),
+      };
+    });
+  });
+
+// Each table fits or scrolls in a box of its own inside the screen; scrolled, its first column stays at the box's left edge.
+function expectFirstColumnsInView(tables: TableLayout[]) {
+  expect(tables.length).toBeGreaterThan(0);
+  for (const t of tables) {
+    expect(t.boxed || t.fits, `${t.name}: scrolls in its own box`).toBe(true);
+    expect(t.right, `${t.name}: box inside the screen`).toBeLessThanOrEqual(PHONE.width + 0.5);
+    if (t.overflows) {
+      expect(t.scrolled, `${t.name}: scrolled sideways`).toBeGreaterThan(0);
+      expect(t.opaque, `${t.name}: first column has a background`).toBe(true);
+    }
+    expect(t.firstLeft, `${t.name}: first column in view`).toBeGreaterThanOrEqual(Math.max(0, t.boxLeft - 0.5));
+  }
+}
+
+// Controls (or what else is asked for) that stick out of the content box of the element they sit in; those
+// in a scroll box of their own inside it (a wide table's sort buttons) are left to that box.
+const outside = (box: Locator, selector = 'input, select, textarea, button') =>
+  box.evaluate((el, sel) => {
+    const r = el.getBoundingClientRect();
+    const cs = getComputedStyle(el);
+    const left = r.left + parseFloat(cs.borderLeftWidth) + parseFloat(cs.paddingLeft) - 0.5;
+    const right = r.right - parseFloat(cs.borderRightWidth) - parseFloat(cs.paddingRight) + 0.5;
+    const inScrollBox = (c: Element) => {
+      for (let p = c.parentElement; p && p !== el; p = p.parentElement) if (getComputedStyle(p).overflowX !== 'visible') return true;
+      return false;
+    };
+    return Array.from(el.querySelectorAll(sel))
+      .filter((c) => c.getClientRects().length > 0 && !inScrollBox(c))
+      .map((c) => ({ c, b: c.getBoundingClientRect() }))
+      .filter(({ b }) => b.left < left || b.right > right)
+      .map(({ c, b }) => `${c.getAttribute('aria-label') ?? c.id ?? c.tagName} ${Math.round(b.left)}–${Math.round(b.right)}`);
+  }, selector);
+
+// Drawings with a viewBox: as wide as their box, inside the screen, drawn at the viewBox's own proportions.
+const drawings = (root: Locator) =>
+  root.evaluate((el) =>
+    Array.from(el.querySelectorAll('svg[viewBox]'))
+      .filter((s) => s.getClientRects().length > 0 && s.getAttribute('preserveAspectRatio') !== 'none')
+      .map((s) => {
+        const r = s.getBoundingClientRect();
+        const vb = (s as SVGSVGElement).viewBox.baseVal;
+        const p = s.parentElement!;
+        const cs = getComputedStyle(p);
+        return {
+          name: s.getAttribute('aria-label') ?? s.getAttribute('data-testid') ?? 'drawing',
+          left: r.left,
+          right: r.right,
+          width: r.width,
+          room: p.clientWidth - parseFloat(cs.paddingLeft) - parseFloat(cs.paddingRight),
+          stretch: r.height / r.width / (vb.height / vb.width),
+        };
+      }),
+  );
+
+// Tabs from a form's first field to its save button; every stop must be on screen sideways.
+async function tabThrough(page: Page, form: Locator, last: string) {
+  await form.locator('input, select').first().focus();
+  const stops: { name: string; left: number; right: number }[] = [];
+  for (let i = 0; i < 30; i++) {
+    const stop = await page.evaluate(() => {
+      const f = document.activeElement as HTMLElement;
+      const r = f.getBoundingClientRect();
+      return { name: f.textContent?.trim() || f.id, left: r.left, right: r.right };
+    });
+    stops.push(stop);
+    if (stop.name === last) break;
+    await page.keyboard.press('Tab');
+  }
+  expect(stops.at(-1)!.name).toBe(last);
+  for (const s of stops) {
+    expect(s.left, s.name).toBeGreaterThanOrEqual(0);
+    expect(s.right, s.name).toBeLessThanOrEqual(PHONE.width);
+  }
+}
+
 describe('on a 390 px phone', () => {
   it('the editor does not scroll sideways, opens its plan on the workstation and drags finely once zoomed in', async () => {
     const page = await phonePage();
@@ -101,5 +220,129 @@ describe('on a 390 px phone', () => {
     await map.scrollIntoViewIfNeeded();
     await shot(page, 'phone-results');
     await page.close();
+  });
+
+  it('the report keeps its tables in their boxes with the first column in view and draws every figure to the width', async () => {
+    const page = await phonePage();
+    await page.goto(`${env.server.url}/reports/3`);
+    const report = page.getByRole('article', { name: /^Report: / });
+    await report.getByTestId('twa').waitFor();
+    await report.getByRole('group', { name: /^Capture-velocity map/ }).waitFor();
+    expect(await sideways(page)).toBe(0);
+    expect(await outside(report, 'select, button')).toEqual([]);
+
+    const tables = await scrollTablesSideways(report);
+    expectFirstColumnsInView(tables);
+    // The hoods table and the table of fractions are wider than a phone: they really did scroll.
+    expect(tables.find((t) => t.name === 'Hoods')?.overflows).toBe(true);
+    expect(tables.filter((t) => t.overflows).length).toBeGreaterThanOrEqual(2);
+    expect(await sideways(page)).toBe(0);
+
+    const figures = await drawings(report);
+    // The time chart, the plan, the elevation and both maps at least.
+    expect(figures.length).toBeGreaterThanOrEqual(5);
+    for (const f of figures) {
+      expect(f.left, f.name).toBeGreaterThanOrEqual(0);
+      expect(f.right, f.name).toBeLessThanOrEqual(PHONE.width);
+      expect(Math.abs(f.width - f.room), f.name).toBeLessThan(1);
+      expect(Math.abs(f.stretch - 1), f.name).toBeLessThan(0.02);
+    }
+    await report.getByRole('table', { name: 'Hoods' }).locator('..').screenshot({ path: 'tests/e2e/screenshots/phone-report-hoods.png' });
+    await shot(page, 'phone-report');
+    await page.close();
+  });
+
+  it('the places screens fit with each edit form open and tab through on screen', async () => {
+    const page = await phonePage();
+    await page.goto(`${env.server.url}/places`);
+    await page.getByRole('heading', { name: 'Sites and workstations' }).waitFor();
+    expect(await sideways(page)).toBe(0);
+    for (const form of ['New site', 'New room', 'New workstation'])
+      expect(await outside(page.getByRole('form', { name: form })), form).toEqual([]);
+
+    // One edit form is open at a time; the workstation's, with the longest choices, is left open for the picture.
+    for (const [kind, name] of [
+      ['site', 'Harrowgate Stoneworks'],
+      ['room', 'Fabrication hall'],
+      ['workstation', 'Edge-grinding bench 2'],
+    ]) {
+      await page.getByRole('button', { name: `Edit ${kind} ${name}`, exact: true }).click();
+      const form = page.getByRole('form', { name: `Edit ${kind} ${name}` });
+      await form.waitFor();
+      expect(await sideways(page), kind).toBe(0);
+      expect(await outside(form), kind).toEqual([]);
+      await tabThrough(page, form, 'Save changes');
+    }
+    expect(await sideways(page)).toBe(0);
+    await shot(page, 'phone-places');
+
+    // A workstation's page lists its options in a table that scrolls in its box.
+    const scenario = await page.evaluate(async () => (await (await fetch('/api/scenarios/3')).json()) as { workstationId: number });
+    await page.goto(`${env.server.url}/workstations/${scenario.workstationId}`);
+    const main = page.locator('main');
+    await main.getByRole('table').first().waitFor();
+    expect(await sideways(page)).toBe(0);
+    const tables = await scrollTablesSideways(main);
+    expectFirstColumnsInView(tables);
+    expect(tables.some((t) => t.overflows)).toBe(true);
+    expect(await sideways(page)).toBe(0);
+    await shot(page, 'phone-workstation');
+    await page.close();
+  });
+
+  it('the edit-conflict panels keep yours and the stored version inside them', async () => {
+    const a = await phonePage();
+    const b = await phonePage();
+
+    // A workstation saved in one tab while the other edits it.
+    const editWorkstation = async (page: Page) => {
+      await page.goto(`${env.server.url}/places`);
+      await page.getByRole('button', { name: 'Edit workstation Edge-grinding bench 2', exact: true }).click();
+      return page.getByRole('form', { name: 'Edit workstation Edge-grinding bench 2' });
+    };
+    const formA = await editWorkstation(a);
+    const formB = await editWorkstation(b);
+    await formA.getByLabel('What happens here').fill('Edges ground dry with a hand-held grinder.');
+    await formB.getByLabel('What happens here').fill('Hand-held angle grinder on countertop edges, dry, with the dust shroud taken off.');
+    await formB.getByLabel('Source x').fill('3.4');
+    await formA.getByRole('button', { name: 'Save changes' }).click();
+    await formA.waitFor({ state: 'detached' });
+    await formB.getByRole('button', { name: 'Save changes' }).click();
+    const placeConflict = formB.getByRole('alert', { name: 'Edit conflict' });
+    await placeConflict.waitFor();
+    await placeConflict.scrollIntoViewIfNeeded();
+    expect(await sideways(b)).toBe(0);
+    expect(await outside(placeConflict, 'button')).toEqual([]);
+    const tables = await scrollTablesSideways(placeConflict);
+    expect(tables).toHaveLength(1);
+    expectFirstColumnsInView(tables);
+    // Yours and the stored version side by side are wider than the panel on a phone: they scroll within it.
+    expect(tables[0].overflows).toBe(true);
+    expect(await sideways(b)).toBe(0);
+    await placeConflict.screenshot({ path: 'tests/e2e/screenshots/phone-conflict-place.png' });
+    await shot(b, 'phone-conflict-place-page');
+
+    // A scenario saved in one tab while the other edits it; a changed hood comes as one long line without spaces, wrapped inside the list.
+    for (const page of [a, b]) {
+      await page.goto(`${env.server.url}/scenarios/2`);
+      await page.getByLabel('Scenario name').waitFor();
+    }
+    await a.getByLabel('Scenario name').fill('Slot hood (checked)');
+    await b.getByLabel('Scenario name').fill('Slot hood, fan turned up');
+    await b.getByLabel('Airflow', { exact: true }).first().fill('1500');
+    await a.getByRole('button', { name: 'Save changes' }).click();
+    await a.getByText(/Saved as version/).waitFor();
+    await b.getByRole('button', { name: 'Save changes' }).click();
+    const scenarioConflict = b.getByRole('alert', { name: 'Edit conflict' });
+    await scenarioConflict.waitFor();
+    await scenarioConflict.scrollIntoViewIfNeeded();
+    expect(await sideways(b)).toBe(0);
+    expect(await outside(scenarioConflict, 'button, ul')).toEqual([]);
+    const list = scenarioConflict.getByRole('list');
+    expect(await list.textContent()).toMatch(/hoods: yours \[\{.*\S{100,}/);
+    expect(await list.evaluate((ul) => ul.scrollWidth - ul.clientWidth)).toBe(0);
+    await scenarioConflict.screenshot({ path: 'tests/e2e/screenshots/phone-conflict-scenario.png' });
+    await a.close();
+    await b.close();
   });
 });

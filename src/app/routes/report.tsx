@@ -44,7 +44,7 @@ function Report({ detail }: { detail: ScenarioDetail }) {
     <label className="flex flex-wrap items-center gap-2">
       <span className="font-semibold">Run reported</span>
       <select
-        className="rounded-md border border-line bg-white px-2 py-1"
+        className="max-w-full rounded-md border border-line bg-white px-2 py-1"
         value={runId ?? ''}
         onChange={(e) => setParams({ run: e.target.value })}
         disabled={detail.runs.length === 0}

@@ -3,7 +3,8 @@ import { Button } from '@/components/ui/button';
 import { IdSelectField } from '@/components/ui/id-select-field';
 import { ErrorMessage, Notice } from '@/components/ui/status';
 
-export const formBox = 'grid gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
+// One column on a phone that never grows past the box (a select's long option would otherwise widen it).
+export const formBox = 'grid grid-cols-1 gap-3 rounded-lg border border-line bg-white p-4 sm:grid-cols-3';
 
 type ParentProps = Omit<ComponentProps<typeof IdSelectField>, 'none' | 'error'> & { missing: boolean };
 

@@ -55,7 +55,7 @@ export function ReportDocument({
     <article
       data-report-document
       aria-label={`Report: ${title}`}
-      className="mx-auto w-full max-w-5xl bg-white px-6 py-8 text-ink print:max-w-none print:p-0"
+      className="mx-auto w-full max-w-5xl bg-white px-4 py-8 text-ink sm:px-6 print:max-w-none print:p-0"
     >
       <div className="no-print mb-6 flex flex-wrap items-center justify-between gap-3 rounded-md border border-line bg-paper p-3">
         <div className="text-sm">{runPicker}</div>

@@ -3,6 +3,9 @@ import { DownloadCsvButton } from '@/components/ui/download-csv-button';
 import { HOODS_HEADER, hoodCsvRows } from '@/features/report/lib/hoods-csv';
 import { hoodRows, inputSections, type AgentInfo } from '@/features/report/lib/input-sections';
 
+// On a narrow screen the table scrolls inside its box and the column naming each hood stays in view; paper has no scroll box.
+const FIRST = 'sticky left-0 z-[1] bg-white max-md:min-w-32 max-md:shadow-[1px_0_0_var(--color-line)] print:static';
+
 type Props = { scenario: Scenario; agent?: AgentInfo; sizeProfileName?: string; title?: string };
 
 export function ReportInputs({ scenario, agent, sizeProfileName, title }: Props) {
@@ -33,31 +36,33 @@ export function ReportInputs({ scenario, agent, sizeProfileName, title }: Props)
       {hoods.length === 0 ? (
         <p className="text-sm">No local exhaust: the scenario has no hood.</p>
       ) : (
-        <table className="w-full break-inside-avoid border-collapse text-sm">
-          <caption className="sr-only">Hoods</caption>
-          <thead>
-            <tr className="border-b border-line text-left">
-              {['Hood', 'Type', 'Face', 'Face centre', 'Facing', 'Airflow', 'Face velocity'].map((h) => (
-                <th key={h} scope="col" className="py-1 pr-3 font-semibold">
-                  {h}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {hoods.map((h) => (
-              <tr key={h.name} className="border-b border-line align-top">
-                <td className="py-1 pr-3">{h.name}</td>
-                <td className="py-1 pr-3">{h.kind}</td>
-                <td className="py-1 pr-3">{h.face}</td>
-                <td className="py-1 pr-3">{h.position}</td>
-                <td className="py-1 pr-3">{h.direction}</td>
-                <td className="py-1 pr-3 tabular-nums">{h.airflow}</td>
-                <td className="py-1 pr-3 tabular-nums">{h.faceVelocity}</td>
+        <div className="overflow-x-auto">
+          <table className="w-full break-inside-avoid border-collapse text-sm">
+            <caption className="sr-only">Hoods</caption>
+            <thead>
+              <tr className="border-b border-line text-left">
+                {['Hood', 'Type', 'Face', 'Face centre', 'Facing', 'Airflow', 'Face velocity'].map((h, i) => (
+                  <th key={h} scope="col" className={`py-1 pr-3 font-semibold ${i === 0 ? FIRST : ''}`}>
+                    {h}
+                  </th>
+                ))}
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {hoods.map((h) => (
+                <tr key={h.name} className="border-b border-line align-top">
+                  <td className={`py-1 pr-3 ${FIRST}`}>{h.name}</td>
+                  <td className="py-1 pr-3">{h.kind}</td>
+                  <td className="py-1 pr-3">{h.face}</td>
+                  <td className="py-1 pr-3">{h.position}</td>
+                  <td className="py-1 pr-3">{h.direction}</td>
+                  <td className="py-1 pr-3 tabular-nums">{h.airflow}</td>
+                  <td className="py-1 pr-3 tabular-nums">{h.faceVelocity}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </section>
   );

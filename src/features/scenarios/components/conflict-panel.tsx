@@ -33,10 +33,10 @@ export function ConflictPanel({
     <section role="alert" aria-label="Edit conflict" className="rounded-lg border-2 border-watch bg-watch-soft p-4 text-sm">
       <h2 className="text-watch">Someone else saved this scenario while you were editing</h2>
       <p className="mt-1">The saved copy is version {theirs.version}. Your changes are still here. Differences:</p>
-      <ul className="mt-2 max-h-48 list-disc overflow-auto pl-5 font-mono text-xs">
+      <ul className="mt-2 max-h-48 list-disc overflow-auto pl-5 font-mono text-xs max-sm:[overflow-wrap:anywhere]">
         {lines.length ? lines.map((l) => <li key={l}>{l}</li>) : <li>No difference in the inputs.</li>}
       </ul>
-      <div className="mt-3 flex gap-2">
+      <div className="mt-3 flex flex-wrap gap-2">
         <Button onClick={onKeepMine}>Save mine over version {theirs.version}</Button>
         <Button variant="secondary" onClick={onTakeTheirs}>
           Discard mine and load the saved one
