@@ -56,7 +56,7 @@ export default defineConfig({
       },
       {
         extends: true,
-        test: { name: 'api', include: ['tests/integration/**/*.test.ts'], environment: 'node', testTimeout: 30_000 },
+        test: { name: 'api', include: ['tests/integration/**/*.test.ts'], environment: 'node', testTimeout: 30_000, hookTimeout: 60_000 },
       },
       {
         extends: true,

@@ -5,7 +5,20 @@
  * and Chromium agree with Math.* as well. +, −, ×, ÷, Math.sqrt, Math.abs and Math.floor are
  * exactly rounded everywhere.
  */
-import { HI, INV_LN2, LN2_HI, LN2_LO, LO, POW2, f64, highWord, scale, u32 } from './words';
+import * as words from './words';
+
+// Module-local copies: a module runner (Vitest's) may read imported bindings through getters, and
+// these are touched on every call.
+const HI = words.HI;
+const INV_LN2 = words.INV_LN2;
+const LN2_HI = words.LN2_HI;
+const LN2_LO = words.LN2_LO;
+const LO = words.LO;
+const POW2 = words.POW2;
+const f64 = words.f64;
+const highWord = words.highWord;
+const scale = words.scale;
+const u32 = words.u32;
 
 const P1 = 1.66666666666666019037e-1;
 const P2 = -2.77777777770155933842e-3;

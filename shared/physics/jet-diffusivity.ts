@@ -1,5 +1,8 @@
-import { exp } from '../det-math/index';
+import * as det from '../det-math/index';
 import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, jetCentrelineSpeed, jetFrame, jetHalfWidth, type RoundJet } from './round-jet';
+
+// Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
+const exp = det.exp;
 
 // ν_T ≈ 0.028·u_c·r½ across the self-similar round jet (Pope, Turbulent Flows, ch. 5, from memory).
 export const JET_EDDY_VISCOSITY_RATIO = 0.028;

@@ -1,4 +1,7 @@
-import { exp } from '../det-math/index';
+import * as det from '../det-math/index';
+
+// Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
+const exp = det.exp;
 
 // Turbulent round free jet (Pope, Turbulent Flows, ch. 5, from memory): far field
 // u_c = B·u₀·d₀/x, u/u_c = exp(−ln2·(r/r½)²), r½ = S·x, with Panchapakesan & Lumley's (1993)

@@ -1,4 +1,8 @@
-import { atan2, log } from '../det-math/index';
+import * as det from '../det-math/index';
+
+// Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
+const atan2 = det.atan2;
+const log = det.log;
 
 // Velocity of a uniformly drawing rectangular face: the field of a constant-strength sink sheet,
 // u = −(σ/4π)∬(P − P')/|P − P'|³ dA' in closed form (log and atan terms at the four corners).

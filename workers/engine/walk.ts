@@ -2,8 +2,12 @@ import { faceEntered, reflectAtFaces } from './hood-field';
 import { airAt, recordFrames } from './walk-air';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
 import { fillNormals } from './ziggurat';
-import { exp, expm1 } from '../../shared/det-math/index';
+import * as det from '../../shared/det-math/index';
 import { REWEIGHT, WINDOW } from './importance';
+
+// Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
+const exp = det.exp;
+const expm1 = det.expm1;
 
 // Long enough that a visit's set-up is small beside its steps, short enough that a pass over the
 // live particles still reports progress within a batch.
