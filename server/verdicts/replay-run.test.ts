@@ -3,7 +3,7 @@ import type { RunResult } from '../../shared/schemas/run-result';
 import { parseScenario, type ScenarioInput } from '../../shared/schemas/scenario';
 import { batchTally, type BatchResult, combineBatches, prepareScenario, runBatch } from '../../workers/engine/index';
 import { lookAlphas, lookAt, lookPlan, runToPrecision } from '../../workers/run-to-precision';
-import { lookFigureProblems, stoppingProblems } from './replay-run';
+import { lookFigureProblems, peakProblems, stoppingProblems } from './replay-run';
 
 // A small real scenario: the worker stands 0.5 m from a burst, so histories reach the zone in every
 // batch, and a limit far below what they breathe, so the first look can already decide Act.
@@ -83,5 +83,17 @@ describe('a run to a precision, checked by the server', () => {
     expect(lookFigureProblems(s.p, edited, tallies(s, result.engine.batches))).toEqual([
       'look 1 (20 batches): its 8-h TWA and interval do not combine from the batches',
     ]);
+  });
+});
+
+describe('the 15-min peaks, checked on approval', () => {
+  it('pass when they follow from the batches, and are refused when edited (they are not in the tallies)', () => {
+    const s = setUp(0.05);
+    const batches = s.batches.slice(0, 20);
+    const honest = combineBatches(s.p, batches) as unknown as RunResult;
+    expect(peakProblems(s.p, honest, batches, 0.05)).toEqual([]);
+    const edited = structuredClone(honest);
+    edited.breathingZone.fractions.respirable.peak15min_mgPerM3 *= 0.2;
+    expect(peakProblems(s.p, edited, batches, 0.05)).toEqual(['the respirable 15-min peak does not follow from the replayed batches']);
   });
 });

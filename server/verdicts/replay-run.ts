@@ -6,6 +6,7 @@ import { twa8h } from '../../workers/engine/combine';
 import {
   type BatchResult,
   combinationProblems,
+  combineBatches,
   ENGINE_VERSION,
   type PreparedScenario,
   prepareScenario,
@@ -74,10 +75,34 @@ export async function replayRun(input: Scenario, result: RunResult, sample: numb
   const fresh = await replayBatches(prepared, replayed);
   const mismatches = fresh.tallies.map((t) => tallyMismatch(tallies[t.batchIndex], t)).filter((m): m is string => m !== null);
   if (mismatches.length) return { ok: false, replayed, problems: mismatches };
-  // Every batch replayed and matching: the looks can be redone on them, peaks and all.
-  const stops = sample === null ? stoppingProblems(prepared, input, result, fresh.batches) : [];
-  if (stops.length) return { ok: false, replayed, problems: stops };
+  // Every batch replayed and matching: the peaks (which need the whole series, not in the tallies) and the looks can be redone.
+  const redone =
+    sample === null
+      ? [...peakProblems(prepared, result, fresh.batches, expected.alpha), ...stoppingProblems(prepared, input, result, fresh.batches)]
+      : [];
+  if (redone.length) return { ok: false, replayed, problems: redone };
   return { ok: true, replayed, seconds: (performance.now() - started) / 1000 };
+}
+
+const sameFigure = (a: number | undefined, b: number | undefined) =>
+  a === b || (a !== undefined && b !== undefined && Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b)));
+
+/**
+ * The 15-min peaks, which the verdict compares with the short-term limit, recombined from every
+ * replayed batch: an approval's check (a save's sample of batches cannot rebuild them).
+ */
+export function peakProblems(p: PreparedScenario, result: RunResult, batches: readonly BatchResult[], alpha: number): string[] {
+  const redone = combineBatches(p, batches, undefined, { alpha, stopping: result.engine.stopping });
+  const problems: string[] = [];
+  for (const [fraction, mine] of Object.entries(redone.breathingZone.fractions)) {
+    const theirs = result.breathingZone.fractions[fraction as keyof typeof result.breathingZone.fractions];
+    const agree =
+      sameFigure(mine.peak15min_mgPerM3, theirs.peak15min_mgPerM3) &&
+      sameFigure(mine.peak15minCi95_mgPerM3?.[0], theirs.peak15minCi95_mgPerM3?.[0]) &&
+      sameFigure(mine.peak15minCi95_mgPerM3?.[1], theirs.peak15minCi95_mgPerM3?.[1]);
+    if (!agree) problems.push(`the ${fraction} 15-min peak does not follow from the replayed batches`);
+  }
+  return problems;
 }
 
 const close = (a: number, b: number) => a === b || Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
