@@ -47,4 +47,13 @@ describe('why a station board reads Watch', () => {
   it('says an out-of-date assessment is being checked again', () => {
     expect(last(boardAdvice('watch', null, null, 'out-of-date'))).toMatch(/out of date and is being checked again/);
   });
+
+  it('gives a station approved without a hood no hood instructions, and a Watch board the reason it is being checked', () => {
+    const lines = boardAdvice('clear', null, null, null, false);
+    expect(lines.join(' ')).not.toMatch(/hood|airflow indicator/i);
+    expect(lines[0]).toMatch(/no extraction/);
+    const changed = 'The exposure limit for this dust changed after the assessment was approved: it is being checked again.';
+    const watch = boardAdvice('watch', 30, changed, 'near-limit');
+    expect(watch.slice(-2)).toEqual([changed, expect.stringMatching(/close to the limit/)]);
+  });
 });

@@ -12,8 +12,18 @@ const WATCH_LINE: Record<WatchCause, string> = {
     'The assessment is out of date and is being checked again: follow these rules exactly and report any change in the job, the material or the layout.',
 };
 
-/** The numbered lines of the board, from the banner and, for Watch, its cause. */
-export function boardAdvice(banner: Banner, distance_cm: number | null, reason: string | null, cause: WatchCause | null): string[] {
+/**
+ * The numbered lines of the board, from the banner and, for Watch, its cause. `reason` (no
+ * assessment, review due, limit changed) leads an Act board and precedes a Watch board's last
+ * line; a station whose approved control has no hood gets no hood instructions.
+ */
+export function boardAdvice(
+  banner: Banner,
+  distance_cm: number | null,
+  reason: string | null,
+  cause: WatchCause | null,
+  hasHood = true,
+): string[] {
   const distance = distance_cm
     ? `Keep the work within ${distance_cm} cm of the hood face (the marked zone).`
     : 'Keep the work where the assessment assumed it.';
@@ -25,10 +35,16 @@ export function boardAdvice(banner: Banner, distance_cm: number | null, reason: 
       'Report it to your supervisor now.',
     ];
   }
-  const base = [
-    'Switch the hood on before you start, and leave it on until the dust has cleared.',
-    distance,
-    'If the airflow indicator shows low or no flow, stop and report it.',
-  ];
-  return banner === 'watch' ? [...base, WATCH_LINE[cause ?? 'near-limit']] : base;
+  const base = hasHood
+    ? [
+        'Switch the hood on before you start, and leave it on until the dust has cleared.',
+        distance,
+        'If the airflow indicator shows low or no flow, stop and report it.',
+      ]
+    : [
+        'This station has no extraction: the assessment rests on the room ventilation and on how the work is done.',
+        distance,
+        'Keep doors, windows and fans as they were when the station was assessed, and report any change.',
+      ];
+  return banner === 'watch' ? [...base, ...(reason ? [reason] : []), WATCH_LINE[cause ?? 'near-limit']] : base;
 }

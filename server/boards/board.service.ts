@@ -33,8 +33,10 @@ export async function stationBoard(db: Db, workstationId: number): Promise<Stati
   const approval = await currentApproval(db, workstationId);
   const banner = boardBanner(approval);
   let distance_cm: number | null = null;
+  let hasHood = true;
   if (approval) {
     const s = await findScenario(db, approval.scenarioId, { includeDeleted: true });
+    if (s) hasHood = s.input.hoods.length > 0;
     const d = s ? hoodDistance_m(s.input) : null;
     distance_cm = d === null ? null : Math.round((d * 100) / 5) * 5;
   }
@@ -53,7 +55,7 @@ export async function stationBoard(db: Db, workstationId: number): Promise<Stati
     reviewDate: approval?.reviewDate ?? null,
     control: approval?.scenarioName ?? null,
     approvedAt: approval?.approvedAt ?? null,
-    advice: boardAdvice(banner, distance_cm, reason, boardWatchCause(approval, banner)),
+    advice: boardAdvice(banner, distance_cm, reason, boardWatchCause(approval, banner), hasHood),
     watchCause: boardWatchCause(approval, banner),
     checkedAt: new Date().toISOString(),
   };
