@@ -37,7 +37,7 @@ export function judgeStored(numbersText: unknown, limit: JudgeLimit | null): Ver
       peak15minCi95_mgPerM3: s.peak15minCi95_mgPerM3,
     },
     limit,
-    { captureVelocity: numbers.captureVelocity, gsd: numbers.gsd },
+    { captureVelocity: numbers.captureVelocity, captureBasis: numbers.captureBasis, gsd: numbers.gsd },
   );
 }
 

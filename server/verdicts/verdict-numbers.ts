@@ -15,6 +15,8 @@ export type VerdictNumbers = {
   histories: number;
   fractions: Record<Fraction, FractionNumbers>;
   captureVelocity?: CaptureVerdictWord;
+  /** 'face-velocity' when the check was a downdraft bench's face velocity, not a speed at the source. */
+  captureBasis?: 'face-velocity';
   /** The day-to-day GSD the run's scenario set; absent means the default. */
   gsd?: number;
 };
