@@ -48,7 +48,14 @@ export function ColourLegend({
                 height={4}
                 fill={ACCENT}
               />
-              <text x={scale.position(band.from) * W} y={36} fontSize={11} fill={INK}>
+              {/* A band in the right half is labelled leftwards from its end, so the label stays inside the legend's width. */}
+              <text
+                x={(scale.position(band.from) > 0.5 ? Math.min(1, scale.position(band.to)) : scale.position(band.from)) * W}
+                y={36}
+                fontSize={11}
+                fill={INK}
+                textAnchor={scale.position(band.from) > 0.5 ? 'end' : 'start'}
+              >
                 {band.label}
               </text>
             </g>
