@@ -14,7 +14,7 @@ export function assertEditedVersion(what: string, edited: number, current: { ver
   );
 }
 
-type VersionedTable<R, P> = {
+export type VersionedTable<R, P> = {
   get: (db: Conn, id: number) => Promise<R | undefined>;
   update: (db: Conn, id: number, version: number, patch: P) => Promise<boolean>;
 };

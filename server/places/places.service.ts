@@ -2,7 +2,7 @@ import type { RoomInput, RoomUpdate, SiteInput, SiteUpdate, WorkstationInput, Wo
 import type { RoomRecord, SiteRecord, SiteTree, WorkstationDetail, WorkstationRecord } from '../../shared/schemas/workspace-views';
 import { withTransaction, type Conn, type Db } from '../db/knex';
 import { AppError, notFound } from '../lib/app-error';
-import { editAtVersion } from '../lib/version-conflict';
+import { editAtVersion, type VersionedTable } from '../lib/version-conflict';
 import { auditOf, type Actor } from '../audit/audit.repo';
 import { changesOf } from '../audit/changes';
 import { currentApproval } from '../approvals/approvals.repo';
@@ -38,6 +38,25 @@ async function roomStillHoldsWorkstations(db: Conn, roomId: number, data: RoomUp
 }
 
 const edited = (r: { name: string; data: object }) => ({ name: r.name, data: r.data });
+
+/** One edit of a place at the version the editor read, audited with what changed (from → to). */
+async function editAudited<R extends { version: number; name: string; data: object }, P>(
+  trx: Conn,
+  actor: Actor,
+  kind: 'site' | 'room' | 'workstation',
+  table: VersionedTable<R, P>,
+  id: number,
+  version: number,
+  patch: P,
+): Promise<R> {
+  const { before, after } = await editAtVersion(trx, table, kind, id, version, patch);
+  await auditOf(kind)(trx, actor, `${kind}.changed`, id, {
+    name: after.name,
+    version: after.version,
+    changes: changesOf(edited(before), edited(after)),
+  });
+  return after;
+}
 
 const CHILD: Record<'site' | 'room' | 'workstation', [string, string]> = {
   site: ['room', 'rooms'],
@@ -95,39 +114,19 @@ export const placesService = {
     });
   },
   async updateSite(db: Db, actor: Actor, id: number, { version, ...patch }: SiteUpdate): Promise<SiteRecord> {
-    return withTransaction(db, async (trx) => {
-      const { before, after } = await editAtVersion(trx, sites, 'site', id, version, patch);
-      await auditSite(trx, actor, 'site.changed', id, {
-        name: after.name,
-        version: after.version,
-        changes: changesOf(edited(before), edited(after)),
-      });
-      return after;
-    });
+    return withTransaction(db, (trx) => editAudited(trx, actor, 'site', sites, id, version, patch));
   },
   async updateRoom(db: Db, actor: Actor, id: number, { version, ...patch }: RoomUpdate): Promise<RoomRecord> {
     return withTransaction(db, async (trx) => {
       if (await rooms.get(trx, id)) await roomStillHoldsWorkstations(trx, id, patch.data);
-      const { before, after } = await editAtVersion(trx, rooms, 'room', id, version, patch);
-      await auditRoom(trx, actor, 'room.changed', id, {
-        name: after.name,
-        version: after.version,
-        changes: changesOf(edited(before), edited(after)),
-      });
-      return after;
+      return editAudited(trx, actor, 'room', rooms, id, version, patch);
     });
   },
   async updateWorkstation(db: Db, actor: Actor, id: number, { version, ...patch }: WorkstationUpdate): Promise<WorkstationRecord> {
     return withTransaction(db, async (trx) => {
       const current = await workstations.get(trx, id);
       if (current) await insideRoom(trx, current.roomId, patch.data);
-      const { before, after } = await editAtVersion(trx, workstations, 'workstation', id, version, patch);
-      await auditWorkstation(trx, actor, 'workstation.changed', id, {
-        name: after.name,
-        version: after.version,
-        changes: changesOf(edited(before), edited(after)),
-      });
-      return after;
+      return editAudited(trx, actor, 'workstation', workstations, id, version, patch);
     });
   },
   async remove(db: Db, actor: Actor, kind: 'site' | 'room' | 'workstation', id: number): Promise<void> {
