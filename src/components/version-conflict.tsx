@@ -1,4 +1,4 @@
-import { Button } from '@/components/ui/button';
+import { ConflictChoices } from '@/components/conflict-choices';
 import { sig } from '@/lib/format';
 import { recordDiff } from '@/lib/record-diff';
 
@@ -58,12 +58,7 @@ export function VersionConflict({ what, mine, saved, savedFields, labels = {}, o
       ) : (
         <p className="mt-2">Your fields and the stored ones are the same.</p>
       )}
-      <div className="mt-3 flex flex-wrap gap-2">
-        <Button onClick={onKeepMine}>Save mine over version {saved.version}</Button>
-        <Button variant="secondary" onClick={onTakeSaved}>
-          Discard mine and load the stored one
-        </Button>
-      </div>
+      <ConflictChoices version={saved.version} savedWord="stored" onKeepMine={onKeepMine} onTakeSaved={onTakeSaved} />
     </section>
   );
 }

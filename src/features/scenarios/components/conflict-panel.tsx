@@ -1,4 +1,4 @@
-import { Button } from '@/components/ui/button';
+import { ConflictChoices } from '@/components/conflict-choices';
 
 type Side = { version: number; name: string; input: unknown };
 
@@ -36,12 +36,7 @@ export function ConflictPanel({
       <ul className="mt-2 max-h-48 list-disc overflow-auto pl-5 font-mono text-xs max-sm:[overflow-wrap:anywhere]">
         {lines.length ? lines.map((l) => <li key={l}>{l}</li>) : <li>No difference in the inputs.</li>}
       </ul>
-      <div className="mt-3 flex flex-wrap gap-2">
-        <Button onClick={onKeepMine}>Save mine over version {theirs.version}</Button>
-        <Button variant="secondary" onClick={onTakeTheirs}>
-          Discard mine and load the saved one
-        </Button>
-      </div>
+      <ConflictChoices version={theirs.version} savedWord="saved" onKeepMine={onKeepMine} onTakeSaved={onTakeTheirs} />
     </section>
   );
 }
