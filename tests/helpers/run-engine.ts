@@ -33,12 +33,13 @@ export async function saveTicketedRun(agent: Agent, scenarioId: number, input: S
  * The stone-bench demo options are Act since engine 2.0 (the grinder's induced jet beats both
  * hoods), so approval tests first make an option approvable: the same hood at a low-energy
  * release with no jet, which its 0.47–0.58 m/s reaches (ACGIH 0.5–1.0 m/s, not below half), run
- * with `particles` and saved. Answers the scenario's new version and the saved run's response.
+ * with `particles` and saved, with any further `changes` to the input (a worker standing nearer, say).
+ * Answers the scenario's new version and the saved run's response.
  */
-export async function saveLowEnergyRun(agent: Agent, scenarioId: number, particles: number) {
+export async function saveLowEnergyRun(agent: Agent, scenarioId: number, particles: number, changes: Partial<ScenarioInput> = {}) {
   const detail = (await agent.get(`/api/scenarios/${scenarioId}`)).body;
   const { jet: _jet, ...source } = detail.input.source;
-  const input = { ...detail.input, source: { ...source, releaseType: 'low' }, run: { ...detail.input.run, particles } };
+  const input = { ...detail.input, ...changes, source: { ...source, releaseType: 'low' }, run: { ...detail.input.run, particles } };
   const edited = await agent.patch(`/api/scenarios/${scenarioId}`).send({ version: detail.version, input });
   if (edited.status !== 200) throw new Error(`edit refused: ${edited.status} ${JSON.stringify(edited.body)}`);
   const saved = await saveTicketedRun(agent, scenarioId, input, edited.body.version);
