@@ -71,6 +71,32 @@ describe('report inputs', () => {
     });
   });
 
+  it('names a downdraft bench by its work surface, facing up, with the face-velocity guidance beside its figure', () => {
+    const bench = parseScenario({
+      ...scenario,
+      hoods: [
+        {
+          kind: 'downdraft-bench',
+          x_m: 3,
+          y_m: 3,
+          z_m: 0.85,
+          direction: { x: 0, y: 0, z: 1 },
+          faceWidth_m: 1,
+          faceHeight_m: 0.6,
+          airflow_m3PerS: 0.42,
+        },
+      ],
+    });
+    // 0.42 m³/s over 1 m × 0.6 m is 0.7 m/s; the 0.5–1.0 m/s guidance is common practice (no published source).
+    expect(hoodRows(bench)[0]).toMatchObject({
+      kind: 'Downdraft bench',
+      face: 'work surface 1000 × 600 mm (length × depth)',
+      direction: 'up, air drawn down through the surface',
+      faceVelocity: '0.7 m/s down through the surface (common practice: 0.5–1 m/s)',
+    });
+    expect(hoodRows(bench)[0].position).toMatch(/^surface centre at x 3 m/);
+  });
+
   it('says so when there is no limit', () => {
     const rows = inputSections({ ...scenario, limit: undefined }).find((s) => s.title === 'Dust agent and limit')!.rows;
     expect(rows.at(-1)).toEqual(['Exposure limit', 'none entered: concentrations only']);

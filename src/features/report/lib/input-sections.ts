@@ -4,7 +4,8 @@ import type { Hood, Scenario } from '../../../../shared/schemas/scenario';
 import type { AgentData } from '../../../../shared/schemas/workspace';
 import { cubicMetresPerSecondToPerHour, kelvinToCelsius, metresToMicrometres, metresToMillimetres } from '../../../../shared/units';
 import { resolveJet } from '../../../../shared/physics/release-jets';
-import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL } from '../../../../shared/vocabulary/index';
+import { HOOD_KIND_LABEL, RELEASE_TYPE_LABEL, isBenchKind } from '../../../../shared/vocabulary/index';
+import { BENCH_FACE_VELOCITY } from '../../../../shared/physics/bench-face-velocity';
 import { sig } from '@/lib/format';
 
 export type Row = [label: string, value: string];
@@ -154,14 +155,24 @@ export interface HoodRow {
   faceVelocity: string;
 }
 
+/**
+ * One row per hood in words. A downdraft bench's face is its work surface (length × depth), it always faces
+ * up, and its face velocity is its check, so the row names the surface and gives the guidance beside the figure.
+ */
 export function hoodRows(s: Scenario): HoodRow[] {
-  return s.hoods.map((h, i) => ({
-    name: h.name ?? `Hood ${i + 1}`,
-    kind: HOOD_KIND_LABEL[h.kind],
-    face: `${Math.round(h.faceWidth_m * 1000)} × ${Math.round(h.faceHeight_m * 1000)} mm`,
-    position: at(h),
-    direction: direction(h.direction),
-    airflow: m3h(h.airflow_m3PerS),
-    faceVelocity: `${n(h.airflow_m3PerS / (h.faceWidth_m * h.faceHeight_m))} m/s`,
-  }));
+  return s.hoods.map((h, i) => {
+    const size = `${Math.round(h.faceWidth_m * 1000)} × ${Math.round(h.faceHeight_m * 1000)} mm`;
+    const velocity = `${n(h.airflow_m3PerS / (h.faceWidth_m * h.faceHeight_m))} m/s`;
+    const bench = isBenchKind(h.kind);
+    const { min_mPerS, max_mPerS } = BENCH_FACE_VELOCITY;
+    return {
+      name: h.name ?? `Hood ${i + 1}`,
+      kind: HOOD_KIND_LABEL[h.kind],
+      face: bench ? `work surface ${size} (length × depth)` : size,
+      position: bench ? `surface centre at ${at(h)}` : at(h),
+      direction: bench ? 'up, air drawn down through the surface' : direction(h.direction),
+      airflow: m3h(h.airflow_m3PerS),
+      faceVelocity: bench ? `${velocity} down through the surface (common practice: ${n(min_mPerS)}–${n(max_mPerS)} m/s)` : velocity,
+    };
+  });
 }

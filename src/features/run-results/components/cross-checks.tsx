@@ -74,7 +74,8 @@ export function CrossChecks({ view, fileName }: { view: RunResult; fileName: (wh
               <th scope="col" className="px-3 py-2 text-right font-semibold">
                 Monte-Carlo ÷ model
               </th>
-              <th scope="col" className="px-3 py-2 font-semibold">
+              {/* A floor on its width, so on a phone the sentences scroll with the table instead of standing a word per line. */}
+              <th scope="col" className="min-w-64 px-3 py-2 font-semibold">
                 What it assumes
               </th>
             </tr>
