@@ -94,6 +94,19 @@ describe('judgeRun: the guards that keep doubt from reading as Clear', () => {
     expect(judgeRun(run(0.01, 0.009, 0.011), LIMIT, { captureVelocity: 'below' }).banner).toBe('clear');
   });
 
+  it('with the hood below half its capture velocity, decides on the limit alone: across half the limit it reads Watch either way', () => {
+    // The same interval as the action-level case above: 0.31 and 0.69 of the limit, either side of 0.5 but under 1.
+    const across = judgeRun(run(0.16, 0.1, 0.22), LIMIT, { captureVelocity: 'below-half' });
+    expect(across).toMatchObject({ banner: 'watch', decided: true, moreHistories: 0 });
+    expect(across.reasons).toEqual([expect.stringMatching(/below half the lower end/)]);
+    // Across the limit itself it is still undecided, and stays the cautious Act.
+    const overLimit = judgeRun(run(0.3, 0.25, 0.35), LIMIT, { captureVelocity: 'below-half' });
+    expect(overLimit).toMatchObject({ banner: 'act', decided: false });
+    expect(overLimit.reasons[0]).toMatch(/on both sides of the limit/);
+    // Too few zone histories still leave it undecided.
+    expect(judgeRun(run(0.16, 0.1, 0.22, 60), LIMIT, { captureVelocity: 'below-half' })).toMatchObject({ decided: false });
+  });
+
   it('does not trust a stored interval that leaves out its own mean', () => {
     const v = judgeRun(run(0.3, 0.001, 0.002), LIMIT);
     expect(v.decided).toBe(false);

@@ -133,7 +133,10 @@ export function judgeRun(numbers: RunNumbers, limit: JudgeLimit, options: JudgeO
     decided = false;
     moreHistories = null;
   } else if (sound) {
-    for (const threshold of [0.5 * limit_mgPerM3, limit_mgPerM3]) {
+    // Only a threshold whose two sides give different banners needs deciding: with the hood below half its
+    // capture velocity Clear reads Watch anyway, so half the limit no longer matters and only the limit does.
+    const capped = options.captureVelocity === 'below-half';
+    for (const threshold of capped ? [limit_mgPerM3] : [0.5 * limit_mgPerM3, limit_mgPerM3]) {
       if (p95Lo < threshold && p95 >= threshold) {
         const what = threshold < limit_mgPerM3 ? 'half the limit (the action level)' : 'the limit';
         reasons.push(
