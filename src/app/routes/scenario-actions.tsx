@@ -56,8 +56,9 @@ export function ScenarioActions({ scenario, draft, dirty, valid, onSaved, onRelo
     );
 
   return (
-    <div className="flex max-w-xl flex-col items-end gap-2">
-      <div className="flex flex-wrap justify-end gap-2">
+    // Below the title and its line of facts (they rarely leave room beside them), so the buttons start at the left.
+    <div className="flex max-w-3xl flex-col items-start gap-2">
+      <div className="flex flex-wrap gap-2">
         <Can permission="scenarios:write">
           <Button onClick={() => save(scenario.version)} disabled={!dirty || !valid || update.isPending}>
             {update.isPending ? 'Saving…' : dirty ? 'Save changes' : 'Saved'}

@@ -40,6 +40,9 @@ describe('particle views', () => {
     render(<ParticleViews view={view} scenario={scenario} />);
     const scrubber = screen.getByTestId('scrubber');
     expect(scrubber.getAttribute('max')).toBe('40');
+    // It opens paused at the first frame with the most particles out (10 s here), not at 0 s with none released.
+    expect((scrubber as HTMLInputElement).value).toBe('10');
+    expect(screen.getByTestId('airborne-count').textContent).toBe('1');
     fireEvent.change(scrubber, { target: { value: '12.5' } });
     expect(screen.getByTestId('airborne-count').textContent).toBe('2');
     fireEvent.change(scrubber, { target: { value: '20' } });

@@ -6,7 +6,7 @@ import { ChoiceChips } from '@/components/ui/choice-chips';
 import { useViewZoom } from '@/hooks/use-view-zoom';
 import { usePlayback } from '@/features/run-results/hooks/use-playback';
 import { FATE_COLOUR } from '@/features/run-results/lib/fate-colours';
-import { buildPaths, fateCounts, type Path, positionAt } from '@/features/run-results/lib/path-sample';
+import { buildPaths, busiestTime_s, fateCounts, type Path, positionAt } from '@/features/run-results/lib/path-sample';
 import { focusPoints, projection, viewSpan } from '@/features/run-results/lib/room-projection';
 import { sizeClasses } from '@/features/run-results/lib/size-classes';
 import { baseRate_sPerS } from '@/features/run-results/lib/trajectory-frames';
@@ -26,14 +26,19 @@ export function ParticleViews({ view, scenario }: { view: RunResult; scenario: S
   // Results with path ends record frames over the whole run; older ones stop at their last frame.
   const end_s = (t.ends ? t.frames : Math.max(0, t.frames - 1)) * t.frameInterval_s;
   const rate = baseRate_sPerS(end_s);
-  const play = usePlayback(end_s, rate);
+  const paths = useMemo(() => buildPaths(t), [t]);
+  // Paused at first where most sampled particles are airborne, so the views open on the plume, not on an empty room.
+  const play = usePlayback(
+    end_s,
+    rate,
+    useMemo(() => busiestTime_s(paths, end_s, t.frameInterval_s), [paths, end_s, t.frameInterval_s]),
+  );
   const hasFates = !!t.fates;
   const [colourBy, setColourBy] = useState<ColourBy>(hasFates ? 'fate' : 'size');
   const sizes = useMemo(
     () => sizeClasses(view.engine.sizeBins || Math.max(0, ...t.bins) + 1, view.sizeBins.aerodynamic_m),
     [view.engine.sizeBins, t.bins, view.sizeBins.aerodynamic_m],
   );
-  const paths = useMemo(() => buildPaths(t), [t]);
   const counts = useMemo(() => fateCounts(paths), [paths]);
   const planZoom = useViewZoom(viewSpan(scenario.room, 'plan'), focusPoints(scenario, 'plan'));
   const elevationZoom = useViewZoom(viewSpan(scenario.room, 'elevation'), focusPoints(scenario, 'elevation'));

@@ -1,12 +1,12 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { advanceTime_s } from '@/features/run-results/lib/trajectory-frames';
 
-/** Simulated-time clock on requestAnimationFrame; stops at the end and whenever the view unmounts. */
-export function usePlayback(end_s: number, rate_sPerS: number) {
-  const [time_s, setTime] = useState(0);
+/** Simulated-time clock on requestAnimationFrame, paused at `start_s` at first; stops at the end and whenever the view unmounts. */
+export function usePlayback(end_s: number, rate_sPerS: number, start_s = 0) {
+  const [time_s, setTime] = useState(start_s);
   const [playing, setPlaying] = useState(false);
   const [speed, setSpeed] = useState(1);
-  const position = useRef(0);
+  const position = useRef(start_s);
 
   useEffect(() => {
     if (!playing) return;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildPaths, fateCounts, pathBetween, positionAt } from './path-sample';
+import { buildPaths, busiestTime_s, fateCounts, pathBetween, positionAt } from './path-sample';
 
 // Invented sample in the engine's layout: frames every 10 s, [particle][frame][xyz], ends [released_s, xyz, ended_s, xyz].
 const N = NaN;
@@ -51,5 +51,14 @@ describe('path sample', () => {
     expect(old).toHaveLength(1);
     expect(fateCounts(old)).toEqual([0, 0, 0, 0, 1]);
     expect(fateCounts(paths)).toEqual([1, 0, 0, 1, 0]);
+  });
+
+  it('opens the animation at the frame with the most particles airborne, the earliest of a tie, never before t = 0', () => {
+    // At 0 s nothing is out; at 10 and 20 s the first particle is; the second lives only from 12 to 13 s.
+    expect(busiestTime_s(paths, 30, 10)).toBe(10);
+    // With frames every 0.5 s the 12 s frame is the first to catch both.
+    expect(busiestTime_s(paths, 30, 0.5)).toBe(12);
+    expect(busiestTime_s([], 30, 10)).toBe(0);
+    expect(busiestTime_s(paths, 0, 10)).toBe(0);
   });
 });

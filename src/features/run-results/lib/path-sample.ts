@@ -95,3 +95,23 @@ export function fateCounts(paths: readonly Path[]): number[] {
   for (const p of paths) counts[p.fate >= 0 && p.fate < 4 ? p.fate : 4]++;
   return counts;
 }
+
+/**
+ * The frame time (k · step_s, 0 ≤ k·step_s ≤ end_s) with the most sampled particles airborne, the earliest on a
+ * tie: the animation opens there rather than at t = 0, when nothing has been released yet.
+ */
+export function busiestTime_s(paths: readonly Path[], end_s: number, step_s: number): number {
+  if (!(step_s > 0) || !(end_s > 0)) return 0;
+  let best = 0;
+  let most = -1;
+  for (let k = 0; k * step_s <= end_s + 1e-9; k++) {
+    const time_s = Math.min(end_s, k * step_s);
+    let airborne = 0;
+    for (const p of paths) if (positionAt(p, time_s)) airborne++;
+    if (airborne > most) {
+      most = airborne;
+      best = time_s;
+    }
+  }
+  return best;
+}
