@@ -5,8 +5,8 @@ type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
 const STYLES: Record<Variant, string> = {
   primary: 'bg-accent text-white hover:bg-accent-strong disabled:bg-muted',
   secondary: 'border border-line bg-white text-ink hover:bg-paper-deep disabled:text-muted',
-  danger: 'border border-act bg-white text-act hover:bg-act-soft',
-  ghost: 'text-accent hover:bg-accent-soft',
+  danger: 'border border-act bg-white text-act hover:bg-act-soft disabled:border-line disabled:text-muted',
+  ghost: 'text-accent hover:bg-accent-soft disabled:text-muted disabled:hover:bg-transparent',
 };
 
 export function Button({

@@ -44,4 +44,16 @@ describe('side by side results', () => {
     expect(screen.getByRole('status').textContent).toMatch(/^Slot hood meets the target/);
     expect(screen.queryByTestId('no-control-meets')).toBeNull();
   });
+
+  it('never writes a zero-width interval as a range: a bench where no dust reached the zone says the error is not known', () => {
+    // Only the rest-of-shift background: the interval collapses onto 0.015 mg/m³.
+    show([
+      column(1, { name: 'Downdraft bench', airflow_m3PerS: 0.6, twa: 0.015, ci: [0.015, 0.015], zoneHistories: 0 }),
+      column(2, { name: 'No local exhaust', ...at(3) }),
+    ]);
+    const text = screen.getByRole('table').textContent ?? '';
+    expect(text).toContain('CI not known: too few particles reached the zone');
+    expect(text).toContain('of 0.025 mg/m³, upper bound not known (no width), respirable');
+    expect(text).not.toMatch(/CI 0\.015–0\.015/);
+  });
 });

@@ -1,3 +1,4 @@
+import { ciText } from '../../../../shared/format/index';
 import { controlTierLabel, FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import type { ReactNode } from 'react';
 import { BannerBadge } from '@/components/banner-badge';
@@ -112,7 +113,7 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
           <>
             {mg(x.twa8h_mgPerM3)}
             <Sub>
-              CI {plain(x.twa8hCi95_mgPerM3[0])}–{plain(x.twa8hCi95_mgPerM3[1])} · peak {mg(x.peak15min_mgPerM3)}
+              CI {ciText(x.twa8hCi95_mgPerM3, 3, '', plain)} · peak {mg(x.peak15min_mgPerM3)}
             </Sub>
           </>
         );
@@ -132,7 +133,10 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
           <>
             {share(l.percentOfLimit / 100)}
             <Sub>
-              up to {share(l.percentOfLimitUpper / 100)} of {mg(l.value_mgPerM3)} {FRACTION_LABEL[l.fraction].toLowerCase()}
+              {l.percentOfLimitUpper > l.percentOfLimit
+                ? `up to ${share(l.percentOfLimitUpper / 100)} of ${mg(l.value_mgPerM3)}`
+                : `of ${mg(l.value_mgPerM3)}, upper bound not known (no width),`}{' '}
+              {FRACTION_LABEL[l.fraction].toLowerCase()}
             </Sub>
           </>
         ) : (

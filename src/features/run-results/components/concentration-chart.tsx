@@ -23,6 +23,17 @@ function SeriesNote({ view, fraction }: { view: RunResult; fraction: Fraction })
   const band = series[fraction];
   const width_min = (series.binWidth_s ?? (series.time_s[1] ?? 0) - (series.time_s[0] ?? 0)) / 60;
   const visits = band.visits?.reduce((a, v) => a + v, 0);
+  if (band.sparse && visits === 0)
+    return (
+      <p
+        role="status"
+        data-testid="series-sparse"
+        className="mt-2 rounded-md border-2 border-watch bg-watch-soft p-2 text-sm font-semibold text-watch"
+      >
+        No simulated dust of this fraction reached the breathing zone, so there is no series to draw. Read the 8-h TWA and the
+        verdict&apos;s reasons, or run more particles.
+      </p>
+    );
   if (band.sparse)
     return (
       <p

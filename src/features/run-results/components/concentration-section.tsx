@@ -7,7 +7,8 @@ import { FRACTIONS } from '../../../../shared/vocabulary/fractions';
 import { Section } from './section';
 
 export function ConcentrationSection({ view }: { view: RunResult }) {
-  const [fraction, setFraction] = useState<Fraction>('respirable');
+  // The limit's own fraction first, as the headline; respirable where there is no limit.
+  const [fraction, setFraction] = useState<Fraction>(view.limit?.fraction ?? 'respirable');
   return (
     <Section
       title="Breathing-zone concentration over time"

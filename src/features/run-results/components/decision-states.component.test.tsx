@@ -61,7 +61,14 @@ describe('the states a result shows while it cannot decide', () => {
       ...base,
       breathingZone: {
         ...base.breathingZone,
-        series: { ...base.breathingZone.series, respirable: { ...base.breathingZone.series.respirable, sparse: true } },
+        series: {
+          ...base.breathingZone.series,
+          respirable: {
+            ...base.breathingZone.series.respirable,
+            sparse: true,
+            visits: base.breathingZone.series.respirable.mean.map(() => 2),
+          },
+        },
       },
     };
     const { unmount } = render(<ConcentrationChart view={sparse} fraction="respirable" />);
@@ -77,5 +84,26 @@ describe('the states a result shows while it cannot decide', () => {
     render(<ConcentrationChart view={readable} fraction="respirable" />);
     expect(screen.queryByTestId('series-sparse')).toBeNull();
     expect(screen.getByTestId('series-bins').textContent).toMatch(/^Each point averages/);
+  });
+
+  it('says so when no dust reached the zone at all: no series to draw and an error that is not known, never ± 0 %', () => {
+    const respirable = base.breathingZone.series.respirable;
+    const empty: RunResult = {
+      ...base,
+      breathingZone: {
+        ...base.breathingZone,
+        fractions: {
+          ...base.breathingZone.fractions,
+          respirable: { ...base.breathingZone.fractions.respirable, taskMean_mgPerM3: 0, taskMeanCi95_mgPerM3: [0, 0] },
+        },
+        series: { ...base.breathingZone.series, respirable: { ...respirable, sparse: true, visits: respirable.mean.map(() => 0) } },
+      },
+      limit: { ...base.limit!, fraction: 'respirable' },
+    };
+    const { unmount } = render(<ConcentrationChart view={empty} fraction="respirable" />);
+    expect(screen.getByTestId('series-sparse').textContent).toMatch(/^No simulated dust of this fraction reached the breathing zone/);
+    unmount();
+    render(<Headline view={empty} scenario={scenario} />);
+    expect(screen.getByTestId('statistical-error').textContent).toMatch(/^Not known/);
   });
 });

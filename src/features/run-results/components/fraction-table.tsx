@@ -1,4 +1,4 @@
-import { percentText, readableNumber } from '../../../../shared/format/index';
+import { percentText, readableNumber, upperBoundText } from '../../../../shared/format/index';
 import { Button } from '@/components/ui/button';
 import { type Column, DataTable } from '@/components/ui/data-table';
 import { FRACTIONS, type Fraction } from '../../../../shared/vocabulary/fractions';
@@ -54,7 +54,10 @@ const COLUMNS: Column<Row>[] = [
       ) : (
         <>
           {percentText(r.percent)}
-          <span className="block text-xs text-muted">up to {percentText(r.percentUpper ?? NaN)}</span>
+          <span className="block text-xs text-muted">
+            {(r.percentUpper ?? NaN) > r.percent ? 'up to ' : 'upper bound '}
+            {upperBoundText(r.percent, r.percentUpper ?? NaN, percentText)}
+          </span>
         </>
       ),
     sortValue: (r) => r.percent ?? null,

@@ -1,4 +1,4 @@
-import { countText, percentText, readableNumber } from '../../../../shared/format/index';
+import { countText, percentText, readableNumber, upperBoundText } from '../../../../shared/format/index';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { CaptureVerdict } from '@/components/capture-verdict';
@@ -19,6 +19,10 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
     </div>
   );
 }
+
+// An error that is not a positive number (no dust in the zone, an interval with no width) is not known, never "± 0 %".
+const errorText = (relative_pct: number) =>
+  relative_pct > 0 && Number.isFinite(relative_pct) ? `± ${readableNumber(relative_pct, 2)} % at 95 % confidence` : 'Not known';
 
 export function Headline({
   view,
@@ -76,7 +80,9 @@ export function Headline({
         {limit && (
           <Figure label="Share of the limit" testId="percent-of-limit">
             {percentText(limit.percentOfLimit)}
-            <span className="block text-xs font-normal text-muted">upper 95 % bound {percentText(limit.percentOfLimitUpper)}</span>
+            <span className="block text-xs font-normal text-muted">
+              upper 95 % bound {upperBoundText(limit.percentOfLimit, limit.percentOfLimitUpper, percentText)}
+            </span>
           </Figure>
         )}
         {limit && (
@@ -93,7 +99,7 @@ export function Headline({
           <PeakText summary={s} limit={limit} unit=" mg/m³" />
         </Figure>
         <Figure label="Statistical error" testId="statistical-error">
-          ± {readableNumber(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), 2)} % at 95 % confidence
+          {errorText(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3))}
           {view.engine.stopping ? ' over all looks' : ''}
           <span className="block text-xs font-normal text-muted">
             {countText(view.engine.particles)} particles in {view.engine.batches} batches

@@ -1,9 +1,7 @@
-import { readableNumber } from '../../../../shared/format/index';
 import type { Ci } from '../../../../shared/schemas/run-result';
 
-/** An interval as text; one with no width says nothing about the error, so it never reads as a range. */
-export const ciText = ([lo, hi]: Ci, digits = 3, unit = ''): string =>
-  hi > lo ? `${readableNumber(lo, digits)}–${readableNumber(hi, digits)}${unit}` : 'not known: too few particles reached the zone';
+// An interval as text; one with no width says nothing about the error, so it never reads as a range.
+export { ciText } from '../../../../shared/format/index';
 
 // Relative half-width of the 95 % interval; the lower bound is clipped at zero, so the upper side is the honest one.
 export function relativeError(mean: number, [, hi]: Ci): number {

@@ -1,4 +1,4 @@
-import { percentText } from '../../../../shared/format/index';
+import { ciText, percentText, upperBoundText } from '../../../../shared/format/index';
 import { FRACTION_LABEL } from '../../../../shared/vocabulary/fraction-labels';
 import { Link } from 'react-router-dom';
 import { BannerBadge } from '@/components/banner-badge';
@@ -70,11 +70,18 @@ export function SweepTable({
     {
       key: 'ci',
       header: '95 % CI (mg/m³)',
-      render: (r) => `${sig(r.result.twa8hCi95_mgPerM3[0])}–${sig(r.result.twa8hCi95_mgPerM3[1])}`,
+      render: (r) => ciText(r.result.twa8hCi95_mgPerM3, 3, '', sig),
       align: 'right',
     },
     figureColumn({ key: 'pct', header: `% of limit${fraction}`, value: (r) => r.result.percentOfLimit, show: percentText }),
-    figureColumn({ key: 'upper', header: 'Upper 95 % (% of limit)', value: (r) => r.result.percentOfLimitUpper, show: percentText }),
+    {
+      key: 'upper',
+      header: 'Upper 95 % (% of limit)',
+      // No higher than the mean: the interval has no width, so the bound is not known.
+      render: (r) => upperBoundText(r.result.percentOfLimit, r.result.percentOfLimitUpper, percentText),
+      sortValue: (r) => r.result.percentOfLimitUpper,
+      align: 'right',
+    },
     {
       key: 'banner',
       header: 'Banner',
