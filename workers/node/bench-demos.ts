@@ -4,8 +4,23 @@ import type { RunResult } from '../../shared/schemas/run-result';
 import { combineBatches, prepareScenario } from '../engine/index';
 import { ThreadPool } from './thread-pool';
 
-/** The bench's rule: ±10 % or a decided verdict, as the issue's time to a decision; capped so the bench stays a few minutes. */
-export const BENCH_RULE = { relativeHalfWidth: 0.1, maxBatches: 160 };
+/**
+ * The bench's rule: ±10 % or a decided verdict, as the issue's time to a decision; capped so the bench stays a few
+ * minutes. Every demo runs in batches of `particlesPerBatch` (the demo files' own batches hold 4,000–15,000, which
+ * makes the first look at 20 batches cost 80,000–300,000 particles whatever the answer); `--batch-particles=N` changes it.
+ */
+export const BENCH_RULE = { relativeHalfWidth: 0.1, maxBatches: 160, particlesPerBatch: 1000 };
+
+/** The demo's own run settings with the bench's batch size: 20 batches of it, run to the rule. */
+export function benchRun(run: object | undefined, particlesPerBatch: number, extra: object = {}) {
+  return {
+    ...run,
+    batches: 20,
+    particles: 20 * particlesPerBatch,
+    precision: { relativeHalfWidth: BENCH_RULE.relativeHalfWidth, maxBatches: BENCH_RULE.maxBatches },
+    ...extra,
+  };
+}
 
 export interface DemoFigure {
   name: string;
@@ -19,8 +34,10 @@ export interface DemoFigure {
   fomAnalog: number;
   /** The same with variance reduction (the default, which the timings above use). */
   fomReduced: number;
-  /** Narrowest 8-h interval of any fraction relative to its mean (0 would be a zero-width interval on screen). */
+  /** Narrowest 8-h interval of any fraction relative to its mean (0: an interval with no width). */
   narrowest: number;
+  /** Source histories that reached the breathing zone, for the limit's fraction (0: none did, so the interval has no width). */
+  zoneHistories: number;
 }
 
 const DIR = new URL('../../shared/demo-scenarios/', import.meta.url);
@@ -41,7 +58,11 @@ function narrowest(result: RunResult): number {
 }
 
 /** Every demo scenario run to a decision on warm pools of each size; the same seed gives the same batches on each. */
-export async function benchDemos(workerCounts: readonly number[], log: (line: string) => void): Promise<DemoFigure[]> {
+export async function benchDemos(
+  workerCounts: readonly number[],
+  log: (line: string) => void,
+  particlesPerBatch = BENCH_RULE.particlesPerBatch,
+): Promise<DemoFigure[]> {
   const files = (await readdir(DIR)).filter((f) => f.endsWith('.json')).sort();
   const pools = new Map(workerCounts.map((n) => [n, new ThreadPool(n)]));
   const figures: DemoFigure[] = [];
@@ -53,7 +74,7 @@ export async function benchDemos(workerCounts: readonly number[], log: (line: st
     for (const pool of pools.values()) await pool.run(warm);
     for (const file of files) {
       const raw = JSON.parse(await readFile(new URL(file, DIR), 'utf8')) as { run?: object };
-      const scenario = parseScenario({ ...raw, run: { ...raw.run, precision: BENCH_RULE } });
+      const scenario = parseScenario({ ...raw, run: benchRun(raw.run, particlesPerBatch) });
       const prepared = prepareScenario(scenario);
       const seconds: Record<number, number> = {};
       let result: RunResult | undefined;
@@ -65,7 +86,7 @@ export async function benchDemos(workerCounts: readonly number[], log: (line: st
       const r = result!;
       const one = seconds[workerCounts[0]] * workerCounts[0];
       // The plain walk to the same rule on the first pool, for its figure of merit.
-      const plain = prepareScenario(parseScenario({ ...raw, run: { ...raw.run, precision: BENCH_RULE, varianceReduction: false } }));
+      const plain = prepareScenario(parseScenario({ ...raw, run: benchRun(raw.run, particlesPerBatch, { varianceReduction: false }) }));
       const plainStarted = performance.now();
       const plainResult = await pools.get(workerCounts[0])!.runToPrecision(plain, BENCH_RULE);
       const plainSeconds = ((performance.now() - plainStarted) / 1000) * workerCounts[0];
@@ -79,6 +100,7 @@ export async function benchDemos(workerCounts: readonly number[], log: (line: st
         fomAnalog: fom(plainResult, plainSeconds),
         fomReduced: fom(r, one),
         narrowest: narrowest(r),
+        zoneHistories: r.breathingZone.fractions[r.limit?.fraction ?? 'respirable'].zoneHistories ?? 0,
       };
       figures.push(figure);
       log(describeDemo(figure));
