@@ -92,7 +92,7 @@ describe('report inputs', () => {
       kind: 'Downdraft bench',
       face: 'work surface 1000 × 600 mm (length × depth)',
       direction: 'up, air drawn down through the surface',
-      faceVelocity: '0.7 m/s down through the surface (common practice: 0.5–1 m/s)',
+      faceVelocity: '0.7 m/s down through the surface (common practice: 0.5–1.0 m/s)',
     });
     expect(hoodRows(bench)[0].position).toMatch(/^surface centre at x 3 m/);
   });

@@ -172,7 +172,9 @@ export function hoodRows(s: Scenario): HoodRow[] {
       position: bench ? `surface centre at ${at(h)}` : at(h),
       direction: bench ? 'up, air drawn down through the surface' : direction(h.direction),
       airflow: m3h(h.airflow_m3PerS),
-      faceVelocity: bench ? `${velocity} down through the surface (common practice: ${n(min_mPerS)}–${n(max_mPerS)} m/s)` : velocity,
+      faceVelocity: bench
+        ? `${velocity} down through the surface (common practice: ${min_mPerS.toFixed(1)}–${max_mPerS.toFixed(1)} m/s)`
+        : velocity,
     };
   });
 }

@@ -21,8 +21,8 @@ function Figure({ label, children, testId }: { label: string; children: ReactNod
 }
 
 // An error that is not a positive number (no dust in the zone, an interval with no width) is not known, never "± 0 %".
-const errorText = (relative_pct: number) =>
-  relative_pct > 0 && Number.isFinite(relative_pct) ? `± ${readableNumber(relative_pct, 2)} % at 95 % confidence` : 'Not known';
+const errorText = (relative_pct: number, looks: string) =>
+  relative_pct > 0 && Number.isFinite(relative_pct) ? `± ${readableNumber(relative_pct, 2)} % at 95 % confidence${looks}` : 'Not known';
 
 export function Headline({
   view,
@@ -99,8 +99,7 @@ export function Headline({
           <PeakText summary={s} limit={limit} unit=" mg/m³" />
         </Figure>
         <Figure label="Statistical error" testId="statistical-error">
-          {errorText(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3))}
-          {view.engine.stopping ? ' over all looks' : ''}
+          {errorText(relativeError(s.taskMean_mgPerM3, s.taskMeanCi95_mgPerM3), view.engine.stopping ? ' over all looks' : '')}
           <span className="block text-xs font-normal text-muted">
             {countText(view.engine.particles)} particles in {view.engine.batches} batches
           </span>
