@@ -55,8 +55,7 @@ const COLUMNS: Column<Row>[] = [
         <>
           {percentText(r.percent)}
           <span className="block text-xs text-muted">
-            {(r.percentUpper ?? NaN) > r.percent ? 'up to ' : 'upper bound '}
-            {upperBoundText(r.percent, r.percentUpper ?? NaN, percentText)}
+            {upperBoundText(r.percent, r.percentUpper ?? NaN, (v) => `up to ${percentText(v)}`)}
           </span>
         </>
       ),
