@@ -9,4 +9,7 @@ export const ciText = ([lo, hi]: readonly [number, number], digits = 3, unit = '
 
 /** An upper 95 % bound as text, or "not known" when it is no higher than the estimate (an interval with no width). */
 export const upperBoundText = (estimate: number, upper: number, format: (v: number) => string): string =>
-  upper > estimate ? format(upper) : 'not known';
+  upperBoundKnown(estimate, upper) ? format(upper) : 'not known';
+
+/** Whether an upper bound says anything: it lies above its estimate (not so for an interval with no width). */
+export const upperBoundKnown = (estimate: number, upper: number): boolean => upper > estimate;

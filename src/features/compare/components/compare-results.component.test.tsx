@@ -55,5 +55,7 @@ describe('side by side results', () => {
     expect(text).toContain('CI not known: too few particles reached the zone');
     expect(text).toContain('of 0.025 mg/m³, upper bound not known (no width), respirable');
     expect(text).not.toMatch(/CI 0\.015–0\.015/);
+    // Nor a rating category: it rates a daily 95th percentile that is not known here.
+    expect(text).toContain('Not rated (no width)');
   });
 });

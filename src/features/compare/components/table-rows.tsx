@@ -1,4 +1,4 @@
-import { ciText } from '../../../../shared/format/index';
+import { ciText, upperBoundKnown } from '../../../../shared/format/index';
 import { controlTierLabel, FRACTION_LABEL } from '../../../../shared/vocabulary/index';
 import type { ReactNode } from 'react';
 import { BannerBadge } from '@/components/banner-badge';
@@ -133,7 +133,7 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
           <>
             {share(l.percentOfLimit / 100)}
             <Sub>
-              {l.percentOfLimitUpper > l.percentOfLimit
+              {upperBoundKnown(l.percentOfLimit, l.percentOfLimitUpper)
                 ? `up to ${share(l.percentOfLimitUpper / 100)} of ${mg(l.value_mgPerM3)}`
                 : `of ${mg(l.value_mgPerM3)}, upper bound not known (no width),`}{' '}
               {FRACTION_LABEL[l.fraction].toLowerCase()}
@@ -150,7 +150,10 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
       needsRun: true,
       cell: (c) => {
         const r = run(c);
-        return r.limit ? `${r.limit.ratingCategory}${r.ratingName ? ` · ${r.ratingName}` : ''}` : '—';
+        if (!r.limit) return '—';
+        // With no width the upper bound, and so the daily 95th percentile the category rates, is not known.
+        if (!upperBoundKnown(r.limit.percentOfLimit, r.limit.percentOfLimitUpper)) return 'Not rated (no width)';
+        return `${r.limit.ratingCategory}${r.ratingName ? ` · ${r.ratingName}` : ''}`;
       },
     },
     {

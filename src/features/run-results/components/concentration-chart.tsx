@@ -59,6 +59,8 @@ function SeriesNote({ view, fraction }: { view: RunResult; fraction: Fraction })
 
 export function ConcentrationChart({ view, fraction }: { view: RunResult; fraction: Fraction }) {
   const band = view.breathingZone.series[fraction];
+  // Not one zone visit: an empty plot would only draw a flat line on a made-up scale, so the note stands alone.
+  if (band.sparse && band.visits?.reduce((a, v) => a + v, 0) === 0) return <SeriesNote view={view} fraction={fraction} />;
   const points = view.breathingZone.series.time_s
     .map((t, i) => ({ t: t / 60, mean: band.mean[i], lo: band.lo[i], hi: band.hi[i] }))
     .filter((p) => Number.isFinite(p.mean));

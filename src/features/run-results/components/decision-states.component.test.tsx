@@ -98,12 +98,17 @@ describe('the states a result shows while it cannot decide', () => {
         },
         series: { ...base.breathingZone.series, respirable: { ...respirable, sparse: true, visits: respirable.mean.map(() => 0) } },
       },
-      limit: { ...base.limit!, fraction: 'respirable' },
+      limit: { ...base.limit!, fraction: 'respirable', percentOfLimit: 0.75, percentOfLimitUpper: 0.75 },
     };
-    const { unmount } = render(<ConcentrationChart view={empty} fraction="respirable" />);
+    const { unmount, container } = render(<ConcentrationChart view={empty} fraction="respirable" />);
     expect(screen.getByTestId('series-sparse').textContent).toMatch(/^No simulated dust of this fraction reached the breathing zone/);
+    // No empty plot on a made-up scale beside the note.
+    expect(container.querySelector('svg')).toBeNull();
     unmount();
     render(<Headline view={empty} scenario={scenario} />);
     expect(screen.getByTestId('statistical-error').textContent).toMatch(/^Not known/);
+    // The category rates the daily 95th percentile from the upper bound; with no width neither is known.
+    expect(screen.getByTestId('rating').textContent).toMatch(/^Not rated/);
+    expect(screen.getByTestId('percent-of-limit').textContent).toContain('upper 95 % bound not known');
   });
 });

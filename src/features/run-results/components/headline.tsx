@@ -1,4 +1,4 @@
-import { countText, percentText, readableNumber, upperBoundText } from '../../../../shared/format/index';
+import { countText, percentText, readableNumber, upperBoundKnown, upperBoundText } from '../../../../shared/format/index';
 import type { ReactNode } from 'react';
 import type { Scenario } from '../../../../shared/schemas/scenario';
 import { CaptureVerdict } from '@/components/capture-verdict';
@@ -50,7 +50,8 @@ export function Headline({
           <p className="max-w-xl text-sm text-ink">
             {BANNER_LABEL[limit.banner].meaning} ({readableNumber(limit.value_mgPerM3)} mg/m³ {FRACTION_LABEL[limit.fraction].toLowerCase()}
             {agent ? ` for ${agent}` : ''}
-            {source ? `, ${source}` : ''}).
+            {/* A source that ends its own sentence would close as ").)." */}
+            {source ? `, ${source.replace(/\.\s*$/, '')}` : ''}).
           </p>
           {limit.reasons && limit.reasons.length > 0 && (
             <ul role="status" data-testid="verdict-reasons" className="w-full list-disc pl-5 text-sm font-semibold text-ink">
@@ -87,12 +88,23 @@ export function Headline({
         )}
         {limit && (
           <Figure label="Exposure rating category" testId="rating">
-            {limit.ratingCategory} · {RATING_LABEL[limit.ratingCategory].name}
-            <span className="block text-xs font-normal text-muted">
-              AIHA band: {RATING_LABEL[limit.ratingCategory].band}
-              {limit.p95_mgPerM3 !== undefined &&
-                `; daily 95th percentile ${readableNumber(limit.p95_mgPerM3)} mg/m³ at a day-to-day GSD of ${readableNumber(limit.gsd ?? NaN, 2)}`}
-            </span>
+            {upperBoundKnown(limit.percentOfLimit, limit.percentOfLimitUpper) ? (
+              <>
+                {limit.ratingCategory} · {RATING_LABEL[limit.ratingCategory].name}
+                <span className="block text-xs font-normal text-muted">
+                  AIHA band: {RATING_LABEL[limit.ratingCategory].band}
+                  {limit.p95_mgPerM3 !== undefined &&
+                    `; daily 95th percentile ${readableNumber(limit.p95_mgPerM3)} mg/m³ at a day-to-day GSD of ${readableNumber(limit.gsd ?? NaN, 2)}`}
+                </span>
+              </>
+            ) : (
+              <>
+                Not rated
+                <span className="block text-xs font-normal text-muted">
+                  The interval has no upper bound above its mean, so the daily 95th percentile is not known.
+                </span>
+              </>
+            )}
           </Figure>
         )}
         <Figure label={`Peak 15-min average, ${FRACTION_LABEL[fraction].toLowerCase()}`} testId="peak">
