@@ -57,5 +57,8 @@ describe('side by side results', () => {
     expect(text).not.toMatch(/CI 0\.015–0\.015/);
     // Nor a rating category: it rates a daily 95th percentile that is not known here.
     expect(text).toContain('Not rated (no width)');
+    // The downdraft bench is the reference column: with no error of its own, the other's alone would make the z-value.
+    expect(text).toContain('not judged: an interval is not known');
+    expect(text).not.toMatch(/z = /);
   });
 });

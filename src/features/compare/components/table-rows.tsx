@@ -37,7 +37,7 @@ function differenceCell(columns: readonly CompareColumn[], c: CompareColumn, ind
       {mg(Math.abs(d.difference))} (
       {Number.isFinite(d.differencePercent) ? `${sign}${plain(Math.abs(d.differencePercent))} %` : 'first is zero'})
       <span className={`block font-semibold ${d.differs ? 'text-ink' : 'text-muted'}`}>
-        <span aria-hidden="true">{d.differs ? '≠ ' : '≈ '}</span>
+        <span aria-hidden="true">{Number.isNaN(d.z) ? '? ' : d.differs ? '≠ ' : '≈ '}</span>
         {d.statement}
       </span>
     </>

@@ -77,8 +77,8 @@ export function comparisonCsv(columns: readonly CompareColumn[], target: Target)
       ...FATES.map((k) => (r ? 100 * r.fate.shares[k] : '')),
       diff?.difference,
       diff?.differencePercent,
-      diff?.z,
-      diff ? (diff.differs ? 'yes' : 'no') : '',
+      diff && Number.isFinite(diff.z) ? diff.z : '',
+      diff ? (Number.isNaN(diff.z) ? 'not known' : diff.differs ? 'yes' : 'no') : '',
       r ? (meetsTarget(c, target) ? 'yes' : 'no') : '',
       best === c.id ? 'yes' : 'no',
     ];

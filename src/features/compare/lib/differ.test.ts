@@ -44,9 +44,16 @@ describe('telling two Monte-Carlo means apart', () => {
     expect(d.statement).toBe(`differs (z = ${(9 / Math.hypot(0.1, 0.1)).toFixed(1)})`);
   });
 
-  it('calls any gap between two exact figures a difference and gives no percentage against zero', () => {
+  it('does not judge a difference when either interval has no width, and gives no percentage against zero', () => {
+    // A zero-width interval is too few zone histories, not an exact figure: its error is not known (shared/format NO_WIDTH_TEXT).
     const d = compareMeans({ mean: 0, ci95: [0, 0] }, { mean: 1, ci95: [1, 1] });
-    expect(d).toMatchObject({ differs: true, statement: 'differs (z = ∞)' });
+    expect(d).toMatchObject({ differs: false, statement: 'not judged: an interval is not known' });
+    expect(d.z).toBeNaN();
     expect(d.differencePercent).toBeNaN();
+    // One side with no width is enough: the other's error alone would understate the difference's.
+    const one = compareMeans({ mean: 0.015, ci95: [0.015, 0.015] }, estimate(0.4, 0.01));
+    expect(one).toMatchObject({ differs: false, statement: 'not judged: an interval is not known' });
+    expect(one.difference).toBeCloseTo(0.385, 12);
+    expect(one.z).toBeNaN();
   });
 });

@@ -15,6 +15,7 @@ export interface Difference {
   difference: number;
   /** Relative to the reference mean, %; NaN when the reference is zero. */
   differencePercent: number;
+  /** NaN when either interval has no width: its error is not known, so neither is the difference's. */
   z: number;
   differs: boolean;
   statement: string;
@@ -25,17 +26,23 @@ export function standardError({ mean, ci95: [lo, hi] }: Estimate): number {
   return Math.max(hi - mean, mean - lo, 0) / Z_CRITICAL;
 }
 
-const zText = (z: number) => (Number.isFinite(z) ? (Math.abs(z) >= 100 ? Math.abs(z).toFixed(0) : Math.abs(z).toFixed(1)) : '∞');
+const zText = (z: number) => (Math.abs(z) >= 100 ? Math.abs(z).toFixed(0) : Math.abs(z).toFixed(1));
 
-/** Normal-theory z-test on two independent Monte-Carlo means, each with SE = CI half-width / 1.96. */
+/**
+ * Normal-theory z-test on two independent Monte-Carlo means, each with SE = CI half-width / 1.96. An interval with
+ * no width (too few particles reached the zone) says nothing about its error, so the difference is not judged.
+ */
 export function compareMeans(reference: Estimate, other: Estimate): Difference {
   const difference = other.mean - reference.mean;
+  const differencePercent = reference.mean !== 0 ? (100 * difference) / reference.mean : NaN;
+  if (!(reference.ci95[1] > reference.ci95[0] && other.ci95[1] > other.ci95[0]))
+    return { difference, differencePercent, z: NaN, differs: false, statement: 'not judged: an interval is not known' };
   const se = Math.hypot(standardError(reference), standardError(other));
-  const z = se > 0 ? difference / se : difference === 0 ? 0 : Math.sign(difference) * Infinity;
+  const z = se > 0 ? difference / se : 0;
   const differs = Math.abs(z) > Z_CRITICAL;
   return {
     difference,
-    differencePercent: reference.mean !== 0 ? (100 * difference) / reference.mean : NaN,
+    differencePercent,
     z,
     differs,
     statement: `${differs ? 'differs' : 'within statistical error'} (z = ${zText(z)})`,
