@@ -2,14 +2,16 @@ import { readdir, readFile } from 'node:fs/promises';
 import { parseScenario } from '../../shared/schemas/scenario';
 import type { RunResult } from '../../shared/schemas/run-result';
 import { combineBatches, prepareScenario } from '../engine/index';
+import { PRECISION_BATCH_PARTICLES } from '../run-to-precision';
 import { ThreadPool } from './thread-pool';
 
 /**
  * The bench's rule: ±10 % or a decided verdict, as the issue's time to a decision; capped so the bench stays a few
- * minutes. Every demo runs in batches of `particlesPerBatch` (the demo files' own batches hold 4,000–15,000, which
- * makes the first look at 20 batches cost 80,000–300,000 particles whatever the answer); `--batch-particles=N` changes it.
+ * minutes. Every demo runs in batches of `particlesPerBatch`, the size the editor starts a run to a precision with
+ * (the demo files' own batches hold 4,000–15,000, which makes the first look at 20 batches cost 80,000–300,000
+ * particles whatever the answer); `--batch-particles=N` changes it.
  */
-export const BENCH_RULE = { relativeHalfWidth: 0.1, maxBatches: 160, particlesPerBatch: 1000 };
+export const BENCH_RULE = { relativeHalfWidth: 0.1, maxBatches: 160, particlesPerBatch: PRECISION_BATCH_PARTICLES };
 
 /** The demo's own run settings with the bench's batch size: 20 batches of it, run to the rule. */
 export function benchRun(run: object | undefined, particlesPerBatch: number, extra: object = {}) {

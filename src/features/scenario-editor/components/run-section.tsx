@@ -4,6 +4,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { DEFAULTS } from '@/features/scenario-editor/lib/defaults';
 import { withRun } from '@/features/scenario-editor/lib/update';
 import { bindNumberFields } from '@/lib/bind-fields';
+import { FIRST_LOOK_BATCHES, PRECISION_BATCH_PARTICLES } from '../../../../workers/run-to-precision';
 import { NumberField } from './number-field';
 import { FieldGrid, Section, type SectionProps } from './section';
 
@@ -32,10 +33,21 @@ export function RunSection({ value, onChange, errors }: SectionProps<ScenarioInp
         <SelectField
           label="Run until"
           value={precision ? 'precision' : 'particles'}
-          onChange={(e) => set({ precision: e.target.value === 'precision' ? { relativeHalfWidth: 0.1, maxBatches: 640 } : undefined })}
+          onChange={(e) =>
+            set(
+              e.target.value === 'precision'
+                ? // Small batches let the first look come early; the looks' spent error rate keeps their intervals honest.
+                  {
+                    precision: { relativeHalfWidth: 0.1, maxBatches: 640 },
+                    batches: FIRST_LOOK_BATCHES,
+                    particles: FIRST_LOOK_BATCHES * PRECISION_BATCH_PARTICLES,
+                  }
+                : { precision: undefined },
+            )
+          }
           hint={
             precision
-              ? `Batches of ${countText(perBatch)} particles (particles ÷ batches), looked at only at 20, 40, 80, … batches`
+              ? `Batches of ${countText(perBatch)} particles (particles ÷ batches), looked at only at 20, 40, 80, … batches; the particles above are the first look`
               : undefined
           }
         >
