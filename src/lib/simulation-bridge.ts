@@ -1,9 +1,9 @@
 import * as Comlink from 'comlink';
-import { type RunPrecision, type Scenario, parseScenario } from '../../shared/schemas/scenario';
+import type { RunPrecision, Scenario } from '../../shared/schemas/scenario';
 import type { RunResult } from '../../shared/schemas/run-result';
 import { type BatchResult, combineBatches, type PreparedScenario, prepareScenario, withBatchTallies } from '../../workers/engine/index';
 import { FIRST_LOOK_BATCHES, type LookOutcome, runToPrecision } from '../../workers/run-to-precision';
-import { referenceScenario } from '../../workers/engine/reference-scenario';
+import { warmUpPieces } from '../../workers/warm-up-pieces';
 import { type BatchWorker, scheduleBatches } from '../../workers/schedule-batches';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker';
 
@@ -20,6 +20,8 @@ export { RunCancelledError } from '../../workers/schedule-batches';
 interface PooledWorker {
   worker: Worker;
   api: Comlink.Remote<SimulationWorkerApi>;
+  /** Set when a run takes the worker: its warm-up sends no further piece. */
+  claimed: boolean;
 }
 
 // Workers are kept between runs: a fresh one spends its first seconds in JIT warm-up.
@@ -27,32 +29,34 @@ const idle: PooledWorker[] = [];
 
 // One worker per hardware thread but the page's own, and never fewer than two: the page sits idle
 // while a run goes (it only draws progress), and on a two-core machine two workers reach a decision
-// about 1.5× sooner than one (`npm run bench:browser`: 2.0–7.0 s against 2.5–10.9 s over the demos).
+// about 1.5× sooner than one (`npm run bench:browser` with 1,000-particle batches: 2.0–7.0 s against 2.5–10.9 s over the demos).
 function poolSize(): number {
   return Math.max(2, (navigator.hardwareConcurrency || 2) - 1);
 }
 
 function startWorker(warm: boolean): PooledWorker {
   const worker = new Worker(new URL('../../workers/simulation.worker.ts', import.meta.url), { type: 'module' });
-  const pooled = { worker, api: Comlink.wrap<SimulationWorkerApi>(worker) };
-  // A fresh worker runs its first steps in the interpreter; started ahead of a run, it takes a small
-  // throwaway batch (a flanged hood in a cross-draft, about half a million steps) so the step loop
-  // is compiled before real work, which queues behind it.
-  if (warm) {
-    // Optional: a warm-up that fails for any reason must never stand in the way of a page or a run.
-    try {
-      pooled.api.warmUp(warmUpScenario()).catch(() => {});
-    } catch {
-      /* the run will compile the loop itself */
-    }
-  }
+  const pooled: PooledWorker = { worker, api: Comlink.wrap<SimulationWorkerApi>(worker), claimed: false };
+  // A fresh worker runs its first steps in the interpreter; started ahead of a run, it takes the
+  // warm-up pieces (workers/warm-up-pieces.ts: every hood kind, bursts, a jet) one at a time, so the
+  // step loop is compiled for every branch before real work, which waits for one piece at most.
+  if (warm) void warmUp(pooled);
   return pooled;
 }
 
-let warmUpPrepared: ReturnType<typeof prepareScenario> | undefined;
-function warmUpScenario() {
-  warmUpPrepared ??= prepareScenario(parseScenario({ ...referenceScenario, run: { particles: 3000, batches: 2, seed: 1 } }));
-  return warmUpPrepared;
+let warmUpPrepared: ReturnType<typeof prepareScenario>[] | undefined;
+
+async function warmUp(pooled: PooledWorker): Promise<void> {
+  // Optional: a warm-up that fails for any reason must never stand in the way of a page or a run.
+  try {
+    warmUpPrepared ??= warmUpPieces().map(prepareScenario);
+    for (const piece of warmUpPrepared) {
+      if (pooled.claimed) return;
+      await pooled.api.warmUp(piece);
+    }
+  } catch {
+    /* the run will compile the loop itself */
+  }
 }
 
 /** Starts the pool's workers ahead of the first run (pages that run the engine call it on mount). */
@@ -73,6 +77,7 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
   // Workers started here go straight to the run: a warm-up would only come before it.
   while (idle.length < size) idle.push(startWorker(false));
   const busy = idle.splice(0, size);
+  for (const w of busy) w.claimed = true;
   const particles = prepared.particlesPerBatch * prepared.batches;
   const report = (fraction: number) => {
     const elapsed_s = (performance.now() - started) / 1000;

@@ -20,6 +20,7 @@ interface Row {
   seconds: number;
   /** A second run on the same page, with the server's next seed. */
   secondsAgain: number;
+  batchesAgain: string;
   stopped: string;
   banner: string;
 }
@@ -90,9 +91,12 @@ try {
       },
     );
     const secondsAgain = (Date.now() - again) / 1000;
+    const batchesAgain = /stopped at ([\d,]+) batches/.exec((await stopping.textContent()) ?? '')?.[1] ?? '?';
     workers = Math.max(workers, await page.evaluate(() => (window as unknown as { __workers: number }).__workers));
-    rows.push({ name, seconds, secondsAgain, stopped, banner });
-    console.log(`${name}: ${seconds.toFixed(2)} s, again ${secondsAgain.toFixed(2)} s, ${banner}, stopped at ${stopped}`);
+    rows.push({ name, seconds, secondsAgain, batchesAgain, stopped, banner });
+    console.log(
+      `${name}: ${seconds.toFixed(2)} s, again ${secondsAgain.toFixed(2)} s (${batchesAgain} batches), ${banner}, stopped at ${stopped}`,
+    );
   }
 } finally {
   await browser.close();
@@ -110,7 +114,7 @@ const lines = [
     )}, headless, no GPU, ${workers} worker${workers === 1 ? '' : 's'} (this machine has ${os.cpus().length} hardware threads), load ${os.loadavg()[0].toFixed(2)}; from clicking Run to the result on screen, ${PAUSE_MS / 1000} s after opening the page, each demo at ${BENCH_RULE.particlesPerBatch.toLocaleString('en-GB')} particles a batch to ±${100 * BENCH_RULE.relativeHalfWidth} % or a decision; the first run on the page, then a second one (another seed from the server) once its workers have compiled the loop for that scenario:`,
   ...rows.map(
     (r) =>
-      `  - ${r.name}: ${r.seconds.toFixed(2)} s first, ${r.secondsAgain.toFixed(2)} s again; first run ${r.banner}, stopped at ${r.stopped}`,
+      `  - ${r.name}: ${r.seconds.toFixed(2)} s first, ${r.secondsAgain.toFixed(2)} s again (${r.batchesAgain} batches); first run ${r.banner}, stopped at ${r.stopped}`,
   ),
 ];
 console.log(lines.join('\n'));

@@ -1,4 +1,4 @@
-/** Fixed-seed benchmark workstation: a flanged hood, a cross-draft and a breathing zone, as in real use (npm run bench; a small copy warms the browser's workers). */
+/** Fixed-seed benchmark workstation: a flanged hood, a cross-draft and a breathing zone, as in real use (npm run bench; the browser's warm-up pieces, workers/warm-up-pieces.ts, start from it). */
 export const referenceScenario = {
   name: 'Benchmark reference bench',
   room: { length_m: 6, width_m: 5, height_m: 3, airChanges_perH: 4, draftSpeed_mPerS: 0.1 },
