@@ -63,7 +63,8 @@ export function CompareResults({ columns, target, onTargetChange, chartFraction,
         <li>
           Differences are against the first column on the {FRACTION_LABEL[fraction].toLowerCase()} 8-h TWA. Two options differ beyond their
           statistical error when |z| &gt; {Z_CRITICAL}, the standard normal 97.5 % quantile (two-sided 5 % test), with z = difference /
-          √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own.
+          √(SE₁² + SE₂²) and each SE = 95 % CI half-width / {Z_CRITICAL}. Each pair is judged on its own; a pair where either interval is
+          not known (too few particles reached the zone) is not judged.
         </li>
         <li>
           The target is judged as the banner is, on the verdict: the daily 95th percentile (from the upper 95 % bound of the 8-h TWA of the
