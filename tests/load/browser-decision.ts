@@ -11,7 +11,7 @@ import { startServer } from '../helpers/server';
  * bench's rule (BENCH_RULE: batches of 250 particles, ±10 % or a decided verdict, at most 160 batches), as an engineer would see it.
  * `npm run bench:browser` (after a build); `-- --readme` rewrites the README block.
  */
-const PAUSE_MS = 3000; // a user's pause between opening the page and clicking Run: the pool's warm-up batch runs meanwhile
+const PAUSE_MS = 3000; // a user's pause between opening the page and clicking Run: the workers' warm-up pieces run meanwhile
 
 if (!fs.existsSync('dist/index.html')) execFileSync('npx', ['vite', 'build'], { stdio: 'inherit' });
 
@@ -49,7 +49,7 @@ try {
   for (const item of list as { id: number; name: string; workstationName: string }[]) {
     const { id } = item;
     const name = `${item.workstationName}, ${item.name.toLowerCase()}`;
-    // The bench's rule replaces the demo's own run settings (its seed stays).
+    // The bench's rule replaces the demo's own run settings; the server picks each run's seed (its run ticket).
     const status = await page.evaluate(
       async ({ id, rule }) => {
         const current = await (await fetch(`/api/scenarios/${id}`)).json();
