@@ -25,7 +25,7 @@ interface ActiveRun<P> {
  * The run state machine without React. Each start makes a new active run and everything a run
  * reports is checked against it, so the callbacks of a cancelled or replaced run, which can still
  * arrive from the workers' queues, never bring its progress bar back. Progress is coalesced to
- * one update per frame.
+ * one update per tick of `nextFrame`.
  */
 export function engineRunController<R, P>(setState: (state: EngineRunState<R, P>) => void, nextFrame: FrameScheduler) {
   let active: ActiveRun<P> | null = null;

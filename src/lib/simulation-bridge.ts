@@ -87,11 +87,15 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
       secondsLeft: fraction > 0 ? (elapsed_s * (1 - fraction)) / fraction : Infinity,
     });
   };
-  const workers = busy.map(({ api }) => ({
-    prepare: () => api.prepare(prepared),
-    run: (batchIndex: number, onBatchProgress: (fraction: number, steps: number) => void) =>
-      api.run(batchIndex, Comlink.proxy(onBatchProgress)),
-  }));
+  const workers = busy.map(({ api }): BatchWorker<BatchResult> => {
+    // Sent once a run, not again at each look of a run to a precision.
+    let ready: Promise<void> | undefined;
+    return {
+      prepare: () => (ready ??= api.prepare(prepared)),
+      run: (batchIndex: number, onBatchProgress: (fraction: number, steps: number) => void) =>
+        api.run(batchIndex, Comlink.proxy(onBatchProgress)),
+    };
+  });
   const elapsed_s = () => (performance.now() - started) / 1000;
   try {
     const result = scenario.run.precision
