@@ -49,4 +49,15 @@ describe('saved runs list', () => {
     const [, , pct] = cellsOf();
     expect(pct.textContent).toMatch(/^159 %/);
   });
+
+  it('never writes an interval with no width as a range: the downdraft bench, where no dust reached the zone', () => {
+    render(
+      <MemoryRouter>
+        <SavedRuns runs={[{ ...run, twa8h_mgPerM3: 0.015, twa8h_lo_mgPerM3: 0.015, twa8h_hi_mgPerM3: 0.015 }]} />
+      </MemoryRouter>,
+    );
+    const text = screen.getByRole('table', { name: 'Saved runs' }).textContent ?? '';
+    expect(text).toContain('0.015 [CI not known: too few particles reached the zone]');
+    expect(text).not.toContain('[0.015, 0.015]');
+  });
 });

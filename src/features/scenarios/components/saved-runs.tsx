@@ -1,4 +1,4 @@
-import { countText, percentText } from '../../../../shared/format/index';
+import { countText, NO_WIDTH_TEXT, percentText } from '../../../../shared/format/index';
 import { Link } from 'react-router-dom';
 import type { RunListItem } from '../../../../shared/schemas/workspace-views';
 import { BannerBadge } from '@/components/banner-badge';
@@ -28,7 +28,9 @@ const COLUMNS: Column<RunListItem>[] = [
     sortValue: (r) => r.twa8h_mgPerM3,
     render: (r) => (
       <>
-        {`${sig(r.twa8h_mgPerM3)} [${sig(r.twa8h_lo_mgPerM3)}, ${sig(r.twa8h_hi_mgPerM3)}]`}
+        {(r.twa8h_hi_mgPerM3 ?? 0) > (r.twa8h_lo_mgPerM3 ?? 0)
+          ? `${sig(r.twa8h_mgPerM3)} [${sig(r.twa8h_lo_mgPerM3)}, ${sig(r.twa8h_hi_mgPerM3)}]`
+          : `${sig(r.twa8h_mgPerM3)} [CI ${NO_WIDTH_TEXT}]`}
         <span className="block text-xs text-muted">{r.limit_fraction ? fractionWord(r.limit_fraction) : 'no limit set'}</span>
       </>
     ),
