@@ -10,14 +10,13 @@ import * as words from './words';
 // Module-local copies: a module runner (Vitest's) may read imported bindings through getters, and
 // these are touched on every call.
 const HI = words.HI;
+const IO = words.IO;
 const INV_LN2 = words.INV_LN2;
 const LN2_HI = words.LN2_HI;
 const LN2_LO = words.LN2_LO;
 const LO = words.LO;
 const POW2 = words.POW2;
 const f64 = words.f64;
-const highWord = words.highWord;
-const scale = words.scale;
 const u32 = words.u32;
 
 const P1 = 1.66666666666666019037e-1;
@@ -27,12 +26,30 @@ const P4 = -1.6533902205465251539e-6;
 const P5 = 4.13813679705723846039e-8;
 
 export function exp(x: number): number {
-  if (x !== x) return x;
+  IO[0] = x;
+  expIO();
+  return IO[0];
+}
+
+/** exp of IO[0] into IO[0] (the step loop's form; words.IO), with no double crossing a call. */
+export function expIO(): void {
+  let x = IO[0];
+  if (x !== x) return;
   // The one input where fdlibm's result is a rounding short of the correctly rounded value (V8 agrees).
-  if (x === 1) return 2.718281828459045;
-  if (x > 7.09782712893383973096e2) return Infinity;
-  if (x < -7.4513321910194110842e2) return 0;
-  const hx = highWord(x) & 0x7fffffff;
+  if (x === 1) {
+    IO[0] = 2.718281828459045;
+    return;
+  }
+  if (x > 7.09782712893383973096e2) {
+    IO[0] = Infinity;
+    return;
+  }
+  if (x < -7.4513321910194110842e2) {
+    IO[0] = 0;
+    return;
+  }
+  f64[0] = x;
+  const hx = u32[HI] & 0x7fffffff;
   let hi = 0;
   let lo = 0;
   let k = 0;
@@ -43,12 +60,23 @@ export function exp(x: number): number {
     lo = k * LN2_LO;
     x = hi - lo;
   } else if (hx < 0x3e300000) {
-    return 1 + x;
+    IO[0] = 1 + x;
+    return;
   }
   const t = x * x;
   const c = x - t * (P1 + t * (P2 + t * (P3 + t * (P4 + t * P5))));
-  if (k === 0) return 1 - ((x * c) / (c - 2) - x);
-  return scale(1 - (lo - (x * c) / (2 - c) - hi), k);
+  if (k === 0) {
+    IO[0] = 1 - ((x * c) / (c - 2) - x);
+    return;
+  }
+  const y = 1 - (lo - (x * c) / (2 - c) - hi);
+  // scale(y, k), written out.
+  IO[0] =
+    k > 1023
+      ? y * POW2[1022 + 1023] * POW2[1022 + k - 1023]
+      : k < -1021
+        ? y * POW2[1022 + k + 1000] * POW2[1022 - 1000]
+        : y * POW2[1022 + k];
 }
 
 const TWO54 = 1.8014398509481984e16;
@@ -61,17 +89,36 @@ const LG6 = 1.531383769920937332e-1;
 const LG7 = 1.479819860511658591e-1;
 
 export function log(x: number): number {
-  let hx = highWord(x);
+  IO[0] = x;
+  logIO();
+  return IO[0];
+}
+
+/** log of IO[0] into IO[0] (the step loop's form; words.IO), with no double crossing a call. */
+export function logIO(): void {
+  let x = IO[0];
+  f64[0] = x;
+  let hx = u32[HI] | 0;
   const lx = u32[LO];
   let k = 0;
   if (hx < 0x00100000) {
-    if (((hx & 0x7fffffff) | lx) === 0) return -Infinity;
-    if (hx < 0) return NaN;
+    if (((hx & 0x7fffffff) | lx) === 0) {
+      IO[0] = -Infinity;
+      return;
+    }
+    if (hx < 0) {
+      IO[0] = NaN;
+      return;
+    }
     k -= 54;
     x *= TWO54;
-    hx = highWord(x);
+    f64[0] = x;
+    hx = u32[HI] | 0;
   }
-  if (hx >= 0x7ff00000) return x + x;
+  if (hx >= 0x7ff00000) {
+    IO[0] = x + x;
+    return;
+  }
   k += (hx >> 20) - 1023;
   hx &= 0x000fffff;
   const i0 = (hx + 0x95f64) & 0x100000;
@@ -83,9 +130,13 @@ export function log(x: number): number {
   const f = x - 1;
   const dk = k;
   if ((0x000fffff & (2 + hx)) < 3) {
-    if (f === 0) return k === 0 ? 0 : dk * LN2_HI + dk * LN2_LO;
+    if (f === 0) {
+      IO[0] = k === 0 ? 0 : dk * LN2_HI + dk * LN2_LO;
+      return;
+    }
     const r = f * f * (0.5 - 0.3333333333333333 * f);
-    return k === 0 ? f - r : dk * LN2_HI - (r - dk * LN2_LO - f);
+    IO[0] = k === 0 ? f - r : dk * LN2_HI - (r - dk * LN2_LO - f);
+    return;
   }
   const s = f / (2 + f);
   const z = s * s;
@@ -95,9 +146,10 @@ export function log(x: number): number {
   const r = t2 + t1;
   if (((hx - 0x6147a) | (0x6b851 - hx)) > 0) {
     const hfsq = 0.5 * f * f;
-    return k === 0 ? f - (hfsq - s * (hfsq + r)) : dk * LN2_HI - (hfsq - (s * (hfsq + r) + dk * LN2_LO) - f);
+    IO[0] = k === 0 ? f - (hfsq - s * (hfsq + r)) : dk * LN2_HI - (hfsq - (s * (hfsq + r) + dk * LN2_LO) - f);
+    return;
   }
-  return k === 0 ? f - s * (f - r) : dk * LN2_HI - (s * (f - r) - dk * LN2_LO - f);
+  IO[0] = k === 0 ? f - s * (f - r) : dk * LN2_HI - (s * (f - r) - dk * LN2_LO - f);
 }
 
 // Dekker's exact product: a·b = p + productError(a, b, p) with no fused multiply-add.
@@ -158,14 +210,32 @@ const Q5 = -2.01099218183624371326e-7;
 
 /** e^x − 1 without cancellation for small x: fdlibm's s_expm1.c (argument reduction by ln 2, a rational kernel). */
 export function expm1(x: number): number {
-  let hx = highWord(x);
+  IO[0] = x;
+  expm1IO();
+  return IO[0];
+}
+
+/** e^x − 1 of IO[0] into IO[0] (the step loop's form; words.IO), with no double crossing a call. */
+export function expm1IO(): void {
+  let x = IO[0];
+  f64[0] = x;
+  let hx = u32[HI] | 0;
   const negative = hx < 0;
   hx &= 0x7fffffff;
   if (hx >= 0x4043687a) {
     // |x| ≥ 56·ln 2: −1 below, e^x alone above (and its overflow).
-    if (hx >= 0x7ff00000) return Number.isNaN(x) ? x : negative ? -1 : x;
-    if (negative) return -1;
-    if (x > 7.09782712893383973096e2) return Infinity;
+    if (hx >= 0x7ff00000) {
+      IO[0] = Number.isNaN(x) ? x : negative ? -1 : x;
+      return;
+    }
+    if (negative) {
+      IO[0] = -1;
+      return;
+    }
+    if (x > 7.09782712893383973096e2) {
+      IO[0] = Infinity;
+      return;
+    }
   }
   let k = 0;
   let c = 0;
@@ -185,19 +255,34 @@ export function expm1(x: number): number {
     x = hi - lo;
     c = hi - x - lo;
   } else if (hx < 0x3c900000) {
-    return x;
+    return;
   }
   const hfx = 0.5 * x;
   const hxs = x * hfx;
   const r1 = 1 + hxs * (Q1 + hxs * (Q2 + hxs * (Q3 + hxs * (Q4 + hxs * Q5))));
   const t = 3 - r1 * hfx;
   let e = hxs * ((r1 - t) / (6 - x * t));
-  if (k === 0) return x - (x * e - hxs);
+  if (k === 0) {
+    IO[0] = x - (x * e - hxs);
+    return;
+  }
   e = x * (e - c) - c;
   e -= hxs;
-  if (k === -1) return 0.5 * (x - e) - 0.5;
-  if (k === 1) return x < -0.25 ? -2 * (e - (x + 0.5)) : 1 + 2 * (x - e);
-  if (k <= -2 || k > 56) return scale(1 - (e - x), k) - 1;
-  if (k < 20) return scale(1 - POW2[1022 - k] - (e - x), k);
-  return scale(x - (e + POW2[1022 - k]) + 1, k);
+  if (k === -1) {
+    IO[0] = 0.5 * (x - e) - 0.5;
+    return;
+  }
+  if (k === 1) {
+    IO[0] = x < -0.25 ? -2 * (e - (x + 0.5)) : 1 + 2 * (x - e);
+    return;
+  }
+  // scale(y, k) as in expIO, written out.
+  const y = k <= -2 || k > 56 ? 1 - (e - x) : k < 20 ? 1 - POW2[1022 - k] - (e - x) : x - (e + POW2[1022 - k]) + 1;
+  const scaled =
+    k > 1023
+      ? y * POW2[1022 + 1023] * POW2[1022 + k - 1023]
+      : k < -1021
+        ? y * POW2[1022 + k + 1000] * POW2[1022 - 1000]
+        : y * POW2[1022 + k];
+  IO[0] = k <= -2 || k > 56 ? scaled - 1 : scaled;
 }

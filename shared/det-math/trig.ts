@@ -7,6 +7,7 @@ import * as words from './words';
 // Module-local copies: a module runner (Vitest's) may read imported bindings through getters, and
 // these are touched on every call.
 const HI = words.HI;
+const IO = words.IO;
 const LO = words.LO;
 const f64 = words.f64;
 const highWord = words.highWord;
@@ -122,8 +123,13 @@ export function hypot3(x: number, y: number, z = 0): number {
 }
 
 // atan(0.5), atan(1), atan(1.5) and atan(∞) as head + tail (s_atan.c).
-const ATAN_HI = [4.63647609000806093515e-1, 7.85398163397448278999e-1, 9.82793723247329054082e-1, 1.570796326794896558];
-const ATAN_LO = [2.26987774529616870924e-17, 3.06161699786838301793e-17, 1.39033110312309984516e-17, 6.12323399573676603587e-17];
+const ATAN_HI = Float64Array.of(4.63647609000806093515e-1, 7.85398163397448278999e-1, 9.82793723247329054082e-1, 1.570796326794896558);
+const ATAN_LO = Float64Array.of(
+  2.26987774529616870924e-17,
+  3.06161699786838301793e-17,
+  1.39033110312309984516e-17,
+  6.12323399573676603587e-17,
+);
 const AT0 = 3.33333333333329318027e-1;
 const AT1 = -1.99999999998764832476e-1;
 const AT2 = 1.42857142725034663711e-1;
@@ -137,17 +143,27 @@ const AT9 = -3.6531572744216915527e-2;
 const AT10 = 1.62858201153657823623e-2;
 
 export function atan(x: number): number {
-  const hx = highWord(x);
+  IO[0] = x;
+  atanIO();
+  return IO[0];
+}
+
+/** atan of IO[0] into IO[0] (the step loop's form; words.IO), with no double crossing a call. */
+export function atanIO(): void {
+  let x = IO[0];
+  f64[0] = x;
+  const hx = u32[HI] | 0;
   const ix = hx & 0x7fffffff;
   let id: number;
   if (ix >= 0x44100000) {
     // |x| ≥ 2^66, infinities and NaN.
-    if (x !== x) return x;
-    return hx > 0 ? ATAN_HI[3] + ATAN_LO[3] : -ATAN_HI[3] - ATAN_LO[3];
+    if (x !== x) return;
+    IO[0] = hx > 0 ? ATAN_HI[3] + ATAN_LO[3] : -ATAN_HI[3] - ATAN_LO[3];
+    return;
   }
   if (ix < 0x3fdc0000) {
     // |x| < 0.4375
-    if (ix < 0x3e400000) return x;
+    if (ix < 0x3e400000) return;
     id = -1;
   } else {
     x = Math.abs(x);
@@ -171,9 +187,12 @@ export function atan(x: number): number {
   const w = z * z;
   const s1 = z * (AT0 + w * (AT2 + w * (AT4 + w * (AT6 + w * (AT8 + w * AT10)))));
   const s2 = w * (AT1 + w * (AT3 + w * (AT5 + w * (AT7 + w * AT9))));
-  if (id < 0) return x - x * (s1 + s2);
+  if (id < 0) {
+    IO[0] = x - x * (s1 + s2);
+    return;
+  }
   const r = ATAN_HI[id] - (x * (s1 + s2) - ATAN_LO[id] - x);
-  return hx < 0 ? -r : r;
+  IO[0] = hx < 0 ? -r : r;
 }
 
 const PI = Math.PI;
@@ -183,7 +202,20 @@ const PI_O_4 = Math.PI / 4;
 
 /** The angle of (x, y) in (−π, π], e_atan2.c's case analysis around atan(|y/x|). */
 export function atan2(y: number, x: number): number {
-  if (x !== x || y !== y) return NaN;
+  IO[0] = y;
+  IO[1] = x;
+  atan2IO();
+  return IO[0];
+}
+
+/** atan2(IO[0], IO[1]) into IO[0] (the step loop's form; words.IO), with no double crossing a call. */
+export function atan2IO(): void {
+  const y = IO[0];
+  const x = IO[1];
+  if (x !== x || y !== y) {
+    IO[0] = NaN;
+    return;
+  }
   f64[0] = x;
   const hx = u32[HI] | 0;
   const lx = u32[LO];
@@ -192,24 +224,40 @@ export function atan2(y: number, x: number): number {
   const hy = u32[HI] | 0;
   const ly = u32[LO];
   const iy = hy & 0x7fffffff;
-  if (hx === 0x3ff00000 && lx === 0) return atan(y);
+  if (hx === 0x3ff00000 && lx === 0) {
+    atanIO();
+    return;
+  }
   // 2·sign(x) + sign(y)
   const m = ((hy >>> 31) & 1) | ((hx >>> 30) & 2);
-  if ((iy | ly) === 0) return m < 2 ? y : m === 2 ? PI : -PI;
-  if ((ix | lx) === 0) return hy < 0 ? -PI_O_2 : PI_O_2;
-  if (ix === 0x7ff00000) {
-    if (iy === 0x7ff00000) return [PI_O_4, -PI_O_4, 3 * PI_O_4, -3 * PI_O_4][m];
-    return [0, -0, PI, -PI][m];
+  if ((iy | ly) === 0) {
+    IO[0] = m < 2 ? y : m === 2 ? PI : -PI;
+    return;
   }
-  if (iy === 0x7ff00000) return hy < 0 ? -PI_O_2 : PI_O_2;
+  if ((ix | lx) === 0) {
+    IO[0] = hy < 0 ? -PI_O_2 : PI_O_2;
+    return;
+  }
+  if (ix === 0x7ff00000) {
+    IO[0] = iy === 0x7ff00000 ? [PI_O_4, -PI_O_4, 3 * PI_O_4, -3 * PI_O_4][m] : [0, -0, PI, -PI][m];
+    return;
+  }
+  if (iy === 0x7ff00000) {
+    IO[0] = hy < 0 ? -PI_O_2 : PI_O_2;
+    return;
+  }
   const k = (iy - ix) >> 20;
   // |y/x| > 2^60: ±π/2 whatever the sign of x.
-  if (k > 60) return hy < 0 ? -(PI_O_2 + 0.5 * PI_LO) : PI_O_2 + 0.5 * PI_LO;
+  if (k > 60) {
+    IO[0] = hy < 0 ? -(PI_O_2 + 0.5 * PI_LO) : PI_O_2 + 0.5 * PI_LO;
+    return;
+  }
   let z: number;
   if (hx < 0 && k < -60) z = 0;
-  else z = atan(Math.abs(y / x));
-  if (m === 0) return z;
-  if (m === 1) return -z;
-  if (m === 2) return PI - (z - PI_LO);
-  return z - PI_LO - PI;
+  else {
+    IO[0] = Math.abs(y / x);
+    atanIO();
+    z = IO[0];
+  }
+  IO[0] = m === 0 ? z : m === 1 ? -z : m === 2 ? PI - (z - PI_LO) : z - PI_LO - PI;
 }

@@ -2,13 +2,21 @@
  * The bit-level helpers the deterministic functions share: word access to a double, exact powers
  * of two, and ln 2 split for argument reduction (fdlibm's constants).
  */
+import { scratchFloat64 } from './scratch';
 
 // Word access to a double; every platform a browser or Node runs on is little-endian, checked once.
-export const f64 = new Float64Array(1);
-export const u32 = new Uint32Array(f64.buffer);
+export const f64 = scratchFloat64(1);
+export const u32 = new Uint32Array(f64.buffer, f64.byteOffset, 2);
 f64[0] = 1;
 export const HI = u32[1] === 0x3ff00000 ? 1 : 0;
 export const LO = 1 - HI;
+
+/**
+ * The argument and result slots of the step loop's forms (expIO, expm1IO, logIO, atanIO, atan2IO): a double that
+ * crosses a call V8 has not inlined is boxed on the heap, and the walk makes a few hundred such calls a
+ * step; through this array nothing crosses. Arguments in IO[0] (atan2: y in IO[0], x in IO[1]), the result in IO[0].
+ */
+export const IO = scratchFloat64(2);
 
 export function highWord(x: number): number {
   f64[0] = x;

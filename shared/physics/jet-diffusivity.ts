@@ -1,8 +1,12 @@
+import { scratchFloat64 } from '../det-math/scratch';
 import * as det from '../det-math/index';
-import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, jetCentrelineSpeed, jetFrame, jetHalfWidth, type RoundJet } from './round-jet';
+import { JET_DECAY_CONSTANT, JET_SPREADING_RATE, LN2, jetCentrelineSpeed, jetFrameAt, jetHalfWidth, type RoundJet } from './round-jet';
 
 // Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
 const exp = det.exp;
+// The step loop's array form: no double crosses a call (det-math/words.ts IO).
+const expIO = det.expIO;
+const IO = det.IO;
 
 // ν_T ≈ 0.028·u_c·r½ across the self-similar round jet (Pope, Turbulent Flows, ch. 5, from memory).
 export const JET_EDDY_VISCOSITY_RATIO = 0.028;
@@ -16,12 +20,22 @@ export function jetEddyDiffusivity(axial_m: number, radial_m: number, speed_mPer
   return JET_EDDY_VISCOSITY_RATIO * jetCentrelineSpeed(axial_m, speed_mPerS, diameter_m) * halfWidth_m * exp(-LN2 * eta * eta);
 }
 
-const FRAME = new Float64Array(6);
+const FRAME = scratchFloat64(7);
+const AT = scratchFloat64(3);
 
 // Writes the jet's eddy diffusivity into out[0] and its gradient ∇D into out[1..3] (the walk's drift
-// term); the same geometry and fade as jetEddyDiffusivity. Allocation-free, for the step loop.
+// term); the same geometry and fade as jetEddyDiffusivity.
 export function jetDiffusivityAndGradient(jet: RoundJet, px_m: number, py_m: number, pz_m: number, out: Float64Array): void {
-  const x = jetFrame(jet, px_m, py_m, pz_m, FRAME);
+  AT[0] = px_m;
+  AT[1] = py_m;
+  AT[2] = pz_m;
+  jetDiffusivityAndGradientAt(jet, AT, out);
+}
+
+/** jetDiffusivityAndGradient at the point at[0..2]: the step loop's allocation-free form. */
+export function jetDiffusivityAndGradientAt(jet: RoundJet, at: Float64Array, out: Float64Array): void {
+  jetFrameAt(jet, at, FRAME);
+  const x = FRAME[6];
   if (x <= 0) {
     out.fill(0, 0, 4);
     return;
@@ -36,7 +50,9 @@ export function jetDiffusivityAndGradient(jet: RoundJet, px_m: number, py_m: num
     x >= core_m ? JET_EDDY_VISCOSITY_RATIO * speed_mPerS * core_m * JET_SPREADING_RATE : JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidth;
   const scaleSlope = x >= core_m ? 0 : JET_EDDY_VISCOSITY_RATIO * speed_mPerS * halfWidthSlope;
   const inverseSquare = 1 / (halfWidth * halfWidth);
-  const g = exp(-LN2 * rr * inverseSquare);
+  IO[0] = -LN2 * rr * inverseSquare;
+  expIO();
+  const g = IO[0];
   const d = scale * g;
   const axial = scaleSlope * g + d * 2 * LN2 * rr * inverseSquare * (halfWidthSlope / halfWidth);
   const radial = -2 * LN2 * inverseSquare * d;

@@ -1,7 +1,10 @@
+import { scratchFloat64 } from '../det-math/scratch';
 import * as det from '../det-math/index';
 
 // Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
-const exp = det.exp;
+// In its array form: no double crosses a call (det-math/words.ts IO).
+const expIO = det.expIO;
+const IO = det.IO;
 
 // Turbulent round free jet (Pope, Turbulent Flows, ch. 5, from memory): far field
 // u_c = B·u₀·d₀/x, u/u_c = exp(−ln2·(r/r½)²), r½ = S·x, with Panchapakesan & Lumley's (1993)
@@ -46,17 +49,18 @@ export interface RoundJet {
   readonly diameter_m: number;
 }
 
-// Puts point p in the jet's frame and returns its axial
-// distance (≤ 0 behind the nozzle plane, where frame is left alone). frame gets the radial vector
-// from the axis [0..2], its square length [3], r½ [4] and dr½/dx [5]. Allocation-free, for the
-// step-loop field functions that share this geometry.
-export function jetFrame(jet: RoundJet, px_m: number, py_m: number, pz_m: number, frame: Float64Array): number {
+// Puts point at[0..2] in the jet's frame and leaves its axial distance in frame[6] (≤ 0 behind the nozzle plane,
+// where the rest of frame is left alone). frame gets the radial vector from the axis [0..2], its square length [3],
+// r½ [4] and dr½/dx [5]. Allocation-free, for the step-loop field functions that share this geometry: the point
+// comes in an array, since a double crossing a call V8 has not inlined is a heap allocation.
+export function jetFrameAt(jet: RoundJet, at: Float64Array, frame: Float64Array): void {
   const { ex, ey, ez } = jet;
-  const dx = px_m - jet.ox_m;
-  const dy = py_m - jet.oy_m;
-  const dz = pz_m - jet.oz_m;
+  const dx = at[0] - jet.ox_m;
+  const dy = at[1] - jet.oy_m;
+  const dz = at[2] - jet.oz_m;
   const x = dx * ex + dy * ey + dz * ez;
-  if (x <= 0) return x;
+  frame[6] = x;
+  if (x <= 0) return;
   const rx = dx - x * ex;
   const ry = dy - x * ey;
   const rz = dz - x * ez;
@@ -74,15 +78,23 @@ export function jetFrame(jet: RoundJet, px_m: number, py_m: number, pz_m: number
     frame[4] = nozzle_m + halfWidthSlope * x;
     frame[5] = halfWidthSlope;
   }
-  return x;
 }
 
-const FRAME = new Float64Array(6);
+const FRAME = scratchFloat64(7);
+const AT = scratchFloat64(3);
 
 // Writes the jet's air velocity (m/s) at point p into out[0..2]; zero behind the nozzle plane.
-// Allocation-free, for the step loop.
 export function jetVelocity(jet: RoundJet, px_m: number, py_m: number, pz_m: number, out: Float64Array): void {
-  const x = jetFrame(jet, px_m, py_m, pz_m, FRAME);
+  AT[0] = px_m;
+  AT[1] = py_m;
+  AT[2] = pz_m;
+  jetVelocityAt(jet, AT, out);
+}
+
+/** jetVelocity at the point at[0..2]: the step loop's allocation-free form. */
+export function jetVelocityAt(jet: RoundJet, at: Float64Array, out: Float64Array): void {
+  jetFrameAt(jet, at, FRAME);
+  const x = FRAME[6];
   if (x <= 0) {
     out.fill(0, 0, 3);
     return;
@@ -95,7 +107,9 @@ export function jetVelocity(jet: RoundJet, px_m: number, py_m: number, pz_m: num
   const uc = x >= core_m ? (speed_mPerS * core_m) / x : speed_mPerS;
   const fluxSlope = x >= core_m ? (uc * halfWidth * halfWidth) / x : 2 * uc * halfWidth * halfWidthSlope;
   const eta = r / halfWidth;
-  const g = exp(-LN2 * eta * eta);
+  IO[0] = -LN2 * eta * eta;
+  expIO();
+  const g = IO[0];
   const u = uc * g;
   // (1 − g)/r → 0 on the axis, where the radial direction is undefined anyway.
   const v = r > 1e-12 * halfWidth ? (-fluxSlope * (1 - g)) / (2 * LN2 * r) + (uc * g * r * halfWidthSlope) / halfWidth : 0;

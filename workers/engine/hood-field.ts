@@ -1,6 +1,7 @@
+import { scratchFloat64 } from '../../shared/det-math/scratch';
 import type { Hood } from '../../shared/schemas/scenario';
 import { hoodAxis } from '../../shared/schemas/hood-axis';
-import { sinkPanelVelocity } from '../../shared/physics/index';
+import { sinkPanelVelocityAt } from '../../shared/physics/sink-panel';
 import * as slots from './hood-slots';
 import { hypot3 } from '../../shared/det-math/index';
 
@@ -43,7 +44,14 @@ const UNFLANGED_FRONT_SHARE = 0.75;
 // The face rectangle's quadrupole term has fallen below 1 % of the point sink's at eight half-diagonals.
 const FAR_FIELD_HALF_DIAGONALS = 8;
 
-const local = new Float64Array(3);
+const local = scratchFloat64(3);
+// The sink panel's arguments (shared/physics/sink-panel.ts sinkPanelVelocityAt), a point, and a segment for the
+// outline test: in arrays, since a double crossing a call V8 has not inlined is a heap allocation, and these run at
+// every step.
+const panel = scratchFloat64(7);
+const point = scratchFloat64(3);
+const crossing = scratchFloat64(7);
+const segment = scratchFloat64(6);
 
 // Width runs horizontally across the face (along the slot for slots); height completes the frame. A downdraft
 // bench, facing up (the schema sees to that), packs as a flanged face: width along +x, height (depth) along +y.
@@ -94,6 +102,17 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
  * the distance to the nearest face outline into out[3]. Allocation-free, for the step loop.
  */
 export function addHoodVelocity(p: Float64Array, count: number, x: number, y: number, z: number, out: Float64Array): void {
+  point[0] = x;
+  point[1] = y;
+  point[2] = z;
+  addHoodVelocityAt(p, count, point, out);
+}
+
+/** addHoodVelocity at the point at[0..2]: the step loop's allocation-free form. */
+export function addHoodVelocityAt(p: Float64Array, count: number, at: Float64Array, out: Float64Array): void {
+  const x = at[0];
+  const y = at[1];
+  const z = at[2];
   let nearest = Infinity;
   for (let h = 0; h < count; h++) {
     const o = h * HOOD_STRIDE;
@@ -120,9 +139,14 @@ export function addHoodVelocity(p: Float64Array, count: number, x: number, y: nu
       out[2] += k * rz;
       continue;
     }
-    const u = rx * p[o + HOOD_E1X] + ry * p[o + HOOD_E1Y] + rz * p[o + HOOD_E1Z];
-    const v = rx * p[o + HOOD_E2X] + ry * p[o + HOOD_E2Y] + rz * p[o + HOOD_E2Z];
-    sinkPanelVelocity(u, v, a, p[o + HOOD_HALF_WIDTH], p[o + HOOD_HALF_HEIGHT], q, front, local);
+    panel[0] = rx * p[o + HOOD_E1X] + ry * p[o + HOOD_E1Y] + rz * p[o + HOOD_E1Z];
+    panel[1] = rx * p[o + HOOD_E2X] + ry * p[o + HOOD_E2Y] + rz * p[o + HOOD_E2Z];
+    panel[2] = a;
+    panel[3] = p[o + HOOD_HALF_WIDTH];
+    panel[4] = p[o + HOOD_HALF_HEIGHT];
+    panel[5] = q;
+    panel[6] = front;
+    sinkPanelVelocityAt(panel, local);
     out[0] += local[0] * p[o + HOOD_E1X] + local[1] * p[o + HOOD_E2X] + local[2] * p[o + HOOD_NX];
     out[1] += local[0] * p[o + HOOD_E1Y] + local[1] * p[o + HOOD_E2Y] + local[2] * p[o + HOOD_NY];
     out[2] += local[0] * p[o + HOOD_E1Z] + local[1] * p[o + HOOD_E2Z] + local[2] * p[o + HOOD_NZ];
@@ -137,6 +161,23 @@ export function addHoodVelocity(p: Float64Array, count: number, x: number, y: nu
  * particle into a hood, so a face that draws nothing captures nothing.
  */
 export function faceEntered(p: Float64Array, count: number, x: number, y: number, z: number, dx: number, dy: number, dz: number): number {
+  segment[0] = x;
+  segment[1] = y;
+  segment[2] = z;
+  segment[3] = dx;
+  segment[4] = dy;
+  segment[5] = dz;
+  return faceEnteredAt(p, count, segment);
+}
+
+/** faceEntered for the segment seg[0..2] by seg[3..5]: the step loop's allocation-free form. */
+export function faceEnteredAt(p: Float64Array, count: number, seg: Float64Array): number {
+  const x = seg[0];
+  const y = seg[1];
+  const z = seg[2];
+  const dx = seg[3];
+  const dy = seg[4];
+  const dz = seg[5];
   for (let h = 0; h < count; h++) {
     const o = h * HOOD_STRIDE;
     if (p[o + HOOD_AIRFLOW] === 0) continue;
@@ -147,7 +188,15 @@ export function faceEntered(p: Float64Array, count: number, x: number, y: number
     const a1 = a0 + dx * nx + dy * ny + dz * nz;
     const fromFront = a0 > 0 && a1 <= 0;
     const fromBehind = a0 < 0 && a1 >= 0 && p[o + HOOD_FRONT_SHARE] < 1;
-    if ((fromFront || fromBehind) && throughOutline(p, o, x, y, z, dx, dy, dz, a0 / (a0 - a1))) return h;
+    if (!(fromFront || fromBehind)) continue;
+    crossing[0] = x;
+    crossing[1] = y;
+    crossing[2] = z;
+    crossing[3] = dx;
+    crossing[4] = dy;
+    crossing[5] = dz;
+    crossing[6] = a0 / (a0 - a1);
+    if (throughOutline(p, o)) return h;
   }
   return -1;
 }
@@ -168,6 +217,23 @@ export function reflectAtFaces(
   z1: number,
   out: Float64Array,
 ): number {
+  segment[0] = x0;
+  segment[1] = y0;
+  segment[2] = z0;
+  segment[3] = x1;
+  segment[4] = y1;
+  segment[5] = z1;
+  return reflectAtFacesAt(p, count, segment, out);
+}
+
+/** reflectAtFaces from seg[0..2] to seg[3..5]: the step loop's allocation-free form. */
+export function reflectAtFacesAt(p: Float64Array, count: number, seg: Float64Array, out: Float64Array): number {
+  const x0 = seg[0];
+  const y0 = seg[1];
+  const z0 = seg[2];
+  let x1 = seg[3];
+  let y1 = seg[4];
+  let z1 = seg[5];
   let reflected = 0;
   for (let h = 0; h < count; h++) {
     const o = h * HOOD_STRIDE;
@@ -177,7 +243,14 @@ export function reflectAtFaces(
     const a0 = (x0 - p[o + HOOD_X]) * nx + (y0 - p[o + HOOD_Y]) * ny + (z0 - p[o + HOOD_Z]) * nz;
     const a1 = (x1 - p[o + HOOD_X]) * nx + (y1 - p[o + HOOD_Y]) * ny + (z1 - p[o + HOOD_Z]) * nz;
     if (a0 === 0 || a0 * a1 > 0) continue;
-    if (!throughOutline(p, o, x0, y0, z0, x1 - x0, y1 - y0, z1 - z0, a0 / (a0 - a1))) continue;
+    crossing[0] = x0;
+    crossing[1] = y0;
+    crossing[2] = z0;
+    crossing[3] = x1 - x0;
+    crossing[4] = y1 - y0;
+    crossing[5] = z1 - z0;
+    crossing[6] = a0 / (a0 - a1);
+    if (!throughOutline(p, o)) continue;
     // Mirror the end point in the face plane, leaving it a hair on the starting side.
     const shift = -2 * a1 + (a0 > 0 ? 1e-9 : -1e-9);
     x1 += shift * nx;
@@ -191,20 +264,13 @@ export function reflectAtFaces(
   return reflected;
 }
 
-function throughOutline(
-  p: Float64Array,
-  o: number,
-  x: number,
-  y: number,
-  z: number,
-  dx: number,
-  dy: number,
-  dz: number,
-  f: number,
-): boolean {
-  const cx = x + f * dx - p[o + HOOD_X];
-  const cy = y + f * dy - p[o + HOOD_Y];
-  const cz = z + f * dz - p[o + HOOD_Z];
+// Whether the segment in crossing (start [0..2], step [3..5]) meets hood o's face plane, at the share crossing[6] of
+// its step, inside the outline.
+function throughOutline(p: Float64Array, o: number): boolean {
+  const f = crossing[6];
+  const cx = crossing[0] + f * crossing[3] - p[o + HOOD_X];
+  const cy = crossing[1] + f * crossing[4] - p[o + HOOD_Y];
+  const cz = crossing[2] + f * crossing[5] - p[o + HOOD_Z];
   const u = cx * p[o + HOOD_E1X] + cy * p[o + HOOD_E1Y] + cz * p[o + HOOD_E1Z];
   const v = cx * p[o + HOOD_E2X] + cy * p[o + HOOD_E2Y] + cz * p[o + HOOD_E2Z];
   return (u < 0 ? -u : u) <= p[o + HOOD_HALF_WIDTH] && (v < 0 ? -v : v) <= p[o + HOOD_HALF_HEIGHT];

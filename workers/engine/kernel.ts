@@ -1,3 +1,4 @@
+import { scratchFloat64 } from '../../shared/det-math/scratch';
 import type { RoundJet } from '../../shared/physics/round-jet';
 import { FATES } from '../../shared/vocabulary/fractions';
 import { GRAVITY_MPerS2 } from '../../shared/physics/constants';
@@ -54,9 +55,12 @@ const MIDPOINT_SHARE = 0.2;
 /** Everything one walk needs, in one fixed-shape object so V8 keeps its loads monomorphic. */
 export class Kernel {
   readonly normals = new Float64Array(NORMAL_BLOCK);
-  readonly field = new Float64Array(8);
-  /** The air's drift at a point and the step rule's length scales there (walk.ts airAt). */
-  readonly air = new Float64Array(6);
+  readonly field = scratchFloat64(8);
+  /** The air's drift at a point, the step rule's length scales and the jet's diffusivity there (walk-air.ts airAt). */
+  readonly air = scratchFloat64(7);
+  /** The point airAt evaluates, and a step's segment for the hood faces (hood-field.ts): arrays, not arguments. */
+  readonly at = scratchFloat64(3);
+  readonly seg = scratchFloat64(6);
   readonly settling: Float64Array;
   /** Relaxation time τ = V_TS/g per bin; bins with τ above the shortest step carry a velocity. */
   readonly relaxation: Float64Array;

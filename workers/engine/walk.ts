@@ -1,13 +1,15 @@
-import { faceEntered, reflectAtFaces } from './hood-field';
+import { faceEnteredAt, reflectAtFacesAt } from './hood-field';
 import { airAt, recordFrames } from './walk-air';
 import { type Kernel, NORMAL_BLOCK, SCALAR } from './kernel';
 import { fillNormals } from './ziggurat';
 import * as det from '../../shared/det-math/index';
 import { REWEIGHT, WINDOW } from './importance';
 
-// Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters).
-const exp = det.exp;
-const expm1 = det.expm1;
+// Local copies of the deterministic functions this hot path calls (a module runner may read imports through getters),
+// in their array forms: a double crossing a call V8 has not inlined is a heap allocation (det-math/words.ts IO).
+const expIO = det.expIO;
+const expm1IO = det.expm1IO;
+const IO = det.IO;
 
 // Long enough that a visit's set-up is small beside its steps, short enough that a pass over the
 // live particles still reports progress within a batch.
@@ -23,7 +25,8 @@ const FATE_WALLS = 4;
 /**
  * Advances particle i by up to STEPS_PER_VISIT steps; returns its fate (FATES order), −1 while it
  * lives, or REWEIGHT when variance reduction must split it or play roulette before its next step
- * (its weight is then outside the window around k.pendingTarget). Allocation-free arithmetic only.
+ * (its weight is then outside the window around k.pendingTarget). Allocation-free: the calls it makes at every step
+ * take their numbers in arrays (k.at, k.seg, det.IO), never as arguments or results.
  *
  * One step (Itô, operator splitting): the drift (draft, hood sink panels, release jet, the jet's
  * ∇D and settling) moves the particle and is the only thing that can carry it through a hood face
@@ -67,6 +70,8 @@ export function walk(k: Kernel, i: number): number {
   const R2 = R * R;
   const nh = k.hoodCount;
   const hoods = k.hoods;
+  const seg = k.seg;
+  const at = k.at;
   const rng = k.rng;
   const residence = k.zoneResidence_s;
   const draftX = sc[SCALAR.draftX],
@@ -124,7 +129,11 @@ export function walk(k: Kernel, i: number): number {
       if (d < 0) d = -d;
       if (d < zoneFloor_m) d = zoneFloor_m;
     }
-    let jetD = airAt(k, x, y, z, 1);
+    at[0] = x;
+    at[1] = y;
+    at[2] = z;
+    airAt(k, 1);
+    let jetD = air[6];
     let vx = air[0];
     let vy = air[1];
     let vz = air[2];
@@ -196,15 +205,27 @@ export function walk(k: Kernel, i: number): number {
     const local = dh < dj ? dh : dj;
     // Air speeds up toward a face, so a start-of-step drift that already enters one is a capture;
     // otherwise the midpoint's (which may lie behind the face, where a flanged face draws nothing).
-    if (!inertial && nh > 0 && faceEntered(hoods, nh, x, y, z, vx * dt, vy * dt, (vz - vs) * dt) >= 0) {
-      fate = FATE_CAPTURED;
-      break;
+    if (!inertial && nh > 0) {
+      seg[0] = x;
+      seg[1] = y;
+      seg[2] = z;
+      seg[3] = vx * dt;
+      seg[4] = vy * dt;
+      seg[5] = (vz - vs) * dt;
+      if (faceEnteredAt(hoods, nh, seg) >= 0) {
+        fate = FATE_CAPTURED;
+        break;
+      }
     }
     if (shift > midpointLimit * local) {
       // Midpoint drift: the hood and jet fields change along the step, and a start-of-step velocity
       // would lag behind them (Euler), biasing capture low by a few per cent at the default step.
       const half = 0.5 * dt;
-      jetD = airAt(k, x + half * vx, y + half * vy, z + half * vz, 0);
+      at[0] = x + half * vx;
+      at[1] = y + half * vy;
+      at[2] = z + half * vz;
+      airAt(k, 0);
+      jetD = air[6];
       vx = air[0];
       vy = air[1];
       vz = air[2];
@@ -222,7 +243,9 @@ export function walk(k: Kernel, i: number): number {
     if (inertial) {
       // dv/dt = (u − v)/τ + g integrated exactly over the step with the air velocity u held at its
       // midpoint value: v relaxes toward u − V_TS·ẑ (Hinds ch. 5), so large particles overshoot.
-      const decay = exp(-dt / tau);
+      IO[0] = -dt / tau;
+      expIO();
+      const decay = IO[0];
       const lag = tau * (1 - decay);
       const tx = vx;
       const ty = vy;
@@ -234,9 +257,17 @@ export function walk(k: Kernel, i: number): number {
       uy = ty + (uy - ty) * decay;
       uz = tz + (uz - tz) * decay;
     }
-    if (nh > 0 && faceEntered(hoods, nh, x, y, z, dx, dy, dz) >= 0) {
-      fate = FATE_CAPTURED;
-      break;
+    if (nh > 0) {
+      seg[0] = x;
+      seg[1] = y;
+      seg[2] = z;
+      seg[3] = dx;
+      seg[4] = dy;
+      seg[5] = dz;
+      if (faceEnteredAt(hoods, nh, seg) >= 0) {
+        fate = FATE_CAPTURED;
+        break;
+      }
     }
     const xd = x + dx;
     const yd = y + dy;
@@ -252,7 +283,12 @@ export function walk(k: Kernel, i: number): number {
     }
     let variance = 2 * (brownian + jetD) * dt;
     if (t < youngUntil && lagrangian > 0) {
-      const fade = exp(-(t - born) / lagrangian) * -expm1(-dt / lagrangian);
+      IO[0] = -(t - born) / lagrangian;
+      expIO();
+      const grown = IO[0];
+      IO[0] = -dt / lagrangian;
+      expm1IO();
+      const fade = grown * -IO[0];
       variance += 2 * roomD * (dt - lagrangian * fade);
     } else {
       variance += 2 * roomD * dt;
@@ -268,10 +304,18 @@ export function walk(k: Kernel, i: number): number {
     let y1 = yd + sigma * normals[n + 1];
     let z1 = zd + sigma * normals[n + 2];
     n += 3;
-    if (nh > 0 && reflectAtFaces(hoods, nh, xd, yd, zd, x1, y1, z1, field) > 0) {
-      x1 = field[0];
-      y1 = field[1];
-      z1 = field[2];
+    if (nh > 0) {
+      seg[0] = xd;
+      seg[1] = yd;
+      seg[2] = zd;
+      seg[3] = x1;
+      seg[4] = y1;
+      seg[5] = z1;
+      if (reflectAtFacesAt(hoods, nh, seg, field) > 0) {
+        x1 = field[0];
+        y1 = field[1];
+        z1 = field[2];
+      }
     }
     let absorbed = 0;
     // Walls inline: a call here would box x, y and z on every step, not just at the wall.
