@@ -8,8 +8,8 @@ const api = {
     prepared = scenario;
   },
   /** Runs one small batch and discards it, so the step loop is compiled before the first real run. */
-  warmUp(scenario: PreparedScenario): number {
-    return runBatch(scenario, 0).particleSteps;
+  warmUp(scenario: PreparedScenario, batchIndex = 0): number {
+    return runBatch(scenario, batchIndex).particleSteps;
   },
   // Progress arrives as a Comlink proxy; its calls post messages and never block the loop.
   run(batchIndex: number, onProgress?: (fraction: number, particleSteps: number) => void): BatchResult {

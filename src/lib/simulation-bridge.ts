@@ -3,7 +3,7 @@ import type { RunPrecision, Scenario } from '../../shared/schemas/scenario';
 import type { RunResult } from '../../shared/schemas/run-result';
 import { type BatchResult, combineBatches, type PreparedScenario, prepareScenario, withBatchTallies } from '../../workers/engine/index';
 import { FIRST_LOOK_BATCHES, type LookOutcome, runToPrecision } from '../../workers/run-to-precision';
-import { warmUpPieces } from '../../workers/warm-up-pieces';
+import { OWN_WARM_UP_BATCHES, ownWarmUpPiece, warmUpPieces } from '../../workers/warm-up-pieces';
 import { type BatchWorker, scheduleBatches } from '../../workers/schedule-batches';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker';
 
@@ -20,8 +20,13 @@ export { RunCancelledError } from '../../workers/schedule-batches';
 interface PooledWorker {
   worker: Worker;
   api: Comlink.Remote<SimulationWorkerApi>;
-  /** Set when a run takes the worker: its warm-up sends no further piece. */
+  /** Set while a run has the worker: its warm-up sends no further piece. */
   claimed: boolean;
+  /** A warm-up loop is going on this worker. */
+  warming: boolean;
+  /** Generic pieces done, and the version of the page's own scenario it last warmed up on. */
+  pieces: number;
+  ownVersion: number;
 }
 
 // Workers are kept between runs: a fresh one spends its first seconds in JIT warm-up.
@@ -36,7 +41,14 @@ function poolSize(): number {
 
 function startWorker(warm: boolean): PooledWorker {
   const worker = new Worker(new URL('../../workers/simulation.worker.ts', import.meta.url), { type: 'module' });
-  const pooled: PooledWorker = { worker, api: Comlink.wrap<SimulationWorkerApi>(worker), claimed: false };
+  const pooled: PooledWorker = {
+    worker,
+    api: Comlink.wrap<SimulationWorkerApi>(worker),
+    claimed: !warm,
+    warming: false,
+    pieces: 0,
+    ownVersion: 0,
+  };
   // A fresh worker runs its first steps in the interpreter; started ahead of a run, it takes the
   // warm-up pieces (workers/warm-up-pieces.ts: every hood kind, bursts, a jet) one at a time, so the
   // step loop is compiled for every branch before real work, which waits for one piece at most.
@@ -46,25 +58,53 @@ function startWorker(warm: boolean): PooledWorker {
 
 let warmUpScenarios: ReturnType<typeof warmUpPieces> | undefined;
 const warmUpPrepared: PreparedScenario[] = [];
+// The page's own scenario as a warm-up (workers/warm-up-pieces.ts ownWarmUpPiece), newest first.
+let ownPiece: PreparedScenario | undefined;
+let ownVersion = 0;
 
 async function warmUp(pooled: PooledWorker): Promise<void> {
+  if (pooled.warming) return;
+  pooled.warming = true;
   // Optional: a warm-up that fails for any reason must never stand in the way of a page or a run.
   try {
-    warmUpScenarios ??= warmUpPieces();
-    for (let i = 0; i < warmUpScenarios.length; i++) {
-      if (pooled.claimed) return;
+    while (!pooled.claimed) {
+      // The page's own scenario first: it takes the branches a run of it will take.
+      if (ownPiece && pooled.ownVersion !== ownVersion) {
+        const version = ownVersion;
+        for (let b = 0; b < OWN_WARM_UP_BATCHES && !pooled.claimed && version === ownVersion; b++) await pooled.api.warmUp(ownPiece, b);
+        if (!pooled.claimed) pooled.ownVersion = version;
+        continue;
+      }
+      warmUpScenarios ??= warmUpPieces();
+      const i = pooled.pieces;
+      if (i >= warmUpScenarios.length) return;
       // Prepared as each piece is sent, not all at page start (about 100 ms of the page's thread together).
       warmUpPrepared[i] ??= prepareScenario(warmUpScenarios[i]);
-      await pooled.api.warmUp(warmUpPrepared[i]);
+      await pooled.api.warmUp(warmUpPrepared[i], 0);
+      pooled.pieces = i + 1;
     }
   } catch {
     /* the run will compile the loop itself */
+  } finally {
+    pooled.warming = false;
   }
 }
 
-/** Starts the pool's workers ahead of the first run (pages that run the engine call it on mount). */
-export function warmUpWorkers(): void {
+/**
+ * Starts the pool's workers ahead of the first run (pages that run the engine call it on mount); with the page's
+ * scenario, idle workers also take a few batches of it before the generic pieces, and again when it changes.
+ */
+export function warmUpWorkers(scenario?: Scenario | null): void {
   while (idle.length < poolSize()) idle.push(startWorker(true));
+  if (scenario) {
+    try {
+      ownPiece = prepareScenario(ownWarmUpPiece(scenario));
+      ownVersion++;
+    } catch {
+      return; // a scenario that does not prepare has nothing to warm up on
+    }
+  }
+  for (const w of idle) if (!w.claimed) void warmUp(w);
 }
 
 export interface RunOptions {
@@ -107,6 +147,8 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
           // Each batch's figures and hash travel with the result: the server replays a sample before it keeps a run.
           withBatchTallies(prepared, combineBatches(prepared, done, elapsed_s()), done),
         );
+    // Back in the pool, a worker may warm up again when the page's scenario changes.
+    for (const w of busy) w.claimed = false;
     idle.push(...busy);
     return result;
   } catch (error) {

@@ -6,7 +6,7 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { type Scenario, parseScenario } from '../../../../shared/schemas/scenario';
 import type { Results } from '../../../../workers/engine/index';
 import { referenceScenario } from '../../../../workers/engine/reference-scenario';
-import { RunCancelledError, type RunOptions, type RunProgress, runSimulation } from '@/lib/simulation-bridge';
+import { RunCancelledError, type RunOptions, type RunProgress, runSimulation, warmUpWorkers } from '@/lib/simulation-bridge';
 import { RunPanel } from './run-panel';
 
 vi.mock('@/lib/simulation-bridge', async (importOriginal) => ({
@@ -58,6 +58,23 @@ async function startRun() {
 }
 
 describe('run panel', () => {
+  it('has the idle workers warm up on the scenario as it stands once editing pauses, and not without one', async () => {
+    vi.mocked(warmUpWorkers).mockClear();
+    const { rerender } = renderPanel();
+    expect(warmUpWorkers).not.toHaveBeenCalledWith(scenario);
+    await waitFor(() => expect(warmUpWorkers).toHaveBeenCalledWith(scenario));
+    vi.mocked(warmUpWorkers).mockClear();
+    rerender(
+      <QueryClientProvider client={new QueryClient()}>
+        <MemoryRouter>
+          <RunPanel scenario={null} onResult={vi.fn()} />
+        </MemoryRouter>
+      </QueryClientProvider>,
+    );
+    await new Promise((r) => setTimeout(r, 400));
+    expect(warmUpWorkers).not.toHaveBeenCalledWith(null);
+  });
+
   it('starts idle: Run enabled, no Cancel, no progress bar', () => {
     renderPanel();
     expect(runButton()).toHaveProperty('disabled', false);

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorMessage } from '@/components/ui/status';
 import { ProgressBar, timeLeft } from '@/components/progress-bar';
 import { RUN_START, useEngineRun } from '@/hooks/use-engine-run';
-import { runSimulation } from '@/lib/simulation-bridge';
+import { runSimulation, warmUpWorkers } from '@/lib/simulation-bridge';
 import { countText, percentText } from '../../../../shared/format/index';
 import { ticketedScenario, type TicketRequest } from '../api/request-run-ticket';
 import { PrecisionLooks } from './precision-looks';
@@ -17,6 +17,8 @@ const runLabel = (s: Scenario) =>
     : `${countText(s.run.particles)} particles`;
 
 type Ran = { result: RunResult; input: Scenario; ticket?: string };
+
+const WARM_UP_AFTER_MS = 300;
 
 /** `requestTicket`: a run that may be saved asks the server for its seed first (exploratory runs keep the scenario's own). */
 export function RunPanel({
@@ -36,6 +38,13 @@ export function RunPanel({
   useEffect(() => {
     if (running) progress.current?.focus();
   }, [running]);
+  // The idle workers run a few batches of the scenario as it stands, so a first run finds the loop compiled for its
+  // branches (bench:browser); after a pause in editing, not at every keystroke.
+  useEffect(() => {
+    if (!scenario) return;
+    const timer = setTimeout(() => warmUpWorkers(scenario), WARM_UP_AFTER_MS);
+    return () => clearTimeout(timer);
+  }, [scenario]);
 
   async function start() {
     if (!scenario) return;
