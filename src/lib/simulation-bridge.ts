@@ -31,6 +31,9 @@ interface PooledWorker {
 
 // Workers are kept between runs: a fresh one spends its first seconds in JIT warm-up.
 const idle: PooledWorker[] = [];
+// Workers a run has taken from the pool: they count towards its size, so a page that warms up while a run goes
+// (a results section mounting) starts no extra workers to compete with the run's for the cores.
+let lent = 0;
 
 // One worker per hardware thread but the page's own, and never fewer than two: the page sits idle
 // while a run goes (it only draws progress), and on a two-core machine two workers reach a decision
@@ -95,7 +98,7 @@ async function warmUp(pooled: PooledWorker): Promise<void> {
  * scenario, idle workers also take a few batches of it before the generic pieces, and again when it changes.
  */
 export function warmUpWorkers(scenario?: Scenario | null): void {
-  while (idle.length < poolSize()) idle.push(startWorker(true));
+  while (idle.length + lent < poolSize()) idle.push(startWorker(true));
   if (scenario) {
     try {
       ownPiece = prepareScenario(ownWarmUpPiece(scenario));
@@ -120,6 +123,7 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
   // Workers started here go straight to the run: a warm-up would only come before it.
   while (idle.length < size) idle.push(startWorker(false));
   const busy = idle.splice(0, size);
+  lent += busy.length;
   for (const w of busy) w.claimed = true;
   const particles = prepared.particlesPerBatch * prepared.batches;
   const report = (fraction: number) => {
@@ -149,12 +153,14 @@ export async function runSimulation(scenario: Scenario, { onProgress, signal }: 
         );
     // Back in the pool, a worker may warm up again when the page's scenario changes.
     for (const w of busy) w.claimed = false;
+    lent -= busy.length;
     idle.push(...busy);
     return result;
   } catch (error) {
     // A busy loop never reads its message queue, so terminating is the only way to stop it; the
     // replacements start now rather than at the next run.
     busy.forEach((w) => w.worker.terminate());
+    lent -= busy.length;
     warmUpWorkers();
     throw error;
   }

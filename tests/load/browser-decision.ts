@@ -77,7 +77,9 @@ try {
     const stopped = /stopped at ([\d,]+ batches because [^.]+)/.exec(text)?.[1] ?? text.slice(0, 80);
     // The run's own banner, in its headline (the page also shows the saved runs' and the station's).
     const banner = (await page.getByRole('region', { name: 'Headline' }).getByTestId('banner').first().getAttribute('data-banner')) ?? '?';
-    // Again on the same page: its workers have now compiled the step loop for this scenario (the first run pays for that).
+    // Again on the same page, once the charts below the headline are drawn (as a user reads them first): its workers
+    // have now run this scenario's own branches, and the server hands out another seed.
+    await page.getByText('Drawing the charts, maps and tables…').waitFor({ state: 'detached', timeout: 60_000 });
     const again = Date.now();
     await run.click();
     await page.waitForFunction(() =>
