@@ -72,8 +72,20 @@ describe('scheduleBatches', () => {
 
   it('rejects with the first worker error and hands out no further batches', async () => {
     const log: string[] = [];
-    await expect(scheduleBatches(fakeWorkers(2, [3, -1, 0, 0], log), 4)).rejects.toThrow('batch 1 broke');
+    await expect(scheduleBatches(fakeWorkers(2, [3, -1, 3, 3, 0, 0, 0, 0], log), 8)).rejects.toThrow('batch 1 broke');
+    const handedOut = log.filter((l) => l.startsWith('run'));
+    expect(handedOut).toContain('run 1 on 0');
     await new Promise((resolve) => setTimeout(resolve, 20));
-    expect(log.filter((l) => l.startsWith('run'))).toEqual(['run 0 on 0', 'run 1 on 1']);
+    expect(log.filter((l) => l.startsWith('run'))).toEqual(handedOut);
+    expect(handedOut.length).toBeLessThan(8);
+  });
+
+  it('keeps one more batch waiting in each worker while more remain than workers, and one at a time near the end', async () => {
+    const log: string[] = [];
+    const results = await scheduleBatches(fakeWorkers(2, [2, 2, 2, 2, 2, 2], log), 6);
+    const runs = log.filter((l) => l.startsWith('run'));
+    expect(runs.slice(0, 4)).toEqual(['run 0 on 0', 'run 1 on 0', 'run 2 on 1', 'run 3 on 1']);
+    expect(new Set(runs.slice(4).map((l) => l.slice(-1)))).toEqual(new Set(['0', '1']));
+    expect(results.map((r) => r.batchIndex)).toEqual([0, 1, 2, 3, 4, 5]);
   });
 });

@@ -59,21 +59,39 @@ export async function scheduleBatches<R extends { particleSteps: number }>(
     onProgress(lastFraction, steps);
   };
 
+  // The first worker error rejects the run at once, whichever batch it came from (one may be waiting in a queue).
+  let fail = (_error: unknown) => {};
+  const failed = new Promise<never>((_, reject) => {
+    fail = reject;
+  });
+  const take = (worker: BatchWorker<R>) => {
+    if (settled || next >= batches) return null;
+    const batchIndex = next++;
+    const result = worker.run(first + batchIndex, (fraction, steps) => {
+      if (settled || results[batchIndex]) return;
+      partial.set(batchIndex, { fraction, steps });
+      report();
+    });
+    result.catch(fail);
+    return { batchIndex, result };
+  };
+
   const drain = async (worker: BatchWorker<R>) => {
     await worker.prepare();
-    while (!settled && next < batches) {
-      const batchIndex = next++;
-      const result = await worker.run(first + batchIndex, (fraction, steps) => {
-        if (settled || results[batchIndex]) return;
-        partial.set(batchIndex, { fraction, steps });
-        report();
-      });
+    let current = take(worker);
+    while (current) {
+      // While plenty remain, one more batch waits in the worker's queue, so it starts the next the moment it finishes
+      // instead of waiting for this thread to hear back and send one (about 5 ms a batch in a busy page). Near the end
+      // each worker takes one at a time, so none is left holding two while another has none.
+      const queued = next < batches - workers.length ? take(worker) : null;
+      const result = await current.result;
       if (settled) return;
-      partial.delete(batchIndex);
-      results[batchIndex] = result;
+      partial.delete(current.batchIndex);
+      results[current.batchIndex] = result;
       finished++;
       finishedSteps += result.particleSteps;
       report();
+      current = queued ?? take(worker);
     }
   };
 
@@ -84,7 +102,7 @@ export async function scheduleBatches<R extends { particleSteps: number }>(
   if (signal?.aborted) onAbort();
   signal?.addEventListener('abort', onAbort, { once: true });
   try {
-    await Promise.race([Promise.all(workers.slice(0, batches).map(drain)), cancelled]);
+    await Promise.race([Promise.all(workers.slice(0, batches).map(drain)), cancelled, failed]);
   } finally {
     settled = true;
     signal?.removeEventListener('abort', onAbort);
