@@ -52,6 +52,8 @@ const panel = scratchFloat64(7);
 const point = scratchFloat64(3);
 const crossing = scratchFloat64(7);
 const segment = scratchFloat64(6);
+// Infinity as a double: a minimum started from the global Infinity is kept tagged, and each new minimum boxed.
+const FAR = Float64Array.of(Infinity);
 
 // Width runs horizontally across the face (along the slot for slots); height completes the frame. A downdraft
 // bench, facing up (the schema sees to that), packs as a flanged face: width along +x, height (depth) along +y.
@@ -113,7 +115,7 @@ export function addHoodVelocityAt(p: Float64Array, count: number, at: Float64Arr
   const x = at[0];
   const y = at[1];
   const z = at[2];
-  let nearest = Infinity;
+  let nearest = FAR[0];
   for (let h = 0; h < count; h++) {
     const o = h * HOOD_STRIDE;
     const rx = x - p[o + HOOD_X];

@@ -75,14 +75,17 @@ function jetSpread(jet: Kernel['jet'], at: Float64Array, out: Float64Array): voi
   out[4] = outside > halfWidth ? outside : halfWidth;
 }
 
-export function recordFrames(k: Kernel, sl: number, t: number, x: number, y: number, z: number): void {
+/** Frames of sampled particle sl up to the time and position in k.seg[0..3] (t, x, y, z): an array, not arguments. */
+export function recordFrames(k: Kernel, sl: number): void {
   const frames = k.frames;
+  const seg = k.seg;
+  const t = seg[0];
   let f = k.nextFrame[sl];
   while (f < frames && f * k.frameInterval_s <= t) {
     const o = (sl * frames + f) * 3;
-    k.trajectories[o] = x;
-    k.trajectories[o + 1] = y;
-    k.trajectories[o + 2] = z;
+    k.trajectories[o] = seg[1];
+    k.trajectories[o + 1] = seg[2];
+    k.trajectories[o + 2] = seg[3];
     f++;
   }
   k.nextFrame[sl] = f;

@@ -195,8 +195,12 @@ export function walk(k: Kernel, i: number): number {
     let near = dh < d ? dh : d;
     if (dj < near) near = dj;
     let dt = maxStep_s;
-    const diffusive = dMax > 0 ? (stepFraction * stepFraction * near * near) / (18 * dMax) : Infinity;
-    if (diffusive < dt) dt = diffusive;
+    // Without diffusion there is no diffusive limit. Not a ternary with Infinity: the global's load made V8 keep the
+    // result as a tagged value and box every step's (32 bytes a step, Node --trace-allocation-stack-interval).
+    if (dMax > 0) {
+      const diffusive = (stepFraction * stepFraction * near * near) / (18 * dMax);
+      if (diffusive < dt) dt = diffusive;
+    }
     const drift = driftLimit_m / speed;
     if (drift < dt) dt = drift;
     if (dt < minStep_s) dt = minStep_s;
@@ -236,7 +240,13 @@ export function walk(k: Kernel, i: number): number {
       if (tb > lastBin) tb = lastBin;
       residence[tb * nBins + b] += dt * w;
     }
-    if (a.slot[i] >= 0) recordFrames(k, a.slot[i], t, x, y, z);
+    if (a.slot[i] >= 0) {
+      seg[0] = t;
+      seg[1] = x;
+      seg[2] = y;
+      seg[3] = z;
+      recordFrames(k, a.slot[i]);
+    }
     let dx = vx * dt;
     let dy = vy * dt;
     let dz = (vz - vs) * dt;
