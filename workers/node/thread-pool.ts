@@ -18,30 +18,34 @@ function startThread(): Worker {
 }
 
 interface Pending {
+  batchIndex: number;
   onProgress: (fraction: number, particleSteps: number) => void;
   resolve: (result: BatchResult) => void;
   reject: (error: unknown) => void;
 }
 
-/** One thread in the scheduler's terms; a thread runs one batch at a time. */
+/**
+ * One thread in the scheduler's terms. A thread runs one batch at a time, in the order asked; the scheduler may ask
+ * for the next before the current one is done (it waits in the thread's queue), so replies are matched in order.
+ */
 function threadWorker(thread: Worker, prepared: PreparedScenario): BatchWorker<BatchResult> & { detach(): void } {
-  let pending: Pending | undefined;
+  const pending: Pending[] = [];
+  // Matched by batch index, so a reply to an earlier pool call's batch (one left queued when that call failed) is ignored.
   const onMessage = (m: ThreadMessage) => {
-    if (m.type === 'progress') pending?.onProgress(m.fraction, m.particleSteps);
-    else {
-      const done = pending;
-      pending = undefined;
-      done?.resolve(m.result);
-    }
+    const index = m.type === 'progress' ? m.batchIndex : m.result.batchIndex;
+    const k = pending.findIndex((p) => p.batchIndex === index);
+    if (k < 0) return;
+    if (m.type === 'progress') pending[k].onProgress(m.fraction, m.particleSteps);
+    else pending.splice(k, 1)[0].resolve(m.result);
   };
-  const onError = (error: unknown) => pending?.reject(error);
+  const onError = (error: unknown) => pending.splice(0).forEach((p) => p.reject(error));
   thread.on('message', onMessage);
   thread.on('error', onError);
   return {
     prepare: () => thread.postMessage({ type: 'prepare', prepared }),
     run: (batchIndex, onProgress) =>
       new Promise<BatchResult>((resolve, reject) => {
-        pending = { onProgress, resolve, reject };
+        pending.push({ batchIndex, onProgress, resolve, reject });
         thread.postMessage({ type: 'run', batchIndex });
       }),
     detach() {
