@@ -26,7 +26,7 @@ interface Pending {
 
 /**
  * One thread in the scheduler's terms. A thread runs one batch at a time, in the order asked; the scheduler may ask
- * for the next before the current one is done (it waits in the thread's queue), so replies are matched in order.
+ * for the next before the current one is done (it waits in the thread's queue), so each reply finds its batch by index.
  */
 function threadWorker(thread: Worker, prepared: PreparedScenario): BatchWorker<BatchResult> & { detach(): void } {
   const pending: Pending[] = [];
