@@ -26,9 +26,7 @@ const AT = scratchFloat64(3);
 // Writes the jet's eddy diffusivity into out[0] and its gradient ∇D into out[1..3] (the walk's drift
 // term); the same geometry and fade as jetEddyDiffusivity.
 export function jetDiffusivityAndGradient(jet: RoundJet, px_m: number, py_m: number, pz_m: number, out: Float64Array): void {
-  AT[0] = px_m;
-  AT[1] = py_m;
-  AT[2] = pz_m;
+  AT.set([px_m, py_m, pz_m]);
   jetDiffusivityAndGradientAt(jet, AT, out);
 }
 

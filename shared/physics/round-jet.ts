@@ -85,9 +85,7 @@ const AT = scratchFloat64(3);
 
 // Writes the jet's air velocity (m/s) at point p into out[0..2]; zero behind the nozzle plane.
 export function jetVelocity(jet: RoundJet, px_m: number, py_m: number, pz_m: number, out: Float64Array): void {
-  AT[0] = px_m;
-  AT[1] = py_m;
-  AT[2] = pz_m;
+  AT.set([px_m, py_m, pz_m]);
   jetVelocityAt(jet, AT, out);
 }
 

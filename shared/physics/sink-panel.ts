@@ -28,13 +28,7 @@ export function sinkPanelVelocity(
   frontShare: number,
   out: Float64Array,
 ): void {
-  ARGS[0] = x_m;
-  ARGS[1] = y_m;
-  ARGS[2] = z_m;
-  ARGS[3] = halfWidth_m;
-  ARGS[4] = halfHeight_m;
-  ARGS[5] = airflow_m3PerS;
-  ARGS[6] = frontShare;
+  ARGS.set([x_m, y_m, z_m, halfWidth_m, halfHeight_m, airflow_m3PerS, frontShare]);
   sinkPanelVelocityAt(ARGS, out);
 }
 

@@ -104,9 +104,7 @@ export function packHoods(hoods: readonly Hood[]): Float64Array {
  * the distance to the nearest face outline into out[3]. Allocation-free, for the step loop.
  */
 export function addHoodVelocity(p: Float64Array, count: number, x: number, y: number, z: number, out: Float64Array): void {
-  point[0] = x;
-  point[1] = y;
-  point[2] = z;
+  point.set([x, y, z]);
   addHoodVelocityAt(p, count, point, out);
 }
 
@@ -163,12 +161,7 @@ export function addHoodVelocityAt(p: Float64Array, count: number, at: Float64Arr
  * particle into a hood, so a face that draws nothing captures nothing.
  */
 export function faceEntered(p: Float64Array, count: number, x: number, y: number, z: number, dx: number, dy: number, dz: number): number {
-  segment[0] = x;
-  segment[1] = y;
-  segment[2] = z;
-  segment[3] = dx;
-  segment[4] = dy;
-  segment[5] = dz;
+  segment.set([x, y, z, dx, dy, dz]);
   return faceEnteredAt(p, count, segment);
 }
 
@@ -219,12 +212,7 @@ export function reflectAtFaces(
   z1: number,
   out: Float64Array,
 ): number {
-  segment[0] = x0;
-  segment[1] = y0;
-  segment[2] = z0;
-  segment[3] = x1;
-  segment[4] = y1;
-  segment[5] = z1;
+  segment.set([x0, y0, z0, x1, y1, z1]);
   return reflectAtFacesAt(p, count, segment, out);
 }
 
