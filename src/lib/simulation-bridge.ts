@@ -74,7 +74,8 @@ async function warmUp(pooled: PooledWorker): Promise<void> {
       // The page's own scenario first: it takes the branches a run of it will take.
       if (ownPiece && pooled.ownVersion !== ownVersion) {
         const version = ownVersion;
-        for (let b = 0; b < OWN_WARM_UP_BATCHES && !pooled.claimed && version === ownVersion; b++) await pooled.api.warmUp(ownPiece, b);
+        for (let b = 0; b < OWN_WARM_UP_BATCHES && !pooled.claimed && version === ownVersion; b++)
+          await pooled.api.warmUp(b === 0 ? ownPiece : null, b);
         if (!pooled.claimed) pooled.ownVersion = version;
         continue;
       }
