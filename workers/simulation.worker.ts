@@ -1,18 +1,12 @@
 import * as Comlink from 'comlink';
 import { type BatchResult, type PreparedScenario, runBatch, transferables } from './engine/index';
 
+// The scenario the batches run on: a run's, or a warm-up's until the next run sends its own (simulation-bridge.ts).
 let prepared: PreparedScenario | undefined;
-// The scenario warm-up batches run on, apart from the run's: sent with its first batch, not again with each.
-let warming: PreparedScenario | undefined;
 
 const api = {
   prepare(scenario: PreparedScenario): void {
     prepared = scenario;
-  },
-  /** Runs one small batch and discards it, so the step loop is compiled before the first real run; null: the last scenario sent. */
-  warmUp(scenario: PreparedScenario | null, batchIndex = 0): number {
-    if (scenario) warming = scenario;
-    return warming ? runBatch(warming, batchIndex).particleSteps : 0;
   },
   // Progress arrives as a Comlink proxy; its calls post messages and never block the loop.
   run(batchIndex: number, onProgress?: (fraction: number, particleSteps: number) => void): BatchResult {

@@ -6,6 +6,7 @@ import { FIRST_LOOK_BATCHES, type LookOutcome, runToPrecision } from '../../work
 import { OWN_WARM_UP_BATCHES, ownWarmUpPiece, warmUpPieces } from '../../workers/warm-up-pieces';
 import { type BatchWorker, scheduleBatches } from '../../workers/schedule-batches';
 import type { SimulationWorkerApi } from '../../workers/simulation.worker';
+import { warmUp, type WarmingWorker, type WarmUpWork } from './warm-up-loop';
 
 export interface RunProgress {
   fraction: number;
@@ -17,16 +18,9 @@ export interface RunProgress {
 
 export { RunCancelledError } from '../../workers/schedule-batches';
 
-interface PooledWorker {
+interface PooledWorker extends WarmingWorker {
   worker: Worker;
   api: Comlink.Remote<SimulationWorkerApi>;
-  /** Set while a run has the worker: its warm-up sends no further piece. */
-  claimed: boolean;
-  /** A warm-up loop is going on this worker. */
-  warming: boolean;
-  /** Generic pieces done, and the version of the page's own scenario it last warmed up on. */
-  pieces: number;
-  ownVersion: number;
 }
 
 // Workers are kept between runs: a fresh one spends its first seconds in JIT warm-up.
@@ -55,7 +49,7 @@ function startWorker(warm: boolean): PooledWorker {
   // A fresh worker runs its first steps in the interpreter; started ahead of a run, it takes the
   // warm-up pieces (workers/warm-up-pieces.ts: every hood kind, bursts, a jet) one at a time, so the
   // step loop is compiled for every branch before real work, which waits for one piece at most.
-  if (warm) void warmUp(pooled);
+  if (warm) void warmUp(pooled, warmUpWork);
   return pooled;
 }
 
@@ -65,34 +59,17 @@ const warmUpPrepared: PreparedScenario[] = [];
 let ownPiece: PreparedScenario | undefined;
 let ownVersion = 0;
 
-async function warmUp(pooled: PooledWorker): Promise<void> {
-  if (pooled.warming) return;
-  pooled.warming = true;
-  // Optional: a warm-up that fails for any reason must never stand in the way of a page or a run.
-  try {
-    while (!pooled.claimed) {
-      // The page's own scenario first: it takes the branches a run of it will take.
-      if (ownPiece && pooled.ownVersion !== ownVersion) {
-        const version = ownVersion;
-        for (let b = 0; b < OWN_WARM_UP_BATCHES && !pooled.claimed && version === ownVersion; b++)
-          await pooled.api.warmUp(b === 0 ? ownPiece : null, b);
-        if (!pooled.claimed) pooled.ownVersion = version;
-        continue;
-      }
-      warmUpScenarios ??= warmUpPieces();
-      const i = pooled.pieces;
-      if (i >= warmUpScenarios.length) return;
-      // Prepared as each piece is sent, not all at page start (about 100 ms of the page's thread together).
-      warmUpPrepared[i] ??= prepareScenario(warmUpScenarios[i]);
-      await pooled.api.warmUp(warmUpPrepared[i], 0);
-      pooled.pieces = i + 1;
-    }
-  } catch {
-    /* the run will compile the loop itself */
-  } finally {
-    pooled.warming = false;
-  }
-}
+const warmUpWork: WarmUpWork = {
+  own: () => (ownPiece ? { piece: ownPiece, version: ownVersion } : undefined),
+  ownBatches: OWN_WARM_UP_BATCHES,
+  piece: (i) => {
+    warmUpScenarios ??= warmUpPieces();
+    if (i >= warmUpScenarios.length) return undefined;
+    // Prepared as each piece is sent, not all at page start (about 100 ms of the page's thread together).
+    return (warmUpPrepared[i] ??= prepareScenario(warmUpScenarios[i]));
+  },
+  progress: (callback) => Comlink.proxy(callback),
+};
 
 /**
  * Starts the pool's workers ahead of the first run (pages that run the engine call it on mount); with the page's
@@ -108,7 +85,7 @@ export function warmUpWorkers(scenario?: Scenario | null): void {
       return; // a scenario that does not prepare has nothing to warm up on
     }
   }
-  for (const w of idle) if (!w.claimed) void warmUp(w);
+  for (const w of idle) if (!w.claimed) void warmUp(w, warmUpWork);
 }
 
 export interface RunOptions {
