@@ -26,7 +26,7 @@ describe('capture-velocity verdict', () => {
     expect(check.speedAtSource_mPerS).toBeCloseTo(0.4726, 3);
     expect(check.verdict).toBe('below-half');
     expect(check.sentence).toBe(
-      '0.47 m/s at the source; a high-energy release, such as grinding, needs 2.5–10 m/s (less than half the low end).',
+      '0.47 m/s at the source; a high-velocity release (flung out fast into very fast-moving air) needs 2.5–10 m/s (less than half the low end).',
     );
   });
 

@@ -12,10 +12,13 @@ export const RELEASE_TYPE_LABEL: Record<ReleaseType, { word: string; description
   high: { word: 'High', description: 'High: flung out fast into very fast-moving air', phrase: 'high-velocity release' },
 };
 
-/** The same, as the subject of "… needs 2.5–10 m/s". */
+/**
+ * The same, as the subject of "… needs 2.5–10 m/s": the type in the words of its description, not an example task,
+ * which read oddly beside another one (a sanding bench's note spoke of "tipping a sack").
+ */
 export const RELEASE_TYPE_NEEDS: Record<ReleaseType, string> = {
-  quiet: 'a quiet release, such as vapour off an open tank,',
-  low: 'a gentle release, such as pouring powder into a bin,',
-  active: 'an active release, such as tipping a sack,',
-  high: 'a high-energy release, such as grinding,',
+  quiet: 'a quiet release (drifting off with almost no motion of its own)',
+  low: 'a low-velocity release (leaving gently into fairly still air)',
+  active: 'an active release (thrown out into briskly moving air)',
+  high: 'a high-velocity release (flung out fast into very fast-moving air)',
 };

@@ -11,7 +11,7 @@ describe('capture verdict beside a result', () => {
   it("says the stone bench hood gives 0.47 m/s at the source against grinding's 2.5–10 m/s (issue 14's hand calculation)", () => {
     render(<CaptureVerdict scenario={demo()} />);
     expect(screen.getByTestId('capture-verdict').textContent).toMatch(
-      /^▼▼0\.47 m\/s at the source; a high-energy release, such as grinding, needs 2\.5–10 m\/s \(less than half the low end\)\./,
+      /^▼▼0\.47 m\/s at the source; a high-velocity release \(flung out fast into very fast-moving air\) needs 2\.5–10 m\/s \(less than half the low end\)\./,
     );
   });
 
