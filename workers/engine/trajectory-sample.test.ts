@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { combineBatches } from './combine';
 import { prepareTest, runAll } from './engine.test-helper';
+import { runBatch } from './run-batch';
 import { END_STRIDE } from './trajectory-sample';
 import { FATES } from './types';
 import { workstation } from './workstation.test-helper';
@@ -65,5 +66,16 @@ describe('trajectory sample', () => {
       expect(Array.from(plain[i].fateMass_mg)).toEqual(Array.from(b.fateMass_mg));
       expect(Array.from(plain[i].zoneResidence_s)).toEqual(Array.from(b.zoneResidence_s));
     });
+  });
+
+  // A run to a precision plans its first look (p.batches) and may go on to 2,560 batches; the sample is the planned
+  // batches' paths, so a long run stays as small to save as a short one (the server takes 8 MB of JSON).
+  it('keeps the planned batches’ paths however many more batches a run to a precision adds', () => {
+    const more = Array.from({ length: 3 * p.batches }, (_, k) => (k < p.batches ? batches[k] : runBatch(p, k)));
+    const long = combineBatches(p, more).trajectories;
+    expect(long.particles).toBe(t.particles);
+    expect(Array.from(long.positions_m)).toEqual(Array.from(t.positions_m));
+    expect(Array.from(long.bins)).toEqual(Array.from(t.bins));
+    expect(long.particles).toBeLessThanOrEqual(p.trajectory.particles * p.batches);
   });
 });

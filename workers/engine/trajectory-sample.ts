@@ -39,8 +39,14 @@ export function quantisePositions(positions_m: Float32Array): Float32Array {
   return positions_m;
 }
 
-/** Every batch's used slots in batch order, so the sample does not depend on which worker ran what. */
-export function mergeTrajectories(p: PreparedScenario, batches: readonly BatchResult[]): Results['trajectories'] {
+/**
+ * Every batch's used slots in batch order, so the sample does not depend on which worker ran what; only the planned
+ * batches' (p.batches, the first look of a run to a precision), so the sample stays about 512 paths however far a run
+ * to a precision goes. With every batch's paths (until 2026-12-04) a run past 160 batches could not be saved: its JSON
+ * outgrew the 8 MB the server takes (7.4 MB of paths at 160 batches of the bakery slot hood, about 30 MB at 640).
+ */
+export function mergeTrajectories(p: PreparedScenario, all: readonly BatchResult[]): Results['trajectories'] {
+  const batches = all.slice(0, p.batches);
   const { frames, frameInterval_s } = p.trajectory;
   const stride = frames * 3;
   let used = 0;
