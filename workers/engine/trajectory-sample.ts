@@ -46,7 +46,7 @@ export function quantisePositions(positions_m: Float32Array): Float32Array {
  * outgrew the 8 MB the server takes (7.4 MB of paths at 160 batches of the bakery slot hood, about 30 MB at 640).
  */
 export function mergeTrajectories(p: PreparedScenario, all: readonly BatchResult[]): Results['trajectories'] {
-  const batches = all.slice(0, p.batches);
+  const batches = all.filter((b) => b.batchIndex < p.batches);
   const { frames, frameInterval_s } = p.trajectory;
   const stride = frames * 3;
   let used = 0;
