@@ -34,6 +34,17 @@ describe('the states a result shows while it cannot decide', () => {
     expect(screen.getByTestId('short-term').textContent).toContain('40.0 % of the 15-min limit 0.100 mg/m³ (up to 120 %): possibly above');
   });
 
+  it('gives no peak when no simulated dust reached the zone: "Not known", not 0 mg/m³', () => {
+    const limitFraction = base.limit!.fraction;
+    const fractions = base.breathingZone.fractions;
+    const none = { ...fractions[limitFraction], zoneHistories: 0, peak15min_mgPerM3: 0, peak15minCi95_mgPerM3: [0, 0] as [number, number] };
+    const view: RunResult = { ...base, breathingZone: { ...base.breathingZone, fractions: { ...fractions, [limitFraction]: none } } };
+    render(<Headline view={view} scenario={scenario} />);
+    const peak = screen.getByTestId('peak').textContent ?? '';
+    expect(peak).toContain('Not known');
+    expect(peak).not.toMatch(/\b0 mg\/m³/);
+  });
+
   it('says how a run to a precision stopped, and at which looks', () => {
     const view: RunResult = {
       ...base,
