@@ -48,11 +48,12 @@ describe('side by side results', () => {
   it('never writes a zero-width interval as a range: a bench where no dust reached the zone says the error is not known', () => {
     // Only the rest-of-shift background: the interval collapses onto 0.015 mg/m³.
     show([
-      column(1, { name: 'Downdraft bench', airflow_m3PerS: 0.6, twa: 0.015, ci: [0.015, 0.015], zoneHistories: 0 }),
+      column(1, { name: 'Downdraft bench', airflow_m3PerS: 0.6, twa: 0.015, ci: [0.015, 0.015], zoneHistories: 0, peak: 0 }),
       column(2, { name: 'No local exhaust', ...at(3) }),
     ]);
     const text = screen.getByRole('table').textContent ?? '';
-    expect(text).toContain('CI not known: too few particles reached the zone');
+    expect(text).toContain('CI not known: too few particles reached the zone · peak not known');
+    expect(text).not.toMatch(/peak 0 mg/);
     expect(text).toContain('of 0.025 mg/m³, upper bound not known (no width), respirable');
     expect(text).not.toMatch(/CI 0\.015–0\.015/);
     // Nor a rating category: it rates a daily 95th percentile that is not known here.

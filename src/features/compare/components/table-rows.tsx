@@ -21,6 +21,9 @@ export interface RowSpec {
 type Run = NonNullable<CompareColumn['run']>;
 const run = (c: CompareColumn) => c.run as Run;
 const mg = (v: number) => `${plain(v)} mg/m³`;
+// A peak of nought under an interval with no width: no simulated dust reached the zone, so there is no peak to give.
+const noPeak = (x: { peak15min_mgPerM3: number; twa8hCi95_mgPerM3: readonly [number, number] | number[] }) =>
+  x.peak15min_mgPerM3 === 0 && x.twa8hCi95_mgPerM3[1] <= x.twa8hCi95_mgPerM3[0];
 const Sub = ({ children }: { children: ReactNode }) => <span className="block text-xs text-muted">{children}</span>;
 
 function differenceCell(columns: readonly CompareColumn[], c: CompareColumn, index: number, fraction: Fraction) {
@@ -113,7 +116,7 @@ export function tableRows(columns: readonly CompareColumn[], fraction: Fraction,
           <>
             {mg(x.twa8h_mgPerM3)}
             <Sub>
-              CI {ciText(x.twa8hCi95_mgPerM3, 3, '', plain)} · peak {mg(x.peak15min_mgPerM3)}
+              CI {ciText(x.twa8hCi95_mgPerM3, 3, '', plain)} · peak {noPeak(x) ? 'not known' : mg(x.peak15min_mgPerM3)}
             </Sub>
           </>
         );

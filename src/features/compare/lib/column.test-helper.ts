@@ -13,6 +13,8 @@ type Opts = {
   run?: boolean;
   captureVelocity?: CaptureVerdictWord;
   zoneHistories?: number;
+  /** Peak 15-min average; twice the TWA unless given. */
+  peak?: number;
 };
 
 /**
@@ -27,7 +29,7 @@ export function column(id: number, opts: Opts = {}): CompareColumn {
     { fraction: 'respirable', value_mgPerM3: 0.025 },
     { captureVelocity: opts.captureVelocity },
   );
-  const fraction = { twa8h_mgPerM3: twa, twa8hCi95_mgPerM3: ci, peak15min_mgPerM3: 2 * twa };
+  const fraction = { twa8h_mgPerM3: twa, twa8hCi95_mgPerM3: ci, peak15min_mgPerM3: opts.peak ?? 2 * twa };
   const airflow = opts.airflow_m3PerS ?? 0;
   return {
     id,
